@@ -1,0 +1,71 @@
+/** Starts the real server on the test cluster's bench database for load tests. */
+import { spawn, type ChildProcess } from "node:child_process";
+import { dropDatabase, ensureDatabase, PROJECT_ROOT, startCluster, stopCluster, type Cluster } from "./postgres";
+import { prepareDatabase } from "./prepare-db";
+
+export type BenchServer = { baseUrl: string; databaseUrl: string; cluster: Cluster; stop(): Promise<void> };
+
+export async function startBenchServer(options: { port?: number; beforeStart?: (databaseUrl: string) => Promise<void> } = {}): Promise<BenchServer> {
+  const cluster = await startCluster("test", Number(process.env.HATCHWAY_TEST_PG_PORT ?? 54329));
+  const db = "hatchway_bench";
+  await dropDatabase(cluster, db);
+  await ensureDatabase(cluster, db);
+  const databaseUrl = cluster.url(db);
+  await prepareDatabase(databaseUrl, { seed: true });
+  await options.beforeStart?.(databaseUrl);
+
+  const port = options.port ?? 3901;
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const server: ChildProcess = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
+    cwd: PROJECT_ROOT,
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      PORT: String(port),
+      PUBLIC_URL: baseUrl,
+      DATABASE_URL: databaseUrl,
+      SESSION_SECRET: "bench-secret-bench-secret-bench-secret-0123",
+      SMTP_URL: "smtp://127.0.0.1:9",
+      S3_ENDPOINT: "http://127.0.0.1:9",
+      S3_BUCKET: "bench",
+      S3_ACCESS_KEY_ID: "x",
+      S3_SECRET_ACCESS_KEY: "x",
+      WEATHER_URL: "http://127.0.0.1:9",
+      WORKERS: "false",
+      BENCH_ROUTES: "true",
+    },
+    stdio: ["ignore", "inherit", "inherit"],
+  });
+  for (let i = 0; i < 150; i++) {
+    try {
+      if ((await fetch(`${baseUrl}/api/health`)).ok) break;
+    } catch {
+      // starting
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  return {
+    baseUrl,
+    databaseUrl,
+    cluster,
+    async stop() {
+      server.kill("SIGTERM");
+      await new Promise((r) => (server.exitCode !== null ? r(null) : server.once("exit", r)));
+      if (cluster.startedByUs) stopCluster(cluster);
+    },
+  };
+}
+
+/** Signs in over HTTP like a browser and returns the cookie header. */
+export async function benchSignIn(baseUrl: string, email: string, password = "hatchway-demo"): Promise<string> {
+  const csrfRes = await fetch(`${baseUrl}/api/auth/csrf`);
+  const cookie = (csrfRes.headers.get("set-cookie") ?? "").split(";")[0]!;
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const login = await fetch(`${baseUrl}/api/auth/login`, {
+    method: "POST",
+    headers: { "Content-Type": "application/json", "X-CSRF-Token": csrfToken, Cookie: cookie },
+    body: JSON.stringify({ email, password }),
+  });
+  if (!login.ok) throw new Error(`bench sign-in failed: ${login.status}`);
+  return (login.headers.get("set-cookie") ?? "").split(";")[0]!;
+}

@@ -1,0 +1,68 @@
+import path from "node:path";
+import { existsSync } from "node:fs";
+import express, { type Express } from "express";
+import type { AppContext } from "./context";
+import { correlationId, errorHandler, notFoundApi } from "./http/errors";
+import { csrfProtection, noStore, rejectNul, requireJsonBody, securityHeaders } from "./http/security";
+import { configurePassport, sessionMiddleware } from "./auth/session";
+import { healthRouter } from "./routes/health/health.router";
+import { authRouter } from "./routes/auth/auth.router";
+import { usersRouter } from "./routes/users/users.router";
+import { organizationsRouter } from "./routes/organizations/organizations.router";
+import { caughtMailRouter } from "./routes/mail/mail.router";
+
+/** Builds the Express app (no listen): the API under /api and the built client for everything else. */
+export function createApp(ctx: AppContext): Express {
+  const app = express();
+  app.disable("x-powered-by");
+  if (ctx.env.SECURE_COOKIES) app.set("trust proxy", 1);
+
+  app.use(correlationId);
+  app.use(securityHeaders());
+
+  const api = express.Router();
+  api.use(noStore);
+  api.use("/health", healthRouter(ctx));
+  if (ctx.env.BENCH_ROUTES) {
+    // The benchmark's ceiling: Express plus one pg round trip, no session, no ORM.
+    api.get("/__bench/select1", async (_req, res) => {
+      const { rows } = await ctx.pool.query("SELECT 1 AS one");
+      res.json(rows[0]);
+    });
+  }
+  const json = express.json({ limit: "1mb", type: "application/json" });
+  api.use(requireJsonBody());
+  api.use((req, res, next) => (req.method === "GET" || req.method === "HEAD" ? next() : json(req, res, next)));
+  api.use(rejectNul);
+  api.use((req, _res, next) => {
+    req.ctx = ctx;
+    // One EntityManager per request (MikroORM's request context), forked on first use only.
+    let em: ReturnType<typeof ctx.orm.em.fork> | undefined;
+    Object.defineProperty(req, "em", { get: () => (em ??= ctx.orm.em.fork()), configurable: true });
+    next();
+  });
+  const auth = configurePassport(ctx);
+  api.use(sessionMiddleware(ctx));
+  api.use(auth.initialize());
+  api.use(auth.session());
+  api.use(csrfProtection([new URL(ctx.env.PUBLIC_URL).origin]));
+
+  api.use("/auth", authRouter(ctx, auth));
+  api.use("/users", usersRouter(ctx));
+  api.use("/organizations", organizationsRouter());
+  api.use("/dev/mail", caughtMailRouter(ctx));
+  api.use(notFoundApi);
+  app.use("/api", api);
+
+  const dist = path.resolve(ctx.env.CLIENT_DIST);
+  if (existsSync(path.join(dist, "index.html"))) {
+    app.use(express.static(dist, { index: false, maxAge: "1h" }));
+    app.get("/{*splat}", (_req, res) => {
+      res.setHeader("Cache-Control", "no-cache");
+      res.sendFile(path.join(dist, "index.html"));
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,52 @@
+import session from "express-session";
+import connectPgSimple from "connect-pg-simple";
+import type pg from "pg";
+import { ACTOR_COLUMNS, actorFromRow, type Actor, type ActorRow } from "./actor";
+
+/** Where the store hands the signed-in user to passport; never written back to the row. */
+export const ACTOR_KEY = "__actor";
+
+declare module "express-session" {
+  interface SessionData {
+    [ACTOR_KEY]?: Actor | null;
+  }
+}
+
+const PgStore = connectPgSimple(session);
+type PgStoreOptions = ConstructorParameters<typeof PgStore>[0];
+
+/**
+ * connect-pg-simple, except that reading a session also reads its user and organisation
+ * in the same query: one database round trip per signed-in request instead of three.
+ */
+export class SessionStore extends PgStore {
+  private readonly db: pg.Pool;
+
+  constructor(options: PgStoreOptions & { pool: pg.Pool }) {
+    super(options);
+    this.db = options.pool;
+  }
+
+  override get(sid: string, callback: (err: unknown, session?: session.SessionData | null) => void): void {
+    this.db
+      .query<{ sess: session.SessionData } & ActorRow>(
+        `SELECT s.sess, ${ACTOR_COLUMNS}
+           FROM session s
+           LEFT JOIN app_user u ON u.id = (s.sess->'passport'->>'user')::uuid
+           LEFT JOIN organization o ON o.id = u.organization_id
+          WHERE s.sid = $1 AND s.expire >= now()`,
+        [sid],
+      )
+      .then(({ rows }) => {
+        const row = rows[0];
+        if (!row) return callback(null, null);
+        callback(null, { ...row.sess, [ACTOR_KEY]: actorFromRow(row) });
+      })
+      .catch((err) => callback(err));
+  }
+
+  override set(sid: string, sess: session.SessionData, callback?: (err?: unknown) => void): void {
+    const { [ACTOR_KEY]: _dropped, ...rest } = sess;
+    super.set(sid, rest as session.SessionData, callback);
+  }
+}

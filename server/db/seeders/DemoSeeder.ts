@@ -1,0 +1,58 @@
+import type { EntityManager } from "@mikro-orm/postgresql";
+import { Seeder } from "@mikro-orm/seeder";
+import { buildOrganization, buildUser } from "../../../tests/factories";
+
+/**
+ * The demo scenario. Every organisation, person, address, phone number and permit number
+ * here is invented for the demo; the species are real taxa.
+ */
+export class DemoSeeder extends Seeder {
+  async run(em: EntityManager): Promise<void> {
+    const breeder = await buildOrganization(em, {
+      name: "Cinder Ridge Reptile Breeders",
+      kind: "breeder",
+      street: "418 Quarry Hollow Road",
+      city: "Knoxville",
+      state: "TN",
+      zip: "37917",
+      phone: "+1 865 555 0142",
+      email: "office@cinderridge.example",
+    });
+    const centre = await buildOrganization(em, {
+      name: "Willow Marsh Nature Centre",
+      kind: "nature_centre",
+      street: "92 Boardwalk Lane",
+      city: "Eugene",
+      state: "OR",
+      zip: "97401",
+      phone: "+1 541 555 0177",
+      email: "animals@willowmarsh.example",
+    });
+    const rescue = await buildOrganization(em, {
+      name: "Second Shell Turtle Rescue",
+      kind: "rescue",
+      street: "7 Pinfold Court",
+      city: "Columbus",
+      state: "OH",
+      zip: "43215",
+      phone: "+1 614 555 0119",
+      email: "intake@secondshell.example",
+    });
+    const couriers = await buildOrganization(em, {
+      name: "Nightjar Ground Couriers",
+      kind: "courier_service",
+      street: "55 Depot Row",
+      city: "Louisville",
+      state: "KY",
+      zip: "40202",
+      phone: "+1 502 555 0190",
+      email: "dispatch@nightjar.example",
+    });
+
+    await buildUser(em, { email: "admin@demo.hatchway.test", displayName: "Hatchway Admin", role: "admin", organization: null });
+    await buildUser(em, { email: "sender@demo.hatchway.test", displayName: "Ruth Calder", role: "member", organization: breeder });
+    await buildUser(em, { email: "receiver@demo.hatchway.test", displayName: "Milo Faraday", role: "member", organization: centre });
+    await buildUser(em, { email: "courier@demo.hatchway.test", displayName: "Juno Park", role: "courier", organization: couriers });
+    await buildUser(em, { email: "other@demo.hatchway.test", displayName: "Ivy Brandt", role: "member", organization: rescue });
+  }
+}

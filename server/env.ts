@@ -1,0 +1,51 @@
+import { z } from "zod";
+
+const bool = z
+  .enum(["true", "false", "1", "0"])
+  .transform((v) => v === "true" || v === "1");
+
+/**
+ * The environment, parsed once at boot. A bad value stops the process with a message
+ * naming the variable, instead of failing later in a request.
+ */
+export const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
+  HOST: z.string().default("127.0.0.1"),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  PUBLIC_URL: z.url().default("http://127.0.0.1:3000"),
+  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, "must be a postgres:// URL"),
+  SESSION_SECRET: z.string().min(32, "must be at least 32 characters"),
+  SECURE_COOKIES: bool.default(false),
+  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(30),
+  SESSION_ABSOLUTE_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(12),
+  SMTP_URL: z.string().regex(/^smtps?:\/\//, "must be an smtp:// URL"),
+  MAIL_FROM: z.string().default("Hatchway <no-reply@hatchway.test>"),
+  /** The SMTP fake's HTTP inbox; set in development so admins can read caught mail. */
+  MAIL_FAKE_INBOX_URL: z.url().optional(),
+  S3_ENDPOINT: z.url(),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_BUCKET: z.string().min(3),
+  S3_ACCESS_KEY_ID: z.string().min(1),
+  S3_SECRET_ACCESS_KEY: z.string().min(1),
+  WEATHER_URL: z.url(),
+  /** The weather fake's control URL; when set, admins can pick a weather scenario for the demo. */
+  WEATHER_FAKE_CONTROL_URL: z.url().optional(),
+  CLIENT_DIST: z.string().default("dist"),
+  WORKERS: bool.default(true),
+  /** Mounts /api/__bench routes (the bare SELECT 1 baseline); only the benchmark sets it. */
+  BENCH_ROUTES: bool.default(false),
+  LOGIN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
+  LOGIN_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).default(30),
+  LOGIN_BLOCK_MINUTES: z.coerce.number().int().min(1).default(15),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export function parseEnv(source: Record<string, string | undefined> = process.env): Env {
+  const result = envSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+    throw new Error(`Hatchway cannot start: the environment is not valid.\n${lines.join("\n")}`);
+  }
+  return result.data;
+}

@@ -1,0 +1,17 @@
+import type { Actor } from "../auth/actor";
+
+/** Who may manage accounts: admins only. */
+export function canManageUsers(actor: Actor): boolean {
+  return actor.role === "admin" && !actor.disabled;
+}
+
+/** The abilities the client uses to decide what to show; the server decides again on each request. */
+export function abilitiesOf(actor: Actor) {
+  return {
+    manageUsers: canManageUsers(actor),
+    manageOrganizations: actor.role === "admin",
+    readCaughtMail: actor.role === "admin",
+    draftTransfers: actor.role === "member" && actor.organization != null,
+    carryTransfers: actor.role === "courier",
+  };
+}

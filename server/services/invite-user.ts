@@ -1,0 +1,41 @@
+import { createHash, randomBytes } from "node:crypto";
+import type { EntityManager } from "@mikro-orm/postgresql";
+import type { UserInviteInput } from "@shared/schemas/auth";
+import { emailKey } from "@shared/schemas/common";
+import { UserSchema } from "../db/entities/user.entity";
+import type { Actor } from "../auth/actor";
+import { OrganizationSchema } from "../db/entities/organization.entity";
+import { PasswordTokenSchema } from "../db/entities/password-token.entity";
+import { conflict, badRequest } from "../http/errors";
+import { enqueueMail } from "./outbox";
+import { invitationMail } from "../mail/templates";
+
+const INVITATION_HOURS = 72;
+
+/** Creates an account without a password and mails a one-time link to choose one. */
+export async function inviteUser({ em, actor, input, publicUrl }: { em: EntityManager; actor: Actor; input: UserInviteInput; publicUrl: string }) {
+  const key = emailKey(input.email);
+  if (await em.count(UserSchema, { emailKey: key })) throw conflict("An account with this e-mail already exists.", { field: "email" });
+  if (input.role === "member" && !input.organizationId) throw badRequest("organizationId: a member needs an organisation", { field: "organizationId" });
+  const organization = input.organizationId ? await em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
+  if (input.organizationId && !organization) throw badRequest("organizationId: no such organisation", { field: "organizationId" });
+
+  const user = em.create(UserSchema, {
+    email: input.email,
+    emailKey: key,
+    displayName: input.displayName,
+    role: input.role,
+    organization,
+    passwordHash: null,
+    disabled: false,
+  });
+  const token = randomBytes(32).toString("base64url");
+  em.create(PasswordTokenSchema, {
+    user,
+    tokenHash: createHash("sha256").update(token).digest("hex"),
+    expiresAt: new Date(Date.now() + INVITATION_HOURS * 3600_000),
+  });
+  enqueueMail(em, invitationMail({ to: input.email, name: input.displayName, invitedBy: actor.displayName, link: `${publicUrl}/welcome?token=${token}`, hours: INVITATION_HOURS }));
+  await em.flush();
+  return user;
+}

@@ -1,0 +1,117 @@
+/**
+ * Vocabulary shared by the client, the server and the pure domain code.
+ * A limit or a list lives here once; schemas and screens import it.
+ */
+
+/** USPS two-letter codes: the 50 states, DC and the inhabited territories. */
+export const US_STATES = [
+  "AL", "AK", "AZ", "AR", "CA", "CO", "CT", "DE", "FL", "GA", "HI", "ID", "IL", "IN", "IA",
+  "KS", "KY", "LA", "ME", "MD", "MA", "MI", "MN", "MS", "MO", "MT", "NE", "NV", "NH", "NJ",
+  "NM", "NY", "NC", "ND", "OH", "OK", "OR", "PA", "RI", "SC", "SD", "TN", "TX", "UT", "VT",
+  "VA", "WA", "WV", "WI", "WY", "DC", "PR", "GU", "VI", "AS", "MP",
+] as const;
+export type UsState = (typeof US_STATES)[number];
+
+/**
+ * Jurisdictions outside the continental US (the 48 contiguous states). Moving an
+ * injurious species between the continental US and one of these is a federal
+ * "shipment" under 18 U.S.C. 42 (USARK v. Zinke, 852 F.3d 1131).
+ * Alaska is not contiguous but the statute's list names Hawaii, DC, Puerto Rico and
+ * territories; Alaska is treated as continental for that rule.
+ */
+export const NON_CONTINENTAL = ["HI", "DC", "PR", "GU", "VI", "AS", "MP"] as const;
+
+export const ORGANIZATION_KINDS = [
+  "breeder",
+  "nature_centre",
+  "rescue",
+  "zoo",
+  "private_keeper",
+  "courier_service",
+] as const;
+export type OrganizationKind = (typeof ORGANIZATION_KINDS)[number];
+
+export const USER_ROLES = ["admin", "member", "courier"] as const;
+export type UserRole = (typeof USER_ROLES)[number];
+
+export const TRANSPORT_MODES = ["overnight_air", "ground_courier", "hand_delivery"] as const;
+export type TransportMode = (typeof TRANSPORT_MODES)[number];
+
+export const PURPOSES = [
+  "education_exhibition",
+  "breeding",
+  "private_keeping",
+  "rescue_rehoming",
+  "scientific",
+  "commercial_sale",
+] as const;
+export type Purpose = (typeof PURPOSES)[number];
+
+export const SEXES = ["male", "female", "unknown"] as const;
+export type Sex = (typeof SEXES)[number];
+
+export const ANIMAL_ORIGINS = [
+  "captive_bred",
+  "captive_hatched",
+  "wild_caught",
+  "long_term_captive",
+  "rescued",
+] as const;
+export type AnimalOrigin = (typeof ANIMAL_ORIGINS)[number];
+
+export const TAXON_RANKS = ["class", "order", "family", "genus", "species", "subspecies"] as const;
+export type TaxonRank = (typeof TAXON_RANKS)[number];
+
+/**
+ * Temperature-profile groups a species belongs to. The safe transit ranges and pack
+ * bands of each group are guidelines (REPTILES magazine shipping guide, common
+ * practice), editable by admins.
+ */
+export const PROFILE_GROUPS = [
+  "temperate_aquatic_turtle",
+  "tropical_tortoise",
+  "temperate_tortoise",
+  "desert_reptile",
+  "temperate_snake",
+  "tropical_snake",
+  "tropical_lizard",
+  "temperate_lizard",
+  "salamander",
+  "frog_toad",
+  "tropical_frog",
+  "crocodilian",
+] as const;
+export type ProfileGroup = (typeof PROFILE_GROUPS)[number];
+
+export const WALL_MATERIALS = ["eps", "corrugated"] as const;
+export type WallMaterial = (typeof WALL_MATERIALS)[number];
+
+export const PACK_KINDS = ["none", "heat_40h", "heat_72h", "cold"] as const;
+export type PackKind = (typeof PACK_KINDS)[number];
+
+export const DOCUMENT_KINDS = [
+  "state_import_permit",
+  "possession_permit",
+  "export_permit",
+  "federal_permit",
+  "captive_bred_registration",
+  "cvi",
+] as const;
+export type DocumentKind = (typeof DOCUMENT_KINDS)[number];
+
+/** Limits that the forms and the server share. */
+export const LIMITS = {
+  nameMax: 200,
+  textMax: 4000,
+  emailMax: 254,
+  passwordMin: 8,
+  passwordMax: 128,
+  animalCountMax: 10_000,
+  lengthMmMax: 3000,
+  weightGMax: 200_000,
+  boxDimensionMmMax: 2000,
+  wallThicknessMmMax: 200,
+  animalsPerTransferMax: 1000,
+  containersPerTransferMax: 200,
+  uploadBytesMax: 10 * 1024 * 1024,
+} as const;

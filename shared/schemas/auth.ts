@@ -1,0 +1,64 @@
+import { z } from "zod";
+import { ORGANIZATION_KINDS, USER_ROLES } from "../constants";
+import { addressSchema, emailSchema, idSchema, passwordSchema, phoneSchema, requiredText, text } from "./common";
+
+export const loginSchema = z.strictObject({
+  email: text(254),
+  password: z.string().max(1024, { message: "Too long" }),
+});
+export type LoginInput = z.infer<typeof loginSchema>;
+
+export const setPasswordSchema = z.strictObject({
+  token: text(200).pipe(z.string().min(20, { message: "This link is not valid" })),
+  password: passwordSchema,
+});
+export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
+
+export const organizationInputSchema = z.strictObject({
+  name: requiredText(200),
+  kind: z.enum(ORGANIZATION_KINDS, { message: "Choose one of the organisation kinds" }),
+  address: addressSchema,
+  phone: phoneSchema,
+  email: emailSchema,
+});
+export type OrganizationInput = z.infer<typeof organizationInputSchema>;
+
+export const organizationPatchSchema = organizationInputSchema.partial().strict();
+export type OrganizationPatch = z.infer<typeof organizationPatchSchema>;
+
+export const userInviteSchema = z.strictObject({
+  email: emailSchema,
+  displayName: requiredText(120),
+  role: z.enum(USER_ROLES, { message: "Choose admin, member or courier" }),
+  organizationId: idSchema.nullable(),
+});
+export type UserInviteInput = z.infer<typeof userInviteSchema>;
+
+export const userPatchSchema = z.strictObject({
+  displayName: requiredText(120).optional(),
+  role: z.enum(USER_ROLES, { message: "Choose admin, member or courier" }).optional(),
+  organizationId: idSchema.nullable().optional(),
+  disabled: z.boolean().optional(),
+});
+export type UserPatch = z.infer<typeof userPatchSchema>;
+
+/** What the API says about an organisation. */
+export type OrganizationDto = {
+  id: string;
+  name: string;
+  kind: (typeof ORGANIZATION_KINDS)[number];
+  address: z.infer<typeof addressSchema>;
+  phone: string;
+  email: string;
+};
+
+/** The signed-in user as the API presents them. */
+export type UserDto = {
+  id: string;
+  email: string;
+  displayName: string;
+  role: (typeof USER_ROLES)[number];
+  organization: { id: string; name: string; kind: string } | null;
+};
+
+export type AdminUserDto = UserDto & { disabled: boolean; invitationPending: boolean; createdAt: string };

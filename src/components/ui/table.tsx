@@ -1,0 +1,22 @@
+import type { ReactNode } from "react";
+
+/** A plain, accessible table in the notebook style; horizontal scroll on narrow screens. */
+export function Table({ caption, head, children }: { caption: string; head: ReactNode; children: ReactNode }) {
+  return (
+    <div className="overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+      <table className="w-full border-collapse text-left text-sm">
+        <caption className="sr-only">{caption}</caption>
+        <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">{head}</thead>
+        <tbody className="divide-y divide-rule">{children}</tbody>
+      </table>
+    </div>
+  );
+}
+
+export function Th({ children, className = "" }: { children?: ReactNode; className?: string }) {
+  return <th scope="col" className={`px-3 py-2.5 font-semibold ${className}`}>{children}</th>;
+}
+
+export function Td({ children, className = "" }: { children?: ReactNode; className?: string }) {
+  return <td className={`px-3 py-2.5 align-top ${className}`}>{children}</td>;
+}

@@ -1,0 +1,53 @@
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import type { z } from "zod";
+import { USER_ROLES } from "@shared/constants";
+import { userInviteSchema } from "@shared/schemas/auth";
+import { Button } from "@/components/ui/button";
+import { SelectField, TextField } from "@/components/ui/field";
+import { Notice } from "@/components/ui/feedback";
+import { ApiError } from "@/lib/api-client";
+import { roleLabel } from "@/lib/labels";
+import { useOrganizations } from "../api/organizations";
+import { useInviteUser } from "../api/users";
+
+type FormIn = z.input<typeof userInviteSchema>;
+type FormOut = z.output<typeof userInviteSchema>;
+
+export function InviteUserForm({ onDone }: { onDone: () => void }) {
+  const orgs = useOrganizations();
+  const invite = useInviteUser();
+  const form = useForm<FormIn, unknown, FormOut>({
+    resolver: zodResolver(userInviteSchema),
+    defaultValues: { email: "", displayName: "", role: "member", organizationId: null },
+  });
+  const errors = form.formState.errors;
+  const orgOptions = [{ value: "", label: "— none —" }, ...(orgs.data ?? []).map((o) => ({ value: o.id, label: o.name }))];
+
+  return (
+    <form
+      className="grid gap-4 sm:grid-cols-2"
+      noValidate
+      onSubmit={form.handleSubmit((values) => invite.mutate(values, { onSuccess: () => { form.reset(); onDone(); } }))}
+    >
+      {invite.error ? (
+        <div className="sm:col-span-2">
+          <Notice tone="block" role="alert">{invite.error instanceof ApiError ? invite.error.message : "The invitation was not sent."}</Notice>
+        </div>
+      ) : null}
+      <TextField label="Name" error={errors.displayName?.message} {...form.register("displayName")} />
+      <TextField label="E-mail" type="email" error={errors.email?.message} {...form.register("email")} />
+      <SelectField label="Role" options={USER_ROLES.map((r) => ({ value: r, label: roleLabel[r] }))} error={errors.role?.message} {...form.register("role")} />
+      <SelectField
+        label="Organisation"
+        options={orgOptions}
+        error={errors.organizationId?.message}
+        {...form.register("organizationId", { setValueAs: (v: string) => (v === "" ? null : v) })}
+      />
+      <div className="sm:col-span-2 flex gap-2">
+        <Button type="submit" busy={invite.isPending}>Send invitation</Button>
+        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+      </div>
+    </form>
+  );
+}

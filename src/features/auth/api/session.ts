@@ -1,0 +1,53 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import type { LoginInput, SetPasswordInput, UserDto } from "@shared/schemas/auth";
+import { api, ApiError, resetCsrf } from "@/lib/api-client";
+
+export type Abilities = {
+  manageUsers: boolean;
+  manageOrganizations: boolean;
+  readCaughtMail: boolean;
+  draftTransfers: boolean;
+  carryTransfers: boolean;
+};
+export type Session = { user: UserDto; abilities: Abilities } | null;
+
+export const sessionKey = ["session"] as const;
+
+async function getSession(): Promise<Session> {
+  try {
+    return await api<{ user: UserDto; abilities: Abilities }>("/api/auth/me");
+  } catch (err) {
+    if (err instanceof ApiError && err.status === 401) return null;
+    throw err;
+  }
+}
+
+export const sessionQueryOptions = () => queryOptions({ queryKey: sessionKey, queryFn: getSession, staleTime: 60_000 });
+
+export function useSession() {
+  return useQuery(sessionQueryOptions());
+}
+
+export function useSignIn() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: LoginInput) => api<{ user: UserDto }>("/api/auth/login", { method: "POST", body: input }),
+    onSuccess: () => client.invalidateQueries({ queryKey: sessionKey }),
+  });
+}
+
+export function useSignOut() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<void>("/api/auth/logout", { method: "POST" }),
+    onSettled: () => {
+      resetCsrf();
+      client.clear();
+      client.setQueryData(sessionKey, null);
+    },
+  });
+}
+
+export function useSetPassword() {
+  return useMutation({ mutationFn: (input: SetPasswordInput) => api<void>("/api/auth/password", { method: "POST", body: input }) });
+}

@@ -1,0 +1,49 @@
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { Link, useSearchParams } from "react-router";
+import { z } from "zod";
+import { passwordSchema } from "@shared/schemas/common";
+import { Button } from "@/components/ui/button";
+import { TextField } from "@/components/ui/field";
+import { Notice } from "@/components/ui/feedback";
+import { paths } from "@/config/paths";
+import { ApiError } from "@/lib/api-client";
+import { useSetPassword } from "../api/session";
+
+const formSchema = z
+  .object({ password: passwordSchema, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
+
+/** The page an invitation e-mail links to: choose a password once. */
+export function WelcomeRoute() {
+  const [params] = useSearchParams();
+  const token = params.get("token") ?? "";
+  const setPassword = useSetPassword();
+  const form = useForm<z.infer<typeof formSchema>>({ resolver: zodResolver(formSchema), defaultValues: { password: "", confirm: "" } });
+
+  if (setPassword.isSuccess) {
+    return (
+      <main className="mx-auto max-w-md px-4 py-16">
+        <Notice tone="ok" title="Password saved">
+          You can now <Link className="font-semibold text-fern underline" to={paths.signIn}>sign in</Link>.
+        </Notice>
+      </main>
+    );
+  }
+  return (
+    <main className="mx-auto max-w-md px-4 py-16">
+      <form
+        className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-6 shadow-card"
+        onSubmit={form.handleSubmit((v) => setPassword.mutate({ token, password: v.password }))}
+        noValidate
+      >
+        <h1 className="text-xl font-semibold">Choose your Hatchway password</h1>
+        <p className="text-sm text-ink-soft">At least 8 characters. A short sentence is easy to remember and hard to guess.</p>
+        {setPassword.error ? <Notice tone="block" role="alert">{setPassword.error instanceof ApiError ? setPassword.error.message : "That did not work."}</Notice> : null}
+        <TextField label="New password" type="password" autoComplete="new-password" error={form.formState.errors.password?.message} {...form.register("password")} />
+        <TextField label="Type it again" type="password" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register("confirm")} />
+        <Button type="submit" busy={setPassword.isPending}>Save password</Button>
+      </form>
+    </main>
+  );
+}

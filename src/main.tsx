@@ -1,0 +1,16 @@
+import { StrictMode } from "react";
+import { createRoot } from "react-dom/client";
+import { RouterProvider } from "react-router";
+import { AppProviders, createQueryClient } from "./app/providers";
+import { router } from "./app/router";
+import "./index.css";
+
+const client = createQueryClient();
+
+createRoot(document.getElementById("root")!).render(
+  <StrictMode>
+    <AppProviders client={client}>
+      <RouterProvider router={router} />
+    </AppProviders>
+  </StrictMode>,
+);

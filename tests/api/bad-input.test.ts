@@ -1,0 +1,96 @@
+/** Nothing a user sends makes the server answer 500 or stop; every error has the same shape. */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import request from "supertest";
+import { createTestApp, signIn, type Client, type TestApp } from "../support/app";
+import { buildUser } from "../factories";
+
+let t: TestApp;
+let admin: Client;
+beforeAll(async () => {
+  t = await createTestApp();
+  const a = await buildUser(t.orm.em.fork(), { role: "admin", organization: null });
+  admin = await signIn(t.app, a.email);
+});
+afterAll(() => t.close());
+
+const org = { name: "Bad Input Keepers", kind: "zoo", address: { street: "1 A St", city: "Salem", state: "OR", zip: "97301" }, phone: "+1 503 555 0100", email: "b@example.test" };
+
+function expectErrorShape(res: request.Response) {
+  expect(res.body).toEqual({ error: expect.objectContaining({ code: expect.any(String), message: expect.any(String) }) });
+  expect(res.headers["x-correlation-id"]).toMatch(/^[0-9a-f-]{36}$/);
+  expect(JSON.stringify(res.body)).not.toMatch(/\bat \S+:\d+|node_modules|SELECT |INSERT /);
+}
+
+describe("bad input", () => {
+  it("malformed JSON is 400", async () => {
+    const res = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).set("Content-Type", "application/json").send('{"name": "unterminated');
+    expect(res.status).toBe(400);
+    expectErrorShape(res);
+  });
+
+  it("a body over 1 MB is 413", async () => {
+    const res = await admin.post("/api/organizations", { ...org, name: "x".repeat(1_100_000) });
+    expect(res.status).toBe(413);
+    expectErrorShape(res);
+  });
+
+  it("unknown keys are 400 naming the key", async () => {
+    const res = await admin.post("/api/organizations", { ...org, role: "admin" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.field).toBe("role");
+    expectErrorShape(res);
+  });
+
+  it("NUL characters are 400, in values and in keys", async () => {
+    const inValue = await admin.post("/api/organizations", { ...org, name: "Bad\u0000Name" });
+    expect(inValue.status).toBe(400);
+    expect(inValue.body.error.field).toBe("name");
+    const inKey = await admin.post("/api/organizations", { ...org, ["na\u0000me"]: "x" });
+    expect(inKey.status).toBe(400);
+    expectErrorShape(inKey);
+  });
+
+  it("wrong types are 400 naming the field", async () => {
+    const res = await admin.post("/api/organizations", { ...org, address: { ...org.address, zip: 97301 } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.field).toBe("address.zip");
+    expect(res.body.error.message).toMatch(/address\.zip/);
+  });
+
+  it("an operator object never reaches a query", async () => {
+    const res = await admin.post("/api/auth/login", { email: { $ne: null }, password: "x" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.field).toBe("email");
+  });
+
+  it("form and text bodies are refused on JSON routes", async () => {
+    const form = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).type("form").send("name=x");
+    expect(form.status).toBe(415);
+    const text = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).set("Content-Type", "text/plain").send("{}");
+    expect(text.status).toBe(415);
+  });
+
+  it("a JSON scalar or array at the top is 400", async () => {
+    const res = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).set("Content-Type", "application/json").send('"just a string"');
+    expect(res.status).toBe(400);
+    const arr = await admin.post("/api/organizations", [1, 2]);
+    expect(arr.status).toBe(400);
+  });
+
+  it("unknown API routes are a JSON 404, and the server keeps answering", async () => {
+    const res = await admin.get("/api/no-such-thing");
+    expect(res.status).toBe(404);
+    expectErrorShape(res);
+    expect((await request(t.app).get("/api/health")).status).toBe(200);
+  });
+
+  it("records and errors are never cached, and the headers are tightened", async () => {
+    const res = await admin.get("/api/auth/me");
+    expect(res.headers["cache-control"]).toBe("no-store");
+    expect(res.headers["x-powered-by"]).toBeUndefined();
+    const csp = res.headers["content-security-policy"] as string;
+    expect(csp).toContain("object-src 'none'");
+    expect(csp).toContain("base-uri 'none'");
+    expect(csp).toContain("frame-ancestors 'none'");
+  });
+});

@@ -1,0 +1,22 @@
+/**
+ * Integration tests: the private "test" PostgreSQL cluster on loopback, and a template
+ * database with the committed migrations applied. Each test file gets a fresh copy.
+ */
+import { dropDatabase, ensureDatabase, startCluster, stopCluster } from "../../scripts/lib/postgres";
+import { initORM, migrate } from "../../server/db/orm";
+import { TEMPLATE_DB, TEST_PG_PORT } from "./constants";
+
+export default async function setup() {
+  const cluster = await startCluster("test", TEST_PG_PORT);
+  await dropDatabase(cluster, TEMPLATE_DB);
+  await ensureDatabase(cluster, TEMPLATE_DB);
+  const orm = await initORM(cluster.url(TEMPLATE_DB), { poolMax: 1 });
+  try {
+    await migrate(orm);
+  } finally {
+    await orm.close();
+  }
+  return async () => {
+    if (cluster.startedByUs) stopCluster(cluster);
+  };
+}
