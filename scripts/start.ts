@@ -50,7 +50,7 @@ async function main() {
     if (build.status !== 0) throw new Error("The client build failed; see the output above.");
 
     fakes = await startAllFakes({ dataDir: path.join(PROJECT_ROOT, ".data"), ports: { smtp: 4100, smtpHttp: 4101, weather: 4102, s3: 4103 } });
-    step(`local fakes up: SMTP ${fakes.smtp.smtpUrl}, caught mail ${fakes.smtp.inboxUrl}, S3 ${fakes.s3.endpoint}`);
+    step(`local fakes up: SMTP ${fakes.smtp.smtpUrl}, caught mail ${fakes.smtp.inboxUrl}, S3 ${fakes.s3.endpoint}, weather ${fakes.weather.url}`);
 
     const env = {
       ...process.env,

@@ -10,11 +10,17 @@ import { authRouter } from "./routes/auth/auth.router";
 import { usersRouter } from "./routes/users/users.router";
 import { organizationsRouter } from "./routes/organizations/organizations.router";
 import { caughtMailRouter } from "./routes/mail/mail.router";
+import { configureLinks } from "./mail/links";
+import { taxaRouter } from "./routes/taxa/taxa.router";
+import { transfersRouter } from "./routes/transfers/transfers.router";
+import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
+import { directoryRouter } from "./routes/directory/directory.router";
 
 /** Builds the Express app (no listen): the API under /api and the built client for everything else. */
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
+  configureLinks(ctx.env.PUBLIC_URL);
   if (ctx.env.SECURE_COOKIES) app.set("trust proxy", 1);
 
   app.use(correlationId);
@@ -51,6 +57,11 @@ export function createApp(ctx: AppContext): Express {
   api.use("/users", usersRouter(ctx));
   api.use("/organizations", organizationsRouter());
   api.use("/dev/mail", caughtMailRouter(ctx));
+  api.use("/taxa", taxaRouter(ctx));
+  api.use("/transfers", transfersRouter());
+  api.use(registerCsvRoute());
+  api.use("/register", registerRouter());
+  api.use("/directory", directoryRouter());
   api.use(notFoundApi);
   app.use("/api", api);
 

@@ -115,3 +115,27 @@ export const LIMITS = {
   containersPerTransferMax: 200,
   uploadBytesMax: 10 * 1024 * 1024,
 } as const;
+
+/** Where a transfer is in its life, in order. */
+export const TRANSFER_STATUSES = [
+  "draft",
+  "awaiting_receiver",
+  "ready",
+  "in_transit",
+  "delivered",
+  "checked_in",
+  "closed",
+  "cancelled",
+] as const;
+export type TransferStatus = (typeof TRANSFER_STATUSES)[number];
+
+/** How a length was measured: carapace (turtles, tortoises), snout–vent or total length. */
+export const LENGTH_KINDS = ["carapace", "snout_vent", "total"] as const;
+export type LengthKind = (typeof LENGTH_KINDS)[number];
+
+export const IDENTIFIER_KINDS = ["microchip", "shell_notch", "photo_id", "band", "other"] as const;
+export type IdentifierKind = (typeof IDENTIFIER_KINDS)[number];
+
+/** What the receiver found when opening each container. */
+export const CHECK_IN_OUTCOMES = ["arrived_well", "arrived_problem", "dead_on_arrival", "missing"] as const;
+export type CheckInOutcome = (typeof CHECK_IN_OUTCOMES)[number];

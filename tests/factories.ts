@@ -9,6 +9,16 @@ import { emailKey } from "@shared/schemas/common";
 import { OrganizationSchema, type Organization } from "../server/db/entities/organization.entity";
 import { UserSchema, type User } from "../server/db/entities/user.entity";
 import { hashPassword } from "../server/auth/passwords";
+import type { TransferStatus } from "@shared/constants";
+import type { TransferInputParsed } from "@shared/schemas/transfer";
+import { TaxonSchema } from "../server/db/entities/taxon.entity";
+import { AnimalSchema, ContainerSchema, type Transfer } from "../server/db/entities/transfer.entity";
+import { actorFromUser, type Actor } from "../server/auth/actor";
+import { createTransfer } from "../server/services/transfers/write-transfer";
+import { transitionTransfer } from "../server/services/transfers/transition";
+import { assignLegs } from "../server/services/transfers/legs";
+import { recordHandoff } from "../server/services/transfers/handoff";
+import { checkInTransfer } from "../server/services/transfers/check-in";
 
 let counter = 0;
 const next = () => `${Date.now().toString(36)}${(++counter).toString(36)}`;
@@ -68,4 +78,118 @@ export async function buildUser(em: EntityManager, overrides: UserOverrides = {}
   });
   await em.flush();
   return user;
+}
+
+// ---------------------------------------------------------------- transfers
+
+export async function actorOf(em: EntityManager, user: User): Promise<Actor> {
+  await em.populate(user, ["organization"]);
+  return actorFromUser(user);
+}
+
+/** A taxon from the seeded catalogue by scientific name (the template database has them all). */
+export async function taxonId(em: EntityManager, scientificName: string): Promise<string> {
+  return (await em.findOneOrFail(TaxonSchema, { scientificName })).id;
+}
+
+type AnimalSpec = { taxon: string; count?: number; sex?: "male" | "female" | "unknown"; box?: string; lengthMm?: number; identifier?: string };
+
+/** A valid transfer input: one box per distinct `box` key, departing in `daysAhead` days. */
+export async function transferInput(
+  em: EntityManager,
+  receiverOrganizationId: string,
+  options: { animals?: AnimalSpec[]; daysAhead?: number; boxes?: string[]; mode?: TransferInputParsed["mode"] } = {},
+): Promise<TransferInputParsed> {
+  const animals = options.animals ?? [{ taxon: "Pantherophis guttatus", count: 2, sex: "female", box: "A" }];
+  const boxes = options.boxes ?? [...new Set(animals.map((a) => a.box ?? "A"))];
+  const depart = new Date(Date.now() + (options.daysAhead ?? 3) * 86_400_000);
+  return {
+    receiverOrganizationId,
+    receiverContactId: null,
+    origin: { street: "418 Quarry Hollow Road", city: "Knoxville", state: "TN", zip: "37917" },
+    destination: { street: "92 Boardwalk Lane", city: "Eugene", state: "OR", zip: "97401" },
+    mode: options.mode ?? "overnight_air",
+    plannedDepartureAt: depart.toISOString(),
+    expectedArrivalAt: new Date(depart.getTime() + 20 * 3600_000).toISOString(),
+    purpose: "education_exhibition",
+    sale: false,
+    salePriceUsd: null,
+    handlingNotes: "Keep upright and out of the sun.",
+    privateNotes: null,
+    containers: boxes.map((key, i) => ({
+      key, label: `Box ${key}`, lengthMm: 400, widthMm: 300, heightMm: 250, wallMaterial: "eps" as const, wallThicknessMm: 25, pack: "none" as const, sealNumber: `SEAL-${i + 1}`,
+    })),
+    animals: await Promise.all(
+      animals.map(async (a) => ({
+        taxonId: await taxonId(em, a.taxon),
+        count: a.count ?? 1,
+        sex: a.sex ?? "unknown",
+        identifier: a.identifier ?? null,
+        identifierKind: null,
+        origin: "captive_bred" as const,
+        lengthMm: a.lengthMm ?? null,
+        lengthKind: null,
+        weightG: null,
+        hatchDate: null,
+        notes: null,
+        containerKey: a.box ?? "A",
+      })),
+    ),
+  };
+}
+
+export type TransferCast = { transfer: Transfer; sender: User; receiver: User; couriers: User[] };
+
+/**
+ * A transfer between two fresh organisations, moved through the real services up to
+ * `status`. Couriers are assigned once it is cleared (one leg unless `legs` says more).
+ */
+export async function buildTransfer(
+  em: EntityManager,
+  options: { status?: TransferStatus; legs?: number; sender?: User; receiver?: User; couriers?: User[]; animals?: AnimalSpec[]; mode?: TransferInputParsed["mode"] } = {},
+): Promise<TransferCast> {
+  const sender = options.sender ?? (await buildUser(em, { role: "member" }));
+  const receiver = options.receiver ?? (await buildUser(em, { role: "member", organization: await buildOrganization(em, { kind: "nature_centre", state: "OR", city: "Eugene", zip: "97401" }) }));
+  const couriers = options.couriers ?? (await Promise.all(Array.from({ length: options.legs ?? 1 }, () => buildUser(em, { role: "courier" }))));
+  await em.populate(receiver, ["organization"]);
+  const s = await actorOf(em, sender);
+  const r = await actorOf(em, receiver);
+  const input = await transferInput(em, receiver.organization!.id, { animals: options.animals, mode: options.mode });
+  let transfer = await createTransfer({ em: em.fork(), actor: s, input });
+  const target = options.status ?? "draft";
+  const order: TransferStatus[] = ["draft", "awaiting_receiver", "ready", "in_transit", "delivered", "checked_in", "closed"];
+  const reach = (st: TransferStatus) => order.indexOf(target) >= order.indexOf(st);
+  if (target === "cancelled") {
+    transfer = await transitionTransfer({ em: em.fork(), actor: s, transferId: transfer.id, input: { to: "cancelled", reason: "Test cancellation" } });
+  }
+  if (reach("awaiting_receiver")) transfer = await transitionTransfer({ em: em.fork(), actor: s, transferId: transfer.id, input: { to: "awaiting_receiver" } });
+  if (reach("ready")) {
+    transfer = await transitionTransfer({ em: em.fork(), actor: r, transferId: transfer.id, input: { to: "ready" } });
+    transfer = await assignLegs({ em: em.fork(), actor: s, transferId: transfer.id, input: { legs: couriers.map((c) => ({ courierId: c.id })) } });
+  }
+  const containers = await em.fork().find(ContainerSchema, { transfer: transfer.id });
+  const handoff = (index: number) => ({
+    handoffIndex: index,
+    boxesCounted: containers.length,
+    seals: containers.map((c) => ({ containerId: c.id, sealNumber: c.sealNumber ?? null, intact: true })),
+    boxTempF: 72,
+    place: { text: "Test depot" },
+    releasedByName: "Releaser",
+    receivedByName: "Receiver",
+    acknowledged: true as const,
+  });
+  if (reach("in_transit")) transfer = await recordHandoff({ em: em.fork(), actor: await actorOf(em, couriers[0]!), transferId: transfer.id, input: handoff(0) as never });
+  if (reach("delivered")) {
+    for (let i = 1; i < couriers.length; i++) transfer = await recordHandoff({ em: em.fork(), actor: await actorOf(em, couriers[i]!), transferId: transfer.id, input: handoff(i) as never });
+    transfer = await recordHandoff({ em: em.fork(), actor: r, transferId: transfer.id, input: handoff(couriers.length) as never });
+  }
+  if (reach("checked_in")) {
+    const animals = await em.fork().find(AnimalSchema, { transfer: transfer.id });
+    transfer = await checkInTransfer({
+      em: em.fork(), actor: r, transferId: transfer.id,
+      input: { items: animals.map((a) => ({ animalId: a.id, arrivedWell: a.count, arrivedProblem: 0, deadOnArrival: 0, missing: 0 })), extras: [], signedName: "Receiver", acknowledged: true } as never,
+    });
+  }
+  if (reach("closed")) transfer = await transitionTransfer({ em: em.fork(), actor: r, transferId: transfer.id, input: { to: "closed" } });
+  return { transfer, sender, receiver, couriers };
 }

@@ -17,6 +17,8 @@ export function ormConfig(databaseUrl: string, options: { debug?: boolean; poolM
     // No schema discovery at run time: the committed migrations are the schema.
     discovery: { warnWhenNoEntities: true },
     pool: { min: 0, max: options.poolMax ?? 10 },
+    // Tables owned by libraries (sessions, sign-in throttling), created by our first migration.
+    schemaGenerator: { skipTables: ["session", "auth_throttle"] },
     migrations: {
       path: here("./migrations"),
       pathTs: here("./migrations"),

@@ -18,3 +18,39 @@ export function invitationMail(p: { to: string; name: string; invitedBy: string;
     ].join("\n"),
   };
 }
+
+export type TransferMailTopic = "awaiting_confirmation" | "reconfirm" | "confirmed" | "sent_back" | "cancelled" | "picked_up" | "delivered" | "checked_in";
+
+type TransferMailFacts = { to: string; name: string; organization: string; number: string; actor: string; link: string; reason?: string; summary?: string };
+
+const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
+  awaiting_confirmation: (n) => `Transfer ${n} is waiting for your confirmation`,
+  reconfirm: (n) => `Transfer ${n} changed: please confirm it again`,
+  confirmed: (n) => `Transfer ${n} was confirmed by the receiver`,
+  sent_back: (n) => `Transfer ${n} was sent back for changes`,
+  cancelled: (n) => `Transfer ${n} was cancelled`,
+  picked_up: (n) => `Transfer ${n} is on the road`,
+  delivered: (n) => `Transfer ${n} was delivered`,
+  checked_in: (n) => `Transfer ${n} was checked in`,
+};
+
+const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
+  awaiting_confirmation: (f) => `${f.actor} has drafted transfer ${f.number} to ${f.organization}. Please check the animals, the route and the dates, and confirm it or send it back.`,
+  reconfirm: (f) => `${f.actor} changed transfer ${f.number} after you confirmed it. ${f.reason ?? ""} Please look again and confirm.`,
+  confirmed: (f) => `The receiver confirmed transfer ${f.number}. It is cleared to travel once the couriers are assigned.`,
+  sent_back: (f) => `${f.actor} sent transfer ${f.number} back for changes.${f.reason ? ` Their reason: ${f.reason}` : ""}`,
+  cancelled: (f) => `${f.actor} cancelled transfer ${f.number}.${f.reason ? ` Reason: ${f.reason}` : ""}`,
+  picked_up: (f) => `The courier took custody of transfer ${f.number}. ${f.summary ?? ""}`,
+  delivered: (f) => `Transfer ${f.number} was handed to the receiver. ${f.summary ?? ""}`,
+  checked_in: (f) => `${f.actor} checked in transfer ${f.number}. ${f.summary ?? ""}`,
+};
+
+/** The e-mail for a step of a transfer that needs the other party. Plain text only. */
+export function transferMail(topic: TransferMailTopic, f: TransferMailFacts): MailDraft {
+  return {
+    to: f.to,
+    topic: `transfer.${topic}`,
+    subject: SUBJECTS[topic](f.number),
+    text: [`Hello ${f.name},`, "", LEADS[topic](f).replace(/\s+$/, ""), "", `Open the transfer: ${f.link}`, "", "— Hatchway"].join("\n"),
+  };
+}

@@ -4,6 +4,7 @@
  */
 import { dropDatabase, ensureDatabase, startCluster, stopCluster } from "../../scripts/lib/postgres";
 import { initORM, migrate } from "../../server/db/orm";
+import { seedReferenceData } from "../../server/db/seeders/reference.seeder";
 import { TEMPLATE_DB, TEST_PG_PORT } from "./constants";
 
 export default async function setup() {
@@ -13,6 +14,7 @@ export default async function setup() {
   const orm = await initORM(cluster.url(TEMPLATE_DB), { poolMax: 1 });
   try {
     await migrate(orm);
+    await seedReferenceData(cluster.url(TEMPLATE_DB));
   } finally {
     await orm.close();
   }

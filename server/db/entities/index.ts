@@ -2,8 +2,36 @@ import { OrganizationSchema } from "./organization.entity";
 import { OutboxMessageSchema } from "./outbox-message.entity";
 import { PasswordTokenSchema } from "./password-token.entity";
 import { UserSchema } from "./user.entity";
+import { TaxonNameSchema, TaxonSchema } from "./taxon.entity";
+import { AnimalSchema, ContainerSchema, LegSchema, MessageSchema, TransferChangeSchema, TransferSchema } from "./transfer.entity";
+import { CustodyEntrySchema } from "./custody-entry.entity";
+import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
+import { IdempotencyKeySchema } from "./idempotency-key.entity";
 
-export { OrganizationSchema, OutboxMessageSchema, PasswordTokenSchema, UserSchema };
+export {
+  OrganizationSchema, OutboxMessageSchema, PasswordTokenSchema, UserSchema, TaxonSchema, TaxonNameSchema, TransferSchema, ContainerSchema,
+  AnimalSchema, LegSchema, MessageSchema, TransferChangeSchema, CustodyEntrySchema, CheckInSchema, CheckInItemSchema, CheckInExtraSchema,
+  RegisterEntrySchema, IdempotencyKeySchema,
+};
 
 /** Every entity the ORM knows; new entities are added here once. */
-export const ENTITIES = [OrganizationSchema, UserSchema, PasswordTokenSchema, OutboxMessageSchema];
+export const ENTITIES = [
+  OrganizationSchema,
+  UserSchema,
+  PasswordTokenSchema,
+  OutboxMessageSchema,
+  TaxonSchema,
+  TaxonNameSchema,
+  TransferSchema,
+  ContainerSchema,
+  AnimalSchema,
+  LegSchema,
+  MessageSchema,
+  TransferChangeSchema,
+  CustodyEntrySchema,
+  CheckInSchema,
+  CheckInItemSchema,
+  CheckInExtraSchema,
+  RegisterEntrySchema,
+  IdempotencyKeySchema,
+];

@@ -1,0 +1,13 @@
+import pg from "pg";
+import { seedTaxa } from "./taxa.seeder";
+
+/** Reference data every installation needs (not demo data); each part loads only when empty. */
+export async function seedReferenceData(databaseUrl: string): Promise<void> {
+  const client = new pg.Client({ connectionString: databaseUrl });
+  await client.connect();
+  try {
+    await seedTaxa(client);
+  } finally {
+    await client.end();
+  }
+}

@@ -1,0 +1,69 @@
+import { describe, expect, it } from "vitest";
+import type { Actor } from "../auth/actor";
+import { handoffAllowed, transferAbilities, viewerRoleFor, type TransferFacts } from "./transfer.policy";
+
+const org = (id: string) => ({ id, name: id, kind: "breeder" as const });
+const member = (id: string, orgId: string): Actor => ({ id, email: `${id}@x`, displayName: id, role: "member", disabled: false, organization: org(orgId) });
+const courier = (id: string): Actor => ({ id, email: `${id}@x`, displayName: id, role: "courier", disabled: false, organization: org("couriers") });
+const admin: Actor = { id: "adm", email: "a@x", displayName: "A", role: "admin", disabled: false, organization: null };
+
+const facts = (over: Partial<TransferFacts> = {}): TransferFacts => ({
+  status: "ready",
+  senderOrganizationId: "S",
+  receiverOrganizationId: "R",
+  legCourierIds: ["c1", "c2"],
+  handoffsDone: 0,
+  ...over,
+});
+
+// Chain of custody (NIST CNSSI 4009; ASTM D4840): each custody transfer records who released
+// and who received; one leg's receiver is the next leg's releaser [published].
+describe("transfer policy", () => {
+  it("gives each caller their role and nobody else a view", () => {
+    const t = facts();
+    expect(viewerRoleFor(member("s", "S"), t)).toBe("sender");
+    expect(viewerRoleFor(member("r", "R"), t)).toBe("receiver");
+    expect(viewerRoleFor(courier("c2"), t)).toBe("courier");
+    expect(viewerRoleFor(courier("c9"), t)).toBeNull();
+    expect(viewerRoleFor(member("o", "O"), t)).toBeNull();
+    expect(viewerRoleFor(admin, t)).toBe("admin");
+  });
+
+  it("walks custody along the legs: pickup by leg 1, then leg 2, then the receiver", () => {
+    const s = member("s", "S");
+    const r = member("r", "R");
+    const c1 = courier("c1");
+    const c2 = courier("c2");
+    expect(handoffAllowed(c1, "courier", facts({ handoffsDone: 0 }))).toBe(0);
+    expect(handoffAllowed(s, "sender", facts({ handoffsDone: 0 }))).toBe(0);
+    expect(handoffAllowed(c2, "courier", facts({ handoffsDone: 0 }))).toBeNull();
+    const moving = { status: "in_transit" as const };
+    expect(handoffAllowed(c1, "courier", facts({ ...moving, handoffsDone: 1 }))).toBe(1);
+    expect(handoffAllowed(c2, "courier", facts({ ...moving, handoffsDone: 1 }))).toBe(1);
+    expect(handoffAllowed(r, "receiver", facts({ ...moving, handoffsDone: 1 }))).toBeNull();
+    expect(handoffAllowed(c2, "courier", facts({ ...moving, handoffsDone: 2 }))).toBe(2);
+    expect(handoffAllowed(r, "receiver", facts({ ...moving, handoffsDone: 2 }))).toBe(2);
+    expect(handoffAllowed(c1, "courier", facts({ ...moving, handoffsDone: 2 }))).toBeNull();
+  });
+
+  it("allows no pickup before the transfer is cleared, and nothing after delivery", () => {
+    expect(handoffAllowed(courier("c1"), "courier", facts({ status: "awaiting_receiver" }))).toBeNull();
+    expect(handoffAllowed(courier("c2"), "courier", facts({ status: "delivered", handoffsDone: 3 }))).toBeNull();
+  });
+
+  it("admins read but never act", () => {
+    const a = transferAbilities(admin, "admin", facts({ status: "awaiting_receiver" }));
+    expect(Object.entries(a).filter(([k, v]) => v === true && k !== "readCustody")).toEqual([]);
+    expect(a.handOff).toBeNull();
+  });
+
+  it("only the receiver confirms and checks in; only the sender edits", () => {
+    const waiting = facts({ status: "awaiting_receiver" });
+    expect(transferAbilities(member("r", "R"), "receiver", waiting).confirm).toBe(true);
+    expect(transferAbilities(member("s", "S"), "sender", waiting).confirm).toBe(false);
+    expect(transferAbilities(member("s", "S"), "sender", waiting).edit).toBe(true);
+    expect(transferAbilities(member("r", "R"), "receiver", waiting).edit).toBe(false);
+    expect(transferAbilities(member("r", "R"), "receiver", facts({ status: "delivered", handoffsDone: 3 })).checkIn).toBe(true);
+    expect(transferAbilities(courier("c2"), "courier", facts({ status: "delivered", handoffsDone: 3 })).checkIn).toBe(false);
+  });
+});

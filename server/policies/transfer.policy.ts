@@ -1,0 +1,62 @@
+import type { TransferAbilitiesDto, ViewerRole } from "@shared/schemas/transfer";
+import type { TransferStatus } from "@shared/constants";
+import { CANCELLABLE, EDITABLE } from "@shared/transfer/lifecycle";
+import type { Actor } from "../auth/actor";
+
+export type TransferFacts = {
+  status: TransferStatus;
+  senderOrganizationId: string;
+  receiverOrganizationId: string;
+  /** Courier user ids by leg, in leg order. */
+  legCourierIds: readonly string[];
+  handoffsDone: number;
+};
+
+/**
+ * Who the caller is to this transfer: a member of the sending or receiving organisation,
+ * an assigned courier, an admin (read only), or nobody (the record does not exist for them).
+ */
+export function viewerRoleFor(actor: Actor, t: Pick<TransferFacts, "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds">): ViewerRole | null {
+  if (actor.disabled) return null;
+  const orgId = actor.organization?.id;
+  if (actor.role === "member" && orgId === t.senderOrganizationId) return "sender";
+  if (actor.role === "member" && orgId === t.receiverOrganizationId) return "receiver";
+  if (actor.role === "courier" && t.legCourierIds.includes(actor.id)) return "courier";
+  if (actor.role === "admin") return "admin";
+  return null;
+}
+
+/**
+ * The handoff the caller may record now: the next one in order, by the party taking custody
+ * or the one releasing it (one leg's receiver is the next leg's releaser). Null otherwise.
+ */
+export function handoffAllowed(actor: Actor, role: ViewerRole, t: TransferFacts): number | null {
+  const legs = t.legCourierIds.length;
+  if (legs === 0) return null;
+  const next = t.handoffsDone;
+  if (next > legs) return null;
+  if (next === 0 ? t.status !== "ready" : t.status !== "in_transit") return null;
+  const releasing = next === 0 ? role === "sender" : t.legCourierIds[next - 1] === actor.id;
+  const receiving = next === legs ? role === "receiver" : t.legCourierIds[next] === actor.id;
+  return releasing || receiving ? next : null;
+}
+
+export function transferAbilities(actor: Actor, role: ViewerRole, t: TransferFacts): TransferAbilitiesDto {
+  const sender = role === "sender";
+  const receiver = role === "receiver";
+  return {
+    edit: sender && EDITABLE.includes(t.status),
+    submit: sender && t.status === "draft",
+    withdraw: sender && t.status === "awaiting_receiver",
+    confirm: receiver && t.status === "awaiting_receiver",
+    sendBack: receiver && t.status === "awaiting_receiver",
+    cancel: sender && CANCELLABLE.includes(t.status),
+    close: (sender || receiver) && t.status === "checked_in",
+    assignCouriers: sender && EDITABLE.includes(t.status),
+    handOff: handoffAllowed(actor, role, t),
+    checkIn: receiver && t.status === "delivered",
+    discuss: sender || receiver,
+    readCustody: true,
+    readPrivateNotes: sender || receiver,
+  };
+}

@@ -1,0 +1,153 @@
+import { Router, type Request } from "express";
+import {
+  checkInInputSchema, createTransferSchema, handoffInputSchema, legsInputSchema, messageInputSchema, transferListQuerySchema, transferPatchSchema, transitionSchema,
+  type MessageDto, type TransferChangeDto,
+} from "@shared/schemas/transfer";
+import { idSchema } from "@shared/schemas/common";
+import type { Actor } from "../../auth/actor";
+import { MessageSchema, TransferChangeSchema, type Transfer } from "../../db/entities/transfer.entity";
+import { UserSchema } from "../../db/entities/user.entity";
+import { forbidden } from "../../http/errors";
+import { currentUser, requireUser } from "../../http/guards";
+import { idempotent } from "../../http/idempotency";
+import { parse } from "../../http/validate";
+import { transferAbilities } from "../../policies/transfer.policy";
+import { presentTransfer } from "../../presenters/transfer.presenter";
+import { readCustodyLog } from "../../services/transfers/custody";
+import { loadTransferDetail, loadTransferForActor } from "../../services/transfers/load";
+import { listTransfers } from "../../services/transfers/list";
+import { createTransfer, updateTransfer } from "../../services/transfers/write-transfer";
+import { transitionTransfer } from "../../services/transfers/transition";
+import { assignLegs } from "../../services/transfers/legs";
+import { recordHandoff } from "../../services/transfers/handoff";
+import { checkInTransfer } from "../../services/transfers/check-in";
+
+/** The transfer as this caller sees it now, read fresh after any change. */
+export async function presentForActor(req: Request, transferId: string) {
+  const em = req.em.fork();
+  const actor = currentUser(req);
+  const { transfer, legs, facts, role } = await loadTransferForActor(em, transferId, actor);
+  const detail = await loadTransferDetail(em, transfer, role);
+  return presentTransfer(transfer, detail, legs, role, transferAbilities(actor, role, facts));
+}
+
+const idParam = (req: Request) => parse(idSchema, req.params.id);
+
+export function transfersRouter(): Router {
+  const router = Router();
+  router.use(requireUser);
+
+  router.get("/", async (req, res) => {
+    const query = parse(transferListQuerySchema, req.query);
+    res.json(await listTransfers(req.ctx.pool, currentUser(req), query));
+  });
+
+  router.post("/", async (req, res) => {
+    const input = parse(createTransferSchema(new Date()), req.body);
+    const transfer = await createTransfer({ em: req.em, actor: currentUser(req), input });
+    res.status(201).json({ transfer: await presentForActor(req, transfer.id) });
+  });
+
+  router.get("/:id", async (req, res) => {
+    res.json({ transfer: await presentForActor(req, idParam(req)) });
+  });
+
+  router.patch("/:id", async (req, res) => {
+    const id = idParam(req);
+    const actor = currentUser(req);
+    const { role, facts } = await loadTransferForActor(req.em, id, actor);
+    if (!transferAbilities(actor, role, facts).edit) throw forbidden("Only the sender can edit this transfer, and only before the animals leave.");
+    const input = parse(transferPatchSchema, req.body);
+    await updateTransfer({ em: req.em.fork(), actor, transferId: id, input });
+    req.ctx.kickOutbox();
+    res.json({ transfer: await presentForActor(req, id) });
+  });
+
+  router.post("/:id/transition", async (req, res) => {
+    const id = idParam(req);
+    const input = parse(transitionSchema, req.body);
+    await transitionTransfer({ em: req.em, actor: currentUser(req), transferId: id, input: { to: input.to, reason: input.reason ?? null, override: input.override } });
+    req.ctx.kickOutbox();
+    res.json({ transfer: await presentForActor(req, id) });
+  });
+
+  router.put("/:id/legs", async (req, res) => {
+    const id = idParam(req);
+    const input = parse(legsInputSchema, req.body);
+    await assignLegs({ em: req.em, actor: currentUser(req), transferId: id, input });
+    res.json({ transfer: await presentForActor(req, id) });
+  });
+
+  router.post("/:id/handoffs", async (req, res) => {
+    const id = idParam(req);
+    // Existence and access first: a stranger learns nothing from the idempotency answers.
+    await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    const input = parse(handoffInputSchema, req.body);
+    await idempotent(req, res, `handoff:${id}`, async () => {
+      await recordHandoff({ em: req.em.fork(), actor: currentUser(req), transferId: id, input });
+      req.ctx.kickOutbox();
+      return { status: 201, body: { transfer: await presentForActor(req, id) } };
+    });
+  });
+
+  router.post("/:id/check-in", async (req, res) => {
+    const id = idParam(req);
+    await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    const input = parse(checkInInputSchema, req.body);
+    await idempotent(req, res, `check-in:${id}`, async () => {
+      await checkInTransfer({ em: req.em.fork(), actor: currentUser(req), transferId: id, input });
+      req.ctx.kickOutbox();
+      return { status: 201, body: { transfer: await presentForActor(req, id) } };
+    });
+  });
+
+  router.get("/:id/custody", async (req, res) => {
+    const id = idParam(req);
+    await loadTransferForActor(req.em, id, currentUser(req));
+    res.json(await readCustodyLog(req.em, id));
+  });
+
+  router.get("/:id/changes", async (req, res) => {
+    const id = idParam(req);
+    const { role } = await loadTransferForActor(req.em, id, currentUser(req));
+    if (role === "courier") throw forbidden("The edit history is for the sender and the receiver.");
+    const rows = await req.em.find(TransferChangeSchema, { transfer: id }, { orderBy: { createdAt: "desc" }, populate: ["actor"] });
+    const changes: TransferChangeDto[] = rows.map((c) => ({
+      at: c.createdAt.toISOString(),
+      actor: { id: c.actor.id, displayName: c.actor.getEntity().displayName },
+      field: c.field,
+      oldValue: c.oldValue ?? null,
+      newValue: c.newValue ?? null,
+    }));
+    res.json({ changes });
+  });
+
+  router.get("/:id/messages", async (req, res) => {
+    const id = idParam(req);
+    const { role } = await loadTransferForActor(req.em, id, currentUser(req));
+    if (role === "courier") throw forbidden("The discussion is between the sender and the receiver.");
+    const rows = await req.em.find(MessageSchema, { transfer: id }, { orderBy: { createdAt: "asc" }, populate: ["author", "author.organization"] });
+    res.json({ messages: rows.map(presentMessage) });
+  });
+
+  router.post("/:id/messages", async (req, res) => {
+    const id = idParam(req);
+    const actor = currentUser(req);
+    const { transfer, role, facts } = await loadTransferForActor(req.em, id, actor);
+    if (!transferAbilities(actor, role, facts).discuss) throw forbidden("Only the sender and the receiver can write here.");
+    const { body } = parse(messageInputSchema, req.body);
+    const message = req.em.create(MessageSchema, { transfer: transfer as Transfer, author: req.em.getReference(UserSchema, actor.id), body });
+    await req.em.flush();
+    await req.em.populate(message, ["author", "author.organization"]);
+    res.status(201).json({ message: presentMessage(message) });
+  });
+
+  return router;
+}
+
+function presentMessage(m: { id: string; body: string; createdAt: Date; author: { getEntity(): { id: string; displayName: string; organization?: { getEntity?(): { name: string } } | null } } }): MessageDto {
+  const author = m.author.getEntity();
+  return { id: m.id, author: { id: author.id, displayName: author.displayName, organizationName: author.organization?.getEntity?.()?.name ?? null }, body: m.body, at: m.createdAt.toISOString() };
+}
+
+export type { Actor };

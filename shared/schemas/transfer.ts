@@ -1,0 +1,441 @@
+/**
+ * The transfer record's inputs (validated the same way by the form and the server) and
+ * the shapes the API answers with.
+ */
+import { z } from "zod";
+import {
+  ANIMAL_ORIGINS,
+  IDENTIFIER_KINDS,
+  LENGTH_KINDS,
+  LIMITS,
+  PACK_KINDS,
+  PURPOSES,
+  SEXES,
+  TRANSFER_STATUSES,
+  TRANSPORT_MODES,
+  WALL_MATERIALS,
+  type AnimalOrigin,
+  type CheckInOutcome,
+  type IdentifierKind,
+  type LengthKind,
+  type OrganizationKind,
+  type PackKind,
+  type ProfileGroup,
+  type Purpose,
+  type Sex,
+  type TransferStatus,
+  type TransportMode,
+  type UsState,
+  type WallMaterial,
+} from "../constants";
+import { addressSchema, idSchema, optionalText, requiredText, text } from "./common";
+
+/** A whole number within [min, max]; 1.5, -1, 1e309 and "3" are all refused. */
+export function wholeNumber(min: number, max: number, what = "number") {
+  return z
+    .number({ message: `Enter a ${what}` })
+    .refine(Number.isFinite, { message: `Enter a finite ${what}` })
+    .refine(Number.isInteger, { message: "Use a whole number" })
+    .refine((n) => n >= min, { message: `Use at least ${min}` })
+    .refine((n) => n <= max, { message: `Use at most ${max.toLocaleString("en-US")}` });
+}
+
+/** A positive measurement below a sane maximum (sizes in mm, weights in g). */
+export function positiveMeasure(max: number, unit: string) {
+  return z
+    .number({ message: `Enter a number of ${unit}` })
+    .refine(Number.isFinite, { message: "Enter a finite number" })
+    .refine((n) => n > 0, { message: `Must be more than 0 ${unit}` })
+    .refine((n) => n <= max, { message: `Must be at most ${max.toLocaleString("en-US")} ${unit}` });
+}
+
+/** An instant with an explicit offset, e.g. 2027-03-09T16:00:00-05:00. */
+export const instantSchema = z.iso.datetime({ offset: true, message: "Enter a date and time with its offset" });
+/** A calendar date, e.g. 2026-07-14. */
+export const dateSchema = z.iso.date({ message: "Enter a date as YYYY-MM-DD" });
+
+export const containerInputSchema = z.strictObject({
+  /** Present for a box that already exists; absent for a new one. */
+  id: idSchema.optional(),
+  /** The form's own key for the box, so animals can name their box before it has an id. */
+  key: requiredText(64),
+  label: requiredText(80),
+  lengthMm: positiveMeasure(LIMITS.boxDimensionMmMax, "mm"),
+  widthMm: positiveMeasure(LIMITS.boxDimensionMmMax, "mm"),
+  heightMm: positiveMeasure(LIMITS.boxDimensionMmMax, "mm"),
+  wallMaterial: z.enum(WALL_MATERIALS, { message: "Choose expanded polystyrene or corrugated board" }),
+  wallThicknessMm: positiveMeasure(LIMITS.wallThicknessMmMax, "mm"),
+  pack: z.enum(PACK_KINDS, { message: "Choose a pack" }),
+  sealNumber: optionalText(60),
+});
+export type ContainerInput = z.input<typeof containerInputSchema>;
+
+export const animalInputSchema = z.strictObject({
+  id: idSchema.optional(),
+  taxonId: idSchema,
+  count: wholeNumber(1, LIMITS.animalCountMax, "count"),
+  sex: z.enum(SEXES, { message: "Choose male, female or unknown" }),
+  identifier: optionalText(120),
+  identifierKind: z.enum(IDENTIFIER_KINDS).nullable().optional(),
+  origin: z.enum(ANIMAL_ORIGINS, { message: "Choose where the animal came from" }),
+  lengthMm: positiveMeasure(LIMITS.lengthMmMax, "mm").nullable().optional(),
+  lengthKind: z.enum(LENGTH_KINDS).nullable().optional(),
+  weightG: positiveMeasure(LIMITS.weightGMax, "g").nullable().optional(),
+  hatchDate: dateSchema.nullable().optional(),
+  notes: optionalText(2000),
+  /** The `key` of the box it travels in; null until it is packed. */
+  containerKey: text(64).nullable(),
+});
+export type AnimalInput = z.input<typeof animalInputSchema>;
+
+const transferFields = {
+  receiverOrganizationId: idSchema,
+  receiverContactId: idSchema.nullable(),
+  origin: addressSchema,
+  destination: addressSchema,
+  mode: z.enum(TRANSPORT_MODES, { message: "Choose how the animals travel" }),
+  plannedDepartureAt: instantSchema,
+  expectedArrivalAt: instantSchema,
+  purpose: z.enum(PURPOSES, { message: "Choose the purpose of the move" }),
+  sale: z.boolean({ message: "Say whether this is a sale" }),
+  salePriceUsd: z.number().refine(Number.isFinite).refine((n) => n >= 0 && n <= 10_000_000, { message: "Enter a price from 0" }).nullable().optional(),
+  handlingNotes: optionalText(LIMITS.textMax),
+  /** The sender's own notes: never shown to the receiver or the courier. */
+  privateNotes: optionalText(LIMITS.textMax),
+  containers: z.array(containerInputSchema).max(LIMITS.containersPerTransferMax, { message: `Use at most ${LIMITS.containersPerTransferMax} boxes` }),
+  animals: z.array(animalInputSchema).max(LIMITS.animalsPerTransferMax, { message: `Use at most ${LIMITS.animalsPerTransferMax} animal lines` }),
+};
+
+type Shape = {
+  plannedDepartureAt?: string;
+  expectedArrivalAt?: string;
+  containers?: { key: string }[];
+  animals?: { containerKey: string | null }[];
+};
+
+/** Cross-field rules: arrival after departure; each animal's box exists; box keys unique. */
+function crossChecks(value: Shape, ctx: z.RefinementCtx) {
+  if (value.plannedDepartureAt && value.expectedArrivalAt && Date.parse(value.expectedArrivalAt) <= Date.parse(value.plannedDepartureAt)) {
+    ctx.addIssue({ code: "custom", path: ["expectedArrivalAt"], message: "Arrival must be after departure" });
+  }
+  if (value.containers) {
+    const keys = new Set<string>();
+    value.containers.forEach((c, i) => {
+      if (keys.has(c.key)) ctx.addIssue({ code: "custom", path: ["containers", i, "key"], message: "Two boxes share this key" });
+      keys.add(c.key);
+    });
+    value.animals?.forEach((a, i) => {
+      if (a.containerKey !== null && !keys.has(a.containerKey)) {
+        ctx.addIssue({ code: "custom", path: ["animals", i, "containerKey"], message: "Choose one of this transfer's boxes" });
+      }
+    });
+  }
+}
+
+export const transferInputSchema = z.strictObject(transferFields).superRefine(crossChecks);
+export type TransferInput = z.input<typeof transferInputSchema>;
+export type TransferInputParsed = z.output<typeof transferInputSchema>;
+
+/** A new transfer may not depart in the past (a few minutes' grace for slow forms). */
+export function createTransferSchema(now: Date) {
+  return transferInputSchema.superRefine((value, ctx) => {
+    if (Date.parse(value.plannedDepartureAt) < now.getTime() - 10 * 60_000) {
+      ctx.addIssue({ code: "custom", path: ["plannedDepartureAt"], message: "A new transfer cannot depart in the past" });
+    }
+  });
+}
+
+/**
+ * An edit: any of the fields, plus the version the editor saw (a stale version is a 409,
+ * so two people never silently overwrite each other). Lists, when given, replace the old ones.
+ */
+export const transferPatchSchema = z
+  .strictObject({ version: wholeNumber(1, Number.MAX_SAFE_INTEGER, "version"), ...transferFields })
+  .partial()
+  .required({ version: true })
+  .superRefine(crossChecks);
+export type TransferPatch = z.input<typeof transferPatchSchema>;
+
+export const transitionSchema = z.strictObject({
+  to: z.enum(TRANSFER_STATUSES, { message: "Name a state of the transfer" }),
+  reason: optionalText(1000),
+  /** Set with a reason to ship despite a compliance or temperature block (logged). */
+  override: z.boolean().optional(),
+});
+export type TransitionInput = z.input<typeof transitionSchema>;
+
+export const legsInputSchema = z.strictObject({
+  legs: z
+    .array(z.strictObject({ courierId: idSchema, fromLabel: optionalText(120), toLabel: optionalText(120) }))
+    .min(1, { message: "Assign at least one courier" })
+    .max(10, { message: "Use at most 10 legs" }),
+});
+export type LegsInput = z.input<typeof legsInputSchema>;
+
+export const messageInputSchema = z.strictObject({ body: requiredText(4000) });
+
+/** What the person taking custody checks and records at a pickup or handoff. */
+export const handoffInputSchema = z.strictObject({
+  /** 0 is the pickup from the sender; the last index is the delivery to the receiver. */
+  handoffIndex: wholeNumber(0, 20, "handoff number"),
+  boxesCounted: wholeNumber(0, LIMITS.containersPerTransferMax, "box count"),
+  seals: z
+    .array(z.strictObject({ containerId: idSchema, sealNumber: optionalText(60), intact: z.boolean() }))
+    .max(LIMITS.containersPerTransferMax),
+  boxTempF: z.number().refine(Number.isFinite, { message: "Enter a temperature" }).refine((t) => t >= -40 && t <= 160, { message: "Enter a temperature between -40 and 160 °F" }).nullable(),
+  place: z.strictObject({
+    text: optionalText(200),
+    lat: z.number().min(-90).max(90).nullable().optional(),
+    lon: z.number().min(-180).max(180).nullable().optional(),
+    accuracyM: z.number().min(0).max(100_000).nullable().optional(),
+  }),
+  releasedByName: requiredText(120),
+  receivedByName: requiredText(120),
+  notes: optionalText(2000),
+  acknowledged: z.literal(true, { message: "Confirm that you have checked the boxes and taken custody" }),
+});
+export type HandoffInput = z.input<typeof handoffInputSchema>;
+
+/** A count per outcome for one animal line; they must add up to the line's count. */
+export const checkInItemSchema = z.strictObject({
+  animalId: idSchema,
+  arrivedWell: wholeNumber(0, LIMITS.animalCountMax, "count"),
+  arrivedProblem: wholeNumber(0, LIMITS.animalCountMax, "count"),
+  deadOnArrival: wholeNumber(0, LIMITS.animalCountMax, "count"),
+  missing: wholeNumber(0, LIMITS.animalCountMax, "count"),
+  problem: optionalText(1000),
+  weightG: positiveMeasure(LIMITS.weightGMax, "g").nullable().optional(),
+  notes: optionalText(2000),
+});
+export type CheckInItemInput = z.input<typeof checkInItemSchema>;
+
+export const checkInInputSchema = z.strictObject({
+  items: z.array(checkInItemSchema).max(LIMITS.animalsPerTransferMax),
+  /** Animals that arrived but were not on the manifest. */
+  extras: z
+    .array(z.strictObject({ taxonId: idSchema, count: wholeNumber(1, LIMITS.animalCountMax, "count"), sex: z.enum(SEXES), notes: optionalText(1000) }))
+    .max(100),
+  notes: optionalText(LIMITS.textMax),
+  signedName: requiredText(120),
+  acknowledged: z.literal(true, { message: "Confirm that every container was opened and checked" }),
+});
+export type CheckInInput = z.input<typeof checkInInputSchema>;
+
+export const transferListQuerySchema = z.strictObject({
+  status: z.enum(TRANSFER_STATUSES).optional(),
+  role: z.enum(["sending", "receiving", "carrying"]).optional(),
+  departFrom: dateSchema.optional(),
+  departTo: dateSchema.optional(),
+  q: text(100).optional(),
+  sort: z.enum(["departure", "number", "status", "updated"]).default("departure"),
+  dir: z.enum(["asc", "desc"]).default("desc"),
+  cursor: text(400).optional(),
+  limit: z.coerce.number<string | number>().int().min(1).max(100).default(50),
+});
+export type TransferListQuery = z.input<typeof transferListQuerySchema>;
+
+export const registerQuerySchema = z.strictObject({
+  q: text(100).optional(),
+  taxonId: idSchema.optional(),
+  sex: z.enum(SEXES).optional(),
+  from: dateSchema.optional(),
+  to: dateSchema.optional(),
+});
+
+// ---------------------------------------------------------------- responses
+
+export type OrgBriefDto = { id: string; name: string; kind: OrganizationKind; phone: string; email: string; address: { street: string; city: string; state: UsState; zip: string } };
+export type PersonDto = { id: string; displayName: string; email: string };
+export type PlaceDto = { street: string; city: string; state: UsState; zip: string; lat: number | null; lon: number | null; timeZone: string | null };
+export type TaxonBriefDto = { id: string; scientificName: string; commonName: string | null; venomous: boolean; profileGroup: ProfileGroup | null; rank: string };
+
+export type ContainerDto = {
+  id: string;
+  key: string;
+  position: number;
+  label: string;
+  lengthMm: number;
+  widthMm: number;
+  heightMm: number;
+  wallMaterial: WallMaterial;
+  wallThicknessMm: number;
+  pack: PackKind;
+  sealNumber: string | null;
+};
+
+export type AnimalDto = {
+  id: string;
+  position: number;
+  taxon: TaxonBriefDto;
+  count: number;
+  sex: Sex;
+  identifier: string | null;
+  identifierKind: IdentifierKind | null;
+  origin: AnimalOrigin;
+  lengthMm: number | null;
+  lengthKind: LengthKind | null;
+  weightG: number | null;
+  hatchDate: string | null;
+  notes: string | null;
+  containerId: string | null;
+  containerKey: string | null;
+};
+
+export type LegDto = { id: string; sequence: number; courier: { id: string; displayName: string; organizationName: string | null; phone: string | null }; fromLabel: string | null; toLabel: string | null };
+
+export type HandoffDto = {
+  handoffIndex: number;
+  kind: "pickup" | "handoff" | "delivery";
+  at: string;
+  recordedBy: { id: string; displayName: string };
+  releasedByName: string;
+  receivedByName: string;
+  boxesExpected: number;
+  boxesCounted: number;
+  seals: { containerId: string; sealNumber: string | null; expected: string | null; intact: boolean }[];
+  boxTempF: number | null;
+  place: { text: string | null; lat: number | null; lon: number | null; accuracyM: number | null };
+  notes: string | null;
+};
+
+/** A problem with the packing the sender must resolve before sending for confirmation. */
+export type PackingFindingDto = { code: "mixed_species" | "unpacked_animal" | "empty_box" | "no_animals" | "no_boxes"; containerId: string | null; animalIds: string[]; message: string };
+
+export type DiscrepancyRowDto = {
+  scientificName: string;
+  taxonId: string;
+  sex: Sex;
+  expected: number;
+  arrivedWell: number;
+  arrivedProblem: number;
+  deadOnArrival: number;
+  missing: number;
+  extra: number;
+};
+
+export type CheckInDto = {
+  signedAt: string;
+  signedBy: { id: string; displayName: string };
+  signedName: string;
+  notes: string | null;
+  items: { animalId: string; arrivedWell: number; arrivedProblem: number; deadOnArrival: number; missing: number; problem: string | null; weightG: number | null; notes: string | null }[];
+  extras: { taxon: TaxonBriefDto; count: number; sex: Sex; notes: string | null }[];
+  discrepancies: DiscrepancyRowDto[];
+  allAccountedFor: boolean;
+};
+
+export type ViewerRole = "sender" | "receiver" | "courier" | "admin";
+
+/** What the caller may do now; the server decides, the client only shows. */
+export type TransferAbilitiesDto = {
+  edit: boolean;
+  submit: boolean;
+  withdraw: boolean;
+  confirm: boolean;
+  sendBack: boolean;
+  cancel: boolean;
+  close: boolean;
+  assignCouriers: boolean;
+  /** The handoff the caller may record now, or null. */
+  handOff: number | null;
+  checkIn: boolean;
+  discuss: boolean;
+  readCustody: boolean;
+  readPrivateNotes: boolean;
+};
+
+export type TransferDto = {
+  id: string;
+  number: string;
+  status: TransferStatus;
+  version: number;
+  viewerRole: ViewerRole;
+  sender: { organization: OrgBriefDto; contact: PersonDto | null };
+  receiver: { organization: OrgBriefDto; contact: PersonDto | null };
+  origin: PlaceDto;
+  destination: PlaceDto;
+  mode: TransportMode;
+  plannedDepartureAt: string;
+  expectedArrivalAt: string;
+  purpose: Purpose;
+  sale: boolean;
+  /** Null for the courier's view. */
+  salePriceUsd: number | null;
+  handlingNotes: string | null;
+  /** The caller's own party's private notes; null when they may not read them. */
+  privateNotes: string | null;
+  containers: ContainerDto[];
+  animals: AnimalDto[];
+  legs: LegDto[];
+  handoffs: HandoffDto[];
+  /** Number of handoffs in all: pickup, one between each pair of legs, delivery. */
+  handoffsPlanned: number;
+  packingFindings: PackingFindingDto[];
+  checkIn: CheckInDto | null;
+  confirmedAt: string | null;
+  cancelledReason: string | null;
+  /** Set when an edit after confirmation sent the transfer back to the receiver. */
+  reconfirmationReason: string | null;
+  abilities: TransferAbilitiesDto;
+  createdAt: string;
+  updatedAt: string;
+};
+
+export type TransferSummaryDto = {
+  id: string;
+  number: string;
+  status: TransferStatus;
+  viewerRole: ViewerRole;
+  sender: { id: string; name: string };
+  receiver: { id: string; name: string };
+  origin: { city: string; state: UsState };
+  destination: { city: string; state: UsState };
+  mode: TransportMode;
+  plannedDepartureAt: string;
+  expectedArrivalAt: string;
+  animalCount: number;
+  speciesCount: number;
+  updatedAt: string;
+};
+
+export type TransferListDto = { transfers: TransferSummaryDto[]; nextCursor: string | null };
+
+export type CustodyEntryDto = {
+  seq: number;
+  kind: string;
+  at: string;
+  actor: { id: string | null; displayName: string };
+  payload: Record<string, unknown>;
+  prevHash: string;
+  hash: string;
+};
+export type CustodyLogDto = { entries: CustodyEntryDto[]; intact: boolean; brokenAt: number | null; reason: string | null };
+
+export type TransferChangeDto = { at: string; actor: { id: string; displayName: string }; field: string; oldValue: unknown; newValue: unknown };
+export type MessageDto = { id: string; author: { id: string; displayName: string; organizationName: string | null }; body: string; at: string };
+
+export type TaxonSearchHitDto = TaxonBriefDto & { commonNames: string[]; synonyms: string[]; matched: { name: string; kind: "scientific" | "common" | "synonym" } };
+
+export type RegisterEntryDto = {
+  id: string;
+  taxon: TaxonBriefDto;
+  sex: Sex;
+  count: number;
+  identifier: string | null;
+  dateAcquired: string;
+  sourceOrganization: string;
+  transferNumber: string;
+  transferId: string;
+  condition: "well" | "problem";
+  notes: string | null;
+};
+
+export type DirectoryOrganizationDto = { id: string; name: string; kind: OrganizationKind; city: string; state: UsState; zip: string; street: string; contacts: PersonDto[] };
+export type DirectoryCourierDto = { id: string; displayName: string; organizationName: string | null };
+
+export const CHECK_IN_OUTCOME_KEYS: Record<CheckInOutcome, "arrivedWell" | "arrivedProblem" | "deadOnArrival" | "missing"> = {
+  arrived_well: "arrivedWell",
+  arrived_problem: "arrivedProblem",
+  dead_on_arrival: "deadOnArrival",
+  missing: "missing",
+};

@@ -1,0 +1,413 @@
+import type { TransportMode } from "../constants";
+import { haversineKm, interpolateGreatCircle } from "./geo";
+import { federalHolidayOn } from "./holidays";
+import type { TransitPlace } from "./places";
+import {
+  MS_PER_DAY,
+  MS_PER_HOUR,
+  addDays,
+  localClockToUtcMs,
+  localDate,
+  localIsoTime,
+  parseClock,
+  timeZoneAt,
+  weekdayOf,
+} from "./zoned-time";
+
+/** Where the box is during an hour of the trip. */
+export type TimelineSegment = "origin" | "hub" | "en_route" | "rest_stop" | "overnight_rest" | "destination";
+
+/** One hour of the trip: where the box is, in that place's own time zone. */
+export type TimelinePoint = {
+  /** ISO 8601 UTC, on the hour. */
+  at: string;
+  place: string;
+  lat: number;
+  lon: number;
+  timeZone: string;
+  /** Wall-clock time with offset, e.g. `2026-06-02T18:00-05:00`. */
+  localTime: string;
+  segment: TimelineSegment;
+  /** Index into `waypoints`: the forecast point that stands for this hour. */
+  waypoint: number;
+};
+
+export type TransitWarningCode =
+  | "weekend_in_transit"
+  | "federal_holiday_in_transit"
+  | "no_delay_margin"
+  | "after_pickup_cutoff";
+
+export type TransitWarning = {
+  code: TransitWarningCode;
+  /** "warning": the plan breaks a shipping practice; "caution": it leaves no margin. */
+  severity: "warning" | "caution";
+  /** Local calendar date `YYYY-MM-DD` the warning is about. */
+  date: string;
+  message: string;
+};
+
+export type TransitTimeline = {
+  mode: TransportMode;
+  departAt: string;
+  arriveAt: string;
+  durationH: number;
+  greatCircleKm: number;
+  /** Road distance for ground modes (great circle × circuity); null by air. */
+  roadKm: number | null;
+  /** The forecast points: origin, hub or points along the way, destination. */
+  waypoints: TransitPlace[];
+  points: TimelinePoint[];
+  warnings: TransitWarning[];
+};
+
+/** Overnight air carrier schedule, as local clock times `HH:MM`. */
+export type AirOptions = {
+  /** Evening pickup at the origin. */
+  pickupLocal: string;
+  /** Arrival at the destination station, the next morning. */
+  stationArrivalLocal: string;
+  /** Delivery to the receiver, the next morning. */
+  deliveryLocal: string;
+};
+
+/** A stop the driver plans: after so many hours at the wheel, for so long. */
+export type DrivingStop = { afterDrivingH: number; durationH: number };
+
+export type DrivingOptions = {
+  /** Road distance ÷ great-circle distance. */
+  circuityFactor: number;
+  averageSpeedKmh: number;
+  /** Spacing of the forecast points along the great circle. */
+  waypointSpacingKm: number;
+  breakEveryDrivingH: number;
+  breakDurationH: number;
+  maxDrivingHPerDay: number;
+  overnightRestH: number;
+  /** The driver's own stops; when given they replace the automatic breaks and overnight rests. */
+  stops?: readonly DrivingStop[];
+};
+
+export type TimelineOptions = { air?: Partial<AirOptions>; driving?: Partial<DrivingOptions> };
+
+/** Overnight air defaults: evening pickup, early sort arrival, morning delivery [practice]. */
+export const DEFAULT_AIR_OPTIONS: AirOptions = {
+  pickupLocal: "18:00",
+  stationArrivalLocal: "04:00",
+  deliveryLocal: "10:30",
+};
+
+/**
+ * Ground defaults. Circuity 1.2: Ballou, Rahardja and Sakai 2002 [memory]. 88 km/h ≈ 55 mph
+ * average with traffic [practice]. 11 h driving a day after a 10 h rest: the property-carrier
+ * hours-of-service limits of 49 CFR 395.3 [memory]. A 30 min break every 4 h [practice].
+ */
+export const DEFAULT_DRIVING_OPTIONS: DrivingOptions = {
+  circuityFactor: 1.2,
+  averageSpeedKmh: 88,
+  waypointSpacingKm: 150,
+  breakEveryDrivingH: 4,
+  breakDurationH: 0.5,
+  maxDrivingHPerDay: 11,
+  overnightRestH: 10,
+};
+
+/** Longest trip the timeline models; anything longer is a planning error, not a shipment. */
+export const MAX_TRANSIT_H = 14 * 24;
+
+/** A driver's stop of this length or more is a night's rest rather than a break [practice]. */
+const OVERNIGHT_STOP_MIN_H = 6;
+
+export type TimelineRequest = {
+  mode: TransportMode;
+  origin: TransitPlace;
+  destination: TransitPlace;
+  /** ISO 8601 with offset, or epoch ms. */
+  departAt: string | number;
+  /** Air hub the sender names; ignored by ground modes. */
+  hub?: TransitPlace;
+  options?: TimelineOptions;
+};
+
+/** A stretch of time the box spends in one state. Driving stretches carry their road km. */
+type Stay = { startMs: number; endMs: number; segment: TimelineSegment; waypoint?: number; fromKm?: number; toKm?: number };
+
+type Schedule = { stays: Stay[]; waypoints: TransitPlace[]; roadKm: number | null; warnings: TransitWarning[] };
+
+/**
+ * Hour-by-hour positions of the box from departure to delivery, with warnings for weekends and
+ * federal holidays in transit. Overnight air: origin until the evening pickup, the hub (or half
+ * the night at each end without one), the destination from the early sort until delivery.
+ * Ground and hand delivery: points every ~150 km along the great circle, road distance =
+ * great circle × circuity, average speed, breaks and overnight rests (or the driver's own stops).
+ */
+export function buildTransitTimeline(request: TimelineRequest): TransitTimeline {
+  const departMs = typeof request.departAt === "number" ? request.departAt : Date.parse(request.departAt);
+  if (!Number.isFinite(departMs)) throw new RangeError(`departAt is not a date: ${String(request.departAt)}`);
+  const schedule =
+    request.mode === "overnight_air"
+      ? airSchedule(request, departMs, { ...DEFAULT_AIR_OPTIONS, ...request.options?.air })
+      : drivingSchedule(request, departMs, checkedDriving({ ...DEFAULT_DRIVING_OPTIONS, ...request.options?.driving }));
+  const arriveMs = schedule.stays.at(-1)?.endMs ?? departMs;
+  if (arriveMs - departMs > MAX_TRANSIT_H * MS_PER_HOUR) {
+    throw new RangeError(`the trip would last more than ${MAX_TRANSIT_H} h`);
+  }
+  const points = hourlyPoints(schedule, departMs, arriveMs);
+  return {
+    mode: request.mode,
+    departAt: new Date(departMs).toISOString(),
+    arriveAt: new Date(arriveMs).toISOString(),
+    durationH: (arriveMs - departMs) / MS_PER_HOUR,
+    greatCircleKm: routeKm(schedule.waypoints, request.mode),
+    roadKm: schedule.roadKm,
+    waypoints: schedule.waypoints,
+    points,
+    warnings: [...schedule.warnings, ...calendarWarnings(points, departMs, arriveMs, request)],
+  };
+}
+
+function routeKm(waypoints: readonly TransitPlace[], mode: TransportMode): number {
+  const first = waypoints[0];
+  const last = waypoints.at(-1);
+  if (!first || !last) return 0;
+  if (mode !== "overnight_air") return haversineKm(first, last);
+  let km = 0;
+  for (let i = 1; i < waypoints.length; i++) km += haversineKm(waypoints[i - 1]!, waypoints[i]!);
+  return km;
+}
+
+function airSchedule(request: TimelineRequest, departMs: number, air: AirOptions): Schedule {
+  const { origin, destination, hub } = request;
+  const arrival = parseClock(air.stationArrivalLocal);
+  const delivery = parseClock(air.deliveryLocal);
+  if (delivery.hour * 60 + delivery.minute <= arrival.hour * 60 + arrival.minute) {
+    throw new RangeError("deliveryLocal must be later than stationArrivalLocal");
+  }
+  const warnings: TransitWarning[] = [];
+  const departDate = localDate(departMs, origin.timeZone);
+  let pickupMs = localClockToUtcMs(departDate, air.pickupLocal, origin.timeZone);
+  if (departMs > pickupMs) {
+    pickupMs = localClockToUtcMs(addDays(departDate, 1), air.pickupLocal, origin.timeZone);
+    warnings.push({
+      code: "after_pickup_cutoff",
+      severity: "caution",
+      date: departDate,
+      message: `Departure after the ${air.pickupLocal} pickup: the box waits at the origin for the next day's pickup.`,
+    });
+  }
+  // "Next morning" at the destination; a westward date-line crossing can need one more day.
+  let morning = addDays(localDate(pickupMs, origin.timeZone), 1);
+  while (localClockToUtcMs(morning, air.stationArrivalLocal, destination.timeZone) <= pickupMs) morning = addDays(morning, 1);
+  const stationMs = localClockToUtcMs(morning, air.stationArrivalLocal, destination.timeZone);
+  const deliveryMs = localClockToUtcMs(morning, air.deliveryLocal, destination.timeZone);
+  const waypoints = hub ? [origin, hub, destination] : [origin, destination];
+  const last = waypoints.length - 1;
+  // Without a named hub the night is charged half to each end: the box sits in sort
+  // facilities and on ramps at both, and the hold in flight is not outside air.
+  const night: Stay[] = hub
+    ? [{ startMs: pickupMs, endMs: stationMs, segment: "hub", waypoint: 1 }]
+    : [
+        { startMs: pickupMs, endMs: (pickupMs + stationMs) / 2, segment: "origin", waypoint: 0 },
+        { startMs: (pickupMs + stationMs) / 2, endMs: stationMs, segment: "destination", waypoint: last },
+      ];
+  return {
+    stays: [
+      { startMs: departMs, endMs: pickupMs, segment: "origin", waypoint: 0 },
+      ...night,
+      { startMs: stationMs, endMs: deliveryMs, segment: "destination", waypoint: last },
+    ],
+    waypoints,
+    roadKm: null,
+    warnings,
+  };
+}
+
+function checkedDriving(options: DrivingOptions): DrivingOptions {
+  const positive: (keyof DrivingOptions)[] = [
+    "averageSpeedKmh",
+    "waypointSpacingKm",
+    "breakEveryDrivingH",
+    "maxDrivingHPerDay",
+  ];
+  for (const key of positive) {
+    const value = options[key];
+    if (typeof value !== "number" || !(value > 0)) throw new RangeError(`${key} must be positive`);
+  }
+  if (!(options.circuityFactor >= 1)) throw new RangeError("circuityFactor must be at least 1");
+  if (!(options.breakDurationH >= 0) || !(options.overnightRestH >= 0)) throw new RangeError("rest durations must be ≥ 0");
+  for (const stop of options.stops ?? []) {
+    if (!(stop.afterDrivingH >= 0) || !(stop.durationH > 0)) throw new RangeError("stops need afterDrivingH ≥ 0 and durationH > 0");
+  }
+  return options;
+}
+
+function drivingWaypoints(origin: TransitPlace, destination: TransitPlace, roadKm: number, spacingKm: number): TransitPlace[] {
+  const segments = Math.max(1, Math.round(haversineKm(origin, destination) / spacingKm));
+  return Array.from({ length: segments + 1 }, (_, i) => {
+    if (i === 0) return origin;
+    if (i === segments) return destination;
+    const { lat, lon } = interpolateGreatCircle(origin, destination, i / segments);
+    const label = `en route, ${Math.round((roadKm * i) / segments)} km from ${origin.label}`;
+    return { label, lat, lon, timeZone: timeZoneAt(lat, lon) };
+  });
+}
+
+function drivingSchedule(request: TimelineRequest, departMs: number, options: DrivingOptions): Schedule {
+  const roadKm = haversineKm(request.origin, request.destination) * options.circuityFactor;
+  const waypoints = drivingWaypoints(request.origin, request.destination, roadKm, options.waypointSpacingKm);
+  const stays = options.stops ? stopsPlan(departMs, roadKm, options, options.stops) : hoursOfServicePlan(departMs, roadKm, options);
+  return { stays, waypoints, roadKm, warnings: [] };
+}
+
+/** A tiny remainder left by floating-point sums; no leg is this short. */
+const EPSILON_H = 1e-9;
+
+function driveStay(startMs: number, hours: number, fromKm: number, speedKmh: number): Stay {
+  return { startMs, endMs: startMs + hours * MS_PER_HOUR, segment: "en_route", fromKm, toKm: fromKm + hours * speedKmh };
+}
+
+function restStay(startMs: number, hours: number, km: number, segment: TimelineSegment): Stay {
+  return { startMs, endMs: startMs + hours * MS_PER_HOUR, segment, fromKm: km, toKm: km };
+}
+
+function hoursOfServicePlan(departMs: number, roadKm: number, o: DrivingOptions): Stay[] {
+  const stays: Stay[] = [];
+  let t = departMs;
+  let km = 0;
+  let todayH = 0;
+  // Every stint ends in a break or a night's rest, so each starts with a full break allowance.
+  while (roadKm - km > EPSILON_H * o.averageSpeedKmh) {
+    const hours = Math.min((roadKm - km) / o.averageSpeedKmh, o.breakEveryDrivingH, o.maxDrivingHPerDay - todayH);
+    const drive = driveStay(t, hours, km, o.averageSpeedKmh);
+    stays.push(drive);
+    [t, km, todayH] = [drive.endMs, drive.toKm!, todayH + hours];
+    if (roadKm - km <= EPSILON_H * o.averageSpeedKmh) break;
+    const overnight = todayH >= o.maxDrivingHPerDay - EPSILON_H;
+    const rest = restStay(t, overnight ? o.overnightRestH : o.breakDurationH, km, overnight ? "overnight_rest" : "rest_stop");
+    stays.push(rest);
+    [t, todayH] = [rest.endMs, overnight ? 0 : todayH];
+    if (t - departMs > MAX_TRANSIT_H * MS_PER_HOUR) break;
+  }
+  return stays;
+}
+
+function stopsPlan(departMs: number, roadKm: number, o: DrivingOptions, stops: readonly DrivingStop[]): Stay[] {
+  const totalH = roadKm / o.averageSpeedKmh;
+  const ordered = [...stops].filter((s) => s.afterDrivingH < totalH).sort((a, b) => a.afterDrivingH - b.afterDrivingH);
+  const stays: Stay[] = [];
+  let t = departMs;
+  let drivenH = 0;
+  for (const stop of [...ordered, { afterDrivingH: totalH, durationH: 0 }]) {
+    if (stop.afterDrivingH > drivenH) {
+      const drive = driveStay(t, stop.afterDrivingH - drivenH, drivenH * o.averageSpeedKmh, o.averageSpeedKmh);
+      stays.push(drive);
+      [t, drivenH] = [drive.endMs, stop.afterDrivingH];
+    }
+    if (stop.durationH > 0) {
+      const segment = stop.durationH >= OVERNIGHT_STOP_MIN_H ? "overnight_rest" : "rest_stop";
+      const rest = restStay(t, stop.durationH, drivenH * o.averageSpeedKmh, segment);
+      stays.push(rest);
+      t = rest.endMs;
+    }
+  }
+  return stays;
+}
+
+function locate(stay: Stay | undefined, atMs: number, schedule: Schedule): { waypoint: number; segment: TimelineSegment } {
+  const last = schedule.waypoints.length - 1;
+  if (!stay) return { waypoint: last, segment: "destination" };
+  if (stay.waypoint !== undefined) return { waypoint: stay.waypoint, segment: stay.segment };
+  const span = stay.endMs - stay.startMs;
+  const share = span > 0 ? (atMs - stay.startMs) / span : 0;
+  const km = stay.fromKm! + share * (stay.toKm! - stay.fromKm!);
+  const roadKm = schedule.roadKm ?? 0;
+  return { waypoint: roadKm > 0 ? Math.round((km / roadKm) * last) : 0, segment: stay.segment };
+}
+
+function hourlyPoints(schedule: Schedule, departMs: number, arriveMs: number): TimelinePoint[] {
+  const firstMs = Math.floor(departMs / MS_PER_HOUR) * MS_PER_HOUR;
+  const lastMs = Math.ceil(arriveMs / MS_PER_HOUR) * MS_PER_HOUR;
+  const points: TimelinePoint[] = [];
+  let stayIndex = 0;
+  for (let atMs = firstMs; atMs <= lastMs; atMs += MS_PER_HOUR) {
+    while (stayIndex < schedule.stays.length && schedule.stays[stayIndex]!.endMs <= atMs) stayIndex++;
+    const located =
+      atMs < departMs ? { waypoint: 0, segment: "origin" as const } : locate(schedule.stays[stayIndex], atMs, schedule);
+    const place = schedule.waypoints[located.waypoint]!;
+    points.push({
+      at: new Date(atMs).toISOString(),
+      place: place.label,
+      lat: place.lat,
+      lon: place.lon,
+      timeZone: place.timeZone,
+      localTime: localIsoTime(atMs, place.timeZone),
+      segment: located.segment,
+      waypoint: located.waypoint,
+    });
+  }
+  return points;
+}
+
+const WEEKDAY_NAMES = ["Sunday", "Monday", "Tuesday", "Wednesday", "Thursday", "Friday", "Saturday"];
+
+/** A weekend day or an observed federal holiday: carriers do not move or deliver the box. */
+function nonWorkingDay(dateYmd: string): { code: TransitWarningCode; label: string } | undefined {
+  const holiday = federalHolidayOn(dateYmd);
+  if (holiday) return { code: "federal_holiday_in_transit", label: `${holiday} (observed ${dateYmd})` };
+  const weekday = weekdayOf(dateYmd);
+  if (weekday === 0 || weekday === 6) return { code: "weekend_in_transit", label: `${WEEKDAY_NAMES[weekday]} ${dateYmd}` };
+  return undefined;
+}
+
+function calendarWarnings(
+  points: readonly TimelinePoint[],
+  departMs: number,
+  arriveMs: number,
+  request: TimelineRequest,
+): TransitWarning[] {
+  const dates = new Set<string>([localDate(departMs, request.origin.timeZone)]);
+  for (const point of points) {
+    const atMs = Date.parse(point.at);
+    // localTime starts with the point's own local date
+    if (atMs >= departMs && atMs <= arriveMs) dates.add(point.localTime.slice(0, 10));
+  }
+  const arrivalDate = localDate(arriveMs, request.destination.timeZone);
+  dates.add(arrivalDate);
+  const warnings: TransitWarning[] = [];
+  for (const date of [...dates].sort()) {
+    const day = nonWorkingDay(date);
+    if (day) {
+      warnings.push({
+        code: day.code,
+        severity: "warning",
+        date,
+        message: `${day.label} falls within the transit window: the box may sit in a facility until the next working day.`,
+      });
+    }
+  }
+  const nextDay = addDays(arrivalDate, 1);
+  const after = nonWorkingDay(nextDay);
+  if (after && !dates.has(nextDay)) {
+    warnings.push({
+      code: "no_delay_margin",
+      severity: "caution",
+      date: nextDay,
+      message: `The day after arrival is ${after.label}: a one-day delay would leave the box in transit over it.`,
+    });
+  }
+  return warnings;
+}
+
+/** Whether the timeline breaks a shipping practice (severity "warning", not just "caution"). */
+export function hasCalendarWarning(timeline: TransitTimeline): boolean {
+  return timeline.warnings.some((w) => w.severity === "warning");
+}
+
+/** Departure `days` later at the same local clock time at the origin, as epoch ms. */
+export function sameLocalTimeLater(timeline: TransitTimeline, days: number): number {
+  const origin = timeline.waypoints[0];
+  const departMs = Date.parse(timeline.departAt);
+  if (!origin) return departMs + days * MS_PER_DAY;
+  const local = localIsoTime(departMs, origin.timeZone);
+  return localClockToUtcMs(addDays(local.slice(0, 10), days), local.slice(11, 16), origin.timeZone);
+}
