@@ -4,6 +4,7 @@ import { initORM } from "./db/orm";
 import { createApp } from "./app";
 import { createMailer } from "./adapters/mailer";
 import { startOutboxWorker } from "./services/outbox";
+import { startScheduler } from "./services/scheduler";
 
 /** Listens; the process stays up when the database or the mail server goes away and comes back. */
 async function main() {
@@ -13,7 +14,9 @@ async function main() {
   pool.on("error", (err) => console.error("[pg] idle client error", err.message));
   const mailer = createMailer(env.SMTP_URL, env.MAIL_FROM);
   const outbox = env.WORKERS ? startOutboxWorker(orm, mailer) : null;
-  const app = createApp({ env, orm, pool, kickOutbox: () => outbox?.kick() });
+  const ctx = { env, orm, pool, kickOutbox: () => outbox?.kick() };
+  const app = createApp(ctx);
+  const scheduler = env.WORKERS ? startScheduler(ctx) : null;
   const server = app.listen(env.PORT, env.HOST, () => {
     console.log(`Hatchway is serving http://${env.HOST}:${env.PORT}`);
   });
@@ -24,6 +27,7 @@ async function main() {
     server.closeIdleConnections();
     await Promise.race([closed, new Promise((r) => setTimeout(r, 5_000))]);
     server.closeAllConnections();
+    scheduler?.stop();
     await outbox?.stop();
     mailer.close();
     await pool.end().catch(() => undefined);
