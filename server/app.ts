@@ -11,6 +11,7 @@ import { usersRouter } from "./routes/users/users.router";
 import { organizationsRouter } from "./routes/organizations/organizations.router";
 import { caughtMailRouter } from "./routes/mail/mail.router";
 import { configureLinks } from "./mail/links";
+import { queryCounter } from "./http/query-count";
 import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
 import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
@@ -27,6 +28,7 @@ export function createApp(ctx: AppContext): Express {
   app.use(securityHeaders());
 
   const api = express.Router();
+  if (ctx.env.BENCH_ROUTES) api.use(queryCounter());
   api.use(noStore);
   api.use("/health", healthRouter(ctx));
   if (ctx.env.BENCH_ROUTES) {

@@ -54,3 +54,23 @@ export function transferMail(topic: TransferMailTopic, f: TransferMailFacts): Ma
     text: [`Hello ${f.name},`, "", LEADS[topic](f).replace(/\s+$/, ""), "", `Open the transfer: ${f.link}`, "", "— Hatchway"].join("\n"),
   };
 }
+
+/** To each member of the holding organisation, once, when a permit or certificate nears its last valid day. */
+export function documentExpiryMail(p: { to: string; name: string; organization: string; kind: string; number: string; validTo: string; daysLeft: number; link: string }): MailDraft {
+  const when = p.daysLeft === 0 ? "today is its last valid day" : `its last valid day is ${p.validTo}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}`;
+  return {
+    to: p.to,
+    topic: "document.expiring",
+    subject: `${p.kind} ${p.number} expires on ${p.validTo}`,
+    text: [
+      `Hello ${p.name},`,
+      "",
+      `The ${p.kind.toLowerCase()} no. ${p.number} held by ${p.organization} expires soon: ${when}.`,
+      "Transfers that ship after that day cannot rely on it. Renew it with the issuing agency and add the new one to Hatchway.",
+      "",
+      `Your permits and certificates: ${p.link}`,
+      "",
+      "— Hatchway",
+    ].join("\n"),
+  };
+}

@@ -1,45 +1,46 @@
 import type {
-  AnimalDto, CheckInDto, ContainerDto, HandoffDto, LegDto, OrgBriefDto, PersonDto, PlaceDto, TransferAbilitiesDto, TransferDto, ViewerRole,
+  AnimalDto, CheckInDto, ContainerDto, HandoffDto, LegDto, OrgBriefDto, PersonDto, PlaceDto, TaxonBriefDto, TransferAbilitiesDto, TransferDto, ViewerRole,
 } from "@shared/schemas/transfer";
 import type { UsState } from "@shared/constants";
 import { handoffKind, handoffsPlanned } from "@shared/transfer/lifecycle";
 import { packingFindings } from "@shared/transfer/packing";
 import { allAccountedFor, computeDiscrepancies } from "@shared/checkin/discrepancy";
 import type { Organization } from "../db/entities/organization.entity";
-import type { User } from "../db/entities/user.entity";
-import type { Leg, Transfer } from "../db/entities/transfer.entity";
-import type { TransferDetail } from "../services/transfers/load";
-import { presentTaxon } from "./taxon.presenter";
+import type { TaxonRowView, TransferView } from "../services/transfers/read-view";
+import type { TransferFacts } from "../policies/transfer.policy";
 
-export function presentOrgBrief(org: Organization): OrgBriefDto {
+export function presentOrgBrief(org: Pick<Organization, "id" | "name" | "kind" | "phone" | "email" | "street" | "city" | "state" | "zip">): OrgBriefDto {
   return { id: org.id, name: org.name, kind: org.kind, phone: org.phone, email: org.email, address: { street: org.street, city: org.city, state: org.state as UsState, zip: org.zip } };
 }
 
-function person(user: User | null | undefined): PersonDto | null {
-  return user ? { id: user.id, displayName: user.displayName, email: user.email } : null;
+const iso = (s: string) => new Date(s).toISOString();
+
+function taxon(x: TaxonRowView): TaxonBriefDto {
+  return { id: x.id, scientificName: x.scientific_name, commonName: x.common_names[0] ?? null, venomous: x.venomous, profileGroup: x.profile_group, rank: x.rank };
 }
 
-function place(t: Transfer, side: "origin" | "destination"): PlaceDto {
+function place(v: TransferView["t"], side: "origin" | "destination"): PlaceDto {
   return {
-    street: t[`${side}Street`],
-    city: t[`${side}City`],
-    state: t[`${side}State`] as UsState,
-    zip: t[`${side}Zip`],
-    lat: t[`${side}Lat`] ?? null,
-    lon: t[`${side}Lon`] ?? null,
-    timeZone: t[`${side}TimeZone`] ?? null,
+    street: v[`${side}_street`],
+    city: v[`${side}_city`],
+    state: v[`${side}_state`] as UsState,
+    zip: v[`${side}_zip`],
+    lat: v[`${side}_lat`],
+    lon: v[`${side}_lon`],
+    timeZone: v[`${side}_time_zone`],
   };
 }
 
-export function presentLeg(leg: Leg): LegDto {
-  const courier = leg.courier.getEntity();
-  const org = courier.organization?.getEntity?.() ?? null;
+const person = (p: TransferView["senderContact"]): PersonDto | null => (p ? { id: p.id, displayName: p.display_name, email: p.email } : null);
+
+/** What the policy needs to know about a transfer, from its view. */
+export function factsOfView(v: TransferView): TransferFacts {
   return {
-    id: leg.id,
-    sequence: leg.sequence,
-    courier: { id: courier.id, displayName: courier.displayName, organizationName: org?.name ?? null, phone: org?.phone ?? null },
-    fromLabel: leg.fromLabel ?? null,
-    toLabel: leg.toLabel ?? null,
+    status: v.t.status,
+    senderOrganizationId: v.t.sender_organization_id,
+    receiverOrganizationId: v.t.receiver_organization_id,
+    legCourierIds: v.legs.map((l) => l.courier_id),
+    handoffsDone: v.handoffs.length,
   };
 }
 
@@ -47,51 +48,35 @@ export function presentLeg(leg: Leg): LegDto {
  * The transfer as the caller may see it. The courier's view leaves out the price and every
  * private note; each party sees only its own private notes; admins see neither party's.
  */
-export function presentTransfer(t: Transfer, detail: TransferDetail, legs: Leg[], role: ViewerRole, abilities: TransferAbilitiesDto): TransferDto {
-  const containerKeyById = new Map(detail.containers.map((c) => [c.id, c.key]));
-  const containers: ContainerDto[] = detail.containers.map((c) => ({
-    id: c.id,
-    key: c.key,
-    position: c.position,
-    label: c.label,
-    lengthMm: c.lengthMm,
-    widthMm: c.widthMm,
-    heightMm: c.heightMm,
-    wallMaterial: c.wallMaterial,
-    wallThicknessMm: c.wallThicknessMm,
-    pack: c.pack,
-    sealNumber: c.sealNumber ?? null,
+export function presentTransfer(v: TransferView, role: ViewerRole, abilities: TransferAbilitiesDto): TransferDto {
+  const keyById = new Map(v.containers.map((c) => [c.id, c.key]));
+  const containers: ContainerDto[] = v.containers.map((c) => ({
+    id: c.id, key: c.key, position: c.position, label: c.label, lengthMm: c.length_mm, widthMm: c.width_mm, heightMm: c.height_mm,
+    wallMaterial: c.wall_material, wallThicknessMm: c.wall_thickness_mm, pack: c.pack, sealNumber: c.seal_number,
   }));
-  const animals: AnimalDto[] = detail.animals.map((a) => ({
-    id: a.id,
-    position: a.position,
-    taxon: presentTaxon(a.taxon.getEntity()),
-    count: a.count,
-    sex: a.sex,
-    identifier: a.identifier ?? null,
-    identifierKind: a.identifierKind ?? null,
-    origin: a.origin,
-    lengthMm: a.lengthMm ?? null,
-    lengthKind: a.lengthKind ?? null,
-    weightG: a.weightG ?? null,
-    hatchDate: a.hatchDate ?? null,
-    notes: a.notes ?? null,
-    containerId: a.container?.id ?? null,
-    containerKey: a.container ? (containerKeyById.get(a.container.id) ?? null) : null,
+  const animals: AnimalDto[] = v.animals.map((a) => ({
+    id: a.id, position: a.position, taxon: taxon(a.taxon), count: a.count, sex: a.sex, identifier: a.identifier, identifierKind: a.identifier_kind,
+    origin: a.origin, lengthMm: a.length_mm, lengthKind: a.length_kind, weightG: a.weight_g, hatchDate: a.hatch_date, notes: a.notes,
+    containerId: a.container_id, containerKey: a.container_id ? (keyById.get(a.container_id) ?? null) : null,
+  }));
+  const legs: LegDto[] = v.legs.map((l) => ({
+    id: l.id, sequence: l.sequence, fromLabel: l.from_label, toLabel: l.to_label,
+    courier: { id: l.courier_id, displayName: l.courier_name, organizationName: l.org_name, phone: l.org_phone },
   }));
   const expectedSeals = new Map(containers.map((c) => [c.id, c.sealNumber]));
-  const handoffs: HandoffDto[] = detail.handoffs.map((h) => {
+  const handoffs: HandoffDto[] = v.handoffs.map((h) => {
     const p = h.payload as Record<string, unknown> & { seals?: { containerId: string; sealNumber: string | null; intact: boolean }[] };
+    const index = Number(p.handoffIndex);
     return {
-      handoffIndex: Number(p.handoffIndex),
-      kind: handoffKind(Number(p.handoffIndex), legs.length),
-      at: h.at.toISOString(),
-      recordedBy: { id: h.actorId ?? "", displayName: h.actorName },
+      handoffIndex: index,
+      kind: handoffKind(index, legs.length),
+      at: iso(h.at),
+      recordedBy: { id: h.actor_id ?? "", displayName: h.actor_name },
       releasedByName: String(p.releasedByName ?? ""),
       receivedByName: String(p.receivedByName ?? ""),
       boxesExpected: Number(p.boxesExpected ?? 0),
       boxesCounted: Number(p.boxesCounted ?? 0),
-      seals: (p.seals ?? []).map((s) => ({ ...s, expected: expectedSeals.get(s.containerId) ?? null })),
+      seals: (p.seals ?? []).map((s) => ({ containerId: s.containerId, sealNumber: s.sealNumber, intact: s.intact, expected: expectedSeals.get(s.containerId) ?? null })),
       boxTempF: (p.boxTempF as number | null) ?? null,
       place: (p.place as HandoffDto["place"]) ?? { text: null, lat: null, lon: null, accuracyM: null },
       notes: (p.notes as string | null) ?? null,
@@ -99,59 +84,47 @@ export function presentTransfer(t: Transfer, detail: TransferDetail, legs: Leg[]
   });
 
   let checkIn: CheckInDto | null = null;
-  if (detail.checkIn) {
-    const ci = detail.checkIn;
-    const items = detail.checkInItems.map((i) => ({
-      animalId: i.animal.id,
-      arrivedWell: i.arrivedWell,
-      arrivedProblem: i.arrivedProblem,
-      deadOnArrival: i.deadOnArrival,
-      missing: i.missing,
-      problem: i.problem ?? null,
-      weightG: i.weightG ?? null,
-      notes: i.notes ?? null,
+  if (v.checkIn) {
+    const ci = v.checkIn;
+    const items = ci.items.map((i) => ({
+      animalId: i.animal_id, arrivedWell: i.arrived_well, arrivedProblem: i.arrived_problem, deadOnArrival: i.dead_on_arrival, missing: i.missing,
+      problem: i.problem, weightG: i.weight_g, notes: i.notes,
     }));
-    const extras = detail.checkInExtras.map((e) => ({ taxon: presentTaxon(e.taxon.getEntity()), count: e.count, sex: e.sex, notes: e.notes ?? null }));
+    const extras = ci.extras.map((e) => ({ taxon: taxon(e.taxon), count: e.count, sex: e.sex, notes: e.notes }));
     const discrepancies = computeDiscrepancies(
       animals.map((a) => ({ id: a.id, taxonId: a.taxon.id, scientificName: a.taxon.scientificName, sex: a.sex, count: a.count })),
       items,
       extras.map((e) => ({ taxonId: e.taxon.id, scientificName: e.taxon.scientificName, sex: e.sex, count: e.count })),
     );
-    const signer = ci.signedBy.getEntity();
     checkIn = {
-      signedAt: ci.signedAt.toISOString(),
-      signedBy: { id: signer.id, displayName: signer.displayName },
-      signedName: ci.signedName,
-      notes: ci.notes ?? null,
-      items,
-      extras,
-      discrepancies,
-      allAccountedFor: allAccountedFor(discrepancies),
+      signedAt: iso(ci.signed_at), signedBy: { id: ci.signed_by_id, displayName: ci.signed_by_name }, signedName: ci.signed_name, notes: ci.notes,
+      items, extras, discrepancies, allAccountedFor: allAccountedFor(discrepancies),
     };
   }
 
-  const ownNotes = role === "sender" ? t.senderPrivateNotes : role === "receiver" ? t.receiverPrivateNotes : null;
+  const t = v.t;
+  const ownNotes = role === "sender" ? t.sender_private_notes : role === "receiver" ? t.receiver_private_notes : null;
   return {
     id: t.id,
     number: t.number,
     status: t.status,
     version: t.version,
     viewerRole: role,
-    sender: { organization: presentOrgBrief(t.senderOrganization.getEntity()), contact: person(t.senderContact?.getEntity()) },
-    receiver: { organization: presentOrgBrief(t.receiverOrganization.getEntity()), contact: person(t.receiverContact?.getEntity()) },
+    sender: { organization: presentOrgBrief(v.sender), contact: person(v.senderContact) },
+    receiver: { organization: presentOrgBrief(v.receiver), contact: person(v.receiverContact) },
     origin: place(t, "origin"),
     destination: place(t, "destination"),
     mode: t.mode,
-    plannedDepartureAt: t.plannedDepartureAt.toISOString(),
-    expectedArrivalAt: t.expectedArrivalAt.toISOString(),
+    plannedDepartureAt: iso(t.planned_departure_at),
+    expectedArrivalAt: iso(t.expected_arrival_at),
     purpose: t.purpose,
     sale: t.sale,
-    salePriceUsd: role === "courier" ? null : (t.salePriceUsd ?? null),
-    handlingNotes: t.handlingNotes ?? null,
-    privateNotes: ownNotes ?? null,
+    salePriceUsd: role === "courier" ? null : t.sale_price_usd,
+    handlingNotes: t.handling_notes,
+    privateNotes: ownNotes,
     containers,
     animals,
-    legs: legs.map(presentLeg),
+    legs,
     handoffs,
     handoffsPlanned: handoffsPlanned(legs.length),
     packingFindings: packingFindings(
@@ -159,11 +132,11 @@ export function presentTransfer(t: Transfer, detail: TransferDetail, legs: Leg[]
       animals.map((a) => ({ id: a.id, containerId: a.containerId, taxonId: a.taxon.id, scientificName: a.taxon.scientificName })),
     ),
     checkIn,
-    confirmedAt: t.confirmedAt?.toISOString() ?? null,
-    cancelledReason: t.cancelledReason ?? null,
-    reconfirmationReason: t.reconfirmationReason ?? null,
+    confirmedAt: t.confirmed_at ? iso(t.confirmed_at) : null,
+    cancelledReason: t.cancelled_reason,
+    reconfirmationReason: t.reconfirmation_reason,
     abilities,
-    createdAt: t.createdAt.toISOString(),
-    updatedAt: t.updatedAt.toISOString(),
+    createdAt: iso(t.created_at),
+    updatedAt: iso(t.updated_at),
   };
 }

@@ -7,6 +7,9 @@ import { AnimalSchema, ContainerSchema, LegSchema, MessageSchema, TransferChange
 import { CustodyEntrySchema } from "./custody-entry.entity";
 import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
+import {
+  ComplianceEvaluationSchema, ComplianceOverrideSchema, ComplianceRuleSchema, DocumentScanSchema, PermitDocumentSchema, TransferDocumentSchema,
+} from "./compliance.entity";
 
 export {
   OrganizationSchema, OutboxMessageSchema, PasswordTokenSchema, UserSchema, TaxonSchema, TaxonNameSchema, TransferSchema, ContainerSchema,
@@ -34,4 +37,10 @@ export const ENTITIES = [
   CheckInExtraSchema,
   RegisterEntrySchema,
   IdempotencyKeySchema,
+  ComplianceRuleSchema,
+  PermitDocumentSchema,
+  DocumentScanSchema,
+  TransferDocumentSchema,
+  ComplianceEvaluationSchema,
+  ComplianceOverrideSchema,
 ];

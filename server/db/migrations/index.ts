@@ -2,8 +2,10 @@
 // lets the same code run under tsx, vitest and a bundler. Add a new migration below.
 import { Migration20261201220520 } from "./Migration20261201220520";
 import { Migration20261201222513_transfer_record } from "./Migration20261201222513_transfer_record";
+import { Migration20261201300000_compliance } from "./Migration20261201300000_compliance";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
   { name: "Migration20261201222513_transfer_record", class: Migration20261201222513_transfer_record },
+  { name: "Migration20261201300000_compliance", class: Migration20261201300000_compliance },
 ];

@@ -1,6 +1,7 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { Seeder } from "@mikro-orm/seeder";
 import { buildOrganization, buildUser } from "../../../tests/factories";
+import { seedDemoTransfers } from "./demo-transfers";
 
 /**
  * The demo scenario. Every organisation, person, address, phone number and permit number
@@ -50,9 +51,12 @@ export class DemoSeeder extends Seeder {
     });
 
     await buildUser(em, { email: "admin@demo.hatchway.test", displayName: "Hatchway Admin", role: "admin", organization: null });
-    await buildUser(em, { email: "sender@demo.hatchway.test", displayName: "Ruth Calder", role: "member", organization: breeder });
-    await buildUser(em, { email: "receiver@demo.hatchway.test", displayName: "Milo Faraday", role: "member", organization: centre });
-    await buildUser(em, { email: "courier@demo.hatchway.test", displayName: "Juno Park", role: "courier", organization: couriers });
-    await buildUser(em, { email: "other@demo.hatchway.test", displayName: "Ivy Brandt", role: "member", organization: rescue });
+    const sender = await buildUser(em, { email: "sender@demo.hatchway.test", displayName: "Ruth Calder", role: "member", organization: breeder });
+    const receiver = await buildUser(em, { email: "receiver@demo.hatchway.test", displayName: "Milo Faraday", role: "member", organization: centre });
+    const courier = await buildUser(em, { email: "courier@demo.hatchway.test", displayName: "Juno Park", role: "courier", organization: couriers });
+    const other = await buildUser(em, { email: "other@demo.hatchway.test", displayName: "Ivy Brandt", role: "member", organization: rescue });
+    // A second driver for the relay leg of the demo's two-courier transfer.
+    const relay = await buildUser(em, { email: "relay@demo.hatchway.test", displayName: "Theo Brannock", role: "courier", organization: couriers });
+    await seedDemoTransfers(em, { sender, receiver, other, courier, relay });
   }
 }

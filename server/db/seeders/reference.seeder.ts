@@ -1,5 +1,6 @@
 import pg from "pg";
 import { seedTaxa } from "./taxa.seeder";
+import { seedComplianceRules } from "./compliance-rules.seeder";
 
 /** Reference data every installation needs (not demo data); each part loads only when empty. */
 export async function seedReferenceData(databaseUrl: string): Promise<void> {
@@ -7,6 +8,7 @@ export async function seedReferenceData(databaseUrl: string): Promise<void> {
   await client.connect();
   try {
     await seedTaxa(client);
+    await seedComplianceRules(client);
   } finally {
     await client.end();
   }

@@ -21,15 +21,16 @@ export async function searchTaxa(ctx: AppContext, q: string, limit = 20): Promis
     `SELECT t.id, t.rank, t.scientific_name, t.common_names, t.synonyms, t.venomous, t.profile_group, best.name AS matched_name, best.kind AS matched_kind
        FROM (
          SELECT DISTINCT ON (tn.taxon_id) tn.taxon_id, tn.name, tn.kind,
+                (lower(tn.name) = $1) AS exact,
                 (lower(tn.name) LIKE $2 ESCAPE '\\') AS prefix,
                 greatest(similarity(lower(tn.name), $1), word_similarity($1, lower(tn.name))) AS score
            FROM taxon_name tn
           WHERE lower(tn.name) % $1 OR $1 <% lower(tn.name) OR lower(tn.name) LIKE $3 ESCAPE '\\'
-          ORDER BY tn.taxon_id, (lower(tn.name) LIKE $2 ESCAPE '\\') DESC,
+          ORDER BY tn.taxon_id, (lower(tn.name) = $1) DESC, (lower(tn.name) LIKE $2 ESCAPE '\\') DESC,
                    greatest(similarity(lower(tn.name), $1), word_similarity($1, lower(tn.name))) DESC
        ) best
        JOIN taxon t ON t.id = best.taxon_id
-      ORDER BY best.prefix DESC, best.score DESC,
+      ORDER BY best.exact DESC, best.prefix DESC, best.score DESC,
                CASE t.rank WHEN 'species' THEN 0 WHEN 'subspecies' THEN 1 WHEN 'genus' THEN 2 ELSE 3 END, t.scientific_name
       LIMIT $4`,
     [needle, `${likeEscape(needle)}%`, `%${likeEscape(needle)}%`, limit],

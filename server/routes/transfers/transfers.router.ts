@@ -7,14 +7,15 @@ import { idSchema } from "@shared/schemas/common";
 import type { Actor } from "../../auth/actor";
 import { MessageSchema, TransferChangeSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { UserSchema } from "../../db/entities/user.entity";
-import { forbidden } from "../../http/errors";
+import { forbidden, notFound } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { idempotent } from "../../http/idempotency";
 import { parse } from "../../http/validate";
-import { transferAbilities } from "../../policies/transfer.policy";
-import { presentTransfer } from "../../presenters/transfer.presenter";
+import { transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
+import { factsOfView, presentTransfer } from "../../presenters/transfer.presenter";
+import { readTransferView } from "../../services/transfers/read-view";
 import { readCustodyLog } from "../../services/transfers/custody";
-import { loadTransferDetail, loadTransferForActor } from "../../services/transfers/load";
+import { loadTransferForActor } from "../../services/transfers/load";
 import { listTransfers } from "../../services/transfers/list";
 import { createTransfer, updateTransfer } from "../../services/transfers/write-transfer";
 import { transitionTransfer } from "../../services/transfers/transition";
@@ -22,13 +23,17 @@ import { assignLegs } from "../../services/transfers/legs";
 import { recordHandoff } from "../../services/transfers/handoff";
 import { checkInTransfer } from "../../services/transfers/check-in";
 
-/** The transfer as this caller sees it now, read fresh after any change. */
+/**
+ * The transfer as this caller sees it now, read fresh (one query) after any change.
+ * Strangers get the same 404 as for a transfer that does not exist.
+ */
 export async function presentForActor(req: Request, transferId: string) {
-  const em = req.em.fork();
   const actor = currentUser(req);
-  const { transfer, legs, facts, role } = await loadTransferForActor(em, transferId, actor);
-  const detail = await loadTransferDetail(em, transfer, role);
-  return presentTransfer(transfer, detail, legs, role, transferAbilities(actor, role, facts));
+  const view = await readTransferView(req.ctx.pool, transferId);
+  const facts = view ? factsOfView(view) : null;
+  const role = facts ? viewerRoleFor(actor, facts) : null;
+  if (!view || !facts || !role) throw notFound("That transfer");
+  return presentTransfer(view, role, transferAbilities(actor, role, facts));
 }
 
 const idParam = (req: Request) => parse(idSchema, req.params.id);

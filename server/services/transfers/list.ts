@@ -1,3 +1,4 @@
+import { createHash } from "node:crypto";
 import type pg from "pg";
 import type { z } from "zod";
 import type { transferListQuerySchema, TransferListDto, TransferSummaryDto, ViewerRole } from "@shared/schemas/transfer";
@@ -6,6 +7,8 @@ import type { Actor } from "../../auth/actor";
 import { badRequest } from "../../http/errors";
 
 type Query = z.output<typeof transferListQuerySchema>;
+
+const sha1 = (text: string) => createHash("sha1").update(text).digest("hex").slice(0, 16);
 
 const SORT_COLUMNS = { departure: "planned_departure_at", number: "number", status: "status", updated: "updated_at" } as const;
 
@@ -79,7 +82,8 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
       JOIN organization ro ON ro.id = t.receiver_organization_id
       LEFT JOIN LATERAL (SELECT sum(count) AS animal_count, count(DISTINCT taxon_id) AS species_count FROM animal WHERE transfer_id = t.id) a ON TRUE
      ORDER BY ${order.replace(col, "page.sort_value").replace(/\bid\b/, "t.id")}`;
-  const { rows } = await pool.query<Row>(sql, params);
+  // Named by the shape of the query, so each combination of filters is planned once per connection.
+  const { rows } = await pool.query<Row>({ name: `transfer-list-${sha1(sql)}`, text: sql, values: params });
 
   const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];

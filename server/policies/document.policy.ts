@@ -1,0 +1,31 @@
+import type { DocumentAbilitiesDto } from "@shared/schemas/compliance";
+import type { ViewerRole } from "@shared/schemas/transfer";
+import type { TransferStatus } from "@shared/constants";
+import { EDITABLE } from "@shared/transfer/lifecycle";
+import type { Actor } from "../auth/actor";
+
+/**
+ * Who the caller is to a permit or certificate: a member of the organisation holding it, a
+ * member of the other party of a transfer that uses it, or the courier of such a transfer.
+ * Anyone else does not see it at all.
+ */
+export type DocumentViewer = "holder" | "party" | "courier";
+
+/** Members of a keeper organisation hold permits and certificates; admins and couriers do not. */
+export function canHoldDocuments(actor: Actor): boolean {
+  return actor.role === "member" && actor.organization !== null && !actor.disabled;
+}
+
+export function isHolder(actor: Actor, holderOrganizationId: string): boolean {
+  return canHoldDocuments(actor) && actor.organization?.id === holderOrganizationId;
+}
+
+/** The holder edits and uploads; the other party reads the scans; the courier sees the manifest entry only. */
+export function documentAbilities(viewer: DocumentViewer): DocumentAbilitiesDto {
+  return { edit: viewer === "holder", upload: viewer === "holder", readScans: viewer !== "courier" };
+}
+
+/** A party attaches (or takes off) its own organisation's documents while the transfer can still be edited. */
+export function canAttachDocuments(role: ViewerRole, status: TransferStatus): boolean {
+  return (role === "sender" || role === "receiver") && EDITABLE.includes(status);
+}

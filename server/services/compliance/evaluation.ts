@@ -1,0 +1,105 @@
+import type { EntityManager } from "@mikro-orm/postgresql";
+import type { Purpose, UsState } from "@shared/constants";
+import { evaluateCompliance, type EvaluationAnimal, type EvaluationDocument, type TransferFacts } from "@shared/compliance/evaluate";
+import type { HolderSide } from "@shared/compliance/rule";
+import type { EvaluateRequest, EvaluateResponse } from "@shared/compliance/schemas";
+import { STATE_TRANSIT_POLICIES } from "@shared/compliance/state-rules.demo";
+import { normalizeTaxonName } from "@shared/compliance/taxon";
+import { localDate } from "@shared/temperature/zoned-time";
+import { PermitDocumentSchema, TransferDocumentSchema, type PermitDocument } from "../../db/entities/compliance.entity";
+import { AnimalSchema, type Transfer } from "../../db/entities/transfer.entity";
+import { loadActiveRules } from "./rules";
+import { findTaxaByName, resolveTaxaById } from "./taxa";
+
+/** A document held by one of a transfer's parties, as the evaluation of that transfer sees it. */
+export type OnFileDocument = { doc: PermitDocument; holderSide: HolderSide | undefined; attached: boolean };
+
+/**
+ * The calendar day the animals leave, in the origin's time zone (UTC when the origin has none):
+ * certificate ages and validity windows count from it.
+ */
+export function shipDateOf(transfer: Pick<Transfer, "plannedDepartureAt" | "originTimeZone">): string {
+  const departureMs = transfer.plannedDepartureAt.getTime();
+  return transfer.originTimeZone ? localDate(departureMs, transfer.originTimeZone) : transfer.plannedDepartureAt.toISOString().slice(0, 10);
+}
+
+/** The facts rules read from a stored transfer. A stored transfer names no transit states. */
+export function transferFactsOf(transfer: Transfer): TransferFacts {
+  return {
+    originState: transfer.originState as UsState,
+    destinationState: transfer.destinationState as UsState,
+    transitStates: [],
+    shipDate: shipDateOf(transfer),
+    purpose: transfer.purpose as Purpose,
+    sale: transfer.sale,
+  };
+}
+
+/**
+ * Every document held by the sender's or the receiver's organisation, the ones attached to the
+ * transfer first (the evaluation takes the first document that satisfies a rule).
+ */
+export async function documentsOnFile(em: EntityManager, transfer: Transfer): Promise<OnFileDocument[]> {
+  const senderId = transfer.senderOrganization.id;
+  const receiverId = transfer.receiverOrganization.id;
+  const [docs, attachments] = await Promise.all([
+    em.find(PermitDocumentSchema, { organization: { $in: [senderId, receiverId] } }, { orderBy: { createdAt: "asc", id: "asc" } }),
+    em.find(TransferDocumentSchema, { transfer: transfer.id }),
+  ]);
+  const attached = new Set(attachments.map((a) => a.document.id));
+  const sideOf = (orgId: string): HolderSide | undefined => (senderId === receiverId ? undefined : orgId === senderId ? "sender" : "receiver");
+  return docs
+    .map((doc) => ({ doc, holderSide: sideOf(doc.organization.id), attached: attached.has(doc.id) }))
+    .sort((a, b) => Number(b.attached) - Number(a.attached));
+}
+
+/** A stored document in the evaluation's terms; an unknown accreditation is not held against it. */
+export function evaluationDocumentOf({ doc, holderSide }: OnFileDocument): EvaluationDocument {
+  return {
+    kind: doc.kind,
+    jurisdiction: doc.jurisdiction as EvaluationDocument["jurisdiction"],
+    speciesCovered: doc.speciesCovered,
+    validFrom: doc.validFrom ?? null,
+    validTo: doc.validTo ?? null,
+    issuedOn: doc.issuedOn ?? null,
+    statements: doc.statements,
+    id: doc.id,
+    number: doc.number,
+    ...(holderSide ? { holderSide } : {}),
+    ...(doc.veterinarianAccredited === null || doc.veterinarianAccredited === undefined ? {} : { veterinarianAccredited: doc.veterinarianAccredited }),
+  };
+}
+
+/** Evaluates a stored transfer against the rule library and the documents on file. */
+export async function evaluateTransfer(em: EntityManager, transfer: Transfer) {
+  const [animals, documents, rules] = await Promise.all([
+    em.find(AnimalSchema, { transfer: transfer.id }, { orderBy: { position: "asc" } }),
+    documentsOnFile(em, transfer),
+    loadActiveRules(em),
+  ]);
+  const taxa = await resolveTaxaById(em, animals.map((a) => a.taxon.id));
+  const lines: EvaluationAnimal[] = animals.map((a) => {
+    const taxon = taxa.get(a.taxon.id);
+    if (!taxon) throw new Error(`animal ${a.id}: taxon ${a.taxon.id} is not in the catalogue`);
+    return { scientificName: taxon.scientificName, taxon, count: a.count, lengthMm: a.lengthMm ?? null, origin: a.origin, sex: a.sex };
+  });
+  const facts = transferFactsOf(transfer);
+  const result = evaluateCompliance({ facts, animals: lines, documents: documents.map(evaluationDocumentOf), rules, transitPolicies: STATE_TRANSIT_POLICIES });
+  return { result, facts, documents };
+}
+
+export type WhatIfOutcome = { ok: true; result: EvaluateResponse } | { ok: false; index: number; scientificName: string };
+
+/** The what-if of `POST /api/compliance/evaluate`: nothing is stored. Fails on the first unknown species. */
+export async function evaluateWhatIf(em: EntityManager, request: EvaluateRequest): Promise<WhatIfOutcome> {
+  const [taxa, rules] = await Promise.all([findTaxaByName(em, request.animals.map((a) => a.scientificName)), loadActiveRules(em)]);
+  const lines: EvaluationAnimal[] = [];
+  for (const [index, animal] of request.animals.entries()) {
+    const taxon = taxa.get(normalizeTaxonName(animal.scientificName));
+    if (!taxon) return { ok: false, index, scientificName: animal.scientificName };
+    lines.push({ ...animal, taxon });
+  }
+  const { animals: _animals, documents, ...facts } = request;
+  const result = evaluateCompliance({ facts, animals: lines, documents, rules, transitPolicies: STATE_TRANSIT_POLICIES });
+  return { ok: true, result };
+}

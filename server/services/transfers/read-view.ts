@@ -1,0 +1,68 @@
+import type pg from "pg";
+import type { AnimalOrigin, IdentifierKind, LengthKind, OrganizationKind, PackKind, ProfileGroup, Purpose, Sex, TransferStatus, TransportMode, WallMaterial } from "@shared/constants";
+
+/** A transfer and everything its page shows, read in one round trip (plain rows, no ORM). */
+export type TransferView = {
+  t: {
+    id: string; number: string; status: TransferStatus; version: number; mode: TransportMode; purpose: Purpose; sale: boolean; sale_price_usd: number | null;
+    sender_organization_id: string; receiver_organization_id: string;
+    origin_street: string; origin_city: string; origin_state: string; origin_zip: string; origin_lat: number | null; origin_lon: number | null; origin_time_zone: string | null;
+    destination_street: string; destination_city: string; destination_state: string; destination_zip: string; destination_lat: number | null; destination_lon: number | null; destination_time_zone: string | null;
+    planned_departure_at: string; expected_arrival_at: string; handling_notes: string | null; sender_private_notes: string | null; receiver_private_notes: string | null;
+    confirmed_at: string | null; cancelled_reason: string | null; reconfirmation_reason: string | null; created_at: string; updated_at: string;
+  };
+  sender: OrgRow;
+  receiver: OrgRow;
+  senderContact: PersonRow | null;
+  receiverContact: PersonRow | null;
+  containers: { id: string; key: string; position: number; label: string; length_mm: number; width_mm: number; height_mm: number; wall_material: WallMaterial; wall_thickness_mm: number; pack: PackKind; seal_number: string | null }[];
+  animals: {
+    id: string; position: number; container_id: string | null; count: number; sex: Sex; identifier: string | null; identifier_kind: IdentifierKind | null; origin: AnimalOrigin;
+    length_mm: number | null; length_kind: LengthKind | null; weight_g: number | null; hatch_date: string | null; notes: string | null; taxon: TaxonRowView;
+  }[];
+  legs: { id: string; sequence: number; from_label: string | null; to_label: string | null; courier_id: string; courier_name: string; org_name: string | null; org_phone: string | null }[];
+  handoffs: { actor_id: string | null; actor_name: string; at: string; payload: Record<string, unknown> }[];
+  checkIn: {
+    signed_at: string; signed_name: string; notes: string | null; signed_by_id: string; signed_by_name: string;
+    items: { animal_id: string; arrived_well: number; arrived_problem: number; dead_on_arrival: number; missing: number; problem: string | null; weight_g: number | null; notes: string | null }[];
+    extras: { count: number; sex: Sex; notes: string | null; taxon: TaxonRowView }[];
+  } | null;
+};
+type OrgRow = { id: string; name: string; kind: OrganizationKind; street: string; city: string; state: string; zip: string; phone: string; email: string };
+type PersonRow = { id: string; display_name: string; email: string };
+export type TaxonRowView = { id: string; rank: string; scientific_name: string; common_names: string[]; venomous: boolean; profile_group: ProfileGroup | null };
+
+const TAXON_JSON = (alias: string) =>
+  `json_build_object('id', ${alias}.id, 'rank', ${alias}.rank, 'scientific_name', ${alias}.scientific_name, 'common_names', ${alias}.common_names, 'venomous', ${alias}.venomous, 'profile_group', ${alias}.profile_group)`;
+
+const SQL = `
+SELECT json_build_object(
+  't', to_jsonb(t.*) - 'created_by_id' - 'confirmed_by_id',
+  'sender', json_build_object('id', so.id, 'name', so.name, 'kind', so.kind, 'street', so.street, 'city', so.city, 'state', so.state, 'zip', so.zip, 'phone', so.phone, 'email', so.email),
+  'receiver', json_build_object('id', ro.id, 'name', ro.name, 'kind', ro.kind, 'street', ro.street, 'city', ro.city, 'state', ro.state, 'zip', ro.zip, 'phone', ro.phone, 'email', ro.email),
+  'senderContact', (SELECT json_build_object('id', u.id, 'display_name', u.display_name, 'email', u.email) FROM app_user u WHERE u.id = t.sender_contact_id),
+  'receiverContact', (SELECT json_build_object('id', u.id, 'display_name', u.display_name, 'email', u.email) FROM app_user u WHERE u.id = t.receiver_contact_id),
+  'containers', coalesce((SELECT json_agg(to_jsonb(c.*) - 'transfer_id' ORDER BY c.position) FROM container c WHERE c.transfer_id = t.id), '[]'),
+  'animals', coalesce((SELECT json_agg((to_jsonb(a.*) - 'transfer_id' - 'taxon_id') || jsonb_build_object('taxon', ${TAXON_JSON("x")}) ORDER BY a.position)
+                         FROM animal a JOIN taxon x ON x.id = a.taxon_id WHERE a.transfer_id = t.id), '[]'),
+  'legs', coalesce((SELECT json_agg(json_build_object('id', l.id, 'sequence', l.sequence, 'from_label', l.from_label, 'to_label', l.to_label, 'courier_id', u.id,
+                           'courier_name', u.display_name, 'org_name', o.name, 'org_phone', o.phone) ORDER BY l.sequence)
+                      FROM leg l JOIN app_user u ON u.id = l.courier_id LEFT JOIN organization o ON o.id = u.organization_id WHERE l.transfer_id = t.id), '[]'),
+  'handoffs', coalesce((SELECT json_agg(json_build_object('actor_id', e.actor_id, 'actor_name', e.actor_name, 'at', e.at, 'payload', e.payload) ORDER BY e.seq)
+                          FROM custody_entry e WHERE e.transfer_id = t.id AND e.kind = 'handoff'), '[]'),
+  'checkIn', (SELECT json_build_object('signed_at', ci.signed_at, 'signed_name', ci.signed_name, 'notes', ci.notes, 'signed_by_id', su.id, 'signed_by_name', su.display_name,
+                'items', coalesce((SELECT json_agg(to_jsonb(i.*) - 'check_in_id' - 'id') FROM check_in_item i WHERE i.check_in_id = ci.id), '[]'),
+                'extras', coalesce((SELECT json_agg(json_build_object('count', e.count, 'sex', e.sex, 'notes', e.notes, 'taxon', ${TAXON_JSON("x")}))
+                                      FROM check_in_extra e JOIN taxon x ON x.id = e.taxon_id WHERE e.check_in_id = ci.id), '[]'))
+                FROM check_in ci JOIN app_user su ON su.id = ci.signed_by_id WHERE ci.transfer_id = t.id)
+) AS view
+FROM transfer t
+JOIN organization so ON so.id = t.sender_organization_id
+JOIN organization ro ON ro.id = t.receiver_organization_id
+WHERE t.id = $1`;
+
+export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
+  // A named statement: PostgreSQL plans this large query once per connection, not per request.
+  const { rows } = await pool.query<{ view: TransferView }>({ name: "transfer-view-v1", text: SQL, values: [id] });
+  return rows[0]?.view ?? null;
+}

@@ -1,0 +1,40 @@
+import { z } from "zod";
+import { LIMITS } from "../constants";
+import { PLAUSIBLE_AMBIENT_F } from "./limits";
+
+const tempFSchema = z.number().min(PLAUSIBLE_AMBIENT_F.min).max(PLAUSIBLE_AMBIENT_F.max);
+
+/**
+ * A temperature profile as admins edit it and as the database keeps it (the group is the key,
+ * so it is not part of the data). Bands are °F and must be in the order `classifyAmbientF`
+ * reads them: do not ship < heat pack < (cold pack ≤) hold ≤ do not ship above.
+ */
+export const profileDataSchema = z
+  .strictObject({
+    label: z.string().trim().min(1).max(LIMITS.nameMax),
+    animalClass: z.enum(["reptile", "amphibian"]),
+    safeTransitF: z.strictObject({ min: tempFSchema, max: tempFSchema }),
+    bandsF: z.strictObject({
+      doNotShipBelow: tempFSchema,
+      heatPackBelow: tempFSchema,
+      coldPackFrom: tempFSchema.nullable(),
+      holdFrom: tempFSchema,
+      doNotShipAbove: tempFSchema,
+    }),
+    source: z.string().trim().min(1).max(LIMITS.textMax),
+  })
+  .superRefine((profile, ctx) => {
+    const { safeTransitF: safe, bandsF: b } = profile;
+    if (!(safe.min < safe.max)) ctx.addIssue({ code: "custom", path: ["safeTransitF", "max"], message: "must be above the safe range's min" });
+    const rules: [keyof typeof b, boolean, string][] = [
+      ["heatPackBelow", b.heatPackBelow > b.doNotShipBelow, "must be above doNotShipBelow"],
+      ["coldPackFrom", b.coldPackFrom === null || (b.coldPackFrom >= b.heatPackBelow && b.coldPackFrom < b.holdFrom), "must lie from heatPackBelow up to (not including) holdFrom"],
+      ["holdFrom", b.holdFrom >= b.heatPackBelow, "must not be below heatPackBelow"],
+      ["doNotShipAbove", b.doNotShipAbove >= b.holdFrom, "must not be below holdFrom"],
+    ];
+    for (const [key, ordered, message] of rules) {
+      if (!ordered) ctx.addIssue({ code: "custom", path: ["bandsF", key], message });
+    }
+  });
+
+export type ProfileData = z.infer<typeof profileDataSchema>;
