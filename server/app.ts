@@ -16,6 +16,8 @@ import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
 import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
 import { directoryRouter } from "./routes/directory/directory.router";
+import { complianceRouter } from "./routes/compliance/compliance.router";
+import { isScanUpload, SCAN_UPLOAD_TYPES } from "./routes/documents/scan-upload";
 
 /** Builds the Express app (no listen): the API under /api and the built client for everything else. */
 export function createApp(ctx: AppContext): Express {
@@ -39,7 +41,9 @@ export function createApp(ctx: AppContext): Express {
     });
   }
   const json = express.json({ limit: "1mb", type: "application/json" });
-  api.use(requireJsonBody());
+  const jsonBody = requireJsonBody();
+  const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
+  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : jsonBody)(req, res, next));
   api.use((req, res, next) => (req.method === "GET" || req.method === "HEAD" ? next() : json(req, res, next)));
   api.use(rejectNul);
   api.use((req, _res, next) => {
@@ -64,6 +68,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(registerCsvRoute());
   api.use("/register", registerRouter());
   api.use("/directory", directoryRouter());
+  api.use(complianceRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

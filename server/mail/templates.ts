@@ -19,9 +19,9 @@ export function invitationMail(p: { to: string; name: string; invitedBy: string;
   };
 }
 
-export type TransferMailTopic = "awaiting_confirmation" | "reconfirm" | "confirmed" | "sent_back" | "cancelled" | "picked_up" | "delivered" | "checked_in";
+export type TransferMailTopic = "awaiting_confirmation" | "reconfirm" | "confirmed" | "sent_back" | "cancelled" | "picked_up" | "delivered" | "checked_in" | "temperature_changed";
 
-type TransferMailFacts = { to: string; name: string; organization: string; number: string; actor: string; link: string; reason?: string; summary?: string };
+type TransferMailFacts = { to: string; name: string; organization: string; number: string; actor: string; link: string; reason?: string; summary?: string; previousAdvice?: string; advice?: string };
 
 const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
   awaiting_confirmation: (n) => `Transfer ${n} is waiting for your confirmation`,
@@ -32,6 +32,7 @@ const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
   picked_up: (n) => `Transfer ${n} is on the road`,
   delivered: (n) => `Transfer ${n} was delivered`,
   checked_in: (n) => `Transfer ${n} was checked in`,
+  temperature_changed: (n) => `Transfer ${n}: the temperature advice changed`,
 };
 
 const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
@@ -43,6 +44,15 @@ const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
   picked_up: (f) => `The courier took custody of transfer ${f.number}. ${f.summary ?? ""}`,
   delivered: (f) => `Transfer ${f.number} was handed to the receiver. ${f.summary ?? ""}`,
   checked_in: (f) => `${f.actor} checked in transfer ${f.number}. ${f.summary ?? ""}`,
+  temperature_changed: (f) =>
+    [
+      `The temperature check ${f.summary ?? "before departure"} changed its advice for transfer ${f.number}.`,
+      "",
+      `Before: ${f.previousAdvice ?? ""}`,
+      `Now: ${f.advice ?? ""}`,
+      "",
+      "The advice is a planning aid, not a guarantee: look at the forecast at both ends yourselves, keep heat packs away from the animals' containers, and follow the carrier's and the states' rules.",
+    ].join("\n"),
 };
 
 /** The e-mail for a step of a transfer that needs the other party. Plain text only. */

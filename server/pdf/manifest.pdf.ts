@@ -198,7 +198,8 @@ function boxDetails(box: ManifestBox): string {
   }
   parts.push(PACK_LABELS[box.pack]);
   parts.push(box.sealNumber ? `Seal no. ${box.sealNumber}` : "No seal number");
-  parts.push(`${animalsInBox(box)} animals`);
+  const n = animalsInBox(box);
+  parts.push(`${n} ${n === 1 ? "animal" : "animals"}`);
   return parts.join("  ·  ");
 }
 
@@ -235,7 +236,8 @@ function drawBoxes(flow: PageFlow, boxes: ManifestBox[]): void {
   for (const box of boxes) {
     // The label is one line of the user's text; its own line breaks would split the title.
     const title = safeText(flow.fonts.bold, `Box ${box.index} of ${boxes.length}: ${box.label}`);
-    flow.ensure(70);
+    // Title, details, table header and the first row stay together on one page.
+    flow.ensure(110);
     flow.gap(4);
     flow.paragraph(title, { bold: true, sizePt: 10.5, color: COLORS.green });
     flow.paragraph(boxDetails(box), { sizePt: 8, color: COLORS.muted });

@@ -10,6 +10,7 @@ import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
   ComplianceEvaluationSchema, ComplianceOverrideSchema, ComplianceRuleSchema, DocumentScanSchema, PermitDocumentSchema, TransferDocumentSchema,
 } from "./compliance.entity";
+import { ForecastHourSchema, TemperatureAlertSchema, TemperatureCheckSchema, TemperatureProfileSchema } from "./temperature.entity";
 
 export {
   OrganizationSchema, OutboxMessageSchema, PasswordTokenSchema, UserSchema, TaxonSchema, TaxonNameSchema, TransferSchema, ContainerSchema,
@@ -43,4 +44,8 @@ export const ENTITIES = [
   TransferDocumentSchema,
   ComplianceEvaluationSchema,
   ComplianceOverrideSchema,
+  ForecastHourSchema,
+  TemperatureProfileSchema,
+  TemperatureCheckSchema,
+  TemperatureAlertSchema,
 ];

@@ -1,6 +1,7 @@
 import pg from "pg";
 import { seedTaxa } from "./taxa.seeder";
 import { seedComplianceRules } from "./compliance-rules.seeder";
+import { seedTemperatureProfiles } from "./temperature-profiles.seeder";
 
 /** Reference data every installation needs (not demo data); each part loads only when empty. */
 export async function seedReferenceData(databaseUrl: string): Promise<void> {
@@ -9,6 +10,7 @@ export async function seedReferenceData(databaseUrl: string): Promise<void> {
   try {
     await seedTaxa(client);
     await seedComplianceRules(client);
+    await seedTemperatureProfiles(client);
   } finally {
     await client.end();
   }

@@ -22,6 +22,10 @@ import { transitionTransfer } from "../../services/transfers/transition";
 import { assignLegs } from "../../services/transfers/legs";
 import { recordHandoff } from "../../services/transfers/handoff";
 import { checkInTransfer } from "../../services/transfers/check-in";
+import { manifestExtras } from "../../services/transfers/manifest-extras";
+import { presentManifestInput } from "../../presenters/manifest.presenter";
+import { renderManifestPdf } from "../../pdf/manifest.pdf";
+import { renderLabelsPdf } from "../../pdf/labels.pdf";
 
 /**
  * The transfer as this caller sees it now, read fresh (one query) after any change.
@@ -105,6 +109,22 @@ export function transfersRouter(): Router {
       return { status: 201, body: { transfer: await presentForActor(req, id) } };
     });
   });
+
+  // The paper that travels with the animals: parties and the assigned courier (admins read).
+  for (const [file, render, what] of [["manifest.pdf", renderManifestPdf, "manifest"], ["labels.pdf", renderLabelsPdf, "box-labels"]] as const) {
+    router.get(`/:id/${file}`, async (req, res) => {
+      const id = idParam(req);
+      const actor = currentUser(req);
+      const view = await readTransferView(req.ctx.pool, id);
+      if (!view || !viewerRoleFor(actor, factsOfView(view))) throw notFound("That transfer");
+      const bytes = await render(presentManifestInput(view, await manifestExtras(req.ctx, id), new Date()));
+      const name = `${view.t.number}-${what}.pdf`;
+      res.setHeader("Content-Type", "application/pdf");
+      res.setHeader("Content-Disposition", `${req.query.download === "1" ? "attachment" : "inline"}; filename="${name}"`);
+      res.setHeader("X-Content-Type-Options", "nosniff");
+      res.send(Buffer.from(bytes));
+    });
+  }
 
   router.get("/:id/custody", async (req, res) => {
     const id = idParam(req);

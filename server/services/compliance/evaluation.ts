@@ -42,10 +42,9 @@ export function transferFactsOf(transfer: Transfer): TransferFacts {
 export async function documentsOnFile(em: EntityManager, transfer: Transfer): Promise<OnFileDocument[]> {
   const senderId = transfer.senderOrganization.id;
   const receiverId = transfer.receiverOrganization.id;
-  const [docs, attachments] = await Promise.all([
-    em.find(PermitDocumentSchema, { organization: { $in: [senderId, receiverId] } }, { orderBy: { createdAt: "asc", id: "asc" } }),
-    em.find(TransferDocumentSchema, { transfer: transfer.id }),
-  ]);
+  // One query after the other: inside the gate's transaction they share one connection.
+  const docs = await em.find(PermitDocumentSchema, { organization: { $in: [senderId, receiverId] } }, { orderBy: { createdAt: "asc", id: "asc" } });
+  const attachments = await em.find(TransferDocumentSchema, { transfer: transfer.id });
   const attached = new Set(attachments.map((a) => a.document.id));
   const sideOf = (orgId: string): HolderSide | undefined => (senderId === receiverId ? undefined : orgId === senderId ? "sender" : "receiver");
   return docs
@@ -72,11 +71,9 @@ export function evaluationDocumentOf({ doc, holderSide }: OnFileDocument): Evalu
 
 /** Evaluates a stored transfer against the rule library and the documents on file. */
 export async function evaluateTransfer(em: EntityManager, transfer: Transfer) {
-  const [animals, documents, rules] = await Promise.all([
-    em.find(AnimalSchema, { transfer: transfer.id }, { orderBy: { position: "asc" } }),
-    documentsOnFile(em, transfer),
-    loadActiveRules(em),
-  ]);
+  const animals = await em.find(AnimalSchema, { transfer: transfer.id }, { orderBy: { position: "asc" } });
+  const documents = await documentsOnFile(em, transfer);
+  const rules = await loadActiveRules(em);
   const taxa = await resolveTaxaById(em, animals.map((a) => a.taxon.id));
   const lines: EvaluationAnimal[] = animals.map((a) => {
     const taxon = taxa.get(a.taxon.id);

@@ -1,0 +1,87 @@
+import type { EntityManager } from "@mikro-orm/postgresql";
+import { boxContentsG, profileForBox, type AnimalLine } from "@shared/temperature/box-profile";
+import { placeFromPosition, placeFromZip, type TransitPlace } from "@shared/temperature/places";
+import type { AnimalClass } from "@shared/temperature/profiles";
+import type { TemperatureReport } from "@shared/temperature/report";
+import { AnimalSchema, ContainerSchema, type Transfer } from "../../db/entities/transfer.entity";
+import { assessBoxes, unassessable, type BoxToAssess } from "./assess-boxes";
+import type { WeatherSource } from "./forecasts";
+import { loadProfiles, type ProfileTable } from "./profiles";
+
+const CLASS_OF_TAXON: Readonly<Record<string, AnimalClass>> = { Reptilia: "reptile", Amphibia: "amphibian" };
+
+/** The class (reptile, amphibian) of each taxon, read up the taxon tree. */
+export async function animalClasses(em: EntityManager, taxonIds: readonly string[]): Promise<Map<string, AnimalClass | null>> {
+  if (taxonIds.length === 0) return new Map();
+  const rows = await em.execute<{ id: string; class_name: string | null }[]>(
+    `WITH RECURSIVE up AS (
+       SELECT t.id AS start_id, t.id, t.parent_id, t.rank, t.scientific_name, 0 AS depth FROM taxon t WHERE t.id = ANY(?::uuid[])
+       UNION ALL
+       SELECT up.start_id, p.id, p.parent_id, p.rank, p.scientific_name, up.depth + 1 FROM up JOIN taxon p ON p.id = up.parent_id WHERE up.depth < 10
+     )
+     SELECT start_id AS id, max(scientific_name) FILTER (WHERE rank = 'class') AS class_name FROM up GROUP BY start_id`,
+    [[...new Set(taxonIds)]],
+  );
+  return new Map(rows.map((r) => [r.id, r.class_name ? (CLASS_OF_TAXON[r.class_name] ?? null) : null]));
+}
+
+/** Where a transfer starts or ends, from its stored position or, failing that, its ZIP code. */
+function placeOf(t: Transfer, side: "origin" | "destination"): TransitPlace | undefined {
+  const [lat, lon, zip, city, state] =
+    side === "origin"
+      ? [t.originLat, t.originLon, t.originZip, t.originCity, t.originState]
+      : [t.destinationLat, t.destinationLon, t.destinationZip, t.destinationCity, t.destinationState];
+  if (lat != null && lon != null) return placeFromPosition(lat, lon, `${city}, ${state}`);
+  return placeFromZip(zip.slice(0, 5));
+}
+
+/** The boxes that hold animals, each with its profile (see profileForBox) and its contents. */
+async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileTable): Promise<BoxToAssess[]> {
+  const [containers, animals] = await Promise.all([
+    em.find(ContainerSchema, { transfer }, { orderBy: { position: "asc" } }),
+    em.find(AnimalSchema, { transfer }, { populate: ["taxon"] }),
+  ]);
+  const classes = await animalClasses(em, animals.map((a) => a.taxon.id));
+  const lineOf = (a: (typeof animals)[number]): AnimalLine => ({
+    count: a.count,
+    weightG: a.weightG ?? null,
+    profileGroup: a.taxon.getEntity().profileGroup ?? null,
+    animalClass: classes.get(a.taxon.id) ?? null,
+  });
+  const everyLine = animals.map(lineOf);
+  return containers.flatMap((c) => {
+    const lines = animals.filter((a) => a.container?.id === c.id).map(lineOf);
+    if (lines.length === 0) return [];
+    return [
+      {
+        containerId: c.id,
+        label: c.label,
+        profile: profileForBox(lines, everyLine, profiles),
+        box: { wall: c.wallMaterial, wallThicknessMm: c.wallThicknessMm, lengthMm: c.lengthMm, widthMm: c.widthMm, heightMm: c.heightMm, contentsG: boxContentsG(lines), pack: c.pack },
+      },
+    ];
+  });
+}
+
+/**
+ * The temperature verdict of a stored transfer: its route and planned departure, each box that
+ * holds animals under its animals' profile, forecasts through the cache. A place that cannot be
+ * located or a source that cannot answer gives "forecast unavailable".
+ */
+export async function assessTransferTemperature({ em, source, transfer, nowMs }: { em: EntityManager; source: WeatherSource | null; transfer: Transfer; nowMs: number }): Promise<TemperatureReport> {
+  const profiles = await loadProfiles(em);
+  const boxes = await boxesOf(em, transfer, profiles);
+  const origin = placeOf(transfer, "origin");
+  const destination = placeOf(transfer, "destination");
+  const fallback = profileForBox([], [], profiles);
+  const trip = { mode: transfer.mode, departAt: transfer.plannedDepartureAt.getTime() };
+  if (!origin || !destination) {
+    return unassessable(trip, boxes, fallback, { id: "place-unknown", title: `The ${origin ? "destination" : "origin"} ZIP code could not be located, so there is no forecast for it.` });
+  }
+  try {
+    return await assessBoxes({ ...trip, origin, destination }, boxes, { kind: "forecast", source, nowMs }, fallback);
+  } catch (err) {
+    if (!(err instanceof RangeError)) throw err;
+    return unassessable(trip, boxes, fallback, { id: "route-unplanned", title: `The trip could not be laid out hour by hour: ${err.message}.` });
+  }
+}

@@ -1,0 +1,78 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createTestApp, signIn, type TestApp } from "../support/app";
+import { buildTransfer, buildUser, type TransferCast } from "../factories";
+import { decodeQrFromPng, drawnGlyphIds, extractPageTexts, pageSizesPt, renderPagePng } from "../../server/pdf/pdf-test-support";
+
+let t: TestApp;
+let cast: TransferCast;
+const em = () => t.orm.em.fork();
+beforeAll(async () => {
+  t = await createTestApp();
+  cast = await buildTransfer(em(), {
+    status: "ready",
+    animals: [
+      { taxon: "Pantherophis guttatus", count: 3, sex: "female", box: "A" },
+      { taxon: "Pantherophis guttatus", count: 1, sex: "male", box: "A" },
+      { taxon: "Crotalus atrox", count: 1, sex: "male", box: "B" },
+      { taxon: "Ambystoma mexicanum", count: 2, box: "C" },
+    ],
+  });
+  // Hostile user text travels to the paper as text.
+  await t.ctx.pool.query(
+    "UPDATE transfer SET handling_notes = $2 WHERE id = $1",
+    [cast.transfer.id, `<script>alert(1)</script> \u202Eevil\u202C 🐍 ${"x".repeat(2000)}`],
+  );
+});
+afterAll(() => t.close());
+
+const fetchPdf = async (email: string, file: string) => {
+  const client = await signIn(t.app, email);
+  return client.get(`/api/transfers/${cast.transfer.id}/${file}`).buffer(true).parse((res, done) => {
+    const chunks: Buffer[] = [];
+    res.on("data", (c: Buffer) => chunks.push(c));
+    res.on("end", () => done(null, Buffer.concat(chunks)));
+  });
+};
+
+describe("GET /api/transfers/:id/manifest.pdf", () => {
+  it("lists every animal, the totals per species (50 CFR 14.81), shipper and consignee [published]", async () => {
+    const res = await fetchPdf(cast.sender.email, "manifest.pdf");
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toBe("application/pdf");
+    const bytes = new Uint8Array(res.body as Buffer);
+    const text = (await extractPageTexts(bytes)).join("\n");
+    for (const name of ["Pantherophis guttatus", "Crotalus atrox", "Ambystoma mexicanum"]) expect(text).toContain(name);
+    expect(text).toContain(cast.transfer.number);
+    expect(text).toContain("418 Quarry Hollow Road");
+    expect(text).toContain("92 Boardwalk Lane");
+    // Totals row: scientific name, common name, boxes, venomous, number.
+    expect(text).toMatch(/Pantherophis guttatus corn snake 1 No 4/);
+    expect(text).toMatch(/All species 3 species 3 boxes 7/);
+    expect(text).toContain("<script>alert(1)</script>");
+    expect(await drawnGlyphIds(bytes)).not.toContain(0);
+    const png = renderPagePng(bytes, "api-manifest");
+    expect(decodeQrFromPng(png)).toBe(`${t.env.PUBLIC_URL}/legs/${cast.transfer.id}`);
+  });
+
+  it("is readable by the assigned courier and no one else outside the parties", async () => {
+    expect((await fetchPdf(cast.couriers[0]!.email, "manifest.pdf")).status).toBe(200);
+    expect((await fetchPdf((await buildUser(em(), { role: "courier" })).email, "manifest.pdf")).status).toBe(404);
+    expect((await fetchPdf((await buildUser(em())).email, "manifest.pdf")).status).toBe(404);
+  });
+});
+
+describe("GET /api/transfers/:id/labels.pdf", () => {
+  it("gives one 4 × 6 in label per box, the venomous one marked", async () => {
+    const res = await fetchPdf(cast.receiver.email, "labels.pdf");
+    expect(res.status).toBe(200);
+    const bytes = new Uint8Array(res.body as Buffer);
+    const sizes = await pageSizesPt(bytes);
+    expect(sizes).toEqual([{ width: 288, height: 432 }, { width: 288, height: 432 }, { width: 288, height: 432 }]);
+    const pages = await extractPageTexts(bytes);
+    expect(pages[0]).toContain("LIVE ANIMALS");
+    expect(pages[0]).toMatch(/1\s*of\s*3/);
+    expect(pages[1]).toMatch(/VENOMOUS/);
+    expect(pages[1]).not.toMatch(/NON-VENOMOUS/);
+    expect(pages[0]).toMatch(/NON-VENOMOUS/);
+  });
+});
