@@ -149,6 +149,13 @@ describe("life cycle through the API", () => {
     expect((await r.post(`/api/transfers/${id}/transition`, { to: "closed" })).body.transfer.status).toBe("closed");
     const log = await r.get(`/api/transfers/${id}/custody`);
     expect(log.body.intact).toBe(true);
+    // The other party hears of each step that needs them, through the outbox.
+    const mail = await t.ctx.pool.query<{ topic: string; to_address: string }>("SELECT topic, to_address FROM outbox_message WHERE subject LIKE $1 ORDER BY created_at", [`%${cast.transfer.number}%`]);
+    expect(mail.rows.map((m) => m.topic)).toEqual([
+      "transfer.awaiting_confirmation", "transfer.confirmed", "transfer.picked_up", "transfer.picked_up", "transfer.delivered", "transfer.checked_in",
+    ]);
+    expect(mail.rows[0]!.to_address).toBe(cast.receiver.email);
+    expect(mail.rows[1]!.to_address).toBe(cast.sender.email);
     expect(log.body.entries.map((e: { kind: string }) => e.kind)).toEqual([
       "created", "status_change", "status_change", "couriers_assigned", "handoff", "status_change", "handoff", "status_change", "check_in", "status_change", "status_change",
     ]);
