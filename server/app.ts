@@ -17,6 +17,7 @@ import { transfersRouter } from "./routes/transfers/transfers.router";
 import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
 import { directoryRouter } from "./routes/directory/directory.router";
 import { complianceRouter } from "./routes/compliance/compliance.router";
+import { temperatureRouter } from "./routes/temperature/temperature.router";
 import { isScanUpload, SCAN_UPLOAD_TYPES } from "./routes/documents/scan-upload";
 
 /** Builds the Express app (no listen): the API under /api and the built client for everything else. */
@@ -69,6 +70,7 @@ export function createApp(ctx: AppContext): Express {
   api.use("/register", registerRouter());
   api.use("/directory", directoryRouter());
   api.use(complianceRouter(ctx));
+  api.use(temperatureRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

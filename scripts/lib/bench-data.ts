@@ -28,7 +28,7 @@ export async function seedBenchData(databaseUrl: string, bulkTransfers = 100_000
     const r = await actorOf(em, receiver);
     const t = await createTransfer({ em: em.fork(), actor: s, input });
     await transitionTransfer({ em: em.fork(), actor: s, transferId: t.id, input: { to: "awaiting_receiver" } });
-    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "ready" } });
+    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "ready", override: true, reason: "Benchmark data" } });
     await assignLegs({ em: em.fork(), actor: s, transferId: t.id, input: { legs: couriers.slice(0, 2).map((c) => ({ courierId: c.id })) } });
     await assignLegs({ em: em.fork(), actor: s, transferId: t.id, input: { legs: couriers.map((c) => ({ courierId: c.id })) } });
     const containers = await em.fork().find(ContainerSchema, { transfer: t.id });

@@ -29,3 +29,8 @@ export function documentAbilities(viewer: DocumentViewer): DocumentAbilitiesDto 
 export function canAttachDocuments(role: ViewerRole, status: TransferStatus): boolean {
   return (role === "sender" || role === "receiver") && EDITABLE.includes(status);
 }
+
+/** The documents a transfer uses are for its sender, receiver and couriers; admins read the verdict only. */
+export function canReadTransferDocuments(role: ViewerRole): boolean {
+  return role !== "admin";
+}

@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from "node:util";
 import type { ProfileGroup } from "@shared/constants";
 import { profileDataOf } from "@shared/temperature/profile-schema";
 import { DEFAULT_PROFILES, type TemperatureProfile } from "@shared/temperature/profiles";
@@ -29,8 +30,8 @@ export function presentProfile(group: ProfileGroup, profile: TemperatureProfile,
     group,
     ...data,
     guidelineDefault,
-    edited: JSON.stringify(data) !== JSON.stringify(guidelineDefault),
-    updatedAt: row?.updatedBy ? row.updatedAt.toISOString() : null,
+    edited: !isDeepStrictEqual(data, guidelineDefault),
+    updatedAt: editor && row ? row.updatedAt.toISOString() : null,
     updatedBy: editor ? { id: editor.id, displayName: editor.displayName } : null,
   };
 }

@@ -104,5 +104,6 @@ export type ComplianceOverrideDto = { reason: string; at: string; admin: { id: s
 export type TransferComplianceDto = EvaluateResponse & {
   shipDate: string;
   override: ComplianceOverrideDto | null;
-  abilities: { override: boolean; attachDocuments: boolean };
+  /** readDocuments: the documents list of the transfer (its parties and couriers, not admins). */
+  abilities: { override: boolean; attachDocuments: boolean; readDocuments: boolean };
 };

@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { LIMITS } from "../constants";
+import { LIMITS, type ProfileGroup } from "../constants";
 import { PLAUSIBLE_AMBIENT_F } from "./limits";
+import type { TemperatureProfile } from "./profiles";
 
 const tempFSchema = z.number().min(PLAUSIBLE_AMBIENT_F.min).max(PLAUSIBLE_AMBIENT_F.max);
 
@@ -38,3 +39,14 @@ export const profileDataSchema = z
   });
 
 export type ProfileData = z.infer<typeof profileDataSchema>;
+
+/** The editable data of a profile (everything but its group). */
+export function profileDataOf(profile: TemperatureProfile): ProfileData {
+  const { group: _group, ...data } = profile;
+  return data;
+}
+
+/** A profile from its group and its stored data. */
+export function profileFromData(group: ProfileGroup, data: ProfileData): TemperatureProfile {
+  return { group, ...data };
+}

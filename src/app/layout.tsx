@@ -1,17 +1,26 @@
 import { NavLink, Navigate, Outlet, useLocation, useNavigate } from "react-router";
 import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
+import { UnitsSwitch } from "@/components/ui/units-switch";
 import { paths } from "@/config/paths";
 import { roleLabel } from "@/lib/labels";
+import type { Viewer } from "@/lib/viewer";
 import { useSession, useSignOut, type Session } from "@/features/auth/api/session";
 
 type NavItem = { to: string; label: string; show: (s: NonNullable<Session>) => boolean };
 
 /** Navigation follows the abilities the server sent, never a role check of our own. */
 const NAV: NavItem[] = [
-  { to: paths.home, label: "Home", show: () => true },
+  { to: paths.home, label: "Transfers", show: (s) => !s.abilities.carryTransfers },
+  { to: paths.home, label: "My legs", show: (s) => s.abilities.carryTransfers },
+  { to: paths.register, label: "Register", show: (s) => s.abilities.draftTransfers },
+  { to: paths.permits, label: "Permits", show: (s) => s.abilities.draftTransfers },
+  { to: paths.canItTravel, label: "Can it travel?", show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations },
+  { to: paths.planTrip, label: "Plan a trip", show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations },
   { to: paths.admin.users, label: "People", show: (s) => s.abilities.manageUsers },
   { to: paths.admin.organizations, label: "Organisations", show: (s) => s.abilities.manageOrganizations },
+  { to: paths.admin.rules, label: "Rules", show: (s) => s.abilities.manageOrganizations },
+  { to: paths.admin.temperatureProfiles, label: "Temperature profiles", show: (s) => s.abilities.manageOrganizations },
   { to: paths.admin.mail, label: "Caught mail", show: (s) => s.abilities.readCaughtMail },
 ];
 
@@ -43,7 +52,7 @@ export function AppLayout() {
           <nav aria-label="Main" className="order-3 w-full sm:order-none sm:w-auto">
             <ul className="flex flex-wrap gap-1">
               {NAV.filter((item) => item.show(s)).map((item) => (
-                <li key={item.to}>
+                <li key={item.label}>
                   <NavLink
                     to={item.to}
                     end={item.to === paths.home}
@@ -58,6 +67,7 @@ export function AppLayout() {
             </ul>
           </nav>
           <div className="flex items-center gap-3">
+            <UnitsSwitch />
             <div className="text-right text-sm leading-tight">
               <p className="font-semibold" data-testid="signed-in-as">{s.user.displayName}</p>
               <p className="text-ink-soft">{s.user.organization?.name ?? roleLabel[s.user.role]}</p>
@@ -69,7 +79,7 @@ export function AppLayout() {
         </div>
       </header>
       <main id="main" className="mx-auto max-w-6xl px-4 py-6">
-        <Outlet />
+        <Outlet context={s satisfies Viewer} />
       </main>
     </div>
   );

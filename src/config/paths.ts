@@ -1,11 +1,39 @@
+/** A route with a parameter: the pattern for the router, and a link builder. */
+const withTransferId = (suffix: string) => ({
+  pattern: `/transfers/:transferId${suffix}`,
+  href: (transferId: string) => `/transfers/${encodeURIComponent(transferId)}${suffix}`,
+});
+
 /** Every route path of the client, in one place. */
 export const paths = {
+  /** Members and admins: the transfers list; couriers: their legs. */
   home: "/",
   signIn: "/sign-in",
   welcome: "/welcome",
+  transfers: {
+    new: "/transfers/new",
+    detail: withTransferId(""),
+    edit: withTransferId("/edit"),
+    custody: withTransferId("/custody"),
+    checkIn: withTransferId("/check-in"),
+  },
+  courier: {
+    /** The handoff page a box label's QR code opens. */
+    handoff: {
+      pattern: "/legs/:transferId",
+      href: (transferId: string) => `/legs/${encodeURIComponent(transferId)}`,
+    },
+  },
+  register: "/register",
+  /** The organisation's permits and certificates (the expiry e-mail links here). */
+  permits: "/permits",
+  canItTravel: "/can-it-travel",
+  planTrip: "/plan-trip",
   admin: {
     users: "/admin/users",
     organizations: "/admin/organizations",
     mail: "/admin/mail",
+    rules: "/admin/rules",
+    temperatureProfiles: "/admin/temperature-profiles",
   },
 } as const;

@@ -9,10 +9,10 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 const ROLES = [
-  { email: "admin@demo.hatchway.test", name: "Hatchway Admin", sees: ["People", "Organisations", "Caught mail"], hidden: [] as string[] },
-  { email: "sender@demo.hatchway.test", name: "Ruth Calder", sees: ["Home"], hidden: ["People", "Organisations", "Caught mail"] },
-  { email: "receiver@demo.hatchway.test", name: "Milo Faraday", sees: ["Home"], hidden: ["People", "Organisations"] },
-  { email: "courier@demo.hatchway.test", name: "Juno Park", sees: ["Home"], hidden: ["People", "Organisations"] },
+  { email: "admin@demo.hatchway.test", name: "Hatchway Admin", sees: ["Transfers", "People", "Organisations", "Caught mail"], hidden: ["Register", "My legs"] },
+  { email: "sender@demo.hatchway.test", name: "Ruth Calder", sees: ["Transfers", "Register"], hidden: ["People", "Organisations", "Caught mail", "My legs"] },
+  { email: "receiver@demo.hatchway.test", name: "Milo Faraday", sees: ["Transfers", "Register"], hidden: ["People", "Organisations", "My legs"] },
+  { email: "courier@demo.hatchway.test", name: "Juno Park", sees: ["My legs"], hidden: ["Transfers", "Register", "People", "Organisations"] },
 ];
 
 describe("signing in", () => {

@@ -2,6 +2,7 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import { Seeder } from "@mikro-orm/seeder";
 import { buildOrganization, buildUser } from "../../../tests/factories";
 import { seedDemoTransfers } from "./demo-transfers";
+import { seedDemoDocuments } from "./demo-documents";
 
 /**
  * The demo scenario. Every organisation, person, address, phone number and permit number
@@ -57,6 +58,7 @@ export class DemoSeeder extends Seeder {
     const other = await buildUser(em, { email: "other@demo.hatchway.test", displayName: "Ivy Brandt", role: "member", organization: rescue });
     // A second driver for the relay leg of the demo's two-courier transfer.
     const relay = await buildUser(em, { email: "relay@demo.hatchway.test", displayName: "Theo Brannock", role: "courier", organization: couriers });
+    await seedDemoDocuments(em, { breeder, centre, rescue });
     await seedDemoTransfers(em, { sender, receiver, other, courier, relay });
   }
 }

@@ -156,7 +156,7 @@ describe("a stored transfer's compliance, the gate and the override", () => {
     expect(before.status).toBe(200);
     expect(before.body.verdict).toBe("needs_documents");
     expect(finding(before.body, LAND_TORTOISES)?.satisfiedBy).toBeNull();
-    expect(before.body.abilities).toEqual({ override: false, attachDocuments: true });
+    expect(before.body.abilities).toEqual({ override: false, attachDocuments: true, readDocuments: true });
 
     const today = new Date().toISOString().slice(0, 10);
     const created = await sender.post("/api/documents", {
@@ -175,6 +175,10 @@ describe("a stored transfer's compliance, the gate and the override", () => {
     expect(listed.body.documents[0].details.notes).toBeNull();
   });
 
+  // The temperature gate (another "ready to ship" gate) lets a confirmation through on an override
+  // with a reason; these confirmations carry one so that only the compliance gate is under test.
+  const confirm = { to: "ready", override: true, reason: "Temperature plan agreed with the courier (test)." };
+
   it("blocks the receiver's confirmation while documents are missing, until an admin overrides with a reason (logged in custody)", async () => {
     // source: the issue's requirement (not an outside value): no "ready to ship" on a blocked or documents-needed verdict without an admin override
     const cast = await tortoiseTransfer();
@@ -183,7 +187,7 @@ describe("a stored transfer's compliance, the gate and the override", () => {
     const admin = await signIn(t.app, (await buildUser(em(), { role: "admin" })).email);
     const path = `/api/transfers/${cast.transfer.id}`;
 
-    const refused = await receiver.post(`${path}/transition`, { to: "ready" });
+    const refused = await receiver.post(`${path}/transition`, confirm);
     expect(refused.status).toBe(409);
     expect(refused.body.error.compliance.verdict).toBe("needs_documents");
     expect(refused.body.error.message).toMatch(/certificate of veterinary inspection/);
@@ -202,32 +206,35 @@ describe("a stored transfer's compliance, the gate and the override", () => {
     expect((await admin.post(`${path}/compliance/override`, { reason })).status).toBe(409);
 
     const custody = (await receiver.get(`${path}/custody`)).body;
-    const entry = custody.entries.find((e: { kind: string }) => e.kind === "override");
-    expect(entry.payload).toMatchObject({ gate: "compliance", verdict: "needs_documents", reason });
+    const entry = custody.entries.find((e: { kind: string; payload: { gate?: string } }) => e.kind === "override" && e.payload.gate === "compliance");
+    expect(entry.payload).toMatchObject({ verdict: "needs_documents", reason });
     expect(custody.intact).toBe(true);
 
-    const confirmed = await receiver.post(`${path}/transition`, { to: "ready" });
+    const confirmed = await receiver.post(`${path}/transition`, confirm);
     expect(confirmed.status, JSON.stringify(confirmed.body)).toBe(200);
     expect(confirmed.body.transfer.status).toBe("ready");
-    const stored = await em().getConnection().execute("SELECT verdict, transfer_version, rules_used FROM compliance_evaluation WHERE transfer_id = ? ORDER BY evaluated_at", [cast.transfer.id]);
+    const stored = await em().getConnection().execute<{ verdict: string; transfer_version: number; rules_used: unknown }[]>("SELECT verdict, transfer_version, rules_used FROM compliance_evaluation WHERE transfer_id = ? ORDER BY evaluated_at", [cast.transfer.id]);
     // One evaluation answered by the override, one recorded with the confirmation, both with the rule versions used.
-    expect(stored.map((r: { verdict: string }) => r.verdict)).toEqual(["needs_documents", "needs_documents"]);
-    expect(stored[1].rules_used).toEqual(expect.arrayContaining([{ ruleId: LAND_TORTOISES, version: 1 }]));
+    expect(stored.map((r) => r.verdict)).toEqual(["needs_documents", "needs_documents"]);
+    expect(stored[1]?.rules_used).toEqual(expect.arrayContaining([{ ruleId: LAND_TORTOISES, version: 1 }]));
   });
 
   it("lets a transfer with nothing to fix become ready and records the clear evaluation", async () => {
     // [practice] a captive-bred corn snake between two continental states meets no prohibition or permit rule in the seed library
-    const cast = await buildTransfer(em(), { status: "ready" });
+    const cast = await buildTransfer(em(), { status: "awaiting_receiver" });
+    const receiver = await signIn(t.app, cast.receiver.email);
+    expect((await receiver.post(`/api/transfers/${cast.transfer.id}/transition`, confirm)).status).toBe(200);
     const rows = await em().getConnection().execute("SELECT verdict FROM compliance_evaluation WHERE transfer_id = ?", [cast.transfer.id]);
     expect(rows).toEqual([{ verdict: "clear" }]);
   });
 
-  it("is hidden from strangers and not overridable by admins once the transfer has moved on", async () => {
-    const cast = await buildTransfer(em(), { status: "ready" });
+  it("is hidden from strangers, and an override is only for a transfer waiting for the receiver", async () => {
+    const cast = await buildTransfer(em(), { status: "draft", animals: [{ taxon: "Stigmochelys pardalis", count: 1, box: "A" }] });
     const stranger = await signIn(t.app, (await buildUser(em(), { organization: await buildOrganization(em()) })).email);
     expect((await stranger.get(`/api/transfers/${cast.transfer.id}/compliance`)).status).toBe(404);
     const admin = await signIn(t.app, (await buildUser(em(), { role: "admin" })).email);
-    expect((await admin.post(`/api/transfers/${cast.transfer.id}/compliance/override`, { reason: "late" })).status).toBe(409);
+    const early = await admin.post(`/api/transfers/${cast.transfer.id}/compliance/override`, { reason: "too early" });
+    expect([early.status, early.body.error.message]).toEqual([409, "An override applies to a transfer waiting for the receiver's confirmation."]);
   });
 });
 

@@ -5,7 +5,7 @@ import { attachDocumentSchema, overrideInputSchema } from "@shared/schemas/compl
 import { currentUser, requireUser } from "../../http/guards";
 import { parse } from "../../http/validate";
 import { canOverrideCompliance } from "../../policies/compliance.policy";
-import { canAttachDocuments } from "../../policies/document.policy";
+import { canAttachDocuments, canReadTransferDocuments } from "../../policies/document.policy";
 import { presentTransferCompliance } from "../../presenters/transfer-compliance.presenter";
 import { attachDocument, detachDocument, documentsForTransfer } from "../../services/compliance/documents";
 import { evaluateTransfer } from "../../services/compliance/evaluation";
@@ -20,10 +20,13 @@ async function complianceFor(req: Request, transferId: string) {
   const em = req.em.fork();
   const actor = currentUser(req);
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
-  const [{ result, facts }, override] = await Promise.all([evaluateTransfer(em, transfer), currentOverride(em, transfer)]);
+  const { result, facts } = await evaluateTransfer(em, transfer);
+  // An override answers a verdict that is not clear; once clear, there is nothing to show.
+  const override = result.verdict === "clear" ? null : await currentOverride(em, transfer);
   const abilities = {
     override: canOverrideCompliance(actor, role) && transfer.status === "awaiting_receiver" && result.verdict !== "clear" && !override,
     attachDocuments: canAttachDocuments(role, transfer.status as TransferStatus),
+    readDocuments: canReadTransferDocuments(role),
   };
   return presentTransferCompliance(result, facts.shipDate, override, abilities);
 }

@@ -128,7 +128,9 @@ describe("life cycle through the API", () => {
     expect((await s.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(409); // skipping a step
     expect((await s.post(`/api/transfers/${id}/transition`, { to: "awaiting_receiver" })).body.transfer.status).toBe("awaiting_receiver");
     expect((await s.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(403); // the sender cannot confirm
-    expect((await r.post(`/api/transfers/${id}/transition`, { to: "ready" })).body.transfer.status).toBe("ready");
+    // No weather service in this test: the receiver confirms past "forecast unavailable" with a reason.
+    expect((await r.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(409);
+    expect((await r.post(`/api/transfers/${id}/transition`, { to: "ready", override: true, reason: "Checked the forecast by phone" })).body.transfer.status).toBe("ready");
     expect((await r.post(`/api/transfers/${id}/transition`, { to: "in_transit" })).status).toBe(409); // only a pickup does that
     const legs = await s.agent.put(`/api/transfers/${id}/legs`).set("X-CSRF-Token", s.csrf).send({ legs: [{ courierId: cast.couriers[0]!.id }] });
     expect(legs.status).toBe(200);
@@ -157,7 +159,7 @@ describe("life cycle through the API", () => {
     expect(mail.rows[0]!.to_address).toBe(cast.receiver.email);
     expect(mail.rows[1]!.to_address).toBe(cast.sender.email);
     expect(log.body.entries.map((e: { kind: string }) => e.kind)).toEqual([
-      "created", "status_change", "status_change", "couriers_assigned", "handoff", "status_change", "handoff", "status_change", "check_in", "status_change", "status_change",
+      "created", "status_change", "override", "status_change", "couriers_assigned", "handoff", "status_change", "handoff", "status_change", "check_in", "status_change", "status_change",
     ]);
   });
 

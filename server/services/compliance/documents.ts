@@ -11,7 +11,7 @@ import { DocumentScanSchema, PermitDocumentSchema, TransferDocumentSchema, type 
 import { LegSchema, TransferSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { conflict, forbidden, HttpError, notFound } from "../../http/errors";
 import { parse } from "../../http/validate";
-import { canAttachDocuments, canHoldDocuments, isHolder, type DocumentViewer } from "../../policies/document.policy";
+import { canAttachDocuments, canHoldDocuments, canReadTransferDocuments, isHolder, type DocumentViewer } from "../../policies/document.policy";
 import { presentDocument } from "../../presenters/document.presenter";
 import { loadTransferForActor } from "../transfers/load";
 import { evaluateTransfer } from "./evaluation";
@@ -142,7 +142,7 @@ export async function scansOf(em: EntityManager, docs: readonly PermitDocument[]
  */
 export async function documentsForTransfer(em: EntityManager, actor: Actor, transferId: string): Promise<TransferDocumentDto[]> {
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
-  if (role === "admin") throw notFound("That transfer");
+  if (!canReadTransferDocuments(role)) throw notFound("That transfer");
   const { result, documents } = await evaluateTransfer(em, transfer);
   const satisfies = new Map<string, { ruleId: string; scientificName: string }[]>();
   for (const animal of result.animals) {

@@ -6,7 +6,7 @@ import type { EvaluateRequest, EvaluateResponse } from "@shared/compliance/schem
 import { STATE_TRANSIT_POLICIES } from "@shared/compliance/state-rules.demo";
 import { normalizeTaxonName } from "@shared/compliance/taxon";
 import { localDate } from "@shared/temperature/zoned-time";
-import { PermitDocumentSchema, TransferDocumentSchema, type PermitDocument } from "../../db/entities/compliance.entity";
+import { PermitDocumentSchema, type PermitDocument } from "../../db/entities/compliance.entity";
 import { AnimalSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { loadActiveRules } from "./rules";
 import { findTaxaByName, resolveTaxaById } from "./taxa";
@@ -44,8 +44,8 @@ export async function documentsOnFile(em: EntityManager, transfer: Transfer): Pr
   const receiverId = transfer.receiverOrganization.id;
   // One query after the other: inside the gate's transaction they share one connection.
   const docs = await em.find(PermitDocumentSchema, { organization: { $in: [senderId, receiverId] } }, { orderBy: { createdAt: "asc", id: "asc" } });
-  const attachments = await em.find(TransferDocumentSchema, { transfer: transfer.id });
-  const attached = new Set(attachments.map((a) => a.document.id));
+  const attachments = await em.execute<{ document_id: string }[]>("SELECT document_id FROM transfer_document WHERE transfer_id = ?", [transfer.id], "all");
+  const attached = new Set(attachments.map((a) => a.document_id));
   const sideOf = (orgId: string): HolderSide | undefined => (senderId === receiverId ? undefined : orgId === senderId ? "sender" : "receiver");
   return docs
     .map((doc) => ({ doc, holderSide: sideOf(doc.organization.id), attached: attached.has(doc.id) }))

@@ -2,6 +2,8 @@ import { registerTask } from "../scheduler";
 import { registerReadyGate } from "../transfers/transition";
 import { expiryReminderTask } from "./expiry-reminders";
 import { complianceGate } from "./gate";
+import { registerManifestExtras } from "../transfers/manifest-extras";
+import { manifestDocuments } from "./manifest-documents";
 
 let registered = false;
 
@@ -11,4 +13,5 @@ export function registerComplianceHooks(): void {
   registered = true;
   registerReadyGate(complianceGate);
   registerTask(expiryReminderTask);
+  registerManifestExtras(manifestDocuments);
 }

@@ -21,15 +21,25 @@ async function versionsByRule(em: EntityManager, where: { ruleKey?: string } = {
   return grouped;
 }
 
+/** Per database (ORM driver): the rules as of a row count. The table is append-only, so the count names its state. */
+const activeRulesCache = new WeakMap<object, { rowCount: number; rules: readonly Rule[] }>();
+
 /**
  * The rules an evaluation uses: every version of each rule whose newest version is not retired
- * (the evaluation picks the version in force on the ship date).
+ * (the evaluation picks the version in force on the ship date). Kept in memory between calls
+ * and re-read when a version was added; the result is shared, so treat it as read-only.
  */
-export async function loadActiveRules(em: EntityManager): Promise<Rule[]> {
-  const rows = await em.find(ComplianceRuleSchema, {}, { orderBy: { ruleKey: "asc", version: "asc" } });
-  const retired = new Map<string, boolean>();
-  for (const row of rows) retired.set(row.ruleKey, row.retired);
-  return rows.filter((row) => !retired.get(row.ruleKey)).map((row) => row.data);
+export async function loadActiveRules(em: EntityManager): Promise<readonly Rule[]> {
+  const [counted] = await em.execute<{ n: number }[]>("SELECT count(*)::int AS n FROM compliance_rule", [], "all");
+  const rowCount = counted?.n ?? 0;
+  const cached = activeRulesCache.get(em.getDriver());
+  if (cached?.rowCount === rowCount) return cached.rules;
+  const rows = await em.execute<{ rule_key: string; data: Rule; retired: boolean }[]>("SELECT rule_key, data, retired FROM compliance_rule ORDER BY rule_key, version", [], "all");
+  const retired = new Map(rows.map((row) => [row.rule_key, row.retired]));
+  const rules = Object.freeze(rows.filter((row) => !retired.get(row.rule_key)).map((row) => row.data));
+  // A version added between the two reads only makes the next call read again.
+  activeRulesCache.set(em.getDriver(), { rowCount, rules });
+  return rules;
 }
 
 /** The newest version of each rule, filtered by jurisdiction and by a taxon name at any rank. */

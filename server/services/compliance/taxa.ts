@@ -40,48 +40,60 @@ export function resolvedTaxonOf(nodeId: string, nodes: ReadonlyMap<string, Taxon
 
 type NodeRow = { id: string; rank: TaxonRank; scientific_name: string; parent_id: string | null; synonyms: string[]; venomous: boolean };
 
+/** The catalogue rows from the taxa chosen by `startSql` (a query of taxon ids) up to their classes. */
+const lineageSql = (startSql: string) => `chain AS (
+    SELECT t.id, t.rank, t.scientific_name, t.parent_id, t.synonyms, t.venomous, 0 AS depth FROM taxon t WHERE t.id IN (${startSql})
+    UNION
+    SELECT p.id, p.rank, p.scientific_name, p.parent_id, p.synonyms, p.venomous, c.depth + 1
+      FROM taxon p JOIN chain c ON p.id = c.parent_id WHERE c.depth < ${LINEAGE_DEPTH_MAX}
+  )`;
+
+const NODES_JSON = `(SELECT coalesce(json_agg(DISTINCT jsonb_build_object('id', id, 'rank', rank, 'scientific_name', scientific_name, 'parent_id', parent_id, 'synonyms', synonyms, 'venomous', venomous)), '[]') FROM chain)`;
+
+function resolveAll(ids: readonly string[], rows: readonly NodeRow[]): Map<string, ResolvedTaxon> {
+  const nodes = new Map<string, TaxonNode>(
+    rows.map((r) => [r.id, { id: r.id, rank: r.rank, scientificName: r.scientific_name, parentId: r.parent_id, synonyms: r.synonyms, venomous: r.venomous }]),
+  );
+  return new Map(ids.filter((id) => nodes.has(id)).map((id) => [id, resolvedTaxonOf(id, nodes)]));
+}
+
 /** Resolves catalogue taxa by id, with their ancestors, in one round trip. */
 export async function resolveTaxaById(em: EntityManager, ids: readonly string[]): Promise<Map<string, ResolvedTaxon>> {
   const unique = [...new Set(ids)];
   if (unique.length === 0) return new Map();
-  const rows = await em.execute<NodeRow[]>(
-    `WITH RECURSIVE chain AS (
-       SELECT t.id, t.rank, t.scientific_name, t.parent_id, t.synonyms, t.venomous, 0 AS depth
-         FROM taxon t WHERE t.id IN (SELECT json_array_elements_text(?::json)::uuid)
-       UNION
-       SELECT p.id, p.rank, p.scientific_name, p.parent_id, p.synonyms, p.venomous, c.depth + 1
-         FROM taxon p JOIN chain c ON p.id = c.parent_id WHERE c.depth < ?
-     )
-     SELECT DISTINCT id, rank, scientific_name, parent_id, synonyms, venomous FROM chain`,
-    [JSON.stringify(unique), LINEAGE_DEPTH_MAX],
+  const [row] = await em.execute<{ nodes: NodeRow[] }[]>(
+    `WITH RECURSIVE ${lineageSql("SELECT json_array_elements_text(?::json)::uuid")} SELECT ${NODES_JSON} AS nodes`,
+    [JSON.stringify(unique)],
     "all",
   );
-  const nodes = new Map<string, TaxonNode>(
-    rows.map((r) => [r.id, { id: r.id, rank: r.rank, scientificName: r.scientific_name, parentId: r.parent_id, synonyms: r.synonyms, venomous: r.venomous }]),
-  );
-  return new Map(unique.filter((id) => nodes.has(id)).map((id) => [id, resolvedTaxonOf(id, nodes)]));
+  return resolveAll(unique, row?.nodes ?? []);
 }
 
 /**
- * Finds catalogue taxa by scientific name or synonym, ignoring case and spacing. A name that is
- * one taxon's scientific name and another's synonym goes to the first. Unknown names are absent.
+ * Finds catalogue taxa by scientific name or synonym, ignoring case and spacing, with their
+ * lineages, in one round trip. A name that is one taxon's scientific name and another's synonym
+ * goes to the first. Unknown names are absent.
  */
 export async function findTaxaByName(em: EntityManager, names: readonly string[]): Promise<Map<string, ResolvedTaxon>> {
   const keys = [...new Set(names.map(normalizeTaxonName))];
   if (keys.length === 0) return new Map();
-  const rows = await em.execute<{ key: string; taxon_id: string }[]>(
-    `SELECT DISTINCT ON (lower(tn.name)) lower(tn.name) AS key, tn.taxon_id
-       FROM taxon_name tn
-      WHERE lower(tn.name) IN (SELECT json_array_elements_text(?::json)) AND tn.kind IN ('scientific', 'synonym')
-      ORDER BY lower(tn.name), (tn.kind = 'scientific') DESC, tn.taxon_id`,
+  const [row] = await em.execute<{ named: { key: string; taxon_id: string }[]; nodes: NodeRow[] }[]>(
+    `WITH RECURSIVE named AS (
+       SELECT DISTINCT ON (lower(tn.name)) lower(tn.name) AS key, tn.taxon_id
+         FROM taxon_name tn
+        WHERE lower(tn.name) IN (SELECT json_array_elements_text(?::json)) AND tn.kind IN ('scientific', 'synonym')
+        ORDER BY lower(tn.name), (tn.kind = 'scientific') DESC, tn.taxon_id
+     ), ${lineageSql("SELECT taxon_id FROM named")}
+     SELECT (SELECT coalesce(json_agg(named), '[]') FROM named) AS named, ${NODES_JSON} AS nodes`,
     [JSON.stringify(keys)],
     "all",
   );
-  const taxa = await resolveTaxaById(em, rows.map((r) => r.taxon_id));
+  const named = row?.named ?? [];
+  const taxa = resolveAll(named.map((n) => n.taxon_id), row?.nodes ?? []);
   const byKey = new Map<string, ResolvedTaxon>();
-  for (const row of rows) {
-    const taxon = taxa.get(row.taxon_id);
-    if (taxon) byKey.set(row.key, taxon);
+  for (const { key, taxon_id } of named) {
+    const taxon = taxa.get(taxon_id);
+    if (taxon) byKey.set(key, taxon);
   }
   return byKey;
 }

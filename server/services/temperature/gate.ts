@@ -32,5 +32,5 @@ export const temperatureGate: ReadyGate = async ({ em, actor, transfer, input })
     );
   }
   if (!input.reason) throw badRequest("reason: say why the animals should travel despite the temperature check; it goes into the custody log", { field: "reason" });
-  await appendCustody(em, transfer.id, actor, "override", { check: "temperature", verdict: report.verdict, advice: report.advice.code, reason: input.reason });
+  await appendCustody(em, transfer.id, actor, "override", { gate: "temperature", verdict: report.verdict, advice: report.advice.code, reason: input.reason });
 };

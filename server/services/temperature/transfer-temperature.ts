@@ -15,7 +15,7 @@ export async function animalClasses(em: EntityManager, taxonIds: readonly string
   if (taxonIds.length === 0) return new Map();
   const rows = await em.execute<{ id: string; class_name: string | null }[]>(
     `WITH RECURSIVE up AS (
-       SELECT t.id AS start_id, t.id, t.parent_id, t.rank, t.scientific_name, 0 AS depth FROM taxon t WHERE t.id = ANY(?::uuid[])
+       SELECT t.id AS start_id, t.id, t.parent_id, t.rank, t.scientific_name, 0 AS depth FROM taxon t WHERE t.id IN (?)
        UNION ALL
        SELECT up.start_id, p.id, p.parent_id, p.rank, p.scientific_name, up.depth + 1 FROM up JOIN taxon p ON p.id = up.parent_id WHERE up.depth < 10
      )

@@ -1,16 +1,10 @@
-import { Card, PageHeader } from "@/components/ui/page";
-import { roleLabel } from "@/lib/labels";
 import { useSession } from "@/features/auth/api/session";
+import { CourierLegsRoute } from "@/features/courier/routes/courier-legs";
+import { TransfersListRoute } from "@/features/transfers/routes/transfers-list";
 
+/** Home is the work: couriers see the legs they carry, everyone else the transfers list. */
 export function HomeRoute() {
   const { data } = useSession();
   if (!data) return null;
-  return (
-    <>
-      <PageHeader title={`Hello, ${data.user.displayName}`} eyebrow={roleLabel[data.user.role]} />
-      <Card>
-        <p>Your transfers appear here.</p>
-      </Card>
-    </>
-  );
+  return data.abilities.carryTransfers ? <CourierLegsRoute /> : <TransfersListRoute />;
 }

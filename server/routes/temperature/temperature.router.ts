@@ -1,0 +1,115 @@
+import { Router, type Request } from "express";
+import { z } from "zod";
+import { PROFILE_GROUPS } from "@shared/constants";
+import { idSchema } from "@shared/schemas/common";
+import { profileDataSchema } from "@shared/temperature/profile-schema";
+import { whatIfInputSchema } from "@shared/temperature/schemas";
+import type { AppContext } from "../../context";
+import { badRequest, HttpError, unavailable } from "../../http/errors";
+import { currentUser, requirePolicy, requireUser } from "../../http/guards";
+import { parse } from "../../http/validate";
+import { canEditTemperatureProfiles, canPlanTrips, canSwitchWeatherScenario } from "../../policies/temperature.policy";
+import { presentProfile, presentTransferTemperature } from "../../presenters/temperature.presenter";
+import { registerTask } from "../../services/scheduler";
+import { latestAlert, recentChecks } from "../../services/temperature/checks";
+import type { WeatherSource } from "../../services/temperature/forecasts";
+import { configureTemperatureGate, temperatureGate } from "../../services/temperature/gate";
+import { loadProfileRows, loadProfiles, saveProfile } from "../../services/temperature/profiles";
+import { FORECAST_PRUNE_TASK, TEMPERATURE_RECHECK_TASK } from "../../services/temperature/recheck";
+import { assessTransferTemperature } from "../../services/temperature/transfer-temperature";
+import { assessWhatIf, findTaxonByName } from "../../services/temperature/what-if";
+import { loadTransferForActor } from "../../services/transfers/load";
+import { registerReadyGate } from "../../services/transfers/transition";
+import { searchTaxa } from "../taxa/taxa.router";
+
+let hooksRegistered = false;
+
+/** The ready-to-ship gate and the periodic work, once per process, in the order the app mounts its routers. */
+function registerTemperatureHooks(): void {
+  if (hooksRegistered) return;
+  hooksRegistered = true;
+  registerReadyGate(temperatureGate);
+  registerTask(TEMPERATURE_RECHECK_TASK);
+  registerTask(FORECAST_PRUNE_TASK);
+}
+
+const groupParam = z.enum(PROFILE_GROUPS, { message: "Name a temperature profile group" });
+const scenarioSchema = z.strictObject({ scenario: z.string().regex(/^[a-z_]{1,40}$/, "a scenario name such as heat_wave") });
+const FAKE_CONTROL_TIMEOUT_MS = 3000;
+
+/** Asks the weather fake's control endpoint; a fake that does not answer is a 503. */
+async function callWeatherFake(controlUrl: string, init: RequestInit = {}): Promise<Response> {
+  try {
+    return await fetch(controlUrl, { ...init, redirect: "error", signal: AbortSignal.timeout(FAKE_CONTROL_TIMEOUT_MS) });
+  } catch (err) {
+    throw unavailable(`The local weather fake is not answering (${(err as Error).message}).`);
+  }
+}
+
+function weatherFakeUrl(ctx: AppContext): string {
+  const url = ctx.env.WEATHER_FAKE_CONTROL_URL;
+  if (!url) throw new HttpError(404, "not_found", "No local weather fake is configured.");
+  return url;
+}
+
+/**
+ * Temperature safety: a transfer's verdict, the what-if, the profiles admins keep, and (demo
+ * only) the weather fake's scenario. Mounted at the API root; every route names its full path.
+ * Building it also wires the ready-to-ship gate and the re-check before departure.
+ */
+export function temperatureRouter(ctx: AppContext): Router {
+  const source: WeatherSource = { weatherUrl: ctx.env.WEATHER_URL, db: ctx.pool };
+  configureTemperatureGate(source);
+  registerTemperatureHooks();
+  const router = Router();
+
+  router.get("/transfers/:id/temperature", requireUser, async (req: Request, res) => {
+    const { transfer } = await loadTransferForActor(req.em, parse(idSchema, req.params.id), currentUser(req));
+    const report = await assessTransferTemperature({ em: req.em, source, transfer, nowMs: Date.now() });
+    const [alert, checks] = await Promise.all([latestAlert(req.em, transfer.id), recentChecks(req.em, transfer.id)]);
+    res.json(presentTransferTemperature(transfer, report, alert, checks));
+  });
+
+  router.post("/temperature/assess", requirePolicy(canPlanTrips, "Planning a trip is for keepers and administrators."), async (req, res) => {
+    const input = parse(whatIfInputSchema, req.body);
+    const taxon = input.scientificName ? await findTaxonByName(req.em, input.scientificName) : null;
+    if (input.scientificName && !taxon) {
+      const suggestions = (await searchTaxa(ctx, input.scientificName, 5)).map((t) => t.scientificName);
+      throw badRequest(`scientificName: ${input.scientificName} is not in the species list`, { field: "scientificName", suggestions });
+    }
+    res.json(await assessWhatIf({ em: req.em, source, input, taxon, nowMs: Date.now() }));
+  });
+
+  router.get("/temperature/profiles", requireUser, async (req, res) => {
+    const [profiles, rows] = await Promise.all([loadProfiles(req.em), loadProfileRows(req.em)]);
+    res.json({ profiles: PROFILE_GROUPS.map((g) => presentProfile(g, profiles[g], rows.get(g))), abilities: { edit: canEditTemperatureProfiles(currentUser(req)) } });
+  });
+
+  router.put("/temperature/profiles/:group", requirePolicy(canEditTemperatureProfiles, "Only an administrator can edit temperature profiles."), async (req, res) => {
+    const group = parse(groupParam, req.params.group);
+    const data = parse(profileDataSchema, req.body);
+    await saveProfile({ em: req.em, actor: currentUser(req), input: { group, data } });
+    const em = req.em.fork();
+    const [profiles, rows] = await Promise.all([loadProfiles(em), loadProfileRows(em)]);
+    res.json({ profile: presentProfile(group, profiles[group], rows.get(group)) });
+  });
+
+  router.get("/dev/weather-scenario", requirePolicy(canSwitchWeatherScenario), async (_req, res) => {
+    const response = await callWeatherFake(weatherFakeUrl(ctx));
+    const body = (await response.json()) as { scenario: string; scenarios: string[] };
+    res.json({ scenario: body.scenario, scenarios: body.scenarios });
+  });
+
+  router.post("/dev/weather-scenario", requirePolicy(canSwitchWeatherScenario), async (req, res) => {
+    const controlUrl = weatherFakeUrl(ctx);
+    const { scenario } = parse(scenarioSchema, req.body);
+    const response = await callWeatherFake(controlUrl, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ scenario }) });
+    const body = (await response.json().catch(() => ({}))) as { scenario?: string; reason?: string };
+    if (!response.ok) throw badRequest(`scenario: ${body.reason ?? `the weather fake refused it (${response.status})`}`, { field: "scenario" });
+    // What the cache holds came from the old scenario; the demo should show the new one at once.
+    await ctx.pool.query("DELETE FROM forecast_hour");
+    res.json({ scenario: body.scenario ?? scenario });
+  });
+
+  return router;
+}

@@ -1,0 +1,17 @@
+import { TransferDetailRoute } from "@/features/transfers/routes/transfer-detail";
+import { ComplianceSection } from "@/features/compliance/components/compliance-section";
+import { TemperatureSection } from "@/features/temperature/components/temperature-section";
+
+/** The transfer page: the record, with the compliance and temperature checks composed in. */
+export function TransferPageRoute() {
+  return (
+    <TransferDetailRoute
+      checks={(t) => (
+        <div className="grid gap-5">
+          <ComplianceSection transferId={t.id} />
+          <TemperatureSection transferId={t.id} />
+        </div>
+      )}
+    />
+  );
+}

@@ -1,0 +1,8 @@
+import type { TransferStatus } from "@shared/constants";
+import { statusLabel, statusTone } from "@/lib/transfer-labels";
+import { Badge } from "./feedback";
+
+/** A transfer's state in our words and colours. */
+export function StatusBadge({ status }: { status: TransferStatus }) {
+  return <Badge tone={statusTone[status]}>{statusLabel[status]}</Badge>;
+}

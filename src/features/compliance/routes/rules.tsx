@@ -1,0 +1,130 @@
+import { useState, type FormEvent } from "react";
+import { JURISDICTIONS, jurisdictionName, type Jurisdiction } from "@shared/compliance/jurisdiction";
+import type { Rule } from "@shared/compliance/rule";
+import type { RuleListQuery, RuleSummaryDto } from "@shared/schemas/compliance";
+import { Button } from "@/components/ui/button";
+import { SelectField, TextField } from "@/components/ui/field";
+import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
+import { Tag } from "../components/tag";
+import { Card, PageHeader } from "@/components/ui/page";
+import { Table, Td, Th } from "@/components/ui/table";
+import { useViewer } from "@/lib/viewer";
+import { useRuleHistory, useRules } from "../api/rules";
+import { RuleForm } from "../components/rule-form";
+
+const EFFECT_LABELS = {
+  prohibited: "Prohibited",
+  permit_required: "Permit required",
+  certificate_required: "Certificate required",
+  packing: "Packing and marking",
+  advisory: "Advice",
+} as const;
+
+const inForce = (rule: Rule) =>
+  `In force ${rule.effectiveFrom ? `from ${rule.effectiveFrom}` : "since a date not recorded"}${rule.effectiveTo ? ` until ${rule.effectiveTo}` : ", still in force"}`;
+
+const place = (j: Jurisdiction) => (j === "US" ? "Federal" : jurisdictionName(j));
+
+function RuleHistory({ ruleKey, reviewer }: { ruleKey: string; reviewer: string }) {
+  const history = useRuleHistory(ruleKey);
+  const [editing, setEditing] = useState(false);
+  if (history.isPending) return <Loading label="Loading the rule's versions…" />;
+  if (history.error) return <Notice tone="block" role="alert">{(history.error as Error).message}</Notice>;
+  const [current] = history.data.versions;
+  if (!current) return null;
+  return (
+    <Card title={`${ruleKey}: version ${current.rule.version}${current.retired ? " (retired)" : ""}`} actions={editing ? null : <Button onClick={() => setEditing(true)}>Edit</Button>} className="mb-6">
+      {editing ? (
+        <RuleForm key={current.rule.version} current={current} reviewer={reviewer} onDone={() => setEditing(false)} />
+      ) : (
+        <ol className="flex flex-col gap-3" aria-label="Versions, newest first">
+          {history.data.versions.map((v) => (
+            <li key={v.rule.version} className="rounded-card border border-rule bg-paper px-4 py-3 text-sm">
+              <p className="font-semibold">
+                Version {v.rule.version}{v.retired ? " — retired" : ""} · reviewed {v.rule.reviewedOn} by {v.rule.reviewedBy}
+                <span className="font-normal text-ink-soft"> · saved {new Date(v.createdAt).toLocaleDateString()}{v.createdBy ? ` by ${v.createdBy.displayName}` : " with the seed library"}</span>
+              </p>
+              <p className="mt-1">{v.rule.summary}</p>
+              <p className="mt-1 text-ink-soft">
+                {v.rule.citation.url ? <a className="text-fern underline underline-offset-2" href={v.rule.citation.url} target="_blank" rel="noopener noreferrer">{v.rule.citation.text}</a> : v.rule.citation.text}
+              </p>
+              <p className="mt-1 text-xs text-ink-soft">{inForce(v.rule)} · covers {v.rule.selector.taxa.join(", ")}{v.rule.selector.exceptTaxa?.length ? `, except ${v.rule.selector.exceptTaxa.join(", ")}` : ""}</p>
+            </li>
+          ))}
+        </ol>
+      )}
+    </Card>
+  );
+}
+
+function RuleRow({ summary, selected, onSelect }: { summary: RuleSummaryDto; selected: boolean; onSelect: () => void }) {
+  const { rule, retired } = summary.current;
+  return (
+    <tr className={selected ? "bg-fern-light/50" : undefined}>
+      <Td>{place(rule.jurisdiction)}</Td>
+      <Td className="max-w-md">
+        <p>{rule.summary}</p>
+        <p className="mt-1 text-xs text-ink-soft">{rule.citation.text}</p>
+      </Td>
+      <Td>
+        <div className="flex flex-col items-start gap-1">
+          <Tag tone={rule.effect.kind === "prohibited" ? "block" : rule.effect.kind.endsWith("required") ? "caution" : "info"}>{EFFECT_LABELS[rule.effect.kind]}</Tag>
+          {rule.demo ? <Tag tone="neutral">Demo rule</Tag> : null}
+          {retired ? <Tag tone="neutral">Retired</Tag> : null}
+        </div>
+      </Td>
+      <Td>{rule.reviewedOn}<br /><span className="text-ink-soft">{rule.reviewedBy}</span></Td>
+      <Td>v{rule.version}{summary.versionCount > 1 ? ` of ${summary.versionCount}` : ""}</Td>
+      <Td className="text-right"><Button variant="secondary" onClick={onSelect} aria-pressed={selected}>Versions</Button></Td>
+    </tr>
+  );
+}
+
+/** The rule library for admins: filter by state and taxon, edit with citation and review date, every version kept. */
+export function RulesRoute() {
+  const viewer = useViewer();
+  const [filters, setFilters] = useState<RuleListQuery>({});
+  const [draft, setDraft] = useState<{ jurisdiction: string; taxon: string }>({ jurisdiction: "", taxon: "" });
+  const [selected, setSelected] = useState<string | null>(null);
+  const rules = useRules(filters);
+
+  const apply = (event: FormEvent) => {
+    event.preventDefault();
+    setFilters({
+      ...(draft.jurisdiction ? { jurisdiction: draft.jurisdiction as RuleListQuery["jurisdiction"] } : {}),
+      ...(draft.taxon.trim() ? { taxon: draft.taxon.trim() } : {}),
+    });
+  };
+
+  return (
+    <>
+      <PageHeader title="Rule library" eyebrow="Administration">
+        Federal and state rules the compliance check applies, each with its source and last review. Demo rules are invented and say so.
+      </PageHeader>
+      <form onSubmit={apply} className="mb-6 flex flex-wrap items-end gap-3" role="search">
+        <div className="w-56">
+          <SelectField label="State" value={draft.jurisdiction} onChange={(e) => setDraft({ ...draft, jurisdiction: e.target.value })}
+            options={[{ value: "", label: "All" }, ...JURISDICTIONS.map((j) => ({ value: j, label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})` }))]} />
+        </div>
+        <div className="w-72">
+          <TextField label="Taxon (any rank)" placeholder="e.g. Python bivittatus or Testudines" value={draft.taxon} onChange={(e) => setDraft({ ...draft, taxon: e.target.value })} />
+        </div>
+        <Button type="submit" variant="secondary">Filter</Button>
+      </form>
+      {selected ? <RuleHistory key={selected} ruleKey={selected} reviewer={viewer.user.displayName} /> : null}
+      {rules.isPending ? (
+        <Loading label="Loading the rules…" />
+      ) : rules.error ? (
+        <Notice tone="block" role="alert">{(rules.error as Error).message}</Notice>
+      ) : rules.data.length === 0 ? (
+        <EmptyState title="No rule matches">Try another state, or a broader taxon such as the family or the order.</EmptyState>
+      ) : (
+        <Table caption="Rules" head={<tr><Th>Where</Th><Th>Rule</Th><Th>Effect</Th><Th>Reviewed</Th><Th>Version</Th><Th><span className="sr-only">Actions</span></Th></tr>}>
+          {rules.data.map((summary) => (
+            <RuleRow key={summary.ruleKey} summary={summary} selected={selected === summary.ruleKey} onSelect={() => setSelected(selected === summary.ruleKey ? null : summary.ruleKey)} />
+          ))}
+        </Table>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,67 @@
+import { useId } from "react";
+import { blocksShipping, type TransferTemperatureDto } from "@shared/temperature/report";
+import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
+import { Loading, Notice } from "@/components/ui/feedback";
+import { formatDateTime } from "@/lib/datetime";
+import { useTransferTemperature } from "../api/transfer-temperature";
+import { AssessmentDetails } from "./assessment-details";
+import { TemperatureCautions } from "./temperature-cautions";
+import { TemperatureChart } from "./temperature-chart";
+
+/**
+ * The transfer page's temperature section: the chart of the trip, the advice and packing, a
+ * safer day, each box's verdict, the re-checks before departure and the cautions. It fetches
+ * its own data; place it on the transfer page with the transfer's id.
+ */
+export function TemperatureSection({ transferId }: { transferId: string }) {
+  const headingId = useId();
+  const temperature = useTransferTemperature(transferId);
+  return (
+    <section aria-labelledby={headingId} className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5">
+      <h2 id={headingId} className="text-lg font-semibold">Temperature on the way</h2>
+      {temperature.isPending ? (
+        <Loading label="Reading the forecast…" />
+      ) : temperature.error ? (
+        <Notice tone="block" role="alert" title="The temperature check did not load">
+          {(temperature.error as Error).message} Until it does, treat the trip as not checked.
+        </Notice>
+      ) : (
+        <TemperatureBody report={temperature.data} />
+      )}
+    </section>
+  );
+}
+
+function TemperatureBody({ report }: { report: TransferTemperatureDto }) {
+  return (
+    <>
+      {report.alert ? (
+        <Notice tone="caution" role="alert" title={`The advice changed (${formatDateTime(report.alert.at)})`}>
+          Before: {report.alert.previous.message} Now: {report.alert.current.message} Both parties were e-mailed.
+        </Notice>
+      ) : null}
+      <AssessmentDetails report={report} showBoxes />
+      {blocksShipping(report.verdict) ? (
+        <Notice tone="block" title="This blocks “cleared to travel”">
+          While the verdict is “{VERDICT_WORDS[report.verdict].toLowerCase()}”, the receiver can only confirm the transfer by overriding the
+          temperature check with a reason. The reason, the verdict and who gave it are written into the custody log.
+        </Notice>
+      ) : null}
+      <TemperatureChart report={report} />
+      {report.checks.length > 0 ? (
+        <div className="text-sm">
+          <h3 className="font-semibold">Checks kept on the record</h3>
+          <ul className="list-disc pl-5 text-ink-soft">
+            {report.checks.map((c) => (
+              <li key={c.id}>
+                {formatDateTime(c.checkedAt)}, {CHECK_MARK_WORDS[c.mark]}: {VERDICT_WORDS[c.verdict].toLowerCase()}
+              </li>
+            ))}
+          </ul>
+          <p className="text-ink-faint">Hatchway checks again 24 hours and 4 hours before departure and e-mails both parties when the advice changes.</p>
+        </div>
+      ) : null}
+      <TemperatureCautions />
+    </>
+  );
+}

@@ -1,0 +1,98 @@
+import type { ReactNode } from "react";
+import { PaperworkLinks } from "@/components/ui/paperwork-links";
+import { useParams } from "react-router";
+import type { TransferDto } from "@shared/schemas/transfer";
+import { TransportCautions } from "@/components/ui/cautions";
+import { Loading, Notice } from "@/components/ui/feedback";
+import { PageHeader } from "@/components/ui/page";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { ApiError } from "@/lib/api-client";
+import { formatDateTime } from "@/lib/datetime";
+import { viewerRoleLabel } from "@/lib/transfer-labels";
+import { useTransfer } from "@/lib/transfer-queries";
+import { ActionsBar } from "../components/actions-bar";
+import { BoxesSection } from "../components/boxes-section";
+import { CustodySection } from "../components/custody-section";
+import { DiscussionSection } from "../components/discussion-section";
+import { HistorySection } from "../components/history-section";
+import { LegsSection } from "../components/legs-section";
+import { OverviewSection } from "../components/overview-section";
+import { PackingSection } from "../components/packing-section";
+
+type Props = {
+  /**
+   * The compliance and temperature verdicts, composed in by src/app (features do not import
+   * each other). Rendered between the overview and the boxes; nothing is shown without it.
+   */
+  checks?: (transfer: TransferDto) => ReactNode;
+};
+
+/** The edit history is the parties' record; the server keeps it from couriers. */
+const showHistory = (t: TransferDto) => t.viewerRole !== "courier";
+
+function Contents({ transfer: t, withChecks }: { transfer: TransferDto; withChecks: boolean }) {
+  const items = [
+    ["overview", "Who and where"],
+    withChecks ? ["checks", "Rules and weather"] : null,
+    ["boxes", "Boxes and animals"],
+    ["packing", "Packing"],
+    ["legs", "Couriers"],
+    ["custody", "Custody trail"],
+    t.abilities.discuss ? ["discussion", "Conversation"] : null,
+    showHistory(t) ? ["history", "Change history"] : null,
+  ].filter((i): i is [string, string] => i !== null);
+  return (
+    <nav aria-label="On this page" className="text-sm">
+      <ul className="flex flex-wrap gap-x-4 gap-y-1">
+        {items.map(([id, label]) => (
+          <li key={id}>
+            <a href={`#${id}`} className="inline-flex min-h-11 items-center text-fern underline-offset-2 hover:underline">
+              {label}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
+
+/** The shared record of one transfer, as the caller may see it. */
+export function TransferDetailRoute({ checks }: Props) {
+  const { transferId = "" } = useParams();
+  const transfer = useTransfer(transferId);
+  if (transfer.isPending) return <Loading label="Loading the transfer…" />;
+  if (transfer.error) {
+    const missing = transfer.error instanceof ApiError && transfer.error.status === 404;
+    return (
+      <Notice tone="block" role="alert" title={missing ? "No such transfer" : "This transfer did not load"}>
+        {missing ? "It does not exist, or it is not one of yours." : (transfer.error as Error).message}
+      </Notice>
+    );
+  }
+  const t = transfer.data;
+  return (
+    <div className="grid gap-5">
+      <PageHeader title={`Transfer ${t.number}`} eyebrow={viewerRoleLabel[t.viewerRole]} actions={<StatusBadge status={t.status} />}>
+        {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state} · leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+      </PageHeader>
+      {t.status === "cancelled" && t.cancelledReason ? <Notice tone="block" title="Cancelled">{t.cancelledReason}</Notice> : null}
+      {t.reconfirmationReason && t.status === "awaiting_receiver" ? <Notice tone="caution" title="Changed after confirmation">{t.reconfirmationReason}</Notice> : null}
+      <ActionsBar transfer={t} />
+      <PaperworkLinks transferId={t.id} />
+      <TransportCautions />
+      <Contents transfer={t} withChecks={Boolean(checks)} />
+      <OverviewSection transfer={t} />
+      {checks ? (
+        <section id="checks" aria-label="Rules and weather" className="scroll-mt-4">
+          {checks(t)}
+        </section>
+      ) : null}
+      <BoxesSection transfer={t} />
+      <PackingSection transfer={t} />
+      <LegsSection transfer={t} />
+      <CustodySection transfer={t} />
+      <DiscussionSection transfer={t} />
+      {showHistory(t) ? <HistorySection transfer={t} /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,92 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { expectAccessible, launchBrowser, newPage, screenshot, signInAs } from "../support/browser";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(() => browser?.close());
+
+const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
+/** ISO 32000-1 §7.5.2 and ISO/IEC 15948 §5.2 signatures [published]; the rest is filler. */
+const PDF = Buffer.from("%PDF-1.4\n1 0 obj\n<< /Type /Catalog >>\nendobj\n%%EOF\n", "latin1");
+const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
+
+describe("compliance screens", () => {
+  it("a member records a CVI, sees it expiring, uploads scans and previews the image", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, "sender@demo.hatchway.test");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Permits" }).click();
+    await page.getByRole("button", { name: "Add a document" }).click();
+    await page.getByLabel("Kind").selectOption({ label: "CVI or health certificate" });
+    await page.getByLabel("Issued by").selectOption("TN");
+    await page.getByLabel("Number").fill("DEMO-CVI-E2E-0001");
+    await page.getByLabel("Valid to (last valid day)").fill(day(20));
+    await page.getByLabel("Issued on").fill(day(0));
+    await page.getByLabel("Species covered, one per line").fill("Stigmochelys pardalis");
+    await page.getByLabel("Veterinarian", { exact: true }).fill("Dr. Demo Vet");
+    await page.getByLabel("Accredited veterinarian").selectOption("true");
+    await page.getByLabel("Statements, one per line").fill("Examined and found free of ticks");
+    await page.getByRole("button", { name: "Add the document" }).click();
+
+    const row = page.getByRole("row", { name: /DEMO-CVI-E2E-0001/ });
+    // [published] Gregorian calendar: the last valid day 20 days ahead is within the 30-day warning
+    await expect.poll(() => row.getByText(/Expires soon — 20 days left/).count()).toBe(1);
+    await row.getByRole("button", { name: "0 scans" }).click();
+    const input = page.getByLabel("Add a scan (PDF, JPEG or PNG, up to 10 MB)");
+    await input.setInputFiles({ name: "cvi-front.png", mimeType: "image/png", buffer: PNG });
+    await expect.poll(() => page.getByRole("button", { name: "Preview" }).count()).toBe(1);
+    await input.setInputFiles({ name: "cvi.pdf", mimeType: "application/pdf", buffer: PDF });
+    await expect.poll(() => page.getByRole("button", { name: "Get the PDF" }).count()).toBe(1);
+    await page.getByRole("button", { name: "Preview" }).click();
+    await expect.poll(() => page.getByRole("img", { name: "Scan cvi-front.png" }).isVisible()).toBe(true);
+    await page.getByRole("button", { name: "Get the PDF" }).click();
+    await expect.poll(() => page.getByRole("link", { name: "Download the PDF" }).count()).toBe(1);
+    // A file that is not a PDF, JPEG or PNG is named at once, before any upload.
+    await input.setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("hello") });
+    await expect.poll(() => page.getByText("That file is not a PDF, JPEG or PNG.", { exact: false }).count()).toBe(1);
+    await expectAccessible(page);
+    await screenshot(page, "compliance-permits");
+    await context.close();
+  });
+
+  it("“Can it travel?” blocks a Burmese python going to Hawaii and cites the sources", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, "sender@demo.hatchway.test");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Can it travel?" }).click();
+    await page.getByLabel("From").selectOption("CA");
+    await page.getByLabel("To").selectOption("HI");
+    await page.getByRole("combobox", { name: "Species" }).fill("Burmese python");
+    await page.getByRole("option", { name: /Python bivittatus/ }).first().click();
+    await page.getByRole("button", { name: "Check the rules" }).click();
+    // [published] 18 U.S.C. 42 / 50 CFR 16.15 and HRS 150A-6: both forbid this shipment
+    await expect.poll(() => page.getByRole("status").filter({ hasText: "Blocked" }).count()).toBe(1);
+    const findings = page.getByRole("region", { name: "Findings for Python bivittatus" });
+    expect(await findings.getByRole("link", { name: /18 U\.S\.C\. 42/ }).count()).toBe(1);
+    expect(await findings.getByText(/Hawaii Revised Statutes 150A-6/).count()).toBe(1);
+    expect(await page.getByText(/confirm the requirements with the state wildlife agency/).count()).toBe(1);
+    await expectAccessible(page);
+    await screenshot(page, "compliance-can-it-travel");
+    await context.close();
+  });
+
+  it("an admin filters the rule library, saves a new version and sees the history", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, "admin@demo.hatchway.test");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Rules" }).click();
+    await page.getByLabel("State").selectOption("HI");
+    await page.getByRole("button", { name: "Filter" }).click();
+    const row = page.getByRole("row", { name: /forbids bringing any live snake/ });
+    await row.getByRole("button", { name: "Versions" }).click();
+    await page.getByRole("button", { name: "Edit" }).click();
+    await page.getByLabel("Reviewed by").fill("E2E reviewer");
+    await page.getByRole("button", { name: "Save as version 2" }).click();
+    const versions = page.getByRole("list", { name: "Versions, newest first" });
+    await expect.poll(() => versions.getByRole("listitem").count()).toBe(2);
+    expect(await versions.getByRole("listitem").first().textContent()).toContain("by E2E reviewer");
+    await expectAccessible(page);
+    await screenshot(page, "compliance-rules");
+    await context.close();
+  });
+});
