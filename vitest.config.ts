@@ -51,6 +51,8 @@ export default defineConfig({
           include: ["tests/e2e/**/*.e2e.ts"],
           globalSetup: ["tests/support/e2e-setup.ts"],
           fileParallelism: false,
+          // A browser step on a loaded CI machine can take seconds; 1 s (the default) made polls flaky.
+          expect: { poll: { timeout: 10_000, interval: 100 } },
           testTimeout: 90_000,
           hookTimeout: 180_000,
         },

@@ -81,7 +81,12 @@ describe("compliance screens", () => {
     await row.getByRole("button", { name: "Versions" }).click();
     await page.getByRole("button", { name: "Edit" }).click();
     await page.getByLabel("Reviewed by").fill("E2E reviewer");
-    await page.getByRole("button", { name: "Save as version 2" }).click();
+    const [saved] = await Promise.all([
+      page.waitForResponse((r) => r.url().endsWith("/versions") && r.request().method() === "POST"),
+      page.getByRole("button", { name: "Save as version 2" }).click(),
+    ]);
+    expect(saved.status()).toBe(201);
+    // The form closes once the rule list and history have been fetched again.
     const versions = page.getByRole("list", { name: "Versions, newest first" });
     await expect.poll(() => versions.getByRole("listitem").count()).toBe(2);
     expect(await versions.getByRole("listitem").first().textContent()).toContain("by E2E reviewer");
