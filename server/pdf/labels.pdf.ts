@@ -47,7 +47,7 @@ function drawLabel(ctx: Ctx, input: ManifestInput, box: ManifestBox): void {
   y = drawParty(ctx, y - 4, "TO (CONSIGNEE)", input.receiver, 10);
   const bottomTop = M + QR_SIZE_PT + 8;
   drawContents(ctx, y - 4, bottomTop + 4, box);
-  drawBottom(ctx, input, bottomTop);
+  drawBottom(ctx, input, box, bottomTop);
 }
 
 function line(ctx: Ctx, text: string, x: number, y: number, sizePt: number, bold = false, color: Color = COLORS.ink): void {
@@ -173,14 +173,14 @@ function drawContents(ctx: Ctx, topY: number, bottomY: number, box: ManifestBox)
   }
 }
 
-function drawBottom(ctx: Ctx, input: ManifestInput, topY: number): void {
+function drawBottom(ctx: Ctx, input: ManifestInput, box: ManifestBox, topY: number): void {
   ctx.page.drawLine({ start: { x: M, y: topY }, end: { x: M + INNER_W, y: topY }, thickness: 0.6, color: COLORS.rule });
   const qrX = M + INNER_W - QR_SIZE_PT + 4;
   drawQrCode(ctx.page, input.handoffUrl, { x: qrX, y: M + 4, sizePt: QR_SIZE_PT });
   const caption = "Scan at handoff";
   line(ctx, caption, qrX + (QR_SIZE_PT - textWidthPt(ctx.fonts.regular, caption, 6.5)) / 2, M, 6.5, false, COLORS.muted);
 
-  const range = input.temperature?.safeRangeF;
+  const range = input.temperature?.boxRangesF?.[box.label] ?? input.temperature?.safeRangeF;
   line(ctx, "KEEP BETWEEN", M, topY - 14, 6.5, true, COLORS.green);
   if (range) {
     const { f, c } = tempRangeParts(range.minF, range.maxF);

@@ -109,8 +109,11 @@ export interface ManifestDocument {
 
 export interface ManifestTemperature {
   advice: string | null;
+  /** The band every box must stay in; null when the boxes' bands do not overlap. */
   safeRangeF: { minF: number; maxF: number } | null;
   packingNotes: string | null;
+  /** A box's own band by box label, printed on its label; boxes not listed use `safeRangeF`. */
+  boxRangesF?: Record<string, { minF: number; maxF: number }>;
 }
 
 export interface EmergencyContact {

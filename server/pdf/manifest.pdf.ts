@@ -318,6 +318,8 @@ function drawTemperature(flow: PageFlow, input: ManifestInput): void {
   const t = input.temperature;
   if (t?.safeRangeF) {
     flow.paragraph(`Safe transit range: ${formatTempRangeF(t.safeRangeF.minF, t.safeRangeF.maxF)}`, { bold: true, sizePt: 10 });
+  } else if (t?.boxRangesF && Object.keys(t.boxRangesF).length) {
+    flow.paragraph("Safe transit range: differs by box; each box label and the notes below give it.", { bold: true, sizePt: 10 });
   }
   if (t?.advice) labelled(flow, "Advice", t.advice);
   if (t?.packingNotes) labelled(flow, "Packing notes", t.packingNotes);

@@ -61,6 +61,37 @@ describe("GET /api/transfers/:id/manifest.pdf", () => {
   });
 });
 
+describe("temperature on the paper", () => {
+  // Bands are the profile defaults of shared/temperature/profiles.ts [memory]: temperate snakes
+  // 55–85 °F, salamanders 45–70 °F; the whole shipment must stay in their overlap, 55–70 °F.
+  // °C by the conversion C = (F − 32) × 5/9 (NIST SP 811, B.8) [published].
+  it("the manifest carries the last stored check and the band every box shares", async () => {
+    const text = (await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))).join("\n");
+    expect(text).toContain("Safe transit range: 55–70 °F (13–21 °C)");
+    // The fixture was cleared to ship past the temperature gate with no weather service: the stored check says so.
+    expect(text).toMatch(/Forecast unavailable \(forecast checked \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC, when the transfer was cleared to ship\)/);
+    expect(text).toMatch(/Box A: Temperate snakes, 55–85 °F \(13–29 °C\)/);
+    expect(text).toMatch(/Box C: Salamanders and newts, 45–70 °F \(7–21 °C\)/);
+  });
+
+  it("each box label carries its own animals' band", async () => {
+    const pages = await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "labels.pdf")).body as Buffer));
+    expect(pages[0]).toMatch(/55–85 °F/);
+    expect(pages[2]).toMatch(/45–70 °F/);
+    expect(pages[2]).not.toMatch(/55–85 °F/);
+  });
+
+  it("after an edit the stored check no longer speaks for the record", async () => {
+    const sender = await signIn(t.app, cast.sender.email);
+    const current = (await sender.get(`/api/transfers/${cast.transfer.id}`)).body.transfer as { version: number };
+    expect((await sender.patch(`/api/transfers/${cast.transfer.id}`, { version: current.version, handlingNotes: "Mist box C lightly before sealing." })).status).toBe(200);
+    const text = (await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))).join("\n");
+    expect(text).toContain("No forecast check of the transfer as it stands is on record.");
+    expect(text).not.toMatch(/forecast checked/);
+    expect(text).toContain("Safe transit range: 55–70 °F (13–21 °C)");
+  });
+});
+
 describe("GET /api/transfers/:id/labels.pdf", () => {
   it("gives one 4 × 6 in label per box, the venomous one marked", async () => {
     const res = await fetchPdf(cast.receiver.email, "labels.pdf");

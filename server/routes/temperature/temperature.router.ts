@@ -20,6 +20,8 @@ import { assessTransferTemperature } from "../../services/temperature/transfer-t
 import { assessWhatIf, findTaxonByName } from "../../services/temperature/what-if";
 import { loadTransferForActor } from "../../services/transfers/load";
 import { registerReadyGate } from "../../services/transfers/transition";
+import { registerManifestExtras } from "../../services/transfers/manifest-extras";
+import { manifestTemperature } from "../../services/temperature/manifest-temperature";
 import { searchTaxa } from "../taxa/taxa.router";
 
 let hooksRegistered = false;
@@ -29,6 +31,7 @@ function registerTemperatureHooks(): void {
   if (hooksRegistered) return;
   hooksRegistered = true;
   registerReadyGate(temperatureGate);
+  registerManifestExtras(manifestTemperature);
   registerTask(TEMPERATURE_RECHECK_TASK);
   registerTask(FORECAST_PRUNE_TASK);
 }

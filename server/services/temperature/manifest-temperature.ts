@@ -1,0 +1,66 @@
+import type { TemperatureReport } from "@shared/temperature/report";
+import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
+import type { AppContext } from "../../context";
+import { TransferChangeSchema, TransferSchema } from "../../db/entities/transfer.entity";
+import { formatTempRangeF } from "../../pdf/format";
+import type { ManifestTemperature } from "../../pdf/manifest-input";
+import type { ManifestExtras } from "../transfers/manifest-extras";
+import { latestCheck } from "./checks";
+import { assessTransferTemperature } from "./transfer-temperature";
+
+/** The band every box must stay in: the warmest of the minimums to the coolest of the maximums. */
+function safeRangeOf(report: TemperatureReport): ManifestTemperature["safeRangeF"] {
+  const ranges = report.boxes.length ? report.boxes.map((b) => b.profile.safeTransitF) : [report.profile.safeTransitF];
+  const minF = Math.max(...ranges.map((r) => r.min));
+  const maxF = Math.min(...ranges.map((r) => r.max));
+  return minF < maxF ? { minF, maxF } : null;
+}
+
+/** Each box's own band, for its label. */
+function boxRangesOf(report: TemperatureReport): NonNullable<ManifestTemperature["boxRangesF"]> {
+  return Object.fromEntries(report.boxes.map((b) => [b.label, { minF: b.profile.safeTransitF.min, maxF: b.profile.safeTransitF.max }]));
+}
+
+const rangeText = (b: TemperatureReport["boxes"][number]) => formatTempRangeF(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
+
+function packingNotesOf(report: TemperatureReport, withAdvice: boolean): string | null {
+  const lines = report.boxes.map((b) => `${b.label}: ${b.profile.label}, ${rangeText(b)}${withAdvice ? ` — ${b.advice.message}` : ""}`);
+  return lines.length ? lines.join("\n") : null;
+}
+
+/**
+ * What the manifest says about temperature, read from the last stored check (the one made when the
+ * transfer was cleared to ship, or a re-check before departure). Printing a manifest never waits for
+ * a forecast: with no check since the last edit it carries the safe range of the animals' profiles
+ * and says that no check is on record.
+ */
+export async function manifestTemperature(ctx: AppContext, transferId: string): Promise<ManifestExtras> {
+  const em = ctx.orm.em.fork();
+  const transfer = await em.findOne(TransferSchema, { id: transferId });
+  if (!transfer) return {};
+  const check = await latestCheck(em, transferId);
+  // A check still speaks for the record when nothing in it (route, dates, boxes, animals) was edited
+  // since; courier assignments, handoffs and status changes do not change the temperature picture.
+  const editedSince = check ? await em.count(TransferChangeSchema, { transfer: transferId, createdAt: { $gt: check.checkedAt } }) : 0;
+  if (check && editedSince === 0) {
+    const report = check.result as TemperatureReport;
+    const when = `${check.checkedAt.toISOString().slice(0, 16).replace("T", " ")} UTC, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
+    return {
+      temperature: {
+        advice: `${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
+        safeRangeF: safeRangeOf(report),
+        packingNotes: packingNotesOf(report, true),
+        boxRangesF: boxRangesOf(report),
+      },
+    };
+  }
+  const report = await assessTransferTemperature({ em, source: null, transfer, nowMs: Date.now() });
+  return {
+    temperature: {
+      advice: `No forecast check of the transfer as it stands is on record. Check the temperature on the transfer page before the animals leave.`,
+      safeRangeF: safeRangeOf(report),
+      packingNotes: packingNotesOf(report, false),
+      boxRangesF: boxRangesOf(report),
+    },
+  };
+}
