@@ -1,6 +1,7 @@
 import path from "node:path";
 import { existsSync } from "node:fs";
 import express, { type Express } from "express";
+import type { EntityManager } from "@mikro-orm/postgresql";
 import type { AppContext } from "./context";
 import { correlationId, errorHandler, notFoundApi } from "./http/errors";
 import { csrfProtection, noStore, rejectNul, requireJsonBody, securityHeaders } from "./http/security";
@@ -47,11 +48,16 @@ export function createApp(ctx: AppContext): Express {
   api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : jsonBody)(req, res, next));
   api.use((req, res, next) => (req.method === "GET" || req.method === "HEAD" ? next() : json(req, res, next)));
   api.use(rejectNul);
+  // One EntityManager per request (MikroORM's request context), forked on first use only; the
+  // getter lives on this app's request prototype, so a request that needs no ORM pays nothing.
+  Object.defineProperty(app.request, "em", {
+    get(this: express.Request & { _em?: EntityManager }) {
+      return (this._em ??= ctx.orm.em.fork());
+    },
+    configurable: true,
+  });
   api.use((req, _res, next) => {
     req.ctx = ctx;
-    // One EntityManager per request (MikroORM's request context), forked on first use only.
-    let em: ReturnType<typeof ctx.orm.em.fork> | undefined;
-    Object.defineProperty(req, "em", { get: () => (em ??= ctx.orm.em.fork()), configurable: true });
     next();
   });
   const auth = configurePassport(ctx);

@@ -16,7 +16,9 @@ export async function startBenchServer(options: { port?: number; beforeStart?: (
 
   const port = options.port ?? 3901;
   const baseUrl = `http://127.0.0.1:${port}`;
-  const server: ChildProcess = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
+  // BENCH_CPU_PROF=<folder> writes a V8 CPU profile of the server when it stops (for chrome://inspect or speedscope).
+  const profiling = process.env.BENCH_CPU_PROF ? ["--cpu-prof", "--cpu-prof-dir", process.env.BENCH_CPU_PROF] : [];
+  const server: ChildProcess = spawn(process.execPath, [...profiling, "--import", "tsx", "server/index.ts"], {
     cwd: PROJECT_ROOT,
     env: {
       ...process.env,

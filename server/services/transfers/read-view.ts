@@ -35,15 +35,28 @@ export type TaxonRowView = { id: string; rank: string; scientific_name: string; 
 const TAXON_JSON = (alias: string) =>
   `json_build_object('id', ${alias}.id, 'rank', ${alias}.rank, 'scientific_name', ${alias}.scientific_name, 'common_names', ${alias}.common_names, 'venomous', ${alias}.venomous, 'profile_group', ${alias}.profile_group)`;
 
-const SQL = `
+/** Columns by name (json_build_object is several times cheaper than to_jsonb(row) and says what the page reads). */
+const jsonOf = (alias: string, columns: readonly string[]) => `json_build_object(${columns.map((c) => `'${c}', ${alias}.${c}`).join(", ")})`;
+const T_JSON = jsonOf("t", [
+  "id", "number", "status", "version", "mode", "purpose", "sale", "sale_price_usd", "sender_organization_id", "receiver_organization_id",
+  "origin_street", "origin_city", "origin_state", "origin_zip", "origin_lat", "origin_lon", "origin_time_zone",
+  "destination_street", "destination_city", "destination_state", "destination_zip", "destination_lat", "destination_lon", "destination_time_zone",
+  "planned_departure_at", "expected_arrival_at", "handling_notes", "sender_private_notes", "receiver_private_notes",
+  "confirmed_at", "cancelled_reason", "reconfirmation_reason", "created_at", "updated_at",
+]);
+const CONTAINER_JSON = jsonOf("c", ["id", "key", "position", "label", "length_mm", "width_mm", "height_mm", "wall_material", "wall_thickness_mm", "pack", "seal_number"]);
+
+export const TRANSFER_VIEW_SQL = `
 SELECT json_build_object(
-  't', to_jsonb(t.*) - 'created_by_id' - 'confirmed_by_id',
+  't', ${T_JSON},
   'sender', json_build_object('id', so.id, 'name', so.name, 'kind', so.kind, 'street', so.street, 'city', so.city, 'state', so.state, 'zip', so.zip, 'phone', so.phone, 'email', so.email),
   'receiver', json_build_object('id', ro.id, 'name', ro.name, 'kind', ro.kind, 'street', ro.street, 'city', ro.city, 'state', ro.state, 'zip', ro.zip, 'phone', ro.phone, 'email', ro.email),
   'senderContact', (SELECT json_build_object('id', u.id, 'display_name', u.display_name, 'email', u.email) FROM app_user u WHERE u.id = t.sender_contact_id),
   'receiverContact', (SELECT json_build_object('id', u.id, 'display_name', u.display_name, 'email', u.email) FROM app_user u WHERE u.id = t.receiver_contact_id),
-  'containers', coalesce((SELECT json_agg(to_jsonb(c.*) - 'transfer_id' ORDER BY c.position) FROM container c WHERE c.transfer_id = t.id), '[]'),
-  'animals', coalesce((SELECT json_agg((to_jsonb(a.*) - 'transfer_id' - 'taxon_id') || jsonb_build_object('taxon', ${TAXON_JSON("x")}) ORDER BY a.position)
+  'containers', coalesce((SELECT json_agg(${CONTAINER_JSON} ORDER BY c.position) FROM container c WHERE c.transfer_id = t.id), '[]'),
+  'animals', coalesce((SELECT json_agg(json_build_object('id', a.id, 'position', a.position, 'container_id', a.container_id, 'count', a.count, 'sex', a.sex,
+                           'identifier', a.identifier, 'identifier_kind', a.identifier_kind, 'origin', a.origin, 'length_mm', a.length_mm, 'length_kind', a.length_kind,
+                           'weight_g', a.weight_g, 'hatch_date', a.hatch_date, 'notes', a.notes, 'taxon', ${TAXON_JSON("x")}) ORDER BY a.position)
                          FROM animal a JOIN taxon x ON x.id = a.taxon_id WHERE a.transfer_id = t.id), '[]'),
   'legs', coalesce((SELECT json_agg(json_build_object('id', l.id, 'sequence', l.sequence, 'from_label', l.from_label, 'to_label', l.to_label, 'courier_id', u.id,
                            'courier_name', u.display_name, 'org_name', o.name, 'org_phone', o.phone) ORDER BY l.sequence)
@@ -63,6 +76,6 @@ WHERE t.id = $1`;
 
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
-  const { rows } = await pool.query<{ view: TransferView }>({ name: "transfer-view-v1", text: SQL, values: [id] });
+  const { rows } = await pool.query<{ view: TransferView }>({ name: "transfer-view-v1", text: TRANSFER_VIEW_SQL, values: [id] });
   return rows[0]?.view ?? null;
 }
