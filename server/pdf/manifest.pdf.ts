@@ -271,7 +271,7 @@ function drawTotals(flow: PageFlow, boxes: ManifestBox[]): void {
   }));
   const all = totals.reduce((n, t) => n + t.count, 0);
   rows.push({
-    cells: ["All species", `${totals.length} species`, `${boxes.length} boxes`, "", String(all)],
+    cells: ["All species", `${totals.length} species`, `${boxes.length} ${boxes.length === 1 ? "box" : "boxes"}`, "", String(all)],
     bold: true,
     fill: COLORS.greenTint,
   });

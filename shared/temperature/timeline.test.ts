@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { haversineKm } from "./geo";
 import type { TransitPlace } from "./places";
-import { buildTransitTimeline, hasCalendarWarning, sameLocalTimeLater } from "./timeline";
+import { ARRIVAL_SLACK_H, buildTransitTimeline, hasCalendarWarning, plannedArrivalWarning, sameLocalTimeLater } from "./timeline";
 
 // Invented endpoints at real coordinates (the Rosetta Code airports and city centres).
 const nashville: TransitPlace = { label: "Nashville, TN", lat: 36.12, lon: -86.67, timeZone: "America/Chicago" };
@@ -145,5 +145,39 @@ describe("sameLocalTimeLater", () => {
     // DST ends Sunday 1 November 2026 (15 U.S.C. 260a): 09:00 CDT → 09:00 CST is 25 h later [published, secondary]
     const trip = buildTransitTimeline({ mode: "overnight_air", origin: nashville, destination: newYork, departAt: "2026-10-31T09:00:00-05:00" });
     expect(new Date(sameLocalTimeLater(trip, 2)).toISOString()).toBe("2026-11-02T15:00:00.000Z");
+  });
+});
+
+describe("planned arrival against the modelled trip", () => {
+  const tuesday = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-06-02T10:00:00-04:00" });
+  const delivery = Date.parse(tuesday.arriveAt); // 10:30 PDT on 3 June (see above)
+  const h = 3_600_000;
+
+  it("says nothing within the courier's slack", () => {
+    expect(plannedArrivalWarning(tuesday, delivery)).toBeNull();
+    expect(plannedArrivalWarning(tuesday, delivery - (ARRIVAL_SLACK_H - 0.5) * h)).toBeNull();
+    expect(plannedArrivalWarning(tuesday, delivery + (ARRIVAL_SLACK_H - 0.5) * h)).toBeNull();
+  });
+
+  it("warns when the trip cannot arrive as early as planned, in the receiver's local time", () => {
+    // Planned 3 June 00:30 PDT, modelled 10:30 PDT (PDT = UTC−7, 15 U.S.C. 260a) [published, secondary]
+    const w = plannedArrivalWarning(tuesday, delivery - 10 * h);
+    expect(w).toMatchObject({ code: "arrives_after_planned", severity: "warning", date: "2026-06-03" });
+    expect(w?.message).toContain("Wed, Jun 3, 10:30 PDT, 10 h after the planned arrival (Wed, Jun 3, 00:30 PDT)");
+  });
+
+  it("explains a road trip by the driver's hours", () => {
+    // Nashville → Los Angeles by road is about 3,300 km: more than a day at the wheel under 49 CFR 395.3 [memory]
+    const road = buildTransitTimeline({ mode: "ground_courier", origin: nashville, destination: losAngeles, departAt: "2026-06-02T08:00:00-05:00" });
+    const w = plannedArrivalWarning(road, Date.parse("2026-06-03T08:00:00-07:00"));
+    expect(w?.code).toBe("arrives_after_planned");
+    expect(w?.message).toMatch(/hours-of-service/);
+    expect(Date.parse(road.arriveAt)).toBeGreaterThan(Date.parse("2026-06-04T00:00:00Z"));
+  });
+
+  it("cautions when the box would wait long before the planned arrival", () => {
+    const w = plannedArrivalWarning(tuesday, delivery + 24 * h);
+    expect(w).toMatchObject({ code: "arrives_before_planned", severity: "caution", date: "2026-06-04" });
+    expect(w?.message).toMatch(/24 h after the trip as modelled arrives/);
   });
 });

@@ -36,7 +36,9 @@ export type TransitWarningCode =
   | "weekend_in_transit"
   | "federal_holiday_in_transit"
   | "no_delay_margin"
-  | "after_pickup_cutoff";
+  | "after_pickup_cutoff"
+  | "arrives_after_planned"
+  | "arrives_before_planned";
 
 export type TransitWarning = {
   code: TransitWarningCode;
@@ -410,4 +412,47 @@ export function sameLocalTimeLater(timeline: TransitTimeline, days: number): num
   if (!origin) return departMs + days * MS_PER_DAY;
   const local = localIsoTime(departMs, origin.timeZone);
   return localClockToUtcMs(addDays(local.slice(0, 10), days), local.slice(11, 16), origin.timeZone);
+}
+
+/** Hours between the modelled and the planned arrival that go unremarked: a courier's own slack. */
+export const ARRIVAL_SLACK_H = 6;
+
+const MODE_REASON: Readonly<Record<TransportMode, string>> = {
+  overnight_air: "the carrier's overnight schedule delivers then",
+  ground_courier: "one driver within the federal hours-of-service limits cannot cover the road distance sooner",
+  hand_delivery: "one driver within the federal hours-of-service limits cannot cover the road distance sooner",
+};
+
+function clockText(utcMs: number, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", month: "short", day: "numeric", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" }).format(utcMs);
+}
+
+/**
+ * The sender's planned arrival against the trip as modelled. Later than planned is a warning: the
+ * box is out longer than the parties think, and the check covers the modelled trip. Much earlier
+ * is a caution: the hours the box may wait somewhere before the planned arrival are not modelled.
+ */
+export function plannedArrivalWarning(timeline: TransitTimeline, plannedArrivalMs: number): TransitWarning | null {
+  const modelledMs = Date.parse(timeline.arriveAt);
+  const destination = timeline.waypoints.at(-1);
+  if (!destination || !Number.isFinite(plannedArrivalMs) || !Number.isFinite(modelledMs)) return null;
+  const gapH = (modelledMs - plannedArrivalMs) / MS_PER_HOUR;
+  if (Math.abs(gapH) < ARRIVAL_SLACK_H) return null;
+  const tz = destination.timeZone;
+  const planned = clockText(plannedArrivalMs, tz);
+  const modelled = clockText(modelledMs, tz);
+  if (gapH > 0) {
+    return {
+      code: "arrives_after_planned",
+      severity: "warning",
+      date: localDate(modelledMs, tz),
+      message: `The trip as modelled arrives ${modelled}, ${Math.round(gapH)} h after the planned arrival (${planned}): ${MODE_REASON[timeline.mode]}. The temperature check covers the longer trip; agree the timing with the courier and the receiver.`,
+    };
+  }
+  return {
+    code: "arrives_before_planned",
+    severity: "caution",
+    date: localDate(plannedArrivalMs, tz),
+    message: `The planned arrival (${planned}) is ${Math.round(-gapH)} h after the trip as modelled arrives (${modelled}). Hours the box waits somewhere before it is delivered are not in this check.`,
+  };
 }

@@ -55,7 +55,9 @@ async function runPlan(em: EntityManager, plan: Plan) {
     destination: plan.to,
     mode: plan.mode,
     plannedDepartureAt: depart.toISOString(),
-    expectedArrivalAt: new Date(depart.getTime() + (plan.mode === "overnight_air" ? 22 : 40) * 3600_000).toISOString(),
+    // Overnight air: next day. Coast to coast by road: about four days for one driver within the
+    // federal hours-of-service limits (the temperature model's road plan says about 91 h).
+    expectedArrivalAt: new Date(depart.getTime() + (plan.mode === "overnight_air" ? 22 : 96) * 3600_000).toISOString(),
     purpose: plan.purpose,
     sale: false,
     salePriceUsd: null,

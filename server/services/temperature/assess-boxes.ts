@@ -8,7 +8,7 @@ import type { BoxSpec } from "@shared/temperature/box-model";
 import type { TemperatureProfile } from "@shared/temperature/profiles";
 import { VERDICT_SEVERITY, type BoxTemperature, type ProfileSummary, type TemperatureReport } from "@shared/temperature/report";
 import type { TransitAssessment } from "@shared/temperature/schemas";
-import { buildTransitTimeline, type TimelineRequest, type TransitTimeline } from "@shared/temperature/timeline";
+import { buildTransitTimeline, plannedArrivalWarning, type TimelineRequest, type TransitTimeline } from "@shared/temperature/timeline";
 import { forecastIndexFor, unavailableText, type WeatherSource } from "./forecasts";
 
 export type BoxToAssess = { containerId: string | null; label: string; box: BoxSpec; profile: TemperatureProfile };
@@ -72,7 +72,13 @@ export function unassessable(trip: Pick<TimelineRequest, "mode" | "departAt">, b
  * assessment, a later departure only when it suits every box, and each box's own verdict.
  * Throws RangeError when the trip cannot be laid out (see buildTransitTimeline).
  */
-export async function assessBoxes(request: TimelineRequest, boxes: readonly BoxToAssess[], plan: AmbientPlan, fallback: TemperatureProfile): Promise<TemperatureReport> {
+export async function assessBoxes(
+  request: TimelineRequest,
+  boxes: readonly BoxToAssess[],
+  plan: AmbientPlan,
+  fallback: TemperatureProfile,
+  plannedArrivalMs?: number,
+): Promise<TemperatureReport> {
   if (boxes.length === 0) return unassessable(request, boxes, fallback, { id: "no-boxes", title: "No box holds animals yet: there is nothing to assess." });
   const timeline = buildTransitTimeline(request);
   const lookup = await ambientLookup(plan, timeline);
@@ -96,7 +102,7 @@ export async function assessBoxes(request: TimelineRequest, boxes: readonly BoxT
     suggestedDeparture: suggested && suitsEveryBox(suggested) ? suggested : null,
     sources: [...worst.result.sources, ...lookup.extraSources],
     profile: summary(worst.profile),
-    warnings: timeline.warnings,
+    warnings: plannedArrivalMs === undefined ? timeline.warnings : [...timeline.warnings, ...[plannedArrivalWarning(timeline, plannedArrivalMs)].filter((w) => w !== null)],
     boxes: assessed.map((b) => boxSummary(b, b.result)),
   };
 }

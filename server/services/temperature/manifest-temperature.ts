@@ -47,7 +47,7 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
     const when = `${check.checkedAt.toISOString().slice(0, 16).replace("T", " ")} UTC, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
     return {
       temperature: {
-        advice: `${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
+        advice: [`${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`, ...report.warnings.filter((w) => w.severity === "warning").map((w) => w.message)].join("\n"),
         safeRangeF: safeRangeOf(report),
         packingNotes: packingNotesOf(report, true),
         boxRangesF: boxRangesOf(report),

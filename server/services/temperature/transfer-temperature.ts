@@ -79,7 +79,7 @@ export async function assessTransferTemperature({ em, source, transfer, nowMs }:
     return unassessable(trip, boxes, fallback, { id: "place-unknown", title: `The ${origin ? "destination" : "origin"} ZIP code could not be located, so there is no forecast for it.` });
   }
   try {
-    return await assessBoxes({ ...trip, origin, destination }, boxes, { kind: "forecast", source, nowMs }, fallback);
+    return await assessBoxes({ ...trip, origin, destination }, boxes, { kind: "forecast", source, nowMs }, fallback, transfer.expectedArrivalAt.getTime());
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
     return unassessable(trip, boxes, fallback, { id: "route-unplanned", title: `The trip could not be laid out hour by hour: ${err.message}.` });
