@@ -388,7 +388,8 @@ export type TransferSummaryDto = {
   viewerRole: ViewerRole;
   sender: { id: string; name: string };
   receiver: { id: string; name: string };
-  origin: { city: string; state: UsState };
+  /** `timeZone`: the origin's IANA zone (from its ZIP), in which the departure is shown; null when the ZIP was not found. */
+  origin: { city: string; state: UsState; timeZone: string | null };
   destination: { city: string; state: UsState };
   mode: TransportMode;
   plannedDepartureAt: string;

@@ -55,6 +55,12 @@ describe("GET /api/transfers pages", () => {
     expect(seen).toHaveLength(ids.length);
   });
 
+  it("gives the origin's time zone, in which the departure is shown", async () => {
+    // Knoxville, TN 37917 keeps Eastern time (IANA tz database, America/New_York) [published]
+    const res = await sender.get("/api/transfers?limit=1");
+    expect(res.body.transfers[0].origin).toEqual({ city: "Knoxville", state: "TN", timeZone: "America/New_York" });
+  });
+
   it("refuses a page link that was not made by the server", async () => {
     const res = await sender.get(`/api/transfers?cursor=${encodeURIComponent("not-a-cursor")}`);
     expect(res.status).toBe(400);

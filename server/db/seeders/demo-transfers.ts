@@ -46,7 +46,9 @@ async function runPlan(em: EntityManager, plan: Plan) {
   const taxa = new Map((await em.find(TaxonSchema, { scientificName: { $in: plan.animals.map((a) => a.taxon) } })).map((t) => [t.scientificName, t.id]));
   // Departures a few minutes ahead for the records that then move on "now"; days ahead otherwise.
   const depart = new Date(Date.now() + (plan.departInDays > 0 ? plan.departInDays * 86_400_000 : 5 * 60_000));
-  depart.setUTCMinutes(0, 0, 0);
+  // Days ahead: 14:00 UTC, mid-morning at the demo's eastern origins (09:00 EST, 10:00 EDT).
+  if (plan.departInDays > 0) depart.setUTCHours(14, 0, 0, 0);
+  else depart.setUTCMinutes(0, 0, 0);
   if (depart.getTime() < Date.now()) depart.setTime(depart.getTime() + 3600_000);
   const input: TransferInputParsed = {
     receiverOrganizationId: plan.cast.receiver.organization!.id,

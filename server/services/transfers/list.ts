@@ -15,7 +15,7 @@ const SORT_COLUMNS = { departure: "planned_departure_at", number: "number", stat
 type Row = {
   id: string; number: string; status: TransferStatus; mode: TransportMode; planned_departure_ms: number; expected_arrival_ms: number; updated_ms: number;
   sender_organization_id: string; sender_name: string; receiver_organization_id: string; receiver_name: string;
-  origin_city: string; origin_state: UsState; destination_city: string; destination_state: UsState; animal_count: number; species_count: number; sort_value: string;
+  origin_city: string; origin_state: UsState; origin_time_zone: string | null; destination_city: string; destination_state: UsState; animal_count: number; species_count: number; sort_value: string;
 };
 
 function decodeCursor(cursor: string | undefined): [unknown, string] | null {
@@ -79,7 +79,7 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
            (extract(epoch FROM t.expected_arrival_at) * 1000)::float8 AS expected_arrival_ms,
            (extract(epoch FROM t.updated_at) * 1000)::float8 AS updated_ms,
            t.sender_organization_id, so.name AS sender_name, t.receiver_organization_id, ro.name AS receiver_name,
-           t.origin_city, t.origin_state, t.destination_city, t.destination_state, page.sort_value::text AS sort_value,
+           t.origin_city, t.origin_state, t.origin_time_zone, t.destination_city, t.destination_state, page.sort_value::text AS sort_value,
            coalesce(a.animal_count, 0)::int AS animal_count, coalesce(a.species_count, 0)::int AS species_count
       FROM page
       JOIN transfer t ON t.id = page.id
@@ -101,7 +101,7 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
     viewerRole: roleOf(r),
     sender: { id: r.sender_organization_id, name: r.sender_name },
     receiver: { id: r.receiver_organization_id, name: r.receiver_name },
-    origin: { city: r.origin_city, state: r.origin_state },
+    origin: { city: r.origin_city, state: r.origin_state, timeZone: r.origin_time_zone },
     destination: { city: r.destination_city, state: r.destination_state },
     mode: r.mode,
     plannedDepartureAt: new Date(r.planned_departure_ms).toISOString(),

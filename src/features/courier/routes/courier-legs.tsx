@@ -23,7 +23,7 @@ function LegCard({ transfer: t }: { transfer: TransferSummaryDto }) {
         {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state}
       </p>
       <p className="text-ink-soft">
-        Leaves {formatDateTime(t.plannedDepartureAt)} · {t.animalCount} {t.animalCount === 1 ? "animal" : "animals"}
+        Leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)} · {t.animalCount} {t.animalCount === 1 ? "animal" : "animals"}
       </p>
       <p className="text-sm text-ink-soft">
         {t.sender.name} to {t.receiver.name}

@@ -49,7 +49,7 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
       );
     },
   },
-  { id: "departure", accessorKey: "plannedDepartureAt", header: "Departs", cell: ({ row }) => formatDateTime(row.original.plannedDepartureAt) },
+  { id: "departure", accessorKey: "plannedDepartureAt", header: "Departs", cell: ({ row }) => formatDateTime(row.original.plannedDepartureAt, row.original.origin.timeZone) },
   {
     id: "animals",
     header: "Animals",
