@@ -80,7 +80,7 @@ export function CourierHandoffRoute() {
                   {mine ? <span className="font-normal text-ink-soft"> · yours</span> : null}
                 </p>
                 <p className="text-base text-ink-soft">
-                  {done ? `Recorded ${formatDateTime(done.at)}: ${done.releasedByName} → ${done.receivedByName}` : i === next ? "To record now" : "Not yet"}
+                  {done ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatDateTime(done.at)}` : i === next ? "To record now" : "Not yet"}
                 </p>
               </li>
             );
