@@ -9,7 +9,7 @@ export function TransferPageRoute() {
       checks={(t) => (
         <div className="grid gap-5">
           <ComplianceSection transferId={t.id} />
-          <TemperatureSection transferId={t.id} />
+          <TemperatureSection transferId={t.id} status={t.status} />
         </div>
       )}
     />

@@ -5,6 +5,7 @@ import { ambientFromOverride } from "@shared/temperature/ambient";
 import { assessTransit } from "@shared/temperature/assess";
 import type { BoxSpec } from "@shared/temperature/box-model";
 import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
+import type { TransferStatus } from "@shared/constants";
 import type { TransferTemperatureDto } from "@shared/temperature/report";
 import { buildTransitTimeline } from "@shared/temperature/timeline";
 import { TemperatureSection } from "./temperature-section";
@@ -35,10 +36,10 @@ function reportAt(tempF: number): TransferTemperatureDto {
   };
 }
 
-function renderSection(report: TransferTemperatureDto) {
+function renderSection(report: TransferTemperatureDto, status: TransferStatus = "awaiting_receiver") {
   vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify(report), { status: 200, headers: { "Content-Type": "application/json" } })));
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  return render(<QueryClientProvider client={client}><TemperatureSection transferId={TRANSFER_ID} /></QueryClientProvider>);
+  return render(<QueryClientProvider client={client}><TemperatureSection transferId={TRANSFER_ID} status={status} /></QueryClientProvider>);
 }
 
 beforeEach(() => {
@@ -58,6 +59,18 @@ describe("TemperatureSection", () => {
     // PRODUCT.md and SOURCES.md: a planning aid, not a guarantee; heat packs never touch an animal's container
     expect(screen.getByText("A planning aid, not a guarantee")).toBeInTheDocument();
     expect(screen.getByText(/Heat packs never touch/)).toBeInTheDocument();
+  });
+
+  it("once cleared, a blocking verdict asks for action instead of explaining the confirmation", async () => {
+    renderSection(reportAt(96), "ready");
+    expect(await screen.findByText(/Cleared to travel, but the check says “do not ship”/)).toBeInTheDocument();
+    expect(screen.queryByText(/can only confirm the transfer by overriding/)).not.toBeInTheDocument();
+  });
+
+  it("on the road, no notice about clearing at all", async () => {
+    renderSection(reportAt(96), "in_transit");
+    expect(await screen.findByText("Do not ship", { selector: "p" })).toBeInTheDocument();
+    expect(screen.queryByText(/Cleared to travel, but|This blocks/)).not.toBeInTheDocument();
   });
 
   it("at 38 °F: a 40-hour heat pack, and nothing blocks", async () => {

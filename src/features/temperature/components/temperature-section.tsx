@@ -1,4 +1,5 @@
 import { useId } from "react";
+import type { TransferStatus } from "@shared/constants";
 import { blocksShipping, type TransferTemperatureDto } from "@shared/temperature/report";
 import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
 import { Loading, Notice } from "@/components/ui/feedback";
@@ -13,7 +14,7 @@ import { TemperatureChart } from "./temperature-chart";
  * safer day, each box's verdict, the re-checks before departure and the cautions. It fetches
  * its own data; place it on the transfer page with the transfer's id.
  */
-export function TemperatureSection({ transferId }: { transferId: string }) {
+export function TemperatureSection({ transferId, status }: { transferId: string; status: TransferStatus }) {
   const headingId = useId();
   const temperature = useTransferTemperature(transferId);
   return (
@@ -26,13 +27,36 @@ export function TemperatureSection({ transferId }: { transferId: string }) {
           {(temperature.error as Error).message} Until it does, treat the trip as not checked.
         </Notice>
       ) : (
-        <TemperatureBody report={temperature.data} />
+        <TemperatureBody report={temperature.data} status={status} />
       )}
     </section>
   );
 }
 
-function TemperatureBody({ report }: { report: TransferTemperatureDto }) {
+/** What a blocking verdict means where the transfer stands: before confirmation it holds the step; once cleared it is a call to act. */
+function BlockNotice({ report, status }: { report: TransferTemperatureDto; status: TransferStatus }) {
+  if (!blocksShipping(report.verdict)) return null;
+  const verdict = VERDICT_WORDS[report.verdict].toLowerCase();
+  if (status === "draft" || status === "awaiting_receiver") {
+    return (
+      <Notice tone="block" title="This blocks “cleared to travel”">
+        While the verdict is “{verdict}”, the receiver can only confirm the transfer by overriding the temperature check with a reason. The reason,
+        the verdict and who gave it are written into the custody log.
+      </Notice>
+    );
+  }
+  if (status === "ready") {
+    return (
+      <Notice tone="block" title={`Cleared to travel, but the check says “${verdict}”`}>
+        The transfer was cleared before this verdict or past it with a reason in the custody log. While the verdict is “{verdict}”, move the
+        departure, change the packing or the route, or keep the animals home; an edit sends the transfer back to the receiver to confirm.
+      </Notice>
+    );
+  }
+  return null;
+}
+
+function TemperatureBody({ report, status }: { report: TransferTemperatureDto; status: TransferStatus }) {
   return (
     <>
       {report.alert ? (
@@ -41,12 +65,7 @@ function TemperatureBody({ report }: { report: TransferTemperatureDto }) {
         </Notice>
       ) : null}
       <AssessmentDetails report={report} showBoxes />
-      {blocksShipping(report.verdict) ? (
-        <Notice tone="block" title="This blocks “cleared to travel”">
-          While the verdict is “{VERDICT_WORDS[report.verdict].toLowerCase()}”, the receiver can only confirm the transfer by overriding the
-          temperature check with a reason. The reason, the verdict and who gave it are written into the custody log.
-        </Notice>
-      ) : null}
+      <BlockNotice report={report} status={status} />
       <TemperatureChart report={report} />
       {report.checks.length > 0 ? (
         <div className="text-sm">
