@@ -4,7 +4,7 @@ import type { Request } from "express";
 import type pg from "pg";
 import { ACTOR_COLUMNS, actorFromRow, type Actor, type ActorRow } from "./actor";
 
-/** Where the store hands the signed-in user to passport; never written back to the row. */
+/** Where the store hands the signed-in user to passport; non-enumerable, so never written back to the row. */
 export const ACTOR_KEY = "__actor";
 
 declare module "express-session" {
@@ -59,10 +59,5 @@ export class SessionStore extends PgStore {
     const created = super.createSession(req, sess);
     if (actor !== undefined) Object.defineProperty(created, ACTOR_KEY, { value: actor, enumerable: false, writable: true, configurable: true });
     return created;
-  }
-
-  override set(sid: string, sess: session.SessionData, callback?: (err?: unknown) => void): void {
-    const { [ACTOR_KEY]: _dropped, ...rest } = sess;
-    super.set(sid, rest as session.SessionData, callback);
   }
 }

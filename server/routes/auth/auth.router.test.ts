@@ -160,6 +160,19 @@ describe("session", () => {
     expect((await client.get("/api/auth/me")).status).toBe(401);
   });
 
+  it("the user read with the session is never written into the session row", async () => {
+    const user = await buildUser(em());
+    const client = await signIn(t.app, user.email);
+    // Two minutes since the last touch: the next request writes the session (lastSeenAt) back.
+    const twoMinutesAgo = Date.now() - 120_000;
+    await t.ctx.pool.query(`UPDATE session SET sess = jsonb_set(sess::jsonb, '{lastSeenAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`, [twoMinutesAgo, user.id]);
+    expect((await client.get("/api/auth/me")).status).toBe(200);
+    const { rows } = await t.ctx.pool.query<{ sess: Record<string, unknown> }>(`SELECT sess FROM session WHERE sess->'passport'->>'user' = $1`, [user.id]);
+    expect(rows).toHaveLength(1);
+    expect(rows[0]!.sess.lastSeenAt as number).toBeGreaterThan(twoMinutesAgo);
+    expect(Object.keys(rows[0]!.sess).sort()).toEqual(["cookie", "createdAt", "csrfToken", "lastSeenAt", "passport"]);
+  });
+
   it("a session past its absolute lifetime expires even when active", async () => {
     const user = await buildUser(em());
     const client = await signIn(t.app, user.email);
