@@ -180,7 +180,7 @@ function drawBottom(ctx: Ctx, input: ManifestInput, box: ManifestBox, topY: numb
   const caption = "Scan at handoff";
   line(ctx, caption, qrX + (QR_SIZE_PT - textWidthPt(ctx.fonts.regular, caption, 6.5)) / 2, M, 6.5, false, COLORS.muted);
 
-  const range = input.temperature?.boxRangesF?.[box.label] ?? input.temperature?.safeRangeF;
+  const range = input.temperature?.boxRangesF?.[box.id] ?? input.temperature?.safeRangeF;
   line(ctx, "KEEP BETWEEN", M, topY - 14, 6.5, true, COLORS.green);
   if (range) {
     const { f, c } = tempRangeParts(range.minF, range.maxF);

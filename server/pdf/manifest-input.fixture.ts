@@ -43,6 +43,7 @@ export function buildAnimal(i: number, overrides: Partial<ManifestAnimal> = {}):
 /** `boxCount` boxes of `animalsPerBox` single-animal lines each, numbered 1..boxCount. */
 export function buildBoxes(boxCount: number, animalsPerBox: number): ManifestBox[] {
   return Array.from({ length: boxCount }, (_, b) => ({
+    id: `box-${b + 1}`,
     label: `Shipping box ${String.fromCharCode(65 + (b % 26))}`,
     index: b + 1,
     lengthMm: 400,

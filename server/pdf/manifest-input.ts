@@ -69,6 +69,8 @@ export interface BoxInsulation {
 }
 
 export interface ManifestBox {
+  /** The container's record id (labels need not be unique). */
+  id: string;
   /** The sender's own name for the box, e.g. "Box A — tortoises". */
   label: string;
   /** 1-based position among the transfer's boxes. */
@@ -112,7 +114,7 @@ export interface ManifestTemperature {
   /** The band every box must stay in; null when the boxes' bands do not overlap. */
   safeRangeF: { minF: number; maxF: number } | null;
   packingNotes: string | null;
-  /** A box's own band by box label, printed on its label; boxes not listed use `safeRangeF`. */
+  /** A box's own band by container id, printed on its label; boxes not listed use `safeRangeF`. */
   boxRangesF?: Record<string, { minF: number; maxF: number }>;
 }
 

@@ -35,6 +35,7 @@ export function presentManifestInput(v: TransferView, extras: Required<ManifestE
     receiver,
     couriers: v.legs.map((l) => ({ name: l.courier_name, organisation: l.org_name, phone: l.org_phone ?? "" })),
     boxes: v.containers.map((c, i) => ({
+      id: c.id,
       label: c.label,
       index: i + 1,
       lengthMm: c.length_mm,

@@ -69,7 +69,8 @@ describe("temperature on the paper", () => {
     const text = (await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))).join("\n");
     expect(text).toContain("Safe transit range: 55–70 °F (13–21 °C)");
     // The fixture was cleared to ship past the temperature gate with no weather service: the stored check says so.
-    expect(text).toMatch(/Forecast unavailable \(forecast checked \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC, when the transfer was cleared to ship\)/);
+    // The time is given in the origin's zone (Knoxville: Eastern), like the departure on the same page.
+    expect(text).toMatch(/Forecast unavailable \(forecast checked \w{3}, \w{3} \d{1,2}, \d{4}, \d{2}:\d{2} E[SD]T, when the transfer was cleared to ship\)/);
     expect(text).toMatch(/Box A: Temperate snakes, 55–85 °F \(13–29 °C\)/);
     expect(text).toMatch(/Box C: Salamanders and newts, 45–70 °F \(7–21 °C\)/);
   });

@@ -97,12 +97,13 @@ export async function assessBoxes(
     return assessed.every((b) => ["ship", "pack"].includes(assessTransit({ timeline: later, ambientByHour: ambient, box: b.box, profile: b.profile, ambientSource }).verdict));
   };
 
+  const arrival = plannedArrivalMs === undefined ? null : plannedArrivalWarning(timeline, plannedArrivalMs);
   return {
     ...worst.result,
     suggestedDeparture: suggested && suitsEveryBox(suggested) ? suggested : null,
     sources: [...worst.result.sources, ...lookup.extraSources],
     profile: summary(worst.profile),
-    warnings: plannedArrivalMs === undefined ? timeline.warnings : [...timeline.warnings, ...[plannedArrivalWarning(timeline, plannedArrivalMs)].filter((w) => w !== null)],
+    warnings: arrival ? [...timeline.warnings, arrival] : timeline.warnings,
     boxes: assessed.map((b) => boxSummary(b, b.result)),
   };
 }

@@ -2,7 +2,7 @@ import type { TemperatureReport } from "@shared/temperature/report";
 import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
 import type { AppContext } from "../../context";
 import { TransferChangeSchema, TransferSchema } from "../../db/entities/transfer.entity";
-import { formatTempRangeF } from "../../pdf/format";
+import { formatTempRangeF, formatZonedTime } from "../../pdf/format";
 import type { ManifestTemperature } from "../../pdf/manifest-input";
 import type { ManifestExtras } from "../transfers/manifest-extras";
 import { latestCheck } from "./checks";
@@ -16,9 +16,9 @@ function safeRangeOf(report: TemperatureReport): ManifestTemperature["safeRangeF
   return minF < maxF ? { minF, maxF } : null;
 }
 
-/** Each box's own band, for its label. */
+/** Each box's own band by container id, for its label. */
 function boxRangesOf(report: TemperatureReport): NonNullable<ManifestTemperature["boxRangesF"]> {
-  return Object.fromEntries(report.boxes.map((b) => [b.label, { minF: b.profile.safeTransitF.min, maxF: b.profile.safeTransitF.max }]));
+  return Object.fromEntries(report.boxes.flatMap((b) => (b.containerId ? [[b.containerId, { minF: b.profile.safeTransitF.min, maxF: b.profile.safeTransitF.max }]] : [])));
 }
 
 const rangeText = (b: TemperatureReport["boxes"][number]) => formatTempRangeF(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
@@ -44,7 +44,9 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
   const editedSince = check ? await em.count(TransferChangeSchema, { transfer: transferId, createdAt: { $gt: check.checkedAt } }) : 0;
   if (check && editedSince === 0) {
     const report = check.result as TemperatureReport;
-    const when = `${check.checkedAt.toISOString().slice(0, 16).replace("T", " ")} UTC, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
+    // In the origin's zone, like the departure on the same page.
+    const at = formatZonedTime(check.checkedAt.toISOString(), transfer.originTimeZone ?? "UTC");
+    const when = `${at}, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
     return {
       temperature: {
         advice: [`${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`, ...report.warnings.filter((w) => w.severity === "warning").map((w) => w.message)].join("\n"),
