@@ -6,6 +6,7 @@
 import autocannon from "autocannon";
 import { benchSignIn, startBenchServer } from "./lib/bench-server";
 import { seedBenchData } from "./lib/bench-data";
+import { announceRuntime } from "./lib/runtime";
 
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 10);
 
@@ -50,6 +51,7 @@ async function taxaSearchTimes(baseUrl: string, cookie: string): Promise<{ media
 }
 
 async function main() {
+  announceRuntime("bench");
   let detailId = "";
   const server = await startBenchServer({
     beforeStart: async (databaseUrl) => {

@@ -5,10 +5,12 @@
 import { benchCompliance } from "./bench/compliance";
 import { benchTemperature } from "./bench/temperature";
 import { benchPdf } from "./bench/pdf";
+import { announceRuntime } from "./lib/runtime";
 
 type Row = { name: string; medianMs: number; p95Ms: number; bytes?: number };
 
 async function main() {
+  announceRuntime("bench");
   const rows: Row[] = [...(await benchCompliance()), ...(await benchTemperature()), ...(await benchPdf())];
   console.log("\n" + "benchmark".padEnd(64) + "median ms".padStart(11) + "p95 ms".padStart(9) + "size".padStart(10));
   for (const r of rows) {

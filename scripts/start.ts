@@ -9,6 +9,7 @@ import { ensureDatabase, PROJECT_ROOT, startCluster, stopCluster, type Cluster }
 import { prepareDatabase } from "./lib/prepare-db";
 import { localSecret } from "./lib/secrets";
 import { startAllFakes, type Fakes } from "../fakes/index";
+import { announceRuntime } from "./lib/runtime";
 
 const PORT = Number(process.env.PORT ?? 3000);
 const PG_PORT = Number(process.env.HATCHWAY_PG_PORT ?? 54328);
@@ -18,6 +19,7 @@ function step(message: string) {
 }
 
 async function main() {
+  announceRuntime("start");
   let cluster: Cluster | null = null;
   let fakes: Fakes | null = null;
   let server: ChildProcess | null = null;

@@ -8,6 +8,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import { PROJECT_ROOT, ensurePostgresInstalled } from "./lib/postgres";
 import { ensureSystemPackages } from "./lib/system-packages";
+import { announceRuntime } from "./lib/runtime";
 
 const bin = (name: string) => path.join(PROJECT_ROOT, "node_modules", ".bin", name);
 const out = path.join(PROJECT_ROOT, "test-output");
@@ -29,6 +30,7 @@ function check(name: string, cmd: string, args: string[]): void {
 }
 
 try {
+  announceRuntime("test");
   ensurePostgresInstalled();
   ensureSystemPackages();
 } catch (err) {

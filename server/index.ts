@@ -18,7 +18,7 @@ async function main() {
   const app = createApp(ctx);
   const scheduler = env.WORKERS ? startScheduler(ctx) : null;
   const server = app.listen(env.PORT, env.HOST, () => {
-    console.log(`Hatchway is serving http://${env.HOST}:${env.PORT}`);
+    console.log(`Hatchway is serving http://${env.HOST}:${env.PORT} (Node.js ${process.version})`);
   });
 
   const shutdown = async () => {
