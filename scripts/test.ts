@@ -41,6 +41,7 @@ try {
 for (const project of ["shared", "app", "node"]) check(`type-check (${project})`, bin("tsc"), ["-p", `tsconfig.${project}.json`]);
 
 check("lint", bin("eslint"), ["--max-warnings", "0", "."]);
+check("format (prettier --check)", bin("prettier"), ["--check", "--log-level", "warn", "."]);
 
 const report = path.join(out, "vitest.json");
 rmSync(report, { force: true });
