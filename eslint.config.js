@@ -5,7 +5,22 @@ import js from "@eslint/js";
 import tseslint from "typescript-eslint";
 import reactHooks from "eslint-plugin-react-hooks";
 
-const NODE_BUILTINS = ["fs", "path", "crypto", "os", "http", "https", "net", "child_process", "stream", "url", "util", "zlib", "buffer", "events"];
+const NODE_BUILTINS = [
+  "fs",
+  "path",
+  "crypto",
+  "os",
+  "http",
+  "https",
+  "net",
+  "child_process",
+  "stream",
+  "url",
+  "util",
+  "zlib",
+  "buffer",
+  "events",
+];
 const features = existsSync("src/features") ? readdirSync("src/features") : [];
 
 export default tseslint.config(
@@ -14,8 +29,14 @@ export default tseslint.config(
   ...tseslint.configs.recommended,
   {
     rules: {
-      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrors: "none" }],
-      "@typescript-eslint/consistent-type-imports": ["error", { fixStyle: "inline-type-imports", disallowTypeAnnotations: false }],
+      "@typescript-eslint/no-unused-vars": [
+        "error",
+        { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrors: "none" },
+      ],
+      "@typescript-eslint/consistent-type-imports": [
+        "error",
+        { fixStyle: "inline-type-imports", disallowTypeAnnotations: false },
+      ],
       "no-console": "off",
       eqeqeq: ["error", "smart"],
     },
@@ -48,7 +69,9 @@ export default tseslint.config(
       "react-hooks/exhaustive-deps": "warn",
       "no-restricted-imports": [
         "error",
-        { patterns: [{ group: ["**/server/**", "node:*"], message: "The client talks to the server over HTTP only." }] },
+        {
+          patterns: [{ group: ["**/server/**", "node:*"], message: "The client talks to the server over HTTP only." }],
+        },
       ],
     },
   },
@@ -72,7 +95,10 @@ export default tseslint.config(
   {
     files: ["server/**/*.ts"],
     rules: {
-      "no-restricted-imports": ["error", { patterns: [{ group: ["@/*", "**/src/**"], message: "The server does not import the client." }] }],
+      "no-restricted-imports": [
+        "error",
+        { patterns: [{ group: ["@/*", "**/src/**"], message: "The server does not import the client." }] },
+      ],
     },
   },
 );

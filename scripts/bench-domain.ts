@@ -14,9 +14,16 @@ async function main() {
   const rows: Row[] = [...(await benchCompliance()), ...(await benchTemperature()), ...(await benchPdf())];
   console.log("\n" + "benchmark".padEnd(64) + "median ms".padStart(11) + "p95 ms".padStart(9) + "size".padStart(10));
   for (const r of rows) {
-    console.log(r.name.padEnd(64) + r.medianMs.toFixed(2).padStart(11) + r.p95Ms.toFixed(2).padStart(9) + (r.bytes ? `${(r.bytes / 1024).toFixed(1)} KB` : "").padStart(10));
+    console.log(
+      r.name.padEnd(64) +
+        r.medianMs.toFixed(2).padStart(11) +
+        r.p95Ms.toFixed(2).padStart(9) +
+        (r.bytes ? `${(r.bytes / 1024).toFixed(1)} KB` : "").padStart(10),
+    );
   }
-  console.log("\nTargets: compliance 500 animals × 10,000 rules median ≤ 20 ms; 72 h ground trip median ≤ 5 ms; manifest 100 animals ≤ 400 ms and ≤ 250 KB.");
+  console.log(
+    "\nTargets: compliance 500 animals × 10,000 rules median ≤ 20 ms; 72 h ground trip median ≤ 5 ms; manifest 100 animals ≤ 400 ms and ≤ 250 KB.",
+  );
 }
 
 void main();

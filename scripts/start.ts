@@ -48,11 +48,19 @@ async function main() {
     step(seeded ? "database migrated and demo scenario seeded" : "database migrated (existing data kept)");
 
     step("building the client…");
-    const build = spawnSync(path.join(PROJECT_ROOT, "node_modules/.bin/vite"), ["build", "--logLevel", "warn"], { cwd: PROJECT_ROOT, stdio: "inherit" });
+    const build = spawnSync(path.join(PROJECT_ROOT, "node_modules/.bin/vite"), ["build", "--logLevel", "warn"], {
+      cwd: PROJECT_ROOT,
+      stdio: "inherit",
+    });
     if (build.status !== 0) throw new Error("The client build failed; see the output above.");
 
-    fakes = await startAllFakes({ dataDir: path.join(PROJECT_ROOT, ".data"), ports: { smtp: 4100, smtpHttp: 4101, weather: 4102, s3: 4103 } });
-    step(`local fakes up: SMTP ${fakes.smtp.smtpUrl}, caught mail ${fakes.smtp.inboxUrl}, S3 ${fakes.s3.endpoint}, weather ${fakes.weather.url}`);
+    fakes = await startAllFakes({
+      dataDir: path.join(PROJECT_ROOT, ".data"),
+      ports: { smtp: 4100, smtpHttp: 4101, weather: 4102, s3: 4103 },
+    });
+    step(
+      `local fakes up: SMTP ${fakes.smtp.smtpUrl}, caught mail ${fakes.smtp.inboxUrl}, S3 ${fakes.s3.endpoint}, weather ${fakes.weather.url}`,
+    );
 
     const env = {
       ...process.env,
@@ -65,14 +73,20 @@ async function main() {
       SESSION_SECRET: localSecret("session"),
       CLIENT_DIST: path.join(PROJECT_ROOT, "dist"),
     };
-    server = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], { cwd: PROJECT_ROOT, env, stdio: "inherit" });
+    server = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
+      cwd: PROJECT_ROOT,
+      env,
+      stdio: "inherit",
+    });
     server.on("exit", (code) => {
       if (!stopping) {
         step(`the server stopped (exit ${code})`);
         void stop(code ?? 1);
       }
     });
-    step(`open http://127.0.0.1:${PORT} — demo accounts are listed in README.md (password hatchway-demo). Ctrl-C stops everything.`);
+    step(
+      `open http://127.0.0.1:${PORT} — demo accounts are listed in README.md (password hatchway-demo). Ctrl-C stops everything.`,
+    );
   } catch (err) {
     console.error(`[start] ${(err as Error).message}`);
     await stop(1);

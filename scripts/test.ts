@@ -38,7 +38,8 @@ try {
   failed++;
 }
 
-for (const project of ["shared", "app", "node"]) check(`type-check (${project})`, bin("tsc"), ["-p", `tsconfig.${project}.json`]);
+for (const project of ["shared", "app", "node"])
+  check(`type-check (${project})`, bin("tsc"), ["-p", `tsconfig.${project}.json`]);
 
 check("lint", bin("eslint"), ["--max-warnings", "0", "."]);
 check("format (prettier --check)", bin("prettier"), ["--check", "--log-level", "warn", "."]);
@@ -47,10 +48,14 @@ const report = path.join(out, "vitest.json");
 rmSync(report, { force: true });
 process.stdout.write("\n[test] vitest: unit, dom, integration, e2e\n");
 const extra = process.argv.slice(2);
-const vitest = spawnSync(bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...extra], {
-  cwd: PROJECT_ROOT,
-  stdio: "inherit",
-});
+const vitest = spawnSync(
+  bin("vitest"),
+  ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...extra],
+  {
+    cwd: PROJECT_ROOT,
+    stdio: "inherit",
+  },
+);
 
 if (existsSync(report)) {
   const json = JSON.parse(readFileSync(report, "utf8")) as {
@@ -63,7 +68,8 @@ if (existsSync(report)) {
   failed += json.numFailedTests;
   // A file that failed to load has no tests to count: count the file.
   const brokenFiles = json.testResults.filter((r) => r.status === "failed" && r.assertionResults.length === 0);
-  for (const f of brokenFiles) process.stdout.write(`[test] could not run ${path.relative(PROJECT_ROOT, f.name)}: ${f.message ?? ""}\n`);
+  for (const f of brokenFiles)
+    process.stdout.write(`[test] could not run ${path.relative(PROJECT_ROOT, f.name)}: ${f.message ?? ""}\n`);
   failed += brokenFiles.length;
   if (vitest.status !== 0 && json.numFailedTests === 0 && brokenFiles.length === 0) failed++;
 } else {

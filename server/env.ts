@@ -1,8 +1,6 @@
 import { z } from "zod";
 
-const bool = z
-  .enum(["true", "false", "1", "0"])
-  .transform((v) => v === "true" || v === "1");
+const bool = z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1");
 
 /**
  * The environment, parsed once at boot. A bad value stops the process with a message
@@ -16,8 +14,18 @@ export const envSchema = z.object({
   DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, "must be a postgres:// URL"),
   SESSION_SECRET: z.string().min(32, "must be at least 32 characters"),
   SECURE_COOKIES: bool.default(false),
-  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(30),
-  SESSION_ABSOLUTE_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(12),
+  SESSION_IDLE_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 60)
+    .default(30),
+  SESSION_ABSOLUTE_HOURS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 30)
+    .default(12),
   SMTP_URL: z.string().regex(/^smtps?:\/\//, "must be an smtp:// URL"),
   MAIL_FROM: z.string().default("Hatchway <no-reply@hatchway.test>"),
   /** The SMTP fake's HTTP inbox; set in development so admins can read caught mail. */

@@ -25,7 +25,9 @@ const next = () => `${Date.now().toString(36)}${(++counter).toString(36)}`;
 
 export const DEMO_PASSWORD = "hatchway-demo";
 
-type OrgOverrides = Partial<Pick<Organization, "name" | "kind" | "street" | "city" | "state" | "zip" | "phone" | "email">>;
+type OrgOverrides = Partial<
+  Pick<Organization, "name" | "kind" | "street" | "city" | "state" | "zip" | "phone" | "email">
+>;
 
 export async function buildOrganization(em: EntityManager, overrides: OrgOverrides = {}): Promise<Organization> {
   const n = next();
@@ -92,7 +94,14 @@ export async function taxonId(em: EntityManager, scientificName: string): Promis
   return (await em.findOneOrFail(TaxonSchema, { scientificName })).id;
 }
 
-type AnimalSpec = { taxon: string; count?: number; sex?: "male" | "female" | "unknown"; box?: string; lengthMm?: number; identifier?: string };
+type AnimalSpec = {
+  taxon: string;
+  count?: number;
+  sex?: "male" | "female" | "unknown";
+  box?: string;
+  lengthMm?: number;
+  identifier?: string;
+};
 
 /** A valid transfer input: one box per distinct `box` key, departing in `daysAhead` days. */
 export async function transferInput(
@@ -117,7 +126,15 @@ export async function transferInput(
     handlingNotes: "Keep upright and out of the sun.",
     privateNotes: null,
     containers: boxes.map((key, i) => ({
-      key, label: `Box ${key}`, lengthMm: 400, widthMm: 300, heightMm: 250, wallMaterial: "eps" as const, wallThicknessMm: 25, pack: "none" as const, sealNumber: `SEAL-${i + 1}`,
+      key,
+      label: `Box ${key}`,
+      lengthMm: 400,
+      widthMm: 300,
+      heightMm: 250,
+      wallMaterial: "eps" as const,
+      wallThicknessMm: 25,
+      pack: "none" as const,
+      sealNumber: `SEAL-${i + 1}`,
     })),
     animals: await Promise.all(
       animals.map(async (a) => ({
@@ -149,28 +166,72 @@ export type TransferCast = { transfer: Transfer; sender: User; receiver: User; c
  */
 export async function buildTransfer(
   em: EntityManager,
-  options: { status?: TransferStatus; legs?: number; sender?: User; receiver?: User; couriers?: User[]; animals?: AnimalSpec[]; mode?: TransferInputParsed["mode"] } = {},
+  options: {
+    status?: TransferStatus;
+    legs?: number;
+    sender?: User;
+    receiver?: User;
+    couriers?: User[];
+    animals?: AnimalSpec[];
+    mode?: TransferInputParsed["mode"];
+  } = {},
 ): Promise<TransferCast> {
   const sender = options.sender ?? (await buildUser(em, { role: "member" }));
-  const receiver = options.receiver ?? (await buildUser(em, { role: "member", organization: await buildOrganization(em, { kind: "nature_centre", state: "OR", city: "Eugene", zip: "97401" }) }));
-  const couriers = options.couriers ?? (await Promise.all(Array.from({ length: options.legs ?? 1 }, () => buildUser(em, { role: "courier" }))));
+  const receiver =
+    options.receiver ??
+    (await buildUser(em, {
+      role: "member",
+      organization: await buildOrganization(em, { kind: "nature_centre", state: "OR", city: "Eugene", zip: "97401" }),
+    }));
+  const couriers =
+    options.couriers ??
+    (await Promise.all(Array.from({ length: options.legs ?? 1 }, () => buildUser(em, { role: "courier" }))));
   await em.populate(receiver, ["organization"]);
   const s = await actorOf(em, sender);
   const r = await actorOf(em, receiver);
   const input = await transferInput(em, receiver.organization!.id, { animals: options.animals, mode: options.mode });
   let transfer = await createTransfer({ em: em.fork(), actor: s, input });
   const target = options.status ?? "draft";
-  const order: TransferStatus[] = ["draft", "awaiting_receiver", "ready", "in_transit", "delivered", "checked_in", "closed"];
+  const order: TransferStatus[] = [
+    "draft",
+    "awaiting_receiver",
+    "ready",
+    "in_transit",
+    "delivered",
+    "checked_in",
+    "closed",
+  ];
   const reach = (st: TransferStatus) => order.indexOf(target) >= order.indexOf(st);
   if (target === "cancelled") {
-    transfer = await transitionTransfer({ em: em.fork(), actor: s, transferId: transfer.id, input: { to: "cancelled", reason: "Test cancellation" } });
+    transfer = await transitionTransfer({
+      em: em.fork(),
+      actor: s,
+      transferId: transfer.id,
+      input: { to: "cancelled", reason: "Test cancellation" },
+    });
   }
-  if (reach("awaiting_receiver")) transfer = await transitionTransfer({ em: em.fork(), actor: s, transferId: transfer.id, input: { to: "awaiting_receiver" } });
+  if (reach("awaiting_receiver"))
+    transfer = await transitionTransfer({
+      em: em.fork(),
+      actor: s,
+      transferId: transfer.id,
+      input: { to: "awaiting_receiver" },
+    });
   if (reach("ready")) {
     // Tests run without a weather service: the temperature gate answers "forecast unavailable"
     // and the receiver overrides it with a reason, as a party may (the override is logged).
-    transfer = await transitionTransfer({ em: em.fork(), actor: r, transferId: transfer.id, input: { to: "ready", override: true, reason: FIXTURE_OVERRIDE } });
-    transfer = await assignLegs({ em: em.fork(), actor: s, transferId: transfer.id, input: { legs: couriers.map((c) => ({ courierId: c.id })) } });
+    transfer = await transitionTransfer({
+      em: em.fork(),
+      actor: r,
+      transferId: transfer.id,
+      input: { to: "ready", override: true, reason: FIXTURE_OVERRIDE },
+    });
+    transfer = await assignLegs({
+      em: em.fork(),
+      actor: s,
+      transferId: transfer.id,
+      input: { legs: couriers.map((c) => ({ courierId: c.id })) },
+    });
   }
   const containers = await em.fork().find(ContainerSchema, { transfer: transfer.id });
   const handoff = (index: number) => ({
@@ -183,18 +244,49 @@ export async function buildTransfer(
     receivedByName: "Receiver",
     acknowledged: true as const,
   });
-  if (reach("in_transit")) transfer = await recordHandoff({ em: em.fork(), actor: await actorOf(em, couriers[0]!), transferId: transfer.id, input: handoff(0) as never });
+  if (reach("in_transit"))
+    transfer = await recordHandoff({
+      em: em.fork(),
+      actor: await actorOf(em, couriers[0]!),
+      transferId: transfer.id,
+      input: handoff(0) as never,
+    });
   if (reach("delivered")) {
-    for (let i = 1; i < couriers.length; i++) transfer = await recordHandoff({ em: em.fork(), actor: await actorOf(em, couriers[i]!), transferId: transfer.id, input: handoff(i) as never });
-    transfer = await recordHandoff({ em: em.fork(), actor: r, transferId: transfer.id, input: handoff(couriers.length) as never });
+    for (let i = 1; i < couriers.length; i++)
+      transfer = await recordHandoff({
+        em: em.fork(),
+        actor: await actorOf(em, couriers[i]!),
+        transferId: transfer.id,
+        input: handoff(i) as never,
+      });
+    transfer = await recordHandoff({
+      em: em.fork(),
+      actor: r,
+      transferId: transfer.id,
+      input: handoff(couriers.length) as never,
+    });
   }
   if (reach("checked_in")) {
     const animals = await em.fork().find(AnimalSchema, { transfer: transfer.id });
     transfer = await checkInTransfer({
-      em: em.fork(), actor: r, transferId: transfer.id,
-      input: { items: animals.map((a) => ({ animalId: a.id, arrivedWell: a.count, arrivedProblem: 0, deadOnArrival: 0, missing: 0 })), extras: [], signedName: "Receiver", acknowledged: true } as never,
+      em: em.fork(),
+      actor: r,
+      transferId: transfer.id,
+      input: {
+        items: animals.map((a) => ({
+          animalId: a.id,
+          arrivedWell: a.count,
+          arrivedProblem: 0,
+          deadOnArrival: 0,
+          missing: 0,
+        })),
+        extras: [],
+        signedName: "Receiver",
+        acknowledged: true,
+      } as never,
     });
   }
-  if (reach("closed")) transfer = await transitionTransfer({ em: em.fork(), actor: r, transferId: transfer.id, input: { to: "closed" } });
+  if (reach("closed"))
+    transfer = await transitionTransfer({ em: em.fork(), actor: r, transferId: transfer.id, input: { to: "closed" } });
   return { transfer, sender, receiver, couriers };
 }

@@ -36,7 +36,8 @@ export function fakeTemperatureC(latDeg: number, lonDeg: number, unixS: number, 
   const daily = DAILY_HALF_RANGE_C * Math.cos((2 * Math.PI * (solarHour - PEAK_SOLAR_HOUR)) / 24);
   const days = unixS / DAY_S;
   const phase = latDeg * 0.37 + lonDeg * 0.11;
-  const wobble = 2.5 * Math.sin((2 * Math.PI * days) / 5.3 + phase) + 1.2 * Math.sin((2 * Math.PI * days) / 2.9 + 2 * phase);
+  const wobble =
+    2.5 * Math.sin((2 * Math.PI * days) / 5.3 + phase) + 1.2 * Math.sin((2 * Math.PI * days) / 2.9 + 2 * phase);
   return meanC + season + daily + wobble + shiftC;
 }
 

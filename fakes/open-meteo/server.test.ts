@@ -96,14 +96,22 @@ describe("the Open-Meteo fake, read by the real openmeteo client", () => {
   it("records what it received, in process and over HTTP", async () => {
     await decode();
     expect(fake.requests).toHaveLength(1);
-    expect(fake.requests[0]).toMatchObject({ method: "GET", path: "/v1/forecast", query: { format: "flatbuffers", latitude: "36.12,33.45", start_hour: "2026-07-15T00:00" } });
+    expect(fake.requests[0]).toMatchObject({
+      method: "GET",
+      path: "/v1/forecast",
+      query: { format: "flatbuffers", latitude: "36.12,33.45", start_hour: "2026-07-15T00:00" },
+    });
     const overHttp = (await (await fetch(`${fake.url}/__requests`)).json()) as unknown[];
     expect(overHttp).toEqual(fake.requests);
   });
 
   it("refuses bad parameters with a 400 and a reason, as the service does", async () => {
-    await expect(fetchWeatherApi(forecastUrl(), { ...params, latitude: [95], longitude: [0] }, 1)).rejects.toThrow(/Latitude must be in range/);
-    await expect(fetchWeatherApi(forecastUrl(), { ...params, hourly: "wind_speed_10m" }, 1)).rejects.toThrow(/temperature_2m only/);
+    await expect(fetchWeatherApi(forecastUrl(), { ...params, latitude: [95], longitude: [0] }, 1)).rejects.toThrow(
+      /Latitude must be in range/,
+    );
+    await expect(fetchWeatherApi(forecastUrl(), { ...params, hourly: "wind_speed_10m" }, 1)).rejects.toThrow(
+      /temperature_2m only/,
+    );
   });
 });
 

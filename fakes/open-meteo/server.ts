@@ -14,7 +14,16 @@ import { Variable } from "@openmeteo/sdk/variable.js";
 import { SCENARIO_SHIFT_C, celsiusToFahrenheit, fakeTemperatureC } from "./climate";
 import { encodeLocation, encodeResponse, type LocationResponse } from "./flatbuffers-response";
 
-export const WEATHER_SCENARIOS = ["normal", "heat_wave", "cold_snap", "outage", "reset", "garbage", "slow", "redirect"] as const;
+export const WEATHER_SCENARIOS = [
+  "normal",
+  "heat_wave",
+  "cold_snap",
+  "outage",
+  "reset",
+  "garbage",
+  "slow",
+  "redirect",
+] as const;
 export type WeatherScenario = (typeof WEATHER_SCENARIOS)[number];
 
 /** Kinds of bad answer the "garbage" scenario sends, each a 200 the client will try to read. */
@@ -63,11 +72,13 @@ class RequestError extends Error {}
 function parseCoordinates(query: URLSearchParams): { lat: number; lon: number }[] {
   const lats = (query.get("latitude") ?? "").split(",").filter(Boolean).map(Number);
   const lons = (query.get("longitude") ?? "").split(",").filter(Boolean).map(Number);
-  if (lats.length === 0 || lats.length !== lons.length) throw new RequestError("Parameter 'latitude' and 'longitude' must have the same number of elements");
+  if (lats.length === 0 || lats.length !== lons.length)
+    throw new RequestError("Parameter 'latitude' and 'longitude' must have the same number of elements");
   if (lats.length > MAX_LOCATIONS) throw new RequestError("Too many locations");
   return lats.map((lat, i) => {
     const lon = lons[i]!;
-    if (!(lat >= -90 && lat <= 90) || !(lon >= -180 && lon <= 180)) throw new RequestError(`Latitude must be in range of -90 to 90°. Given: ${lat}.`);
+    if (!(lat >= -90 && lat <= 90) || !(lon >= -180 && lon <= 180))
+      throw new RequestError(`Latitude must be in range of -90 to 90°. Given: ${lat}.`);
     return { lat, lon };
   });
 }
@@ -80,7 +91,8 @@ function parseHourUtc(value: string, name: string): number {
 }
 
 function parseDateUtc(value: string, name: string): number {
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(value) || !Number.isFinite(Date.parse(value))) throw new RequestError(`Invalid ${name}: ${value}`);
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(value) || !Number.isFinite(Date.parse(value)))
+    throw new RequestError(`Invalid ${name}: ${value}`);
   return Date.parse(`${value}T00:00:00Z`) / 1000;
 }
 
@@ -90,23 +102,32 @@ function parseHours(query: URLSearchParams): { startS: number; endS: number } {
   if (!["GMT", "UTC"].includes(zone)) throw new RequestError("The fake serves timezone=GMT only");
   let range: { startS: number; endS: number };
   if (query.has("start_hour") || query.has("end_hour")) {
-    range = { startS: parseHourUtc(query.get("start_hour") ?? "", "start_hour"), endS: parseHourUtc(query.get("end_hour") ?? "", "end_hour") + HOUR_S };
+    range = {
+      startS: parseHourUtc(query.get("start_hour") ?? "", "start_hour"),
+      endS: parseHourUtc(query.get("end_hour") ?? "", "end_hour") + HOUR_S,
+    };
   } else if (query.has("start_date") || query.has("end_date")) {
-    range = { startS: parseDateUtc(query.get("start_date") ?? "", "start_date"), endS: parseDateUtc(query.get("end_date") ?? "", "end_date") + 24 * HOUR_S };
+    range = {
+      startS: parseDateUtc(query.get("start_date") ?? "", "start_date"),
+      endS: parseDateUtc(query.get("end_date") ?? "", "end_date") + 24 * HOUR_S,
+    };
   } else {
     const days = Number(query.get("forecast_days") ?? DEFAULT_FORECAST_DAYS);
     const pastDays = Number(query.get("past_days") ?? 0);
-    if (!(days >= 0 && days <= 16) || !(pastDays >= 0 && pastDays <= 92)) throw new RequestError("Forecast days is invalid");
+    if (!(days >= 0 && days <= 16) || !(pastDays >= 0 && pastDays <= 92))
+      throw new RequestError("Forecast days is invalid");
     const todayS = Math.floor(Date.now() / 86_400_000) * 86_400;
     range = { startS: todayS - pastDays * 86_400, endS: todayS + days * 86_400 };
   }
-  if (!(range.endS > range.startS) || range.endS - range.startS > MAX_HOURS * HOUR_S) throw new RequestError("Parameter 'end_hour' must be after 'start_hour' and within 31 days");
+  if (!(range.endS > range.startS) || range.endS - range.startS > MAX_HOURS * HOUR_S)
+    throw new RequestError("Parameter 'end_hour' must be after 'start_hour' and within 31 days");
   return range;
 }
 
 function hourlyVariables(query: URLSearchParams): void {
   const hourly = (query.get("hourly") ?? "").split(",").filter(Boolean);
-  if (hourly.length !== 1 || hourly[0] !== "temperature_2m") throw new RequestError("The fake serves hourly=temperature_2m only");
+  if (hourly.length !== 1 || hourly[0] !== "temperature_2m")
+    throw new RequestError("The fake serves hourly=temperature_2m only");
 }
 
 /** Builds the locations of a forecast answer; `spoil` lets the garbage scenario bend the values. */
@@ -134,7 +155,12 @@ function forecastLocations(query: URLSearchParams, shiftC: number, spoil?: Garba
       utcOffsetSeconds: 0,
       timezone: "GMT",
       timezoneAbbreviation: "GMT",
-      hourly: { timeS: startS, timeEndS: startS + hours * HOUR_S, intervalS: HOUR_S, variables: [{ variable: Variable.temperature, unit, altitude: 2, values }] },
+      hourly: {
+        timeS: startS,
+        timeEndS: startS + hours * HOUR_S,
+        intervalS: HOUR_S,
+        variables: [{ variable: Variable.temperature, unit, altitude: 2, values }],
+      },
     };
   });
 }
@@ -199,7 +225,9 @@ async function readJson(req: http.IncomingMessage): Promise<unknown> {
 }
 
 /** Starts the fake on `port` (0 picks a free one) with a starting scenario. */
-export async function startOpenMeteoFake(options: { port?: number; host?: string; scenario?: WeatherScenario } & ScenarioOptions = {}): Promise<OpenMeteoFake> {
+export async function startOpenMeteoFake(
+  options: { port?: number; host?: string; scenario?: WeatherScenario } & ScenarioOptions = {},
+): Promise<OpenMeteoFake> {
   const host = options.host ?? "127.0.0.1";
   let scenario: WeatherScenario = "normal";
   let scenarioOptions: ScenarioOptions = {};
@@ -208,7 +236,8 @@ export async function startOpenMeteoFake(options: { port?: number; host?: string
 
   const setScenario = (next: WeatherScenario, nextOptions: ScenarioOptions = {}) => {
     if (!WEATHER_SCENARIOS.includes(next)) throw new RangeError(`unknown scenario ${String(next)}`);
-    if (nextOptions.garbage !== undefined && !GARBAGE_KINDS.includes(nextOptions.garbage)) throw new RangeError(`unknown garbage kind ${String(nextOptions.garbage)}`);
+    if (nextOptions.garbage !== undefined && !GARBAGE_KINDS.includes(nextOptions.garbage))
+      throw new RangeError(`unknown garbage kind ${String(nextOptions.garbage)}`);
     if (nextOptions.slowMs !== undefined && !(nextOptions.slowMs >= 0)) throw new RangeError("slowMs must be ≥ 0");
     scenario = next;
     scenarioOptions = nextOptions;
@@ -219,7 +248,9 @@ export async function startOpenMeteoFake(options: { port?: number; host?: string
     const query = url.searchParams;
     switch (scenario) {
       case "outage":
-        res.writeHead(503, { "content-type": "text/html", "retry-after": "120" }).end("<html><body><h1>503 Service Unavailable</h1></body></html>");
+        res
+          .writeHead(503, { "content-type": "text/html", "retry-after": "120" })
+          .end("<html><body><h1>503 Service Unavailable</h1></body></html>");
         return;
       case "reset":
         req.socket.destroy();
@@ -264,7 +295,12 @@ export async function startOpenMeteoFake(options: { port?: number; host?: string
       requests.length = 0;
       res.writeHead(204).end();
     } else if (FORECAST_PATHS.has(url.pathname) && req.method === "GET") {
-      requests.push({ method: req.method, path: url.pathname, query: Object.fromEntries(url.searchParams), receivedAt: new Date().toISOString() });
+      requests.push({
+        method: req.method,
+        path: url.pathname,
+        query: Object.fromEntries(url.searchParams),
+        receivedAt: new Date().toISOString(),
+      });
       answerForecast(url, req, res);
     } else {
       sendJson(res, 404, { error: true, reason: "Not found" });
@@ -312,10 +348,20 @@ export async function startOpenMeteoFake(options: { port?: number; host?: string
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
   const { values } = parseArgs({
-    options: { port: { type: "string", default: "4102" }, host: { type: "string", default: "127.0.0.1" }, scenario: { type: "string", default: "normal" } },
+    options: {
+      port: { type: "string", default: "4102" },
+      host: { type: "string", default: "127.0.0.1" },
+      scenario: { type: "string", default: "normal" },
+    },
   });
-  const fake = await startOpenMeteoFake({ port: Number(values.port), host: values.host, scenario: values.scenario as WeatherScenario });
-  process.stdout.write(`open-meteo fake (${fake.scenario}) on ${fake.url}/v1/forecast; control at ${fake.controlUrl}\n`);
+  const fake = await startOpenMeteoFake({
+    port: Number(values.port),
+    host: values.host,
+    scenario: values.scenario as WeatherScenario,
+  });
+  process.stdout.write(
+    `open-meteo fake (${fake.scenario}) on ${fake.url}/v1/forecast; control at ${fake.controlUrl}\n`,
+  );
   const stop = () => void fake.close().then(() => process.exit(0));
   process.once("SIGINT", stop);
   process.once("SIGTERM", stop);

@@ -71,7 +71,9 @@ export async function startSmtpFake(options: { smtpPort?: number; httpPort?: num
       res.end();
     }
   });
-  const httpPort = await new Promise<number>((resolve) => web.listen(options.httpPort ?? 0, "127.0.0.1", () => resolve((web.address() as AddressInfo).port)));
+  const httpPort = await new Promise<number>((resolve) =>
+    web.listen(options.httpPort ?? 0, "127.0.0.1", () => resolve((web.address() as AddressInfo).port)),
+  );
 
   const fake: SmtpFake = {
     smtpPort,

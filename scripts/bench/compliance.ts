@@ -42,8 +42,17 @@ function syntheticRules(count: number, random: () => number): Rule[] {
   const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)] as T;
   const effects: RuleEffect[] = [
     { kind: "prohibited" },
-    { kind: "permit_required", permit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true } },
-    { kind: "certificate_required", withinDays: 30, statements: ["examined and found free of ticks"], accreditedVeterinarian: true, namesSpecies: true },
+    {
+      kind: "permit_required",
+      permit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true },
+    },
+    {
+      kind: "certificate_required",
+      withinDays: 30,
+      statements: ["examined and found free of ticks"],
+      accreditedVeterinarian: true,
+      namesSpecies: true,
+    },
     { kind: "packing" },
     { kind: "advisory" },
   ];
@@ -93,7 +102,13 @@ function syntheticTransfer(rules: readonly Rule[], random: () => number): Evalua
     validTo: "2026-12-31",
   }));
   return buildInput({
-    facts: buildFacts({ originState: "TX", destinationState: "OH", transitStates: ["AR", "MO", "IL", "IN"], purpose: pick(PURPOSES), sale: true }),
+    facts: buildFacts({
+      originState: "TX",
+      destinationState: "OH",
+      transitStates: ["AR", "MO", "IL", "IN"],
+      purpose: pick(PURPOSES),
+      sale: true,
+    }),
     animals,
     documents,
     rules,

@@ -23,7 +23,11 @@ export interface PdfBenchResult {
 
 const round = (ms: number): number => Math.round(ms * 100) / 100;
 
-async function measure(name: string, render: (input: ManifestInput) => Promise<Uint8Array>, input: ManifestInput): Promise<PdfBenchResult> {
+async function measure(
+  name: string,
+  render: (input: ManifestInput) => Promise<Uint8Array>,
+  input: ManifestInput,
+): Promise<PdfBenchResult> {
   for (let i = 0; i < WARMUP_RUNS; i++) await render(input);
   const timesMs: number[] = [];
   let bytes = 0;
@@ -33,7 +37,8 @@ async function measure(name: string, render: (input: ManifestInput) => Promise<U
     timesMs.push(performance.now() - start);
   }
   timesMs.sort((a, b) => a - b);
-  const at = (q: number): number => timesMs[Math.min(timesMs.length - 1, Math.ceil(q * timesMs.length) - 1)] ?? Number.NaN;
+  const at = (q: number): number =>
+    timesMs[Math.min(timesMs.length - 1, Math.ceil(q * timesMs.length) - 1)] ?? Number.NaN;
   return { name, medianMs: round(at(0.5)), p95Ms: round(at(0.95)), bytes };
 }
 

@@ -30,7 +30,15 @@ const trip: TimelineRequest = {
   destination: { label: "Los Angeles, CA", lat: 33.94, lon: -118.4, timeZone: "America/Los_Angeles" },
   departAt: "2026-05-04T06:00:00-05:00",
 };
-const box: BoxSpec = { wall: "eps", wallThicknessMm: 38, lengthMm: 350, widthMm: 300, heightMm: 250, contentsG: 900, pack: "none" };
+const box: BoxSpec = {
+  wall: "eps",
+  wallThicknessMm: 38,
+  lengthMm: 350,
+  widthMm: 300,
+  heightMm: 250,
+  contentsG: 900,
+  pack: "none",
+};
 
 /** Hourly forecasts at every waypoint over the trip and the seven days after, as the adapter returns them. */
 function givenForecasts(timeline: TransitTimeline, shiftC: number): PointForecast[] {
@@ -41,7 +49,10 @@ function givenForecasts(timeline: TransitTimeline, shiftC: number): PointForecas
     lon: w.lon,
     hours: Array.from({ length: hours }, (_, h) => {
       const atMs = Date.parse(fromHour) + h * 3_600_000;
-      return { at: new Date(atMs).toISOString(), tempF: celsiusToFahrenheit(fakeTemperatureC(w.lat, w.lon, atMs / 1000, shiftC)) };
+      return {
+        at: new Date(atMs).toISOString(),
+        tempF: celsiusToFahrenheit(fakeTemperatureC(w.lat, w.lon, atMs / 1000, shiftC)),
+      };
     }),
   }));
 }
@@ -54,7 +65,13 @@ function assessTrip(forecasts: readonly PointForecast[]) {
     timelineFor: (departMs) => buildTransitTimeline({ ...trip, departAt: departMs }),
     ambientFor: (candidate) => ambientFromForecasts(candidate, index),
   };
-  return assessTransit({ timeline, ambientByHour: ambientFromForecasts(timeline, index), box, profile: DEFAULT_PROFILES.temperate_snake, search });
+  return assessTransit({
+    timeline,
+    ambientByHour: ambientFromForecasts(timeline, index),
+    box,
+    profile: DEFAULT_PROFILES.temperate_snake,
+    search,
+  });
 }
 
 const round = (ms: number): number => Math.round(ms * 1000) / 1000;
@@ -68,7 +85,8 @@ function measure(name: string, run: () => unknown): BenchResult {
     timesMs.push(performance.now() - start);
   }
   timesMs.sort((a, b) => a - b);
-  const at = (q: number): number => timesMs[Math.min(timesMs.length - 1, Math.ceil(q * timesMs.length) - 1)] ?? Number.NaN;
+  const at = (q: number): number =>
+    timesMs[Math.min(timesMs.length - 1, Math.ceil(q * timesMs.length) - 1)] ?? Number.NaN;
   return { name, medianMs: round(at(0.5)), p95Ms: round(at(0.95)) };
 }
 
@@ -80,13 +98,19 @@ export async function benchTemperature(): Promise<BenchResult[]> {
   const label = `${Math.round(timeline.durationH)} h ground trip, ${timeline.waypoints.length} points`;
   return [
     measure(`temperature: ${label}, assessed (${assessTrip(normal).verdict})`, () => assessTrip(normal)),
-    measure(`temperature: ${label}, heat wave with 7-day search (${assessTrip(heatWave).verdict})`, () => assessTrip(heatWave)),
+    measure(`temperature: ${label}, heat wave with 7-day search (${assessTrip(heatWave).verdict})`, () =>
+      assessTrip(heatWave),
+    ),
   ];
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
   const results = await benchTemperature();
-  for (const { name, medianMs, p95Ms } of results) process.stdout.write(`${name}: median ${medianMs} ms, p95 ${p95Ms} ms\n`);
+  for (const { name, medianMs, p95Ms } of results)
+    process.stdout.write(`${name}: median ${medianMs} ms, p95 ${p95Ms} ms\n`);
   const first = results[0];
-  if (first) process.stdout.write(`target (median ≤ ${TEMPERATURE_TARGET.medianMs} ms): ${first.medianMs <= TEMPERATURE_TARGET.medianMs ? "met" : "MISSED"}\n`);
+  if (first)
+    process.stdout.write(
+      `target (median ≤ ${TEMPERATURE_TARGET.medianMs} ms): ${first.medianMs <= TEMPERATURE_TARGET.medianMs ? "met" : "MISSED"}\n`,
+    );
 }

@@ -18,24 +18,69 @@ export async function seedBenchData(databaseUrl: string, bulkTransfers = 100_000
   const orm = await initORM(databaseUrl, { poolMax: 4 });
   try {
     const em = orm.em.fork();
-    const sender = await em.findOneOrFail(UserSchema, { email: "sender@demo.hatchway.test" }, { populate: ["organization"] });
-    const receiver = await em.findOneOrFail(UserSchema, { email: "receiver@demo.hatchway.test" }, { populate: ["organization"] });
-    const couriers = [await em.findOneOrFail(UserSchema, { email: "courier@demo.hatchway.test" }), ...(await Promise.all([1, 2, 3].map(() => buildUser(em, { role: "courier" }))))];
-    const species = (await em.find(TaxonSchema, { rank: "species" }, { limit: 10, orderBy: { scientificName: "asc" } })).map((t) => t.scientificName);
-    const animals = Array.from({ length: 50 }, (_, i) => ({ taxon: species[i % 10]!, count: 1 + (i % 3), sex: (["male", "female", "unknown"] as const)[i % 3], box: `B${i % 10}` }));
+    const sender = await em.findOneOrFail(
+      UserSchema,
+      { email: "sender@demo.hatchway.test" },
+      { populate: ["organization"] },
+    );
+    const receiver = await em.findOneOrFail(
+      UserSchema,
+      { email: "receiver@demo.hatchway.test" },
+      { populate: ["organization"] },
+    );
+    const couriers = [
+      await em.findOneOrFail(UserSchema, { email: "courier@demo.hatchway.test" }),
+      ...(await Promise.all([1, 2, 3].map(() => buildUser(em, { role: "courier" })))),
+    ];
+    const species = (
+      await em.find(TaxonSchema, { rank: "species" }, { limit: 10, orderBy: { scientificName: "asc" } })
+    ).map((t) => t.scientificName);
+    const animals = Array.from({ length: 50 }, (_, i) => ({
+      taxon: species[i % 10]!,
+      count: 1 + (i % 3),
+      sex: (["male", "female", "unknown"] as const)[i % 3],
+      box: `B${i % 10}`,
+    }));
     const input = await transferInput(em, receiver.organization!.id, { animals, daysAhead: 2 });
     const s = await actorOf(em, sender);
     const r = await actorOf(em, receiver);
     const t = await createTransfer({ em: em.fork(), actor: s, input });
     await transitionTransfer({ em: em.fork(), actor: s, transferId: t.id, input: { to: "awaiting_receiver" } });
-    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "ready", override: true, reason: "Benchmark data" } });
-    await assignLegs({ em: em.fork(), actor: s, transferId: t.id, input: { legs: couriers.slice(0, 2).map((c) => ({ courierId: c.id })) } });
-    await assignLegs({ em: em.fork(), actor: s, transferId: t.id, input: { legs: couriers.map((c) => ({ courierId: c.id })) } });
+    await transitionTransfer({
+      em: em.fork(),
+      actor: r,
+      transferId: t.id,
+      input: { to: "ready", override: true, reason: "Benchmark data" },
+    });
+    await assignLegs({
+      em: em.fork(),
+      actor: s,
+      transferId: t.id,
+      input: { legs: couriers.slice(0, 2).map((c) => ({ courierId: c.id })) },
+    });
+    await assignLegs({
+      em: em.fork(),
+      actor: s,
+      transferId: t.id,
+      input: { legs: couriers.map((c) => ({ courierId: c.id })) },
+    });
     const containers = await em.fork().find(ContainerSchema, { transfer: t.id });
     for (let i = 0; i < 4; i++) {
       await recordHandoff({
-        em: em.fork(), actor: await actorOf(em, couriers[i]!), transferId: t.id,
-        input: { handoffIndex: i, boxesCounted: containers.length, seals: [], boxTempF: 70, place: { text: `Stop ${i}` }, releasedByName: "A", receivedByName: "B", notes: null, acknowledged: true } as never,
+        em: em.fork(),
+        actor: await actorOf(em, couriers[i]!),
+        transferId: t.id,
+        input: {
+          handoffIndex: i,
+          boxesCounted: containers.length,
+          seals: [],
+          boxTempF: 70,
+          place: { text: `Stop ${i}` },
+          releasedByName: "A",
+          receivedByName: "B",
+          notes: null,
+          acknowledged: true,
+        } as never,
       });
     }
     const entries = await em.fork().count(CustodyEntrySchema, { transfer: t.id });

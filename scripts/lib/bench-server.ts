@@ -5,7 +5,9 @@ import { prepareDatabase } from "./prepare-db";
 
 export type BenchServer = { baseUrl: string; databaseUrl: string; cluster: Cluster; stop(): Promise<void> };
 
-export async function startBenchServer(options: { port?: number; beforeStart?: (databaseUrl: string) => Promise<void> } = {}): Promise<BenchServer> {
+export async function startBenchServer(
+  options: { port?: number; beforeStart?: (databaseUrl: string) => Promise<void> } = {},
+): Promise<BenchServer> {
   const cluster = await startCluster("test", Number(process.env.HATCHWAY_TEST_PG_PORT ?? 54329));
   const db = "hatchway_bench";
   await dropDatabase(cluster, db);

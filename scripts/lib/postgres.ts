@@ -13,7 +13,13 @@ export const PROJECT_ROOT = path.resolve(import.meta.dirname, "../..");
 const isRoot = process.getuid?.() === 0;
 const DB_USER = "hatchway";
 
-export type Cluster = { name: string; port: number; dataDir: string; url: (db: string) => string; startedByUs: boolean };
+export type Cluster = {
+  name: string;
+  port: number;
+  dataDir: string;
+  url: (db: string) => string;
+  startedByUs: boolean;
+};
 
 function log(message: string) {
   process.stdout.write(`[postgres] ${message}\n`);
@@ -42,7 +48,10 @@ export function ensurePostgresInstalled(): string {
   const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
   const update = spawnSync("apt-get", ["update"], { stdio: "inherit", env });
   if (update.status !== 0) log("apt-get update failed; trying the install with the cached package lists");
-  const install = spawnSync("apt-get", ["install", "-y", "--no-install-recommends", "postgresql"], { stdio: "inherit", env });
+  const install = spawnSync("apt-get", ["install", "-y", "--no-install-recommends", "postgresql"], {
+    stdio: "inherit",
+    env,
+  });
   const bin = findBinDir();
   if (install.status !== 0 || !bin) throw new Error("Installing PostgreSQL with apt-get failed; see the output above.");
   return bin;
@@ -115,7 +124,13 @@ export async function startCluster(name: string, port: number): Promise<Cluster>
     run(bin, "initdb", ["-D", dataDir, "-U", DB_USER, "-A", "trust", "-E", "UTF8", "--locale=C.UTF-8"]);
     writeFileSync(
       path.join(dataDir, "postgresql.auto.conf"),
-      [`listen_addresses = '127.0.0.1'`, `port = ${port}`, `unix_socket_directories = ''`, `fsync = ${name === "dev" ? "on" : "off"}`, ""].join("\n"),
+      [
+        `listen_addresses = '127.0.0.1'`,
+        `port = ${port}`,
+        `unix_socket_directories = ''`,
+        `fsync = ${name === "dev" ? "on" : "off"}`,
+        "",
+      ].join("\n"),
     );
     if (isRoot) run(bin, "pg_ctl", ["--version"]); // sanity: the OS user can run the tools
   }
@@ -123,7 +138,9 @@ export async function startCluster(name: string, port: number): Promise<Cluster>
   const pidFile = path.join(dataDir, "postmaster.pid");
   if (isReady(bin, port)) {
     if (!existsSync(pidFile)) {
-      throw new Error(`Port ${port} already has a PostgreSQL server that is not Hatchway's "${name}" cluster. Stop it or free the port.`);
+      throw new Error(
+        `Port ${port} already has a PostgreSQL server that is not Hatchway's "${name}" cluster. Stop it or free the port.`,
+      );
     }
     return cluster;
   }
@@ -173,7 +190,9 @@ export async function recreateFromTemplate(cluster: Cluster, db: string, templat
 }
 
 export async function dropDatabase(cluster: Cluster, db: string): Promise<void> {
-  await withAdmin(cluster, (client) => client.query(`DROP DATABASE IF EXISTS ${ident(db)} WITH (FORCE)`).then(() => undefined));
+  await withAdmin(cluster, (client) =>
+    client.query(`DROP DATABASE IF EXISTS ${ident(db)} WITH (FORCE)`).then(() => undefined),
+  );
 }
 
 /** A handle on a cluster some other process started (test workers use the global setup's). */

@@ -12,11 +12,17 @@ export function ensureSystemPackages(): void {
   if (missing.length === 0) return;
   const names = missing.map((m) => m.pkg);
   if (process.getuid?.() !== 0) {
-    throw new Error(`Missing Debian packages: ${names.join(", ")} (${missing.map((m) => m.why).join("; ")}). Install them with: sudo apt-get install -y ${names.join(" ")}`);
+    throw new Error(
+      `Missing Debian packages: ${names.join(", ")} (${missing.map((m) => m.why).join("; ")}). Install them with: sudo apt-get install -y ${names.join(" ")}`,
+    );
   }
   console.log(`[setup] installing ${names.join(", ")} with apt-get (first run only)…`);
   const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
   spawnSync("apt-get", ["update"], { stdio: "inherit", env });
-  const result = spawnSync("apt-get", ["install", "-y", "--no-install-recommends", ...names], { stdio: "inherit", env });
-  if (result.status !== 0 || missing.some((m) => !existsSync(m.command))) throw new Error(`apt-get could not install ${names.join(", ")}`);
+  const result = spawnSync("apt-get", ["install", "-y", "--no-install-recommends", ...names], {
+    stdio: "inherit",
+    env,
+  });
+  if (result.status !== 0 || missing.some((m) => !existsSync(m.command)))
+    throw new Error(`apt-get could not install ${names.join(", ")}`);
 }

@@ -8,7 +8,8 @@ import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } fro
 import type { Env } from "../env";
 import { notFound, unavailable } from "../http/errors";
 
-export const STORAGE_WRITE_FAILED = "File storage is not answering right now; nothing was saved. Try again in a minute.";
+export const STORAGE_WRITE_FAILED =
+  "File storage is not answering right now; nothing was saved. Try again in a minute.";
 const STORAGE_READ_FAILED = "File storage is not answering right now. Try again in a minute.";
 
 export type StoredObject = { stream: Readable; contentLength: number | null };
@@ -47,13 +48,17 @@ function createStorage(env: StorageEnv): Storage {
   });
   const Bucket = env.S3_BUCKET;
   const failed = (operation: string, err: unknown, message: string) => {
-    console.error(`[storage] ${operation} failed: ${(err as Error)?.name ?? "Error"} ${(err as Error)?.message ?? ""}`.trim());
+    console.error(
+      `[storage] ${operation} failed: ${(err as Error)?.name ?? "Error"} ${(err as Error)?.message ?? ""}`.trim(),
+    );
     return unavailable(message);
   };
   return {
     async putObject(key, body, contentType) {
       try {
-        await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));
+        await client.send(
+          new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }),
+        );
       } catch (err) {
         throw failed("put", err, STORAGE_WRITE_FAILED);
       }

@@ -47,7 +47,7 @@ async function readCapped(response) {
 function framingProblem(bytes) {
   if (bytes.length === 0) return "empty body";
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-  for (let pos = 0; pos < bytes.length; ) {
+  for (let pos = 0; pos < bytes.length;) {
     if (pos + 4 > bytes.length) return `truncated size prefix at byte ${pos}`;
     const length = view.getInt32(pos, true);
     if (length < MIN_FRAME_BYTES || pos + 4 + length > bytes.length) return `frame length ${length} at byte ${pos}`;
@@ -60,7 +60,8 @@ const plainFetch = globalThis.fetch;
 globalThis.fetch = async (input, init) => {
   const response = await plainFetch(input, init);
   if (CLIENT_HANDLED.has(response.status)) return response;
-  if (!response.ok) throw new CheckedFetchError("UpstreamStatus", `HTTP ${response.status} ${response.statusText}`.trim());
+  if (!response.ok)
+    throw new CheckedFetchError("UpstreamStatus", `HTTP ${response.status} ${response.statusText}`.trim());
   const bytes = await readCapped(response);
   const problem = framingProblem(bytes);
   if (problem) throw new CheckedFetchError("InvalidBody", `not FlatBuffers frames: ${problem}`);
@@ -92,13 +93,21 @@ function readLocation(response) {
   return {
     latitude: response.latitude(),
     longitude: response.longitude(),
-    hourly: hourly && { time: Number(hourly.time()), timeEnd: Number(hourly.timeEnd()), interval: hourly.interval(), variables },
+    hourly: hourly && {
+      time: Number(hourly.time()),
+      timeEnd: Number(hourly.timeEnd()),
+      interval: hourly.interval(),
+      variables,
+    },
   };
 }
 
 let responses;
 try {
-  responses = await fetchWeatherApi(url, params, retries, 0.2, 1, { redirect: "error", signal: AbortSignal.timeout(timeoutMs) });
+  responses = await fetchWeatherApi(url, params, retries, 0.2, 1, {
+    redirect: "error",
+    signal: AbortSignal.timeout(timeoutMs),
+  });
 } catch (error) {
   parentPort.postMessage({ ok: false, phase: "fetch", error: plainError(error) });
 }

@@ -69,12 +69,24 @@ describe("fetchHourlyForecastsF against the fake", () => {
       destination: { label: "Los Angeles, CA", lat: 33.94, lon: -118.4, timeZone: "America/Los_Angeles" },
       departAt: "2026-07-14T10:00:00-05:00",
     });
-    const result = await fetchHourlyForecastsF({ baseUrl: fake.url, points: timeline.waypoints, ...forecastWindow(timeline, 0) });
+    const result = await fetchHourlyForecastsF({
+      baseUrl: fake.url,
+      points: timeline.waypoints,
+      ...forecastWindow(timeline, 0),
+    });
     if (!result.ok) throw new Error(result.detail);
     const assessment = assessTransit({
       timeline,
       ambientByHour: ambientFromForecasts(timeline, indexForecasts(result.forecasts)),
-      box: { wall: "eps", wallThicknessMm: 38, lengthMm: 300, widthMm: 300, heightMm: 300, contentsG: 800, pack: "none" },
+      box: {
+        wall: "eps",
+        wallThicknessMm: 38,
+        lengthMm: 300,
+        widthMm: 300,
+        heightMm: 300,
+        contentsG: 800,
+        pack: "none",
+      },
       profile: DEFAULT_PROFILES.temperate_snake,
     });
     expect(assessment.verdict).not.toBe("forecast_unavailable");
@@ -85,7 +97,11 @@ describe("fetchHourlyForecastsF against the fake", () => {
 describe("an unusable weather service gives 'unavailable', never values", () => {
   it("503 outage", async () => {
     fake.setScenario("outage");
-    expect(await fetchHourlyForecastsF(request())).toMatchObject({ ok: false, reason: "upstream_error", detail: "HTTP 503 Service Unavailable" });
+    expect(await fetchHourlyForecastsF(request())).toMatchObject({
+      ok: false,
+      reason: "upstream_error",
+      detail: "HTTP 503 Service Unavailable",
+    });
   });
 
   it("connection reset", async () => {
@@ -96,7 +112,10 @@ describe("an unusable weather service gives 'unavailable', never values", () => 
   it("nothing listening", async () => {
     const closed = await startOpenMeteoFake();
     await closed.close();
-    expect(await fetchHourlyForecastsF(request({ baseUrl: closed.url }))).toMatchObject({ ok: false, reason: "network" });
+    expect(await fetchHourlyForecastsF(request({ baseUrl: closed.url }))).toMatchObject({
+      ok: false,
+      reason: "network",
+    });
   });
 
   it("a redirect, which is not followed", async () => {

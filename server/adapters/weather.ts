@@ -29,8 +29,7 @@ const LOCATION_OVERHEAD_BYTES = 1024;
 export type WeatherUnavailableReason = "timeout" | "network" | "redirect" | "upstream_error" | "invalid_response";
 
 export type ForecastResult =
-  | { ok: true; forecasts: PointForecast[] }
-  | { ok: false; reason: WeatherUnavailableReason; detail: string };
+  { ok: true; forecasts: PointForecast[] } | { ok: false; reason: WeatherUnavailableReason; detail: string };
 
 export type ForecastRequest = {
   /** Service base URL, e.g. https://api.open-meteo.com (the path /v1/forecast is added). */
@@ -69,12 +68,15 @@ export async function fetchHourlyForecastsF(request: ForecastRequest): Promise<F
 
 function planRequest(request: ForecastRequest): Plan {
   const { points } = request;
-  if (points.length === 0 || points.length > FORECAST_POINTS_MAX) throw new RangeError(`between 1 and ${FORECAST_POINTS_MAX} points`);
-  if (!points.every((p) => Math.abs(p.lat) <= 90 && Math.abs(p.lon) <= 180)) throw new RangeError("a point is off the globe");
+  if (points.length === 0 || points.length > FORECAST_POINTS_MAX)
+    throw new RangeError(`between 1 and ${FORECAST_POINTS_MAX} points`);
+  if (!points.every((p) => Math.abs(p.lat) <= 90 && Math.abs(p.lon) <= 180))
+    throw new RangeError("a point is off the globe");
   const fromMs = Math.floor(Date.parse(request.fromHour) / HOUR_MS) * HOUR_MS;
   const toMs = Math.ceil(Date.parse(request.toHour) / HOUR_MS) * HOUR_MS;
   const hours = (toMs - fromMs) / HOUR_MS + 1;
-  if (!(hours >= 1 && hours <= FORECAST_REQUEST_HOURS_MAX)) throw new RangeError(`fromHour..toHour must span 1 to ${FORECAST_REQUEST_HOURS_MAX} hours`);
+  if (!(hours >= 1 && hours <= FORECAST_REQUEST_HOURS_MAX))
+    throw new RangeError(`fromHour..toHour must span 1 to ${FORECAST_REQUEST_HOURS_MAX} hours`);
   const base = new URL(request.baseUrl);
   if (base.protocol !== "https:" && base.protocol !== "http:") throw new RangeError("baseUrl must be http(s)");
   const hour = (ms: number) => new Date(ms).toISOString().slice(0, 16);
@@ -121,16 +123,24 @@ function runClient(plan: Plan, timeoutMs: number): Promise<WorkerMessage | Unava
       void worker.terminate();
       resolve(outcome);
     };
-    const timer = setTimeout(() => finish({ ok: false, reason: "timeout", detail: `no usable answer within ${timeoutMs} ms` }), timeoutMs);
+    const timer = setTimeout(
+      () => finish({ ok: false, reason: "timeout", detail: `no usable answer within ${timeoutMs} ms` }),
+      timeoutMs,
+    );
     worker.once("message", (message: WorkerMessage) => finish(message));
-    worker.once("error", (error) => finish({ ok: false, reason: "invalid_response", detail: `the client failed on the answer: ${error.message}` }));
-    worker.once("exit", (code) => finish({ ok: false, reason: "invalid_response", detail: `the client stopped (exit ${code})` }));
+    worker.once("error", (error) =>
+      finish({ ok: false, reason: "invalid_response", detail: `the client failed on the answer: ${error.message}` }),
+    );
+    worker.once("exit", (code) =>
+      finish({ ok: false, reason: "invalid_response", detail: `the client stopped (exit ${code})` }),
+    );
   });
 }
 
 function unavailableFrom(message: Extract<WorkerMessage, { ok: false }>): Unavailable {
   const { name, message: text, cause } = message.error;
-  if (message.phase === "decode" || name === "InvalidBody") return { ok: false, reason: "invalid_response", detail: text };
+  if (message.phase === "decode" || name === "InvalidBody")
+    return { ok: false, reason: "invalid_response", detail: text };
   if (name === "TimeoutError" || name === "AbortError") return { ok: false, reason: "timeout", detail: text };
   if (name === "TypeError" && text === "fetch failed") {
     if (/redirect/i.test(cause)) return { ok: false, reason: "redirect", detail: `the service redirected (${cause})` };
@@ -146,7 +156,8 @@ function invalid(detail: string): Unavailable {
 }
 
 function checkedForecasts(locations: readonly DecodedLocation[], plan: Plan): ForecastResult {
-  if (locations.length !== plan.points.length) return invalid(`${locations.length} locations for ${plan.points.length} points`);
+  if (locations.length !== plan.points.length)
+    return invalid(`${locations.length} locations for ${plan.points.length} points`);
   const forecasts: PointForecast[] = [];
   for (const [i, location] of locations.entries()) {
     const point = plan.points[i]!;
@@ -156,7 +167,10 @@ function checkedForecasts(locations: readonly DecodedLocation[], plan: Plan): Fo
     forecasts.push({
       lat: point.lat,
       lon: point.lon,
-      hours: values.map((tempF, h) => ({ at: new Date((plan.fromS + h * 3600) * 1000).toISOString(), tempF: Math.round(tempF * 100) / 100 })),
+      hours: values.map((tempF, h) => ({
+        at: new Date((plan.fromS + h * 3600) * 1000).toISOString(),
+        tempF: Math.round(tempF * 100) / 100,
+      })),
     });
   }
   return { ok: true, forecasts };
@@ -170,7 +184,10 @@ function temperatureSeries(location: DecodedLocation): DecodedVariable | undefin
 function locationProblem(location: DecodedLocation, point: LatLon, plan: Plan): string | undefined {
   const hourly = location.hourly;
   if (!hourly) return "no hourly data";
-  if (Math.abs(location.latitude - point.lat) > POSITION_TOLERANCE_DEG || Math.abs(location.longitude - point.lon) > POSITION_TOLERANCE_DEG) {
+  if (
+    Math.abs(location.latitude - point.lat) > POSITION_TOLERANCE_DEG ||
+    Math.abs(location.longitude - point.lon) > POSITION_TOLERANCE_DEG
+  ) {
     return `answer is for ${location.latitude}, ${location.longitude}`;
   }
   if (hourly.interval !== 3600 || hourly.time !== plan.fromS || hourly.timeEnd !== plan.fromS + plan.hours * 3600) {
@@ -179,7 +196,8 @@ function locationProblem(location: DecodedLocation, point: LatLon, plan: Plan): 
   const series = temperatureSeries(location);
   if (!series) return "no temperature_2m";
   if (series.unit !== Unit.fahrenheit) return "temperature not in °F";
-  if (series.length !== plan.hours || series.values.length !== plan.hours) return `${series.length} values for ${plan.hours} hours`;
+  if (series.length !== plan.hours || series.values.length !== plan.hours)
+    return `${series.length} values for ${plan.hours} hours`;
   const bad = series.values.findIndex((v) => !isPlausibleAmbientF(v));
   if (bad >= 0) return `implausible value ${series.values[bad]} at hour ${bad}`;
   return undefined;

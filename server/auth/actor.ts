@@ -38,7 +38,9 @@ export function actorFromRow(row: ActorRow): Actor | null {
     displayName: row.actor_display_name,
     role: row.actor_role,
     disabled: row.actor_disabled,
-    organization: row.actor_org_id ? { id: row.actor_org_id, name: row.actor_org_name!, kind: row.actor_org_kind! } : null,
+    organization: row.actor_org_id
+      ? { id: row.actor_org_id, name: row.actor_org_name!, kind: row.actor_org_kind! }
+      : null,
   };
 }
 
@@ -56,5 +58,11 @@ export function actorFromUser(user: User): Actor {
 }
 
 export function presentActor(actor: Actor): UserDto {
-  return { id: actor.id, email: actor.email, displayName: actor.displayName, role: actor.role, organization: actor.organization };
+  return {
+    id: actor.id,
+    email: actor.email,
+    displayName: actor.displayName,
+    role: actor.role,
+    organization: actor.organization,
+  };
 }

@@ -57,7 +57,13 @@ export class SessionStore extends PgStore {
     const actor = sess[ACTOR_KEY];
     delete sess[ACTOR_KEY];
     const created = super.createSession(req, sess);
-    if (actor !== undefined) Object.defineProperty(created, ACTOR_KEY, { value: actor, enumerable: false, writable: true, configurable: true });
+    if (actor !== undefined)
+      Object.defineProperty(created, ACTOR_KEY, {
+        value: actor,
+        enumerable: false,
+        writable: true,
+        configurable: true,
+      });
     return created;
   }
 }

@@ -81,7 +81,10 @@ export function configurePassport(ctx: AppContext): passport.PassportStatic {
       return done(null, loaded && loaded.id === id && !loaded.disabled ? loaded : false);
     }
     ctx.pool
-      .query<ActorRow>(`SELECT ${ACTOR_COLUMNS} FROM app_user u LEFT JOIN organization o ON o.id = u.organization_id WHERE u.id = $1`, [id])
+      .query<ActorRow>(
+        `SELECT ${ACTOR_COLUMNS} FROM app_user u LEFT JOIN organization o ON o.id = u.organization_id WHERE u.id = $1`,
+        [id],
+      )
       .then(({ rows }) => {
         const actor = rows[0] ? actorFromRow(rows[0]) : null;
         done(null, actor && !actor.disabled ? actor : false);

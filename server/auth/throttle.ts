@@ -9,8 +9,19 @@ import { HttpError } from "../http/errors";
  */
 export function createLoginThrottle(pool: pg.Pool, env: Env) {
   const duration = env.LOGIN_BLOCK_MINUTES * 60;
-  const common = { storeClient: pool, storeType: "pool", tableName: "auth_throttle", tableCreated: true, duration, blockDuration: duration };
-  const byAccount = new RateLimiterPostgres({ ...common, keyPrefix: "acct", points: env.LOGIN_MAX_FAILURES_PER_ACCOUNT });
+  const common = {
+    storeClient: pool,
+    storeType: "pool",
+    tableName: "auth_throttle",
+    tableCreated: true,
+    duration,
+    blockDuration: duration,
+  };
+  const byAccount = new RateLimiterPostgres({
+    ...common,
+    keyPrefix: "acct",
+    points: env.LOGIN_MAX_FAILURES_PER_ACCOUNT,
+  });
   const byIp = new RateLimiterPostgres({ ...common, keyPrefix: "ip", points: env.LOGIN_MAX_FAILURES_PER_IP });
 
   return {

@@ -15,10 +15,12 @@ export class HttpError extends Error {
   }
 }
 
-export const badRequest = (message: string, details?: Record<string, unknown>) => new HttpError(400, "bad_request", message, details);
+export const badRequest = (message: string, details?: Record<string, unknown>) =>
+  new HttpError(400, "bad_request", message, details);
 export const forbidden = (message = "You do not have access to this.") => new HttpError(403, "forbidden", message);
 export const notFound = (what = "That record") => new HttpError(404, "not_found", `${what} was not found.`);
-export const conflict = (message: string, details?: Record<string, unknown>) => new HttpError(409, "conflict", message, details);
+export const conflict = (message: string, details?: Record<string, unknown>) =>
+  new HttpError(409, "conflict", message, details);
 export const unavailable = (message: string) => new HttpError(503, "unavailable", message);
 
 /** Every response carries a correlation id; a person reporting a problem can quote it. */
@@ -63,7 +65,10 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     body = { code: "bad_request", message: "The request could not be read." };
   } else if (isDatabaseDown(err) || (err instanceof DriverException && isDatabaseDown(err.cause ?? err))) {
     status = 503;
-    body = { code: "db_unavailable", message: "The database is not answering right now. Nothing was saved; please try again in a minute." };
+    body = {
+      code: "db_unavailable",
+      message: "The database is not answering right now. Nothing was saved; please try again in a minute.",
+    };
   }
 
   if (status >= 500) {
@@ -73,4 +78,5 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   res.status(status).json({ error: body });
 };
 
-export const notFoundApi: RequestHandler = (_req, _res, next) => next(new HttpError(404, "not_found", "There is no such API route."));
+export const notFoundApi: RequestHandler = (_req, _res, next) =>
+  next(new HttpError(404, "not_found", "There is no such API route."));

@@ -17,7 +17,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 export function requirePolicy(policy: (actor: Actor) => boolean, message?: string): RequestHandler {
   return (req, _res, next) => {
     if (!req.user) return next(new HttpError(401, "unauthenticated", "Please sign in."));
-    if (!policy(req.user)) return next(new HttpError(403, "forbidden", message ?? "Only an administrator can do this."));
+    if (!policy(req.user))
+      return next(new HttpError(403, "forbidden", message ?? "Only an administrator can do this."));
     next();
   };
 }

@@ -53,7 +53,10 @@ export function requireJsonBody(allowed: string[] = []): RequestHandler {
 /** Rejects NUL characters anywhere in a parsed JSON body, keys included, naming the field. */
 export const rejectNul: RequestHandler = (req, _res, next) => {
   const found = findNul(req.body, "");
-  if (found !== null) return next(new HttpError(400, "invalid", `${found || "body"} must not contain NUL characters`, { field: found || "body" }));
+  if (found !== null)
+    return next(
+      new HttpError(400, "invalid", `${found || "body"} must not contain NUL characters`, { field: found || "body" }),
+    );
   next();
 };
 
@@ -108,7 +111,9 @@ export function csrfProtection(publicOrigins: string[]): RequestHandler {
     const expected = req.session?.csrfToken;
     const given = req.headers["x-csrf-token"];
     if (!expected || typeof given !== "string" || !sameToken(expected, given)) {
-      return next(new HttpError(403, "csrf", "The security token is missing or out of date. Reload the page and try again."));
+      return next(
+        new HttpError(403, "csrf", "The security token is missing or out of date. Reload the page and try again."),
+      );
     }
     next();
   };

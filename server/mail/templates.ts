@@ -1,7 +1,13 @@
 import type { MailDraft } from "../services/outbox";
 
 /** Plain-text mail: it reads the same in every client and cannot carry active content. */
-export function invitationMail(p: { to: string; name: string; invitedBy: string; link: string; hours: number }): MailDraft {
+export function invitationMail(p: {
+  to: string;
+  name: string;
+  invitedBy: string;
+  link: string;
+  hours: number;
+}): MailDraft {
   return {
     to: p.to,
     topic: "invitation",
@@ -19,9 +25,29 @@ export function invitationMail(p: { to: string; name: string; invitedBy: string;
   };
 }
 
-export type TransferMailTopic = "awaiting_confirmation" | "reconfirm" | "confirmed" | "sent_back" | "cancelled" | "picked_up" | "delivered" | "checked_in" | "temperature_changed";
+export type TransferMailTopic =
+  | "awaiting_confirmation"
+  | "reconfirm"
+  | "confirmed"
+  | "sent_back"
+  | "cancelled"
+  | "picked_up"
+  | "delivered"
+  | "checked_in"
+  | "temperature_changed";
 
-type TransferMailFacts = { to: string; name: string; organization: string; number: string; actor: string; link: string; reason?: string; summary?: string; previousAdvice?: string; advice?: string };
+type TransferMailFacts = {
+  to: string;
+  name: string;
+  organization: string;
+  number: string;
+  actor: string;
+  link: string;
+  reason?: string;
+  summary?: string;
+  previousAdvice?: string;
+  advice?: string;
+};
 
 const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
   awaiting_confirmation: (n) => `Transfer ${n} is waiting for your confirmation`,
@@ -36,10 +62,14 @@ const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
 };
 
 const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
-  awaiting_confirmation: (f) => `${f.actor} has drafted transfer ${f.number} to ${f.organization}. Please check the animals, the route and the dates, and confirm it or send it back.`,
-  reconfirm: (f) => `${f.actor} changed transfer ${f.number} after you confirmed it. ${f.reason ?? ""} Please look again and confirm.`,
-  confirmed: (f) => `The receiver confirmed transfer ${f.number}. It is cleared to travel once the couriers are assigned.`,
-  sent_back: (f) => `${f.actor} sent transfer ${f.number} back for changes.${f.reason ? ` Their reason: ${f.reason}` : ""}`,
+  awaiting_confirmation: (f) =>
+    `${f.actor} has drafted transfer ${f.number} to ${f.organization}. Please check the animals, the route and the dates, and confirm it or send it back.`,
+  reconfirm: (f) =>
+    `${f.actor} changed transfer ${f.number} after you confirmed it. ${f.reason ?? ""} Please look again and confirm.`,
+  confirmed: (f) =>
+    `The receiver confirmed transfer ${f.number}. It is cleared to travel once the couriers are assigned.`,
+  sent_back: (f) =>
+    `${f.actor} sent transfer ${f.number} back for changes.${f.reason ? ` Their reason: ${f.reason}` : ""}`,
   cancelled: (f) => `${f.actor} cancelled transfer ${f.number}.${f.reason ? ` Reason: ${f.reason}` : ""}`,
   picked_up: (f) => `The courier took custody of transfer ${f.number}. ${f.summary ?? ""}`,
   delivered: (f) => `Transfer ${f.number} was handed to the receiver. ${f.summary ?? ""}`,
@@ -61,13 +91,33 @@ export function transferMail(topic: TransferMailTopic, f: TransferMailFacts): Ma
     to: f.to,
     topic: `transfer.${topic}`,
     subject: SUBJECTS[topic](f.number),
-    text: [`Hello ${f.name},`, "", LEADS[topic](f).replace(/\s+$/, ""), "", `Open the transfer: ${f.link}`, "", "— Hatchway"].join("\n"),
+    text: [
+      `Hello ${f.name},`,
+      "",
+      LEADS[topic](f).replace(/\s+$/, ""),
+      "",
+      `Open the transfer: ${f.link}`,
+      "",
+      "— Hatchway",
+    ].join("\n"),
   };
 }
 
 /** To each member of the holding organisation, once, when a permit or certificate nears its last valid day. */
-export function documentExpiryMail(p: { to: string; name: string; organization: string; kind: string; number: string; validTo: string; daysLeft: number; link: string }): MailDraft {
-  const when = p.daysLeft === 0 ? "today is its last valid day" : `its last valid day is ${p.validTo}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}`;
+export function documentExpiryMail(p: {
+  to: string;
+  name: string;
+  organization: string;
+  kind: string;
+  number: string;
+  validTo: string;
+  daysLeft: number;
+  link: string;
+}): MailDraft {
+  const when =
+    p.daysLeft === 0
+      ? "today is its last valid day"
+      : `its last valid day is ${p.validTo}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}`;
   return {
     to: p.to,
     topic: "document.expiring",

@@ -9,8 +9,20 @@ import { decodeQrFromPng, drawnGlyphIds, extractPageTexts, pageSizesPt, renderPa
 function distinctBoxes(): ManifestBox[] {
   const [a, b, c] = buildBoxes(3, 0);
   return [
-    { ...a!, animals: [buildAnimal(0, { scientificName: "Python regius", count: 2 }), buildAnimal(1, { scientificName: "Pantherophis guttatus", count: 1 })] },
-    { ...b!, animals: [buildAnimal(2, { scientificName: "Crotalus atrox", count: 1, venomous: true }), buildAnimal(3, { scientificName: "Ambystoma mexicanum", count: 4 })] },
+    {
+      ...a!,
+      animals: [
+        buildAnimal(0, { scientificName: "Python regius", count: 2 }),
+        buildAnimal(1, { scientificName: "Pantherophis guttatus", count: 1 }),
+      ],
+    },
+    {
+      ...b!,
+      animals: [
+        buildAnimal(2, { scientificName: "Crotalus atrox", count: 1, venomous: true }),
+        buildAnimal(3, { scientificName: "Ambystoma mexicanum", count: 4 }),
+      ],
+    },
     { ...c!, animals: [buildAnimal(4, { scientificName: "Correlophus ciliatus", count: 3 })] },
   ];
 }
@@ -88,7 +100,10 @@ describe("renderLabelsPdf", () => {
   it("keeps a box of many species on one label and points to the manifest for the rest", async () => {
     // 40 lines of different (placeholder) species in the genus Anolis, one animal each
     const crowded = buildManifestInput({
-      boxes: buildBoxes(1, 40).map((b) => ({ ...b, animals: b.animals.map((a, i) => ({ ...a, scientificName: `Anolis sp${i}`, count: 1 })) })),
+      boxes: buildBoxes(1, 40).map((b) => ({
+        ...b,
+        animals: b.animals.map((a, i) => ({ ...a, scientificName: `Anolis sp${i}`, count: 1 })),
+      })),
     });
     const labelBytes = await renderLabelsPdf(crowded);
     const [text = ""] = await extractPageTexts(labelBytes);

@@ -41,7 +41,11 @@ export async function renderLabelsPdf(input: ManifestInput): Promise<Uint8Array>
 function drawLabel(ctx: Ctx, input: ManifestInput, box: ManifestBox): void {
   let y = LABEL_SIZE_PT[1] - M;
   y = drawOrientation(ctx, y);
-  y = drawVenomBand(ctx, y - 6, box.animals.some((a) => a.venomous));
+  y = drawVenomBand(
+    ctx,
+    y - 6,
+    box.animals.some((a) => a.venomous),
+  );
   y = drawBoxLine(ctx, y - 6, input, box);
   y = drawParty(ctx, y - 4, "FROM (SHIPPER)", input.sender, 8);
   y = drawParty(ctx, y - 4, "TO (CONSIGNEE)", input.receiver, 10);
@@ -50,12 +54,28 @@ function drawLabel(ctx: Ctx, input: ManifestInput, box: ManifestBox): void {
   drawBottom(ctx, input, box, bottomTop);
 }
 
-function line(ctx: Ctx, text: string, x: number, y: number, sizePt: number, bold = false, color: Color = COLORS.ink): void {
+function line(
+  ctx: Ctx,
+  text: string,
+  x: number,
+  y: number,
+  sizePt: number,
+  bold = false,
+  color: Color = COLORS.ink,
+): void {
   const font = bold ? ctx.fonts.bold : ctx.fonts.regular;
   ctx.page.drawText(safeText(font, text), { x, y, size: sizePt, font, color });
 }
 
-function centred(ctx: Ctx, text: string, centreX: number, y: number, sizePt: number, bold: boolean, color: Color = COLORS.ink): void {
+function centred(
+  ctx: Ctx,
+  text: string,
+  centreX: number,
+  y: number,
+  sizePt: number,
+  bold: boolean,
+  color: Color = COLORS.ink,
+): void {
   const font = bold ? ctx.fonts.bold : ctx.fonts.regular;
   const safe = fitText(font, text, sizePt, INNER_W);
   line(ctx, safe, centreX - textWidthPt(font, safe, sizePt) / 2, y, sizePt, bold, color);
@@ -107,7 +127,12 @@ function drawBoxLine(ctx: Ctx, topY: number, input: ManifestInput, box: Manifest
   const rightX = M + INNER_W;
   line(ctx, transfer, rightX - textWidthPt(ctx.fonts.regular, transfer, 7.5), topY - 8, 7.5, false, COLORS.muted);
   line(ctx, label, rightX - textWidthPt(ctx.fonts.regular, label, 7.5), topY - 18, 7.5, false, COLORS.muted);
-  ctx.page.drawLine({ start: { x: M, y: topY - 25 }, end: { x: M + INNER_W, y: topY - 25 }, thickness: 0.6, color: COLORS.rule });
+  ctx.page.drawLine({
+    start: { x: M, y: topY - 25 },
+    end: { x: M + INNER_W, y: topY - 25 },
+    thickness: 0.6,
+    color: COLORS.rule,
+  });
   return topY - 25;
 }
 
@@ -128,7 +153,8 @@ function drawParty(ctx: Ctx, topY: number, title: string, party: PartyBlock, siz
     // Addresses are legal marking: wrap onto a second line rather than cut; past that, an
     // ellipsis shows the rest is on the manifest.
     const wrapped = wrapText(font, text, sizePt, INNER_W);
-    const parts = wrapped.length <= 2 ? wrapped : [wrapped[0] ?? "", fitText(font, wrapped.slice(1).join(" "), sizePt, INNER_W)];
+    const parts =
+      wrapped.length <= 2 ? wrapped : [wrapped[0] ?? "", fitText(font, wrapped.slice(1).join(" "), sizePt, INNER_W)];
     for (const part of parts) {
       y -= lineH;
       line(ctx, part, M, y + sizePt * 0.22, sizePt, bold);
@@ -169,7 +195,19 @@ function drawContents(ctx: Ctx, topY: number, bottomY: number, box: ManifestBox)
     const rest = totals.slice(shown.length);
     const x = M + (columns - 1) * (colW + gapPt);
     const y = topY - 10 - rows * lineH;
-    line(ctx, fitText(ctx.fonts.bold, `+ ${rest.length} more species (${rest.reduce((n, t) => n + t.count, 0)}): see manifest`, sizePt, colW), x, y, sizePt, true);
+    line(
+      ctx,
+      fitText(
+        ctx.fonts.bold,
+        `+ ${rest.length} more species (${rest.reduce((n, t) => n + t.count, 0)}): see manifest`,
+        sizePt,
+        colW,
+      ),
+      x,
+      y,
+      sizePt,
+      true,
+    );
   }
 }
 
@@ -178,7 +216,15 @@ function drawBottom(ctx: Ctx, input: ManifestInput, box: ManifestBox, topY: numb
   const qrX = M + INNER_W - QR_SIZE_PT + 4;
   drawQrCode(ctx.page, input.handoffUrl, { x: qrX, y: M + 4, sizePt: QR_SIZE_PT });
   const caption = "Scan at handoff";
-  line(ctx, caption, qrX + (QR_SIZE_PT - textWidthPt(ctx.fonts.regular, caption, 6.5)) / 2, M, 6.5, false, COLORS.muted);
+  line(
+    ctx,
+    caption,
+    qrX + (QR_SIZE_PT - textWidthPt(ctx.fonts.regular, caption, 6.5)) / 2,
+    M,
+    6.5,
+    false,
+    COLORS.muted,
+  );
 
   const range = input.temperature?.boxRangesF?.[box.id] ?? input.temperature?.safeRangeF;
   line(ctx, "KEEP BETWEEN", M, topY - 14, 6.5, true, COLORS.green);

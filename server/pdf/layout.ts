@@ -130,7 +130,13 @@ export class PageFlow {
     wrapText(font, text, sizePt, this.width - indentPt).forEach((line, i) => {
       this.ensure(lineH);
       if (i === 0) this.drawLine("•", this.left + 2, this.y - sizePt, { sizePt, color: COLORS.green });
-      this.page.drawText(line, { x: this.left + indentPt, y: this.y - sizePt, size: sizePt, font, color: style.color ?? COLORS.ink });
+      this.page.drawText(line, {
+        x: this.left + indentPt,
+        y: this.y - sizePt,
+        size: sizePt,
+        font,
+        color: style.color ?? COLORS.ink,
+      });
       this.y -= lineH;
     });
     this.y -= 2;
@@ -154,9 +160,7 @@ export class PageFlow {
 }
 
 /** A table cell: plain text, or text with a second, muted paragraph under it. */
-export type Cell =
-  | string
-  | { text: string; bold?: boolean; color?: Color; sub?: string };
+export type Cell = string | { text: string; bold?: boolean; color?: Color; sub?: string };
 
 export interface Column {
   header: string;
@@ -215,10 +219,23 @@ export function drawTable(flow: PageFlow, spec: TableSpec): void {
       });
       flow.y -= continuedH;
     }
-    flow.page.drawRectangle({ x: flow.left, y: flow.y - headerH, width: flow.width, height: headerH, color: COLORS.greenTint });
+    flow.page.drawRectangle({
+      x: flow.left,
+      y: flow.y - headerH,
+      width: flow.width,
+      height: headerH,
+      color: COLORS.greenTint,
+    });
     let x = flow.left;
     spec.columns.forEach((col, i) => {
-      drawCellLines(flow, (header[i] ?? []).map((text) => ({ text, font: flow.fonts.bold, color: COLORS.green })), x, col, sizePt, lineH);
+      drawCellLines(
+        flow,
+        (header[i] ?? []).map((text) => ({ text, font: flow.fonts.bold, color: COLORS.green })),
+        x,
+        col,
+        sizePt,
+        lineH,
+      );
       x += col.widthPt;
     });
     flow.y -= headerH;
@@ -251,7 +268,16 @@ export function drawTable(flow: PageFlow, spec: TableSpec): void {
     // Split only what cannot fit even on a fresh page.
     while (rowHeight(lines, lineH) > flow.room) {
       const fitLines = Math.max(1, Math.floor((flow.room - 2 * PAD_Y) / lineH));
-      drawRow(flow, spec, row, lines.map((l) => l.slice(0, fitLines)), fitLines * lineH + 2 * PAD_Y, sizePt, lineH, true);
+      drawRow(
+        flow,
+        spec,
+        row,
+        lines.map((l) => l.slice(0, fitLines)),
+        fitLines * lineH + 2 * PAD_Y,
+        sizePt,
+        lineH,
+        true,
+      );
       lines = lines.map((l) => l.slice(fitLines));
       flow.newPage();
       drawHeader(true);
@@ -291,7 +317,13 @@ function drawRow(
   ruleBelow: boolean,
 ): void {
   if (row.fill) {
-    flow.page.drawRectangle({ x: flow.left, y: flow.y - heightPt, width: flow.width, height: heightPt, color: row.fill });
+    flow.page.drawRectangle({
+      x: flow.left,
+      y: flow.y - heightPt,
+      width: flow.width,
+      height: heightPt,
+      color: row.fill,
+    });
   }
   const indentPt = row.span ? (row.indentPt ?? 0) : 0;
   const columns = row.span ? [{ header: "", widthPt: flow.width - indentPt }] : spec.columns;
@@ -300,7 +332,12 @@ function drawRow(
     drawCellLines(flow, lines[i] ?? [], x, col, sizePt, lineH);
     x += col.widthPt;
     if (spec.grid && i < columns.length - 1) {
-      flow.page.drawLine({ start: { x, y: flow.y }, end: { x, y: flow.y - heightPt }, thickness: 0.5, color: COLORS.rule });
+      flow.page.drawLine({
+        start: { x, y: flow.y },
+        end: { x, y: flow.y - heightPt },
+        thickness: 0.5,
+        color: COLORS.rule,
+      });
     }
   });
   flow.y -= heightPt;
@@ -360,7 +397,13 @@ export function drawNoteBox(
   for (const lines of wrapped) {
     flow.drawLine(bullet, flow.left + 10, y - sizePt, { sizePt, color: colors.title });
     for (const line of lines) {
-      flow.page.drawText(line, { x: flow.left + 10 + bulletW, y: y - sizePt, size: sizePt, font: flow.fonts.regular, color: COLORS.ink });
+      flow.page.drawText(line, {
+        x: flow.left + 10 + bulletW,
+        y: y - sizePt,
+        size: sizePt,
+        font: flow.fonts.regular,
+        color: COLORS.ink,
+      });
       y -= lineH;
     }
   }

@@ -15,7 +15,10 @@ function bodyText(pages: string[]): string {
       p
         .replace(/Produced .*? by Hatchway · Transfer \S+ Page \d+ of \d+/, "")
         .replace(/^Packing manifest · Transfer \S+/, "")
-        .replace(/Box \d+ of \d+ \(continued\) # Species \(scientific \/ common\) Count Sex Identifier Origin Size Venomous/, ""),
+        .replace(
+          /Box \d+ of \d+ \(continued\) # Species \(scientific \/ common\) Count Sex Identifier Origin Size Venomous/,
+          "",
+        ),
     )
     .join(" ");
 }
@@ -24,9 +27,36 @@ function bodyText(pages: string[]): string {
 function countedBoxes(): ManifestBox[] {
   const [a, b, c] = buildBoxes(3, 0);
   return [
-    { ...a!, animals: [buildAnimal(0, { scientificName: "Python regius", commonName: "Ball python", count: 2 }), buildAnimal(1, { scientificName: "Crotalus atrox", commonName: "Western diamondback rattlesnake", count: 1, venomous: true })] },
-    { ...b!, animals: [buildAnimal(2, { scientificName: "Python regius", commonName: "Ball python", count: 3 }), buildAnimal(3, { scientificName: "Ambystoma mexicanum", commonName: "Axolotl", count: 6 })] },
-    { ...c!, animals: [buildAnimal(4, { scientificName: "Crotalus atrox", commonName: "Western diamondback rattlesnake", count: 2, venomous: true })] },
+    {
+      ...a!,
+      animals: [
+        buildAnimal(0, { scientificName: "Python regius", commonName: "Ball python", count: 2 }),
+        buildAnimal(1, {
+          scientificName: "Crotalus atrox",
+          commonName: "Western diamondback rattlesnake",
+          count: 1,
+          venomous: true,
+        }),
+      ],
+    },
+    {
+      ...b!,
+      animals: [
+        buildAnimal(2, { scientificName: "Python regius", commonName: "Ball python", count: 3 }),
+        buildAnimal(3, { scientificName: "Ambystoma mexicanum", commonName: "Axolotl", count: 6 }),
+      ],
+    },
+    {
+      ...c!,
+      animals: [
+        buildAnimal(4, {
+          scientificName: "Crotalus atrox",
+          commonName: "Western diamondback rattlesnake",
+          count: 2,
+          venomous: true,
+        }),
+      ],
+    },
   ];
 }
 
@@ -73,8 +103,18 @@ describe("renderManifestPdf", () => {
 
   it("prints the shipper and consignee name-and-address blocks in full", () => {
     // 50 CFR 14.81: name and address of shipper and consignee [published]
-    for (const [title, party] of [["SHIPPER (SENDER)", input.sender], ["CONSIGNEE (RECEIVER)", input.receiver]] as const) {
-      const block = [party.organisation, party.contactName, party.street, `${party.city}, ${party.state} ${party.zip}`, `24-hour phone: ${party.phone24h}`, party.email];
+    for (const [title, party] of [
+      ["SHIPPER (SENDER)", input.sender],
+      ["CONSIGNEE (RECEIVER)", input.receiver],
+    ] as const) {
+      const block = [
+        party.organisation,
+        party.contactName,
+        party.street,
+        `${party.city}, ${party.state} ${party.zip}`,
+        `24-hour phone: ${party.phone24h}`,
+        party.email,
+      ];
       expect(pages[0]).toContain(title);
       for (const line of block) expect(pages[0]).toContain(line);
     }
@@ -151,7 +191,9 @@ describe("renderManifestPdf totals", () => {
   it("sums each species over all boxes with venomous flags", async () => {
     // 50 CFR 14.81: scientific name, number of each species, whether venomous [published];
     // the numbers are counted by hand from countedBoxes(): 2 + 3 pythons, 1 + 2 rattlesnakes, 6 axolotls
-    const text = (await extractPageTexts(await renderManifestPdf(buildManifestInput({ boxes: countedBoxes() })))).join(" ");
+    const text = (await extractPageTexts(await renderManifestPdf(buildManifestInput({ boxes: countedBoxes() })))).join(
+      " ",
+    );
     const totals = text.slice(text.indexOf("Totals by species (50 CFR 14.81)"));
     expect(totals).toContain("Ambystoma mexicanum Axolotl 2 No 6");
     expect(totals).toContain("Crotalus atrox Western diamondback rattlesnake 1, 3 VENOMOUS 3");
@@ -167,7 +209,10 @@ describe("renderManifestPdf pagination", () => {
     const pages = await extractPageTexts(await renderManifestPdf(input));
     const continued = pages.filter((p) => /Box \d+ of 10 \(continued\)/.test(p));
     expect(continued.length).toBeGreaterThan(0);
-    for (const page of continued) expect(page).toMatch(/\(continued\) # Species \(scientific \/ common\) Count Sex Identifier Origin Size Venomous/);
+    for (const page of continued)
+      expect(page).toMatch(
+        /\(continued\) # Species \(scientific \/ common\) Count Sex Identifier Origin Size Venomous/,
+      );
     // all 100 identifiers survive the page breaks, each exactly once
     const all = pages.join(" ");
     for (const a of input.boxes.flatMap((b) => b.animals)) expect(all.split(a.identifier ?? "?").length - 1).toBe(1);
@@ -175,7 +220,9 @@ describe("renderManifestPdf pagination", () => {
 });
 
 describe("renderManifestPdf with hostile text", () => {
-  const longNote = Array.from({ length: 400 }, (_, i) => `note${String(i).padStart(4, "0")}`).join(" ").slice(0, 2000);
+  const longNote = Array.from({ length: 400 }, (_, i) => `note${String(i).padStart(4, "0")}`)
+    .join(" ")
+    .slice(0, 2000);
   const longWord = Array.from({ length: 2000 }, (_, i) => String.fromCharCode(65 + (i % 26))).join("");
   let input: ManifestInput;
   let bytes: Uint8Array;

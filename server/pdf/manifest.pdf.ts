@@ -54,7 +54,11 @@ export async function renderManifestPdf(input: ManifestInput): Promise<Uint8Arra
   drawParties(flow, input.sender, input.receiver);
   drawCouriers(flow, input);
   flow.gap(8);
-  drawNoteBox(flow, "Please read", MANIFEST_CAUTIONS, { border: COLORS.amber, fill: COLORS.amberTint, title: COLORS.amber });
+  drawNoteBox(flow, "Please read", MANIFEST_CAUTIONS, {
+    border: COLORS.amber,
+    fill: COLORS.amberTint,
+    title: COLORS.amber,
+  });
   drawBoxes(flow, input.boxes);
   drawTotals(flow, input.boxes);
   drawDocuments(flow, input);
@@ -96,7 +100,9 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
   flow.drawLine("HATCHWAY  ·  PACKING MANIFEST", flow.left, topY - 10, { bold: true, sizePt: 9, color: COLORS.green });
   const numberText = fitText(flow.fonts.bold, `Transfer ${input.transferNumber}`, 20, textW);
   page.drawText(numberText, { x: flow.left, y: topY - 34, size: 20, font: flow.fonts.bold, color: COLORS.ink });
-  flow.drawLine(`${MODE_LABELS[input.mode]}  ·  ${PURPOSE_LABELS[input.purpose]}`, flow.left, topY - 50, { sizePt: 10 });
+  flow.drawLine(`${MODE_LABELS[input.mode]}  ·  ${PURPOSE_LABELS[input.purpose]}`, flow.left, topY - 50, {
+    sizePt: 10,
+  });
 
   const animals = input.boxes.reduce((n, b) => n + animalsInBox(b), 0);
   const facts: [string, string][] = [
@@ -110,10 +116,22 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
     const x = flow.left + (i % 2) * colW;
     const y = topY - 66 - Math.floor(i / 2) * 24;
     flow.drawLine(label.toUpperCase(), x, y, { sizePt: 6.5, color: COLORS.muted });
-    page.drawText(fitText(flow.fonts.bold, value, 9.5, colW - 8), { x, y: y - 11, size: 9.5, font: flow.fonts.bold, color: COLORS.ink });
+    page.drawText(fitText(flow.fonts.bold, value, 9.5, colW - 8), {
+      x,
+      y: y - 11,
+      size: 9.5,
+      font: flow.fonts.bold,
+      color: COLORS.ink,
+    });
   });
   const urlLine = fitText(flow.fonts.regular, `Handoff page: ${input.handoffUrl}`, 7, flow.width);
-  page.drawText(urlLine, { x: flow.left, y: topY - QR_SIZE_PT - 18, size: 7, font: flow.fonts.regular, color: COLORS.muted });
+  page.drawText(urlLine, {
+    x: flow.left,
+    y: topY - QR_SIZE_PT - 18,
+    size: 7,
+    font: flow.fonts.regular,
+    color: COLORS.muted,
+  });
   flow.y = topY - QR_SIZE_PT - 28;
 }
 
@@ -148,11 +166,24 @@ function drawParties(flow: PageFlow, sender: PartyBlock, receiver: PartyBlock): 
   const topY = flow.y;
   blocks.forEach((block, i) => {
     const x = flow.left + i * (colW + gapPt);
-    flow.page.drawRectangle({ x, y: topY - heightPt, width: colW, height: heightPt, borderColor: COLORS.green, borderWidth: 0.8 });
+    flow.page.drawRectangle({
+      x,
+      y: topY - heightPt,
+      width: colW,
+      height: heightPt,
+      borderColor: COLORS.green,
+      borderWidth: 0.8,
+    });
     flow.page.drawRectangle({ x, y: topY - 18, width: colW, height: 18, color: COLORS.greenTint });
     flow.drawLine(block.title, x + 8, topY - 12.5, { bold: true, sizePt: 8, color: COLORS.green });
     block.lines.forEach(({ line, bold }, n) => {
-      flow.page.drawText(line, { x: x + 8, y: topY - 26 - sizePt - n * lineH + 2, size: sizePt, font: flow.font(bold), color: COLORS.ink });
+      flow.page.drawText(line, {
+        x: x + 8,
+        y: topY - 26 - sizePt - n * lineH + 2,
+        size: sizePt,
+        font: flow.font(bold),
+        color: COLORS.ink,
+      });
     });
   });
   flow.y = topY - heightPt;
@@ -204,7 +235,10 @@ function boxDetails(box: ManifestBox): string {
 }
 
 function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
-  const size = [animal.lengthMm === null ? null : formatLengthMm(animal.lengthMm), animal.weightG === null ? null : formatWeightG(animal.weightG)]
+  const size = [
+    animal.lengthMm === null ? null : formatLengthMm(animal.lengthMm),
+    animal.weightG === null ? null : formatWeightG(animal.weightG),
+  ]
     .filter((s): s is string => s !== null)
     .join("\n");
   const venomous: Cell = animal.venomous ? { text: "VENOMOUS", bold: true, color: COLORS.brick } : "No";
@@ -225,7 +259,11 @@ function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
     },
   ];
   if (hasNotes) {
-    rows.push({ cells: [{ text: `Notes: ${animal.notes ?? ""}`, color: COLORS.muted }], span: true, indentPt: NOTES_INDENT_PT });
+    rows.push({
+      cells: [{ text: `Notes: ${animal.notes ?? ""}`, color: COLORS.muted }],
+      span: true,
+      indentPt: NOTES_INDENT_PT,
+    });
   }
   return rows;
 }
@@ -271,7 +309,13 @@ function drawTotals(flow: PageFlow, boxes: ManifestBox[]): void {
   }));
   const all = totals.reduce((n, t) => n + t.count, 0);
   rows.push({
-    cells: ["All species", `${totals.length} species`, `${boxes.length} ${boxes.length === 1 ? "box" : "boxes"}`, "", String(all)],
+    cells: [
+      "All species",
+      `${totals.length} species`,
+      `${boxes.length} ${boxes.length === 1 ? "box" : "boxes"}`,
+      "",
+      String(all),
+    ],
     bold: true,
     fill: COLORS.greenTint,
   });
@@ -307,7 +351,13 @@ function drawDocuments(flow: PageFlow, input: ManifestInput): void {
       { header: "Valid", widthPt: 96 },
     ],
     rows: input.documents.map((d) => ({
-      cells: [DOCUMENT_KIND_LABELS[d.kind], { text: d.number, bold: true }, d.issuer, d.holder, validity(d.validFrom, d.validTo)],
+      cells: [
+        DOCUMENT_KIND_LABELS[d.kind],
+        { text: d.number, bold: true },
+        d.issuer,
+        d.holder,
+        validity(d.validFrom, d.validTo),
+      ],
     })),
     continuedTitle: "Permits and certificates",
   });
@@ -317,9 +367,15 @@ function drawTemperature(flow: PageFlow, input: ManifestInput): void {
   flow.heading("Temperature and packing", 40);
   const t = input.temperature;
   if (t?.safeRangeF) {
-    flow.paragraph(`Safe transit range: ${formatTempRangeF(t.safeRangeF.minF, t.safeRangeF.maxF)}`, { bold: true, sizePt: 10 });
+    flow.paragraph(`Safe transit range: ${formatTempRangeF(t.safeRangeF.minF, t.safeRangeF.maxF)}`, {
+      bold: true,
+      sizePt: 10,
+    });
   } else if (t?.boxRangesF && Object.keys(t.boxRangesF).length) {
-    flow.paragraph("Safe transit range: differs by box; each box label and the notes below give it.", { bold: true, sizePt: 10 });
+    flow.paragraph("Safe transit range: differs by box; each box label and the notes below give it.", {
+      bold: true,
+      sizePt: 10,
+    });
   }
   if (t?.advice) labelled(flow, "Advice", t.advice);
   if (t?.packingNotes) labelled(flow, "Packing notes", t.packingNotes);
@@ -327,10 +383,13 @@ function drawTemperature(flow: PageFlow, input: ManifestInput): void {
     flow.paragraph("No temperature advice was recorded for this transfer.", { color: COLORS.muted });
   }
   flow.gap(4);
-  flow.paragraph("Temperature advice is a planning aid, not a guarantee. Heat packs never touch an animal's container.", {
-    sizePt: 8,
-    color: COLORS.amber,
-  });
+  flow.paragraph(
+    "Temperature advice is a planning aid, not a guarantee. Heat packs never touch an animal's container.",
+    {
+      sizePt: 8,
+      color: COLORS.amber,
+    },
+  );
 }
 
 function labelled(flow: PageFlow, label: string, text: string): void {
@@ -345,7 +404,11 @@ function drawHandling(flow: PageFlow, input: ManifestInput): void {
   if (input.handlingNotes?.trim()) labelled(flow, "Sender's handling notes", input.handlingNotes);
   flow.gap(6);
   const partyRow = (party: PartyBlock, role: string): TableRow => ({
-    cells: [{ text: party.contactName, bold: true, sub: party.organisation }, role, { text: party.phone24h, bold: true }],
+    cells: [
+      { text: party.contactName, bold: true, sub: party.organisation },
+      role,
+      { text: party.phone24h, bold: true },
+    ],
   });
   drawTable(flow, {
     columns: [
@@ -356,7 +419,9 @@ function drawHandling(flow: PageFlow, input: ManifestInput): void {
     rows: [
       partyRow(input.sender, "Sender"),
       partyRow(input.receiver, "Receiver"),
-      ...input.emergencyContacts.map((c) => ({ cells: [{ text: c.name, bold: true }, c.role, { text: c.phone, bold: true }] })),
+      ...input.emergencyContacts.map((c) => ({
+        cells: [{ text: c.name, bold: true }, c.role, { text: c.phone, bold: true }],
+      })),
     ],
     continuedTitle: "Emergency contacts",
   });
@@ -397,13 +462,22 @@ function drawFooters(flow: PageFlow, input: ManifestInput): void {
     });
     const pageText = `Page ${i + 1} of ${total}`;
     const pageW = textWidthPt(flow.fonts.bold, pageText, 8);
-    page.drawText(fitText(flow.fonts.regular, `${produced}  ·  Transfer ${input.transferNumber}`, 7.5, flow.width - pageW - 20), {
-      x: flow.left,
+    page.drawText(
+      fitText(flow.fonts.regular, `${produced}  ·  Transfer ${input.transferNumber}`, 7.5, flow.width - pageW - 20),
+      {
+        x: flow.left,
+        y: 26,
+        size: 7.5,
+        font: flow.fonts.regular,
+        color: COLORS.muted,
+      },
+    );
+    page.drawText(pageText, {
+      x: flow.left + flow.width - pageW,
       y: 26,
-      size: 7.5,
-      font: flow.fonts.regular,
-      color: COLORS.muted,
+      size: 8,
+      font: flow.fonts.bold,
+      color: COLORS.ink,
     });
-    page.drawText(pageText, { x: flow.left + flow.width - pageW, y: 26, size: 8, font: flow.fonts.bold, color: COLORS.ink });
   });
 }

@@ -57,11 +57,17 @@ export function renderPagePng(bytes: Uint8Array, name: string, pageNo = 1): stri
   const pdfPath = `${TEST_OUTPUT_DIR}${name}.pdf`;
   writeFileSync(pdfPath, bytes);
   const outBase = `${TEST_OUTPUT_DIR}${name}`;
-  const run = spawnSync("pdftoppm", ["-png", "-r", "150", "-f", String(pageNo), "-l", String(pageNo), "-singlefile", pdfPath, outBase], {
-    encoding: "utf8",
-  });
+  const run = spawnSync(
+    "pdftoppm",
+    ["-png", "-r", "150", "-f", String(pageNo), "-l", String(pageNo), "-singlefile", pdfPath, outBase],
+    {
+      encoding: "utf8",
+    },
+  );
   if (run.error && "code" in run.error && run.error.code === "ENOENT") {
-    throw new Error("pdftoppm was not found: install poppler-utils (apt-get install -y poppler-utils) to run the PDF tests");
+    throw new Error(
+      "pdftoppm was not found: install poppler-utils (apt-get install -y poppler-utils) to run the PDF tests",
+    );
   }
   if (run.status !== 0) throw new Error(`pdftoppm failed (${String(run.status)}): ${run.stderr}`);
   return `${outBase}.png`;
@@ -70,7 +76,11 @@ export function renderPagePng(bytes: Uint8Array, name: string, pageNo = 1): stri
 /** The text of the QR code jsQR finds in a PNG, or null. */
 export function decodeQrFromPng(pngPath: string): string | null {
   const png = PNG.sync.read(readFileSync(pngPath));
-  const found = jsQR(new Uint8ClampedArray(png.data.buffer, png.data.byteOffset, png.data.length), png.width, png.height);
+  const found = jsQR(
+    new Uint8ClampedArray(png.data.buffer, png.data.byteOffset, png.data.length),
+    png.width,
+    png.height,
+  );
   return found?.data ?? null;
 }
 

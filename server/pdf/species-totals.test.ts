@@ -19,7 +19,9 @@ describe("speciesTotals", () => {
       buildAnimal(2, { scientificName: "python  regius ", commonName: "Royal python", count: 3, venomous: false }),
       buildAnimal(3, { scientificName: "Ambystoma mexicanum", commonName: "Axolotl", count: 6, venomous: false }),
     ]),
-    box(3, [buildAnimal(4, { scientificName: "Crotalus atrox", commonName: "Western diamondback", count: 2, venomous: true })]),
+    box(3, [
+      buildAnimal(4, { scientificName: "Crotalus atrox", commonName: "Western diamondback", count: 2, venomous: true }),
+    ]),
   ];
 
   it("sums each species over all boxes, sorted by scientific name", () => {
@@ -37,7 +39,12 @@ describe("speciesTotals", () => {
   });
 
   it("marks a species venomous when any line of it is", () => {
-    const mixed = [box(1, [buildAnimal(0, { scientificName: "Heloderma suspectum", venomous: false }), buildAnimal(1, { scientificName: "Heloderma suspectum", venomous: true })])];
+    const mixed = [
+      box(1, [
+        buildAnimal(0, { scientificName: "Heloderma suspectum", venomous: false }),
+        buildAnimal(1, { scientificName: "Heloderma suspectum", venomous: true }),
+      ]),
+    ];
     expect(speciesTotals(mixed)[0]?.venomous).toBe(true);
   });
 });

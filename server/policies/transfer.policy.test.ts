@@ -3,8 +3,22 @@ import type { Actor } from "../auth/actor";
 import { handoffAllowed, transferAbilities, viewerRoleFor, type TransferFacts } from "./transfer.policy";
 
 const org = (id: string) => ({ id, name: id, kind: "breeder" as const });
-const member = (id: string, orgId: string): Actor => ({ id, email: `${id}@x`, displayName: id, role: "member", disabled: false, organization: org(orgId) });
-const courier = (id: string): Actor => ({ id, email: `${id}@x`, displayName: id, role: "courier", disabled: false, organization: org("couriers") });
+const member = (id: string, orgId: string): Actor => ({
+  id,
+  email: `${id}@x`,
+  displayName: id,
+  role: "member",
+  disabled: false,
+  organization: org(orgId),
+});
+const courier = (id: string): Actor => ({
+  id,
+  email: `${id}@x`,
+  displayName: id,
+  role: "courier",
+  disabled: false,
+  organization: org("couriers"),
+});
 const admin: Actor = { id: "adm", email: "a@x", displayName: "A", role: "admin", disabled: false, organization: null };
 
 const facts = (over: Partial<TransferFacts> = {}): TransferFacts => ({
@@ -63,7 +77,11 @@ describe("transfer policy", () => {
     expect(transferAbilities(member("s", "S"), "sender", waiting).confirm).toBe(false);
     expect(transferAbilities(member("s", "S"), "sender", waiting).edit).toBe(true);
     expect(transferAbilities(member("r", "R"), "receiver", waiting).edit).toBe(false);
-    expect(transferAbilities(member("r", "R"), "receiver", facts({ status: "delivered", handoffsDone: 3 })).checkIn).toBe(true);
-    expect(transferAbilities(courier("c2"), "courier", facts({ status: "delivered", handoffsDone: 3 })).checkIn).toBe(false);
+    expect(
+      transferAbilities(member("r", "R"), "receiver", facts({ status: "delivered", handoffsDone: 3 })).checkIn,
+    ).toBe(true);
+    expect(transferAbilities(courier("c2"), "courier", facts({ status: "delivered", handoffsDone: 3 })).checkIn).toBe(
+      false,
+    );
   });
 });

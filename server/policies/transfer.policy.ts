@@ -16,7 +16,10 @@ export type TransferFacts = {
  * Who the caller is to this transfer: a member of the sending or receiving organisation,
  * an assigned courier, an admin (read only), or nobody (the record does not exist for them).
  */
-export function viewerRoleFor(actor: Actor, t: Pick<TransferFacts, "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds">): ViewerRole | null {
+export function viewerRoleFor(
+  actor: Actor,
+  t: Pick<TransferFacts, "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds">,
+): ViewerRole | null {
   if (actor.disabled) return null;
   const orgId = actor.organization?.id;
   if (actor.role === "member" && orgId === t.senderOrganizationId) return "sender";

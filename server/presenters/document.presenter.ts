@@ -21,7 +21,12 @@ export function presentScan(scan: DocumentScan): ScanDto {
  * issuer, validity) without the record's details or scans; only the holder reads the notes.
  * `doc.organization` must be populated.
  */
-export function presentDocument(doc: PermitDocument, viewer: DocumentViewer, scans: readonly DocumentScan[], today = todayUtc()): DocumentDto {
+export function presentDocument(
+  doc: PermitDocument,
+  viewer: DocumentViewer,
+  scans: readonly DocumentScan[],
+  today = todayUtc(),
+): DocumentDto {
   const org = doc.organization.getEntity();
   const validTo = doc.validTo ?? null;
   return {

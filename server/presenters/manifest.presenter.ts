@@ -22,8 +22,18 @@ export function presentManifestInput(v: TransferView, extras: Required<ManifestE
   const sender = party(v.sender, v.senderContact);
   const receiver = party(v.receiver, v.receiverContact);
   // Shipper and consignee are the addresses the animals leave from and go to (50 CFR 14.81).
-  Object.assign(sender, { street: t.origin_street, city: t.origin_city, state: t.origin_state as UsState, zip: t.origin_zip });
-  Object.assign(receiver, { street: t.destination_street, city: t.destination_city, state: t.destination_state as UsState, zip: t.destination_zip });
+  Object.assign(sender, {
+    street: t.origin_street,
+    city: t.origin_city,
+    state: t.origin_state as UsState,
+    zip: t.origin_zip,
+  });
+  Object.assign(receiver, {
+    street: t.destination_street,
+    city: t.destination_city,
+    state: t.destination_state as UsState,
+    zip: t.destination_zip,
+  });
 
   return {
     transferNumber: t.number,
@@ -65,7 +75,13 @@ export function presentManifestInput(v: TransferView, extras: Required<ManifestE
     emergencyContacts: [
       { name: sender.contactName, role: `Sender — ${v.sender.name}`, phone: v.sender.phone },
       { name: receiver.contactName, role: `Receiver — ${v.receiver.name}`, phone: v.receiver.phone },
-      ...v.legs.filter((l) => l.org_phone).map((l) => ({ name: l.courier_name, role: `Courier, leg ${l.sequence}${l.org_name ? ` — ${l.org_name}` : ""}`, phone: l.org_phone! })),
+      ...v.legs
+        .filter((l) => l.org_phone)
+        .map((l) => ({
+          name: l.courier_name,
+          role: `Courier, leg ${l.sequence}${l.org_name ? ` — ${l.org_name}` : ""}`,
+          phone: l.org_phone!,
+        })),
     ],
     handoffUrl: appLink(`/legs/${t.id}`),
     generatedAt: now.toISOString(),

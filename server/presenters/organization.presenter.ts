@@ -6,7 +6,12 @@ export function presentOrganization(org: Organization): OrganizationDto {
     id: org.id,
     name: org.name,
     kind: org.kind,
-    address: { street: org.street, city: org.city, state: org.state as OrganizationDto["address"]["state"], zip: org.zip },
+    address: {
+      street: org.street,
+      city: org.city,
+      state: org.state as OrganizationDto["address"]["state"],
+      zip: org.zip,
+    },
     phone: org.phone,
     email: org.email,
   };

@@ -21,8 +21,22 @@ export function presentTaxonRow(row: TaxonRow): TaxonBriefDto {
   };
 }
 
-type TaxonLike = { id: string; rank: string; scientificName: string; commonNames: string[]; venomous: boolean; profileGroup?: ProfileGroup | null };
+type TaxonLike = {
+  id: string;
+  rank: string;
+  scientificName: string;
+  commonNames: string[];
+  venomous: boolean;
+  profileGroup?: ProfileGroup | null;
+};
 
 export function presentTaxon(t: TaxonLike): TaxonBriefDto {
-  return { id: t.id, scientificName: t.scientificName, commonName: t.commonNames[0] ?? null, venomous: t.venomous, profileGroup: t.profileGroup ?? null, rank: t.rank };
+  return {
+    id: t.id,
+    scientificName: t.scientificName,
+    commonName: t.commonNames[0] ?? null,
+    venomous: t.venomous,
+    profileGroup: t.profileGroup ?? null,
+    rank: t.rank,
+  };
 }

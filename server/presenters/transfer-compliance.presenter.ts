@@ -5,7 +5,12 @@ import type { ComplianceOverride } from "../db/entities/compliance.entity";
 /** `override.admin` must be populated. */
 export function presentOverride(override: ComplianceOverride): ComplianceOverrideDto {
   const admin = override.admin.getEntity();
-  return { reason: override.reason, at: override.createdAt.toISOString(), admin: { id: admin.id, displayName: admin.displayName }, transferVersion: override.transferVersion };
+  return {
+    reason: override.reason,
+    at: override.createdAt.toISOString(),
+    admin: { id: admin.id, displayName: admin.displayName },
+    transferVersion: override.transferVersion,
+  };
 }
 
 export function presentTransferCompliance(

@@ -1,5 +1,16 @@
 import type {
-  AnimalDto, CheckInDto, ContainerDto, HandoffDto, LegDto, OrgBriefDto, PersonDto, PlaceDto, TaxonBriefDto, TransferAbilitiesDto, TransferDto, ViewerRole,
+  AnimalDto,
+  CheckInDto,
+  ContainerDto,
+  HandoffDto,
+  LegDto,
+  OrgBriefDto,
+  PersonDto,
+  PlaceDto,
+  TaxonBriefDto,
+  TransferAbilitiesDto,
+  TransferDto,
+  ViewerRole,
 } from "@shared/schemas/transfer";
 import type { UsState } from "@shared/constants";
 import { handoffKind, handoffsPlanned } from "@shared/transfer/lifecycle";
@@ -9,14 +20,30 @@ import type { Organization } from "../db/entities/organization.entity";
 import type { TaxonRowView, TransferView } from "../services/transfers/read-view";
 import type { TransferFacts } from "../policies/transfer.policy";
 
-export function presentOrgBrief(org: Pick<Organization, "id" | "name" | "kind" | "phone" | "email" | "street" | "city" | "state" | "zip">): OrgBriefDto {
-  return { id: org.id, name: org.name, kind: org.kind, phone: org.phone, email: org.email, address: { street: org.street, city: org.city, state: org.state as UsState, zip: org.zip } };
+export function presentOrgBrief(
+  org: Pick<Organization, "id" | "name" | "kind" | "phone" | "email" | "street" | "city" | "state" | "zip">,
+): OrgBriefDto {
+  return {
+    id: org.id,
+    name: org.name,
+    kind: org.kind,
+    phone: org.phone,
+    email: org.email,
+    address: { street: org.street, city: org.city, state: org.state as UsState, zip: org.zip },
+  };
 }
 
 const iso = (s: string) => new Date(s).toISOString();
 
 function taxon(x: TaxonRowView): TaxonBriefDto {
-  return { id: x.id, scientificName: x.scientific_name, commonName: x.common_names[0] ?? null, venomous: x.venomous, profileGroup: x.profile_group, rank: x.rank };
+  return {
+    id: x.id,
+    scientificName: x.scientific_name,
+    commonName: x.common_names[0] ?? null,
+    venomous: x.venomous,
+    profileGroup: x.profile_group,
+    rank: x.rank,
+  };
 }
 
 function place(v: TransferView["t"], side: "origin" | "destination"): PlaceDto {
@@ -31,7 +58,8 @@ function place(v: TransferView["t"], side: "origin" | "destination"): PlaceDto {
   };
 }
 
-const person = (p: TransferView["senderContact"]): PersonDto | null => (p ? { id: p.id, displayName: p.display_name, email: p.email } : null);
+const person = (p: TransferView["senderContact"]): PersonDto | null =>
+  p ? { id: p.id, displayName: p.display_name, email: p.email } : null;
 
 /** What the policy needs to know about a transfer, from its view. */
 export function factsOfView(v: TransferView): TransferFacts {
@@ -51,21 +79,47 @@ export function factsOfView(v: TransferView): TransferFacts {
 export function presentTransfer(v: TransferView, role: ViewerRole, abilities: TransferAbilitiesDto): TransferDto {
   const keyById = new Map(v.containers.map((c) => [c.id, c.key]));
   const containers: ContainerDto[] = v.containers.map((c) => ({
-    id: c.id, key: c.key, position: c.position, label: c.label, lengthMm: c.length_mm, widthMm: c.width_mm, heightMm: c.height_mm,
-    wallMaterial: c.wall_material, wallThicknessMm: c.wall_thickness_mm, pack: c.pack, sealNumber: c.seal_number,
+    id: c.id,
+    key: c.key,
+    position: c.position,
+    label: c.label,
+    lengthMm: c.length_mm,
+    widthMm: c.width_mm,
+    heightMm: c.height_mm,
+    wallMaterial: c.wall_material,
+    wallThicknessMm: c.wall_thickness_mm,
+    pack: c.pack,
+    sealNumber: c.seal_number,
   }));
   const animals: AnimalDto[] = v.animals.map((a) => ({
-    id: a.id, position: a.position, taxon: taxon(a.taxon), count: a.count, sex: a.sex, identifier: a.identifier, identifierKind: a.identifier_kind,
-    origin: a.origin, lengthMm: a.length_mm, lengthKind: a.length_kind, weightG: a.weight_g, hatchDate: a.hatch_date, notes: a.notes,
-    containerId: a.container_id, containerKey: a.container_id ? (keyById.get(a.container_id) ?? null) : null,
+    id: a.id,
+    position: a.position,
+    taxon: taxon(a.taxon),
+    count: a.count,
+    sex: a.sex,
+    identifier: a.identifier,
+    identifierKind: a.identifier_kind,
+    origin: a.origin,
+    lengthMm: a.length_mm,
+    lengthKind: a.length_kind,
+    weightG: a.weight_g,
+    hatchDate: a.hatch_date,
+    notes: a.notes,
+    containerId: a.container_id,
+    containerKey: a.container_id ? (keyById.get(a.container_id) ?? null) : null,
   }));
   const legs: LegDto[] = v.legs.map((l) => ({
-    id: l.id, sequence: l.sequence, fromLabel: l.from_label, toLabel: l.to_label,
+    id: l.id,
+    sequence: l.sequence,
+    fromLabel: l.from_label,
+    toLabel: l.to_label,
     courier: { id: l.courier_id, displayName: l.courier_name, organizationName: l.org_name, phone: l.org_phone },
   }));
   const expectedSeals = new Map(containers.map((c) => [c.id, c.sealNumber]));
   const handoffs: HandoffDto[] = v.handoffs.map((h) => {
-    const p = h.payload as Record<string, unknown> & { seals?: { containerId: string; sealNumber: string | null; intact: boolean }[] };
+    const p = h.payload as Record<string, unknown> & {
+      seals?: { containerId: string; sealNumber: string | null; intact: boolean }[];
+    };
     const index = Number(p.handoffIndex);
     return {
       handoffIndex: index,
@@ -76,7 +130,12 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
       receivedByName: String(p.receivedByName ?? ""),
       boxesExpected: Number(p.boxesExpected ?? 0),
       boxesCounted: Number(p.boxesCounted ?? 0),
-      seals: (p.seals ?? []).map((s) => ({ containerId: s.containerId, sealNumber: s.sealNumber, intact: s.intact, expected: expectedSeals.get(s.containerId) ?? null })),
+      seals: (p.seals ?? []).map((s) => ({
+        containerId: s.containerId,
+        sealNumber: s.sealNumber,
+        intact: s.intact,
+        expected: expectedSeals.get(s.containerId) ?? null,
+      })),
       boxTempF: (p.boxTempF as number | null) ?? null,
       place: (p.place as HandoffDto["place"]) ?? { text: null, lat: null, lon: null, accuracyM: null },
       notes: (p.notes as string | null) ?? null,
@@ -87,18 +146,36 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
   if (v.checkIn) {
     const ci = v.checkIn;
     const items = ci.items.map((i) => ({
-      animalId: i.animal_id, arrivedWell: i.arrived_well, arrivedProblem: i.arrived_problem, deadOnArrival: i.dead_on_arrival, missing: i.missing,
-      problem: i.problem, weightG: i.weight_g, notes: i.notes,
+      animalId: i.animal_id,
+      arrivedWell: i.arrived_well,
+      arrivedProblem: i.arrived_problem,
+      deadOnArrival: i.dead_on_arrival,
+      missing: i.missing,
+      problem: i.problem,
+      weightG: i.weight_g,
+      notes: i.notes,
     }));
     const extras = ci.extras.map((e) => ({ taxon: taxon(e.taxon), count: e.count, sex: e.sex, notes: e.notes }));
     const discrepancies = computeDiscrepancies(
-      animals.map((a) => ({ id: a.id, taxonId: a.taxon.id, scientificName: a.taxon.scientificName, sex: a.sex, count: a.count })),
+      animals.map((a) => ({
+        id: a.id,
+        taxonId: a.taxon.id,
+        scientificName: a.taxon.scientificName,
+        sex: a.sex,
+        count: a.count,
+      })),
       items,
       extras.map((e) => ({ taxonId: e.taxon.id, scientificName: e.taxon.scientificName, sex: e.sex, count: e.count })),
     );
     checkIn = {
-      signedAt: iso(ci.signed_at), signedBy: { id: ci.signed_by_id, displayName: ci.signed_by_name }, signedName: ci.signed_name, notes: ci.notes,
-      items, extras, discrepancies, allAccountedFor: allAccountedFor(discrepancies),
+      signedAt: iso(ci.signed_at),
+      signedBy: { id: ci.signed_by_id, displayName: ci.signed_by_name },
+      signedName: ci.signed_name,
+      notes: ci.notes,
+      items,
+      extras,
+      discrepancies,
+      allAccountedFor: allAccountedFor(discrepancies),
     };
   }
 
@@ -129,7 +206,12 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     handoffsPlanned: handoffsPlanned(legs.length),
     packingFindings: packingFindings(
       containers.map((c) => ({ id: c.id, label: c.label })),
-      animals.map((a) => ({ id: a.id, containerId: a.containerId, taxonId: a.taxon.id, scientificName: a.taxon.scientificName })),
+      animals.map((a) => ({
+        id: a.id,
+        containerId: a.containerId,
+        taxonId: a.taxon.id,
+        scientificName: a.taxon.scientificName,
+      })),
     ),
     checkIn,
     confirmedAt: t.confirmed_at ? iso(t.confirmed_at) : null,

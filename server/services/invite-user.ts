@@ -13,12 +13,25 @@ import { invitationMail } from "../mail/templates";
 const INVITATION_HOURS = 72;
 
 /** Creates an account without a password and mails a one-time link to choose one. */
-export async function inviteUser({ em, actor, input, publicUrl }: { em: EntityManager; actor: Actor; input: UserInviteInput; publicUrl: string }) {
+export async function inviteUser({
+  em,
+  actor,
+  input,
+  publicUrl,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  input: UserInviteInput;
+  publicUrl: string;
+}) {
   const key = emailKey(input.email);
-  if (await em.count(UserSchema, { emailKey: key })) throw conflict("An account with this e-mail already exists.", { field: "email" });
-  if (input.role === "member" && !input.organizationId) throw badRequest("organizationId: a member needs an organisation", { field: "organizationId" });
+  if (await em.count(UserSchema, { emailKey: key }))
+    throw conflict("An account with this e-mail already exists.", { field: "email" });
+  if (input.role === "member" && !input.organizationId)
+    throw badRequest("organizationId: a member needs an organisation", { field: "organizationId" });
   const organization = input.organizationId ? await em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
-  if (input.organizationId && !organization) throw badRequest("organizationId: no such organisation", { field: "organizationId" });
+  if (input.organizationId && !organization)
+    throw badRequest("organizationId: no such organisation", { field: "organizationId" });
 
   const user = em.create(UserSchema, {
     email: input.email,
@@ -35,7 +48,16 @@ export async function inviteUser({ em, actor, input, publicUrl }: { em: EntityMa
     tokenHash: createHash("sha256").update(token).digest("hex"),
     expiresAt: new Date(Date.now() + INVITATION_HOURS * 3600_000),
   });
-  enqueueMail(em, invitationMail({ to: input.email, name: input.displayName, invitedBy: actor.displayName, link: `${publicUrl}/welcome?token=${token}`, hours: INVITATION_HOURS }));
+  enqueueMail(
+    em,
+    invitationMail({
+      to: input.email,
+      name: input.displayName,
+      invitedBy: actor.displayName,
+      link: `${publicUrl}/welcome?token=${token}`,
+      hours: INVITATION_HOURS,
+    }),
+  );
   await em.flush();
   return user;
 }

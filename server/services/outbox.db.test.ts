@@ -22,7 +22,8 @@ async function queue(subject: string) {
 }
 
 const statusOf = async (subject: string) =>
-  (await t.ctx.pool.query("SELECT status, attempts, last_error FROM outbox_message WHERE subject = $1", [subject])).rows[0];
+  (await t.ctx.pool.query("SELECT status, attempts, last_error FROM outbox_message WHERE subject = $1", [subject]))
+    .rows[0];
 
 describe("outbox", () => {
   it("delivers queued mail through SMTP to the fake", async () => {

@@ -47,12 +47,14 @@ export async function deliverDueMail(orm: Orm, mailer: Mailer, batch = 20): Prom
     for (const row of rows) {
       try {
         await mailer.send({ to: row.to_address, subject: row.subject, text: row.text_body });
-        await tx.getConnection().execute(
-          `UPDATE outbox_message SET status = 'sent', sent_at = now(), attempts = attempts + 1, last_error = NULL WHERE id = ?`,
-          [row.id],
-          "run",
-          tx.getTransactionContext(),
-        );
+        await tx
+          .getConnection()
+          .execute(
+            `UPDATE outbox_message SET status = 'sent', sent_at = now(), attempts = attempts + 1, last_error = NULL WHERE id = ?`,
+            [row.id],
+            "run",
+            tx.getTransactionContext(),
+          );
         sent++;
       } catch (err) {
         const attempts = row.attempts + 1;
@@ -60,7 +62,13 @@ export async function deliverDueMail(orm: Orm, mailer: Mailer, batch = 20): Prom
         await tx.getConnection().execute(
           `UPDATE outbox_message SET attempts = ?, status = ?, last_error = ?,
              next_attempt_at = now() + (? * interval '1 second') WHERE id = ?`,
-          [attempts, status, String((err as Error)?.message ?? err).slice(0, 1000), retryDelaySeconds(attempts), row.id],
+          [
+            attempts,
+            status,
+            String((err as Error)?.message ?? err).slice(0, 1000),
+            retryDelaySeconds(attempts),
+            row.id,
+          ],
           "run",
           tx.getTransactionContext(),
         );

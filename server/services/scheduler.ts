@@ -19,7 +19,9 @@ export async function runTask(ctx: AppContext, name: string): Promise<boolean> {
   if (!task) throw new Error(`no scheduled task named ${name}`);
   const client = await ctx.pool.connect();
   try {
-    const { rows } = await client.query<{ locked: boolean }>("SELECT pg_try_advisory_lock(hashtext($1)) AS locked", [`hatchway:${name}`]);
+    const { rows } = await client.query<{ locked: boolean }>("SELECT pg_try_advisory_lock(hashtext($1)) AS locked", [
+      `hatchway:${name}`,
+    ]);
     if (!rows[0]?.locked) return false;
     try {
       await task.run(ctx);

@@ -24,10 +24,37 @@ describe("computeDiscrepancies", () => {
       [{ ...axolotl, sex: "male", count: 1 }],
     );
     expect(rows).toEqual([
-      { ...axolotl, sex: "male", expected: 0, arrivedWell: 0, arrivedProblem: 0, deadOnArrival: 0, missing: 0, extra: 1 },
-      { ...axolotl, sex: "unknown", expected: 4, arrivedWell: 3, arrivedProblem: 1, deadOnArrival: 0, missing: 0, extra: 0 },
+      {
+        ...axolotl,
+        sex: "male",
+        expected: 0,
+        arrivedWell: 0,
+        arrivedProblem: 0,
+        deadOnArrival: 0,
+        missing: 0,
+        extra: 1,
+      },
+      {
+        ...axolotl,
+        sex: "unknown",
+        expected: 4,
+        arrivedWell: 3,
+        arrivedProblem: 1,
+        deadOnArrival: 0,
+        missing: 0,
+        extra: 0,
+      },
       { ...corn, sex: "male", expected: 1, arrivedWell: 0, arrivedProblem: 0, deadOnArrival: 0, missing: 1, extra: 0 },
-      { ...corn, sex: "female", expected: 5, arrivedWell: 4, arrivedProblem: 0, deadOnArrival: 1, missing: 0, extra: 0 },
+      {
+        ...corn,
+        sex: "female",
+        expected: 5,
+        arrivedWell: 4,
+        arrivedProblem: 0,
+        deadOnArrival: 1,
+        missing: 0,
+        extra: 0,
+      },
     ]);
     expect(allAccountedFor(rows)).toBe(false);
   });
@@ -38,7 +65,11 @@ describe("computeDiscrepancies", () => {
   });
 
   it("all well and nothing extra is accounted for", () => {
-    const rows = computeDiscrepancies([{ id: "a", ...corn, sex: "male", count: 2 }], [{ animalId: "a", arrivedWell: 2, arrivedProblem: 0, deadOnArrival: 0, missing: 0 }], []);
+    const rows = computeDiscrepancies(
+      [{ id: "a", ...corn, sex: "male", count: 2 }],
+      [{ animalId: "a", arrivedWell: 2, arrivedProblem: 0, deadOnArrival: 0, missing: 0 }],
+      [],
+    );
     expect(allAccountedFor(rows)).toBe(true);
   });
 

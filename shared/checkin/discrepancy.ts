@@ -2,7 +2,13 @@ import type { Sex } from "../constants";
 import type { DiscrepancyRowDto } from "../schemas/transfer";
 
 type ManifestLine = { id: string; taxonId: string; scientificName: string; sex: Sex; count: number };
-type Outcome = { animalId: string; arrivedWell: number; arrivedProblem: number; deadOnArrival: number; missing: number };
+type Outcome = {
+  animalId: string;
+  arrivedWell: number;
+  arrivedProblem: number;
+  deadOnArrival: number;
+  missing: number;
+};
 type Extra = { taxonId: string; scientificName: string; sex: Sex; count: number };
 
 /**
@@ -10,13 +16,27 @@ type Extra = { taxonId: string; scientificName: string; sex: Sex; count: number 
  * arrived with a problem, dead on arrival, missing, and extra (arrived but not listed).
  * Rows are sorted by scientific name, then sex.
  */
-export function computeDiscrepancies(manifest: readonly ManifestLine[], outcomes: readonly Outcome[], extras: readonly Extra[]): DiscrepancyRowDto[] {
+export function computeDiscrepancies(
+  manifest: readonly ManifestLine[],
+  outcomes: readonly Outcome[],
+  extras: readonly Extra[],
+): DiscrepancyRowDto[] {
   const rows = new Map<string, DiscrepancyRowDto>();
   const row = (taxonId: string, scientificName: string, sex: Sex) => {
     const key = `${taxonId}|${sex}`;
     let r = rows.get(key);
     if (!r) {
-      r = { taxonId, scientificName, sex, expected: 0, arrivedWell: 0, arrivedProblem: 0, deadOnArrival: 0, missing: 0, extra: 0 };
+      r = {
+        taxonId,
+        scientificName,
+        sex,
+        expected: 0,
+        arrivedWell: 0,
+        arrivedProblem: 0,
+        deadOnArrival: 0,
+        missing: 0,
+        extra: 0,
+      };
       rows.set(key, r);
     }
     return r;
@@ -37,7 +57,9 @@ export function computeDiscrepancies(manifest: readonly ManifestLine[], outcomes
   }
   for (const e of extras) row(e.taxonId, e.scientificName, e.sex).extra += e.count;
   const sexOrder: Record<Sex, number> = { male: 0, female: 1, unknown: 2 };
-  return [...rows.values()].sort((a, b) => a.scientificName.localeCompare(b.scientificName) || sexOrder[a.sex] - sexOrder[b.sex]);
+  return [...rows.values()].sort(
+    (a, b) => a.scientificName.localeCompare(b.scientificName) || sexOrder[a.sex] - sexOrder[b.sex],
+  );
 }
 
 /** True when every listed animal arrived well and nothing extra came. */

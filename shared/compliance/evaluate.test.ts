@@ -13,7 +13,10 @@ function testRule(overrides: Partial<Rule> = {}): Rule {
     governs: "import",
     selector: { taxa: ["Pogona"] },
     conditions: {},
-    effect: { kind: "permit_required", permit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true } },
+    effect: {
+      kind: "permit_required",
+      permit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true },
+    },
     summary: "Test rule: a bearded dragon coming into Ohio needs a permit.",
     citation: { text: "Test rule: demo rule, not a statement of that state's law", url: null },
     effectiveFrom: null,
@@ -80,7 +83,15 @@ describe("document matching", () => {
   it("counts certificate age in calendar days across month ends, leap days and clock changes", () => {
     // [published] Gregorian calendar: Jan 31 to Mar 2 2026 is 30 days (Feb 2026 has 28); Feb 1 to Mar 3 2028 is 31 days (2028 is a leap year);
     // US clocks change on 2026-03-08 (15 U.S.C. 260a) and a whole-day count must not notice
-    const rule = testRule({ effect: { kind: "certificate_required", withinDays: 30, statements: [], accreditedVeterinarian: false, namesSpecies: false } });
+    const rule = testRule({
+      effect: {
+        kind: "certificate_required",
+        withinDays: 30,
+        statements: [],
+        accreditedVeterinarian: false,
+        namesSpecies: false,
+      },
+    });
     const cases = [
       ["2026-01-31", "2026-03-02", true],
       ["2028-02-01", "2028-03-03", false],
@@ -94,16 +105,30 @@ describe("document matching", () => {
 
   it("refuses a certificate without an issue date, and skips documents of another kind", () => {
     // [published] 9 CFR 74.1 counts from the veterinarian's signature, so an undated certificate cannot be placed in the window
-    const rule = testRule({ effect: { kind: "certificate_required", withinDays: 30, statements: [], accreditedVeterinarian: false, namesSpecies: false } });
-    expect(onlyFinding(run({ rules: [rule], documents: [buildCvi({ issuedOn: null })] }))?.message).toContain("has no issue date");
+    const rule = testRule({
+      effect: {
+        kind: "certificate_required",
+        withinDays: 30,
+        statements: [],
+        accreditedVeterinarian: false,
+        namesSpecies: false,
+      },
+    });
+    expect(onlyFinding(run({ rules: [rule], documents: [buildCvi({ issuedOn: null })] }))?.message).toContain(
+      "has no issue date",
+    );
     const wrongKind = run({ documents: [ohioPermit({ kind: "possession_permit" })] });
     expect(onlyFinding(wrongKind)?.message).not.toContain("Not accepted");
-    expect(onlyFinding(wrongKind)?.missing).toBe("an import permit from Ohio naming Pogona vitticeps, held by the receiver");
+    expect(onlyFinding(wrongKind)?.missing).toBe(
+      "an import permit from Ohio naming Pogona vitticeps, held by the receiver",
+    );
   });
 
   it("lets the first matching document win, in input order, when several would do", () => {
     // source: issue 4 §3 (product requirement, not an outside value): the finding names the document that satisfies it
-    const result = run({ documents: [ohioPermit({ validTo: "2026-01-31" }), ohioPermit({ number: "B" }), ohioPermit({ number: "C" })] });
+    const result = run({
+      documents: [ohioPermit({ validTo: "2026-01-31" }), ohioPermit({ number: "B" }), ohioPermit({ number: "C" })],
+    });
     expect(onlyFinding(result)?.satisfiedBy?.number).toBe("B");
   });
 });
@@ -111,7 +136,9 @@ describe("document matching", () => {
 describe("route", () => {
   it("ignores a transit state repeated as an end, and does not apply an import rule to a move within the state", () => {
     // [practice] a transit state is one the animal passes through, not where it starts or ends
-    const transitAtEnd = run({ facts: buildFacts({ originState: "OH", destinationState: "OH", transitStates: ["OH"] }) });
+    const transitAtEnd = run({
+      facts: buildFacts({ originState: "OH", destinationState: "OH", transitStates: ["OH"] }),
+    });
     expect(transitAtEnd.animals[0]?.findings).toEqual([]);
   });
 });
@@ -141,10 +168,25 @@ describe("verdict", () => {
 
   it("sorts each animal's findings by severity, then federal before state, then rule id", () => {
     // source: issue 4 §3 (product requirement, not an outside value): deterministic, sorted output
-    const federalAdvice = testRule({ id: "test-us-advice", jurisdiction: "US", governs: "interstate", effect: { kind: "advisory" } });
+    const federalAdvice = testRule({
+      id: "test-us-advice",
+      jurisdiction: "US",
+      governs: "interstate",
+      effect: { kind: "advisory" },
+    });
     const result = run({ rules: [advisory, federalAdvice, testRule(), block] });
-    expect(result.animals[0]?.findings.map((f) => f.ruleId)).toEqual(["test-block", "test-oh-pogona-permit", "test-us-advice", "test-advice"]);
-    expect(result.rulesUsed.map((r) => r.ruleId)).toEqual(["test-advice", "test-block", "test-oh-pogona-permit", "test-us-advice"]);
+    expect(result.animals[0]?.findings.map((f) => f.ruleId)).toEqual([
+      "test-block",
+      "test-oh-pogona-permit",
+      "test-us-advice",
+      "test-advice",
+    ]);
+    expect(result.rulesUsed.map((r) => r.ruleId)).toEqual([
+      "test-advice",
+      "test-block",
+      "test-oh-pogona-permit",
+      "test-us-advice",
+    ]);
   });
 });
 
@@ -153,11 +195,15 @@ describe("lines of one taxon", () => {
     // [published] 21 CFR 1240.62(b): under 4 in (101.6 mm) is covered, 4 in and over is not
     const slider = (lengthMm: number | null, scientificName = "Trachemys scripta elegans") =>
       buildAnimal(structuredClone(T.redEaredSlider), { lengthMm, scientificName });
-    const result = evaluateCompliance(buildInput({
-      facts: buildFacts({ sale: true }),
-      animals: [slider(90), slider(120), slider(null), slider(90, "Pseudemys scripta elegans")],
-    }));
-    const smallTurtle = result.animals.map((a) => a.findings.find((f) => f.ruleId === "us-21cfr1240.62-small-turtles")?.message);
+    const result = evaluateCompliance(
+      buildInput({
+        facts: buildFacts({ sale: true }),
+        animals: [slider(90), slider(120), slider(null), slider(90, "Pseudemys scripta elegans")],
+      }),
+    );
+    const smallTurtle = result.animals.map(
+      (a) => a.findings.find((f) => f.ruleId === "us-21cfr1240.62-small-turtles")?.message,
+    );
     expect(smallTurtle[0]).toContain("It applies to this Trachemys scripta elegans, so the transfer is blocked");
     expect(smallTurtle[1]).toBeUndefined();
     expect(smallTurtle[2]).toContain("no length was given");
@@ -172,7 +218,11 @@ describe("determinism", () => {
     // source: issue 4 §3 (product requirement, not an outside value): a pure, deterministic function
     const base = buildInput({
       facts: buildFacts({ destinationState: "HI", transitStates: ["OH"], sale: true }),
-      animals: [buildAnimal(T.burmesePython), buildAnimal(T.redEaredSlider, { lengthMm: 90 }), buildAnimal(T.leopardTortoise)],
+      animals: [
+        buildAnimal(T.burmesePython),
+        buildAnimal(T.redEaredSlider, { lengthMm: 90 }),
+        buildAnimal(T.leopardTortoise),
+      ],
       documents: [buildCvi({ speciesCovered: ["Geochelone pardalis"] }), ohioPermit()],
     });
     const reversed = { ...base, rules: [...base.rules].reverse(), documents: [...base.documents].reverse() };

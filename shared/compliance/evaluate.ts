@@ -2,13 +2,7 @@ import type { AnimalOrigin, DocumentKind, Purpose, Sex, UsState } from "@shared/
 import { FEDERAL, jurisdictionName, leavesContinentalUs, type Jurisdiction } from "./jurisdiction";
 import type { PermitRequirement, Rule, RuleConditions, RuleEffect, StateTransitPolicy } from "./rule";
 import type { EvaluateDocument, EvaluateResponse, Finding, Severity, Verdict } from "./schemas";
-import {
-  indexBySelector,
-  itemsForTaxon,
-  normalizeTaxonName,
-  taxonMatchKeys,
-  type ResolvedTaxon,
-} from "./taxon";
+import { indexBySelector, itemsForTaxon, normalizeTaxonName, taxonMatchKeys, type ResolvedTaxon } from "./taxon";
 
 /** The facts of a transfer that rules read. Dates are ISO calendar dates (YYYY-MM-DD). */
 export interface TransferFacts {
@@ -166,7 +160,10 @@ function describeRoute(facts: TransferFacts, policies: readonly StateTransitPoli
 }
 
 function inForceOn(rule: Rule, isoDate: string): boolean {
-  return (rule.effectiveFrom === null || rule.effectiveFrom <= isoDate) && (rule.effectiveTo === null || isoDate <= rule.effectiveTo);
+  return (
+    (rule.effectiveFrom === null || rule.effectiveFrom <= isoDate) &&
+    (rule.effectiveTo === null || isoDate <= rule.effectiveTo)
+  );
 }
 
 /** The highest version of each rule id whose effective dates contain the ship date. */
@@ -319,16 +316,27 @@ function severityOf(effect: RuleEffect): Severity {
 function buildFinding(context: FindingContext): Finding {
   const { rule } = context;
   const severity = severityOf(rule.effect);
-  const base = { ruleId: rule.id, ruleVersion: rule.version, jurisdiction: rule.jurisdiction, citation: rule.citation, severity };
+  const base = {
+    ruleId: rule.id,
+    ruleVersion: rule.version,
+    jurisdiction: rule.jurisdiction,
+    citation: rule.citation,
+    severity,
+  };
   const requirement = requirementOf(rule.effect, context);
   if (!requirement) {
-    const message = severity === "blocks" ? `${rule.summary} ${appliesTo(context)}, so the transfer is blocked.` : rule.summary;
+    const message =
+      severity === "blocks" ? `${rule.summary} ${appliesTo(context)}, so the transfer is blocked.` : rule.summary;
     return { ...base, message, satisfiedBy: null };
   }
   const { match, description } = requirement;
   if ("satisfiedBy" in match) {
     const verb = severity === "blocks" ? "allows it" : "covers it";
-    return { ...base, message: `${rule.summary} ${appliesTo(context)}; ${match.label} on file ${verb}.`, satisfiedBy: match.satisfiedBy };
+    return {
+      ...base,
+      message: `${rule.summary} ${appliesTo(context)}; ${match.label} on file ${verb}.`,
+      satisfiedBy: match.satisfiedBy,
+    };
   }
   const reason = match.reason ? ` Not accepted: ${match.reason}.` : "";
   const outcome =
@@ -342,7 +350,13 @@ function buildFinding(context: FindingContext): Finding {
 function appliesTo({ rule, role, animal, assumed }: FindingContext): string {
   const place = jurisdictionName(rule.jurisdiction);
   const where =
-    role === "origin" ? ` leaving ${place}` : role === "destination" ? ` going to ${place}` : role === "transit" ? ` passing through ${place}` : "";
+    role === "origin"
+      ? ` leaving ${place}`
+      : role === "destination"
+        ? ` going to ${place}`
+        : role === "transit"
+          ? ` passing through ${place}`
+          : "";
   const missing: string[] = [];
   if (assumed & SEX_ASSUMED) missing.push("its sex is not known");
   if (assumed & LENGTH_ASSUMED) missing.push("no length was given");
@@ -365,7 +379,10 @@ function requirementOf(effect: RuleEffect, context: FindingContext): { descripti
   }
 }
 
-function permitRequirement(requirement: PermitRequirement, context: FindingContext): { description: string; match: Match } {
+function permitRequirement(
+  requirement: PermitRequirement,
+  context: FindingContext,
+): { description: string; match: Match } {
   const { rule, animal } = context;
   const kinds = requirement.documentKinds.map((kind) => KIND_LABELS[kind]).join(" or ");
   const issuer = rule.jurisdiction === FEDERAL ? "" : ` from ${jurisdictionName(rule.jurisdiction)}`;
@@ -376,7 +393,10 @@ function permitRequirement(requirement: PermitRequirement, context: FindingConte
 
 type CertificateEffect = Extract<RuleEffect, { kind: "certificate_required" }>;
 
-function certificateRequirement(effect: CertificateEffect, context: FindingContext): { description: string; match: Match } {
+function certificateRequirement(
+  effect: CertificateEffect,
+  context: FindingContext,
+): { description: string; match: Match } {
   const signer = effect.accreditedVeterinarian ? " signed by an accredited veterinarian" : "";
   const species = effect.namesSpecies ? `, naming ${context.animal.scientificName}` : "";
   const statements = effect.statements.length ? `, stating "${effect.statements.join('" and "')}"` : "";
@@ -400,7 +420,10 @@ function prepareDocument(doc: EvaluationDocument): PreparedDocument {
 
 /** Statements compare on their words only: case, punctuation and spacing do not matter. */
 function normalizeStatement(statement: string): string {
-  return statement.toLowerCase().replace(/[^a-z0-9]+/g, " ").trim();
+  return statement
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, " ")
+    .trim();
 }
 
 /** "the certificate no. DEMO-1 from Tennessee": short, since the kind was named just before. */
@@ -476,7 +499,8 @@ function speciesFailure({ doc, coveredNames }: PreparedDocument, context: Findin
 function statementFailure(wanted: readonly string[], { doc, statements }: PreparedDocument): string | null {
   for (const statement of wanted) {
     const normalized = normalizeStatement(statement);
-    if (!statements.some((onFile) => onFile.includes(normalized))) return `${documentLabel(doc)} does not state "${statement}"`;
+    if (!statements.some((onFile) => onFile.includes(normalized)))
+      return `${documentLabel(doc)} does not state "${statement}"`;
   }
   return null;
 }

@@ -15,10 +15,18 @@ const HERPTILES = ["Reptilia", "Amphibia"];
  */
 const INJURIOUS_REPTILES = [
   "Boiga irregularis",
-  "Python molurus", "Python bivittatus", "Python molurus bivittatus",
-  "Python sebae", "Python natalensis",
-  "Python reticulatus", "Malayopython reticulatus", "Broghammerus reticulatus",
-  "Eunectes notaeus", "Eunectes murinus", "Eunectes deschauenseei", "Eunectes beniensis",
+  "Python molurus",
+  "Python bivittatus",
+  "Python molurus bivittatus",
+  "Python sebae",
+  "Python natalensis",
+  "Python reticulatus",
+  "Malayopython reticulatus",
+  "Broghammerus reticulatus",
+  "Eunectes notaeus",
+  "Eunectes murinus",
+  "Eunectes deschauenseei",
+  "Eunectes beniensis",
 ];
 
 /**
@@ -28,10 +36,26 @@ const INJURIOUS_REPTILES = [
  * the library leaves seed status. The 16 genera added in 2025 are not encoded (not verified).
  */
 const INJURIOUS_SALAMANDER_GENERA = [
-  "Chioglossa", "Cynops",
-  "Euproctus", "Hydromantes", "Hynobius", "Ichthyosaura", "Lissotriton", "Neurergus",
-  "Notophthalmus", "Onychodactylus", "Paramesotriton", "Plethodon", "Pleurodeles", "Salamandra",
-  "Salamandrella", "Salamandrina", "Siren", "Taricha", "Triturus", "Tylototriton",
+  "Chioglossa",
+  "Cynops",
+  "Euproctus",
+  "Hydromantes",
+  "Hynobius",
+  "Ichthyosaura",
+  "Lissotriton",
+  "Neurergus",
+  "Notophthalmus",
+  "Onychodactylus",
+  "Paramesotriton",
+  "Plethodon",
+  "Pleurodeles",
+  "Salamandra",
+  "Salamandrella",
+  "Salamandrina",
+  "Siren",
+  "Taricha",
+  "Triturus",
+  "Tylototriton",
 ];
 
 /**
@@ -39,11 +63,16 @@ const INJURIOUS_SALAMANDER_GENERA = [
  * listing status must be checked against 50 CFR 17.11 before the library leaves seed status.
  */
 const ESA_LISTED_REPTILES = [
-  "Astrochelys radiata", "Geochelone radiata",
-  "Astrochelys yniphora", "Geochelone yniphora",
-  "Chelonoidis nigra", "Geochelone nigra",
-  "Chilabothrus subflavus", "Epicrates subflavus",
-  "Drymarchon couperi", "Drymarchon corais couperi",
+  "Astrochelys radiata",
+  "Geochelone radiata",
+  "Astrochelys yniphora",
+  "Geochelone yniphora",
+  "Chelonoidis nigra",
+  "Geochelone nigra",
+  "Chilabothrus subflavus",
+  "Epicrates subflavus",
+  "Drymarchon couperi",
+  "Drymarchon corais couperi",
 ];
 
 /** Federal rules of the seed rule library, with their citations, scopes and exceptions. */
@@ -72,7 +101,13 @@ export const FEDERAL_RULES: readonly Rule[] = [
     jurisdiction: "US",
     governs: "interstate",
     selector: {
-      taxa: ["Geochelone pardalis", "Stigmochelys pardalis", "Geochelone sulcata", "Centrochelys sulcata", "Kinixys belliana"],
+      taxa: [
+        "Geochelone pardalis",
+        "Stigmochelys pardalis",
+        "Geochelone sulcata",
+        "Centrochelys sulcata",
+        "Kinixys belliana",
+      ],
     },
     conditions: {},
     effect: {
@@ -84,7 +119,10 @@ export const FEDERAL_RULES: readonly Rule[] = [
     },
     summary:
       "Leopard, African spurred and Bell's hinge-back tortoises may cross a state line only with a health certificate or CVI signed by an accredited veterinarian within 30 days before the move, stating that the tortoises were examined and found free of ticks.",
-    citation: { text: "9 CFR 74.1: prohibition of interstate movement of land tortoises (66 FR 37128)", url: ecfr(9, "74.1") },
+    citation: {
+      text: "9 CFR 74.1: prohibition of interstate movement of land tortoises (66 FR 37128)",
+      url: ecfr(9, "74.1"),
+    },
     effectiveFrom: "2001-07-17",
     effectiveTo: null,
     ...REVIEW,

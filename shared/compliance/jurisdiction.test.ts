@@ -19,6 +19,10 @@ describe("leavesContinentalUs", () => {
 describe("jurisdictionName", () => {
   it("names states as USPS codes stand for them", () => {
     // [published] USPS Publication 28, appendix B (state abbreviations)
-    expect([jurisdictionName("OH"), jurisdictionName("MP"), jurisdictionName("US")]).toEqual(["Ohio", "the Northern Mariana Islands", "federal law"]);
+    expect([jurisdictionName("OH"), jurisdictionName("MP"), jurisdictionName("US")]).toEqual([
+      "Ohio",
+      "the Northern Mariana Islands",
+      "federal law",
+    ]);
   });
 });

@@ -29,7 +29,9 @@ describe("ruleSchema", () => {
   it("refuses a version below 1, a plain-http link, and an effect of an unknown kind", () => {
     // [practice] citations link to the official text over HTTPS (ecfr.gov, law.cornell.edu)
     expect(issues({ ...federal, version: 0 })).toEqual(["version"]);
-    expect(issues({ ...federal, citation: { ...federal.citation, url: "http://www.ecfr.gov/x" } })).toEqual(["citation.url"]);
+    expect(issues({ ...federal, citation: { ...federal.citation, url: "http://www.ecfr.gov/x" } })).toEqual([
+      "citation.url",
+    ]);
     expect(issues({ ...federal, effect: { kind: "fine" } })).toEqual(["effect.kind"]);
   });
 });

@@ -1,12 +1,5 @@
 import { z } from "zod";
-import {
-  ANIMAL_ORIGINS,
-  DOCUMENT_KINDS,
-  LIMITS,
-  PURPOSES,
-  SEXES,
-  US_STATES,
-} from "@shared/constants";
+import { ANIMAL_ORIGINS, DOCUMENT_KINDS, LIMITS, PURPOSES, SEXES, US_STATES } from "@shared/constants";
 import { FEDERAL, JURISDICTIONS } from "./jurisdiction";
 import { taxonSelectorSchema } from "./taxon";
 
@@ -35,11 +28,19 @@ const PERMIT_KINDS = DOCUMENT_KINDS.filter((kind) => kind !== "cvi");
 
 const isoDate = z.iso.date();
 const text = (max: number) =>
-  z.string().trim().min(1).max(max).refine((value) => !value.includes("\u0000"), "must not contain NUL");
+  z
+    .string()
+    .trim()
+    .min(1)
+    .max(max)
+    .refine((value) => !value.includes("\u0000"), "must not contain NUL");
 
 export const citationSchema = z.strictObject({
   text: text(LIMITS.textMax),
-  url: z.url({ protocol: /^https$/ }).max(LIMITS.textMax).nullable(),
+  url: z
+    .url({ protocol: /^https$/ })
+    .max(LIMITS.textMax)
+    .nullable(),
 });
 export type Citation = z.infer<typeof citationSchema>;
 
@@ -117,13 +118,28 @@ export const ruleSchema = z
   .check((ctx) => {
     const rule = ctx.value;
     if (rule.demo && !rule.citation.text.includes(DEMO_RULE_NOTICE)) {
-      ctx.issues.push({ code: "custom", input: rule.citation.text, path: ["citation", "text"], message: `a demo rule's citation must say "${DEMO_RULE_NOTICE}"` });
+      ctx.issues.push({
+        code: "custom",
+        input: rule.citation.text,
+        path: ["citation", "text"],
+        message: `a demo rule's citation must say "${DEMO_RULE_NOTICE}"`,
+      });
     }
     if (rule.effectiveFrom && rule.effectiveTo && rule.effectiveTo < rule.effectiveFrom) {
-      ctx.issues.push({ code: "custom", input: rule.effectiveTo, path: ["effectiveTo"], message: "must not be before effectiveFrom" });
+      ctx.issues.push({
+        code: "custom",
+        input: rule.effectiveTo,
+        path: ["effectiveTo"],
+        message: "must not be before effectiveFrom",
+      });
     }
     if (rule.jurisdiction === FEDERAL && ["import", "export", "transit"].includes(rule.governs)) {
-      ctx.issues.push({ code: "custom", input: rule.governs, path: ["governs"], message: "a federal rule governs interstate, movement or possession" });
+      ctx.issues.push({
+        code: "custom",
+        input: rule.governs,
+        path: ["governs"],
+        message: "a federal rule governs interstate, movement or possession",
+      });
     }
   });
 export type Rule = z.infer<typeof ruleSchema>;

@@ -17,7 +17,13 @@ describe("sniffScanType", () => {
 
   it("refuses near misses, other formats and short files", () => {
     // [published] a GIF starts "GIF89a"; a ZIP (and so a DOCX) starts "PK\x03\x04"; HTML is text
-    for (const candidate of [ascii("GIF89a"), bytes(0x50, 0x4b, 0x03, 0x04), ascii("<html><script>"), ascii("%PDF"), ascii(" %PDF-1.4")]) {
+    for (const candidate of [
+      ascii("GIF89a"),
+      bytes(0x50, 0x4b, 0x03, 0x04),
+      ascii("<html><script>"),
+      ascii("%PDF"),
+      ascii(" %PDF-1.4"),
+    ]) {
       expect(sniffScanType(candidate)).toBeNull();
     }
     // [published] PNG signature: byte 5 is CR (13); a file with LF there was mangled by a text-mode transfer

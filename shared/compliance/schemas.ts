@@ -1,17 +1,15 @@
 import { z } from "zod";
-import {
-  ANIMAL_ORIGINS,
-  DOCUMENT_KINDS,
-  LIMITS,
-  PURPOSES,
-  SEXES,
-  US_STATES,
-} from "@shared/constants";
+import { ANIMAL_ORIGINS, DOCUMENT_KINDS, LIMITS, PURPOSES, SEXES, US_STATES } from "@shared/constants";
 import { JURISDICTIONS } from "./jurisdiction";
 import { citationSchema, HOLDER_SIDES } from "./rule";
 
 const text = (max: number) =>
-  z.string().trim().min(1).max(max).refine((value) => !value.includes("\u0000"), "must not contain NUL");
+  z
+    .string()
+    .trim()
+    .min(1)
+    .max(max)
+    .refine((value) => !value.includes("\u0000"), "must not contain NUL");
 const name = text(LIMITS.nameMax);
 const isoDate = z.iso.date();
 

@@ -1,6 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_TAXA as T } from "./demo-taxa";
-import { evaluateCompliance, type EvaluationAnimal, type EvaluationDocument, type EvaluationInput, type TransferFacts } from "./evaluate";
+import {
+  evaluateCompliance,
+  type EvaluationAnimal,
+  type EvaluationDocument,
+  type EvaluationInput,
+  type TransferFacts,
+} from "./evaluate";
 import { buildAnimal, buildCvi, buildFacts, buildInput } from "./evaluate-fixtures";
 import { DEMO_RULE_NOTICE, ruleSchema, stateTransitPolicySchema } from "./rule";
 import { STATE_RULES, STATE_TRANSIT_POLICIES } from "./state-rules.demo";
@@ -14,15 +20,30 @@ function evaluate(
   documents: EvaluationDocument[] = [],
   extra: Partial<EvaluationInput> = {},
 ) {
-  return evaluateCompliance(buildInput({ facts: buildFacts(facts), animals: [animal], documents, rules: STATE_RULES, ...extra }));
+  return evaluateCompliance(
+    buildInput({ facts: buildFacts(facts), animals: [animal], documents, rules: STATE_RULES, ...extra }),
+  );
 }
 
 function finding(result: ReturnType<typeof evaluate>, ruleId: string) {
   return result.animals[0]?.findings.find((f) => f.ruleId === ruleId);
 }
 
-function permit(kind: EvaluationDocument["kind"], jurisdiction: EvaluationDocument["jurisdiction"], overrides: Partial<EvaluationDocument> = {}): EvaluationDocument {
-  return { kind, jurisdiction, number: "DEMO-0001", speciesCovered: [], statements: [], validFrom: "2026-01-01", validTo: "2026-12-31", ...overrides };
+function permit(
+  kind: EvaluationDocument["kind"],
+  jurisdiction: EvaluationDocument["jurisdiction"],
+  overrides: Partial<EvaluationDocument> = {},
+): EvaluationDocument {
+  return {
+    kind,
+    jurisdiction,
+    number: "DEMO-0001",
+    speciesCovered: [],
+    statements: [],
+    validFrom: "2026-01-01",
+    validTo: "2026-12-31",
+    ...overrides,
+  };
 }
 
 describe("seed state rules", () => {
@@ -33,13 +54,16 @@ describe("seed state rules", () => {
     expect(new Set(demo.map((rule) => rule.jurisdiction)).size).toBeGreaterThanOrEqual(8);
     for (const rule of demo) expect(rule.citation.text).toContain(DEMO_RULE_NOTICE);
     expect(STATE_RULES.find((rule) => rule.id === HAWAII_SNAKES)?.demo).toBe(false);
-    for (const policy of STATE_TRANSIT_POLICIES) expect(stateTransitPolicySchema.safeParse(policy).error).toBeUndefined();
+    for (const policy of STATE_TRANSIT_POLICIES)
+      expect(stateTransitPolicySchema.safeParse(policy).error).toBeUndefined();
   });
 
   it("include every effect kind and every holder side", () => {
     const kinds = new Set(STATE_RULES.map((rule) => rule.effect.kind));
     expect([...kinds].sort()).toEqual(["advisory", "certificate_required", "permit_required", "prohibited"]);
-    const holders = STATE_RULES.flatMap((rule) => (rule.effect.kind === "permit_required" ? [rule.effect.permit.holder] : []));
+    const holders = STATE_RULES.flatMap((rule) =>
+      rule.effect.kind === "permit_required" ? [rule.effect.permit.holder] : [],
+    );
     expect(new Set(holders)).toEqual(new Set(["receiver", "sender"]));
   });
 });
@@ -59,12 +83,16 @@ describe("HRS 150A-6: no live snake into Hawaii", () => {
   it("finds a snake whose lineage skips the suborder, by its family", () => {
     // [published] HRS 150A-6(3): any live snake; Colubridae is a snake family [practice]
     const noSuborder = { ...T.cornSnake, lineage: T.cornSnake.lineage.filter((entry) => entry.rank !== "suborder") };
-    expect(finding(evaluate(buildAnimal(noSuborder), { destinationState: "HI" }), HAWAII_SNAKES)?.severity).toBe("blocks");
+    expect(finding(evaluate(buildAnimal(noSuborder), { destinationState: "HI" }), HAWAII_SNAKES)?.severity).toBe(
+      "blocks",
+    );
   });
 
   it("does not reach a snake leaving Hawaii", () => {
     // [published] HRS 150A-6: transport "to the State"
-    expect(finding(evaluate(buildAnimal(T.cornSnake), { originState: "HI", destinationState: "CA" }), HAWAII_SNAKES)).toBeUndefined();
+    expect(
+      finding(evaluate(buildAnimal(T.cornSnake), { originState: "HI", destinationState: "CA" }), HAWAII_SNAKES),
+    ).toBeUndefined();
   });
 });
 
@@ -84,14 +112,20 @@ describe("transit-only states (Ohio Rev. Code 1533.31)", () => {
     expect(finding(notExempt, OHIO_VENOMOUS)?.message).toContain("passing through Ohio");
     expect(notExempt.verdict).toBe("needs_documents");
     const destination = evaluate(buildAnimal(T.westernDiamondback));
-    expect(finding(destination, OHIO_VENOMOUS)?.missing).toBe("an import permit from Ohio naming Crotalus atrox, held by the receiver");
+    expect(finding(destination, OHIO_VENOMOUS)?.missing).toBe(
+      "an import permit from Ohio naming Crotalus atrox, held by the receiver",
+    );
     // [practice] the corn snake is not venomous, so a rule on venomous snakes leaves it alone
     expect(finding(evaluate(buildAnimal(T.cornSnake)), OHIO_VENOMOUS)).toBeUndefined();
   });
 
   it("lets a rule that governs transit itself apply in transit", () => {
     // [practice] some states regulate venomous animals driven through them; demo rule for Florida
-    const result = evaluate(buildAnimal(T.gilaMonster), { originState: "GA", destinationState: "AL", transitStates: ["FL"] });
+    const result = evaluate(buildAnimal(T.gilaMonster), {
+      originState: "GA",
+      destinationState: "AL",
+      transitStates: ["FL"],
+    });
     expect(finding(result, "demo-fl-transit-venomous-notice")?.severity).toBe("advisory");
   });
 });
@@ -99,12 +133,21 @@ describe("transit-only states (Ohio Rev. Code 1533.31)", () => {
 describe("demo state rules by effect", () => {
   it("import permit held by the receiver: a sender's permit does not do, the receiver's does", () => {
     // [practice] a state import permit is issued to the person receiving the animal
-    const senders = evaluate(buildAnimal(T.westernDiamondback), {}, [permit("state_import_permit", "OH", { speciesCovered: ["Crotalus atrox"], holderSide: "sender" })]);
+    const senders = evaluate(buildAnimal(T.westernDiamondback), {}, [
+      permit("state_import_permit", "OH", { speciesCovered: ["Crotalus atrox"], holderSide: "sender" }),
+    ]);
     expect(finding(senders, OHIO_VENOMOUS)?.message).toContain("is held by the sender, not the receiver");
-    const receivers = evaluate(buildAnimal(T.westernDiamondback), {}, [permit("state_import_permit", "OH", { speciesCovered: ["Crotalus"], holderSide: "receiver" })]);
-    expect(finding(receivers, OHIO_VENOMOUS)?.satisfiedBy).toMatchObject({ kind: "state_import_permit", jurisdiction: "OH" });
+    const receivers = evaluate(buildAnimal(T.westernDiamondback), {}, [
+      permit("state_import_permit", "OH", { speciesCovered: ["Crotalus"], holderSide: "receiver" }),
+    ]);
+    expect(finding(receivers, OHIO_VENOMOUS)?.satisfiedBy).toMatchObject({
+      kind: "state_import_permit",
+      jurisdiction: "OH",
+    });
     // [practice] a permit from another state does not satisfy this one
-    const otherState = evaluate(buildAnimal(T.westernDiamondback), {}, [permit("state_import_permit", "IN", { speciesCovered: ["Crotalus atrox"] })]);
+    const otherState = evaluate(buildAnimal(T.westernDiamondback), {}, [
+      permit("state_import_permit", "IN", { speciesCovered: ["Crotalus atrox"] }),
+    ]);
     expect(finding(otherState, OHIO_VENOMOUS)?.satisfiedBy).toBeNull();
   });
 
@@ -112,11 +155,20 @@ describe("demo state rules by effect", () => {
     // [practice] export permits are issued to the shipper in the state of origin
     const facts = { originState: "AZ", destinationState: "TX" } as const;
     const none = evaluate(buildAnimal(T.gilaMonster), facts);
-    expect(finding(none, "demo-az-export-heloderma")?.missing).toBe("an export permit from Arizona naming Heloderma suspectum, held by the sender");
-    const held = evaluate(buildAnimal(T.gilaMonster), facts, [permit("export_permit", "AZ", { speciesCovered: ["Heloderma suspectum"], holderSide: "sender" })]);
+    expect(finding(none, "demo-az-export-heloderma")?.missing).toBe(
+      "an export permit from Arizona naming Heloderma suspectum, held by the sender",
+    );
+    const held = evaluate(buildAnimal(T.gilaMonster), facts, [
+      permit("export_permit", "AZ", { speciesCovered: ["Heloderma suspectum"], holderSide: "sender" }),
+    ]);
     expect(held.verdict).toBe("clear");
     // [practice] a move within the state is no export
-    expect(finding(evaluate(buildAnimal(T.gilaMonster), { originState: "AZ", destinationState: "AZ" }), "demo-az-export-heloderma")).toBeUndefined();
+    expect(
+      finding(
+        evaluate(buildAnimal(T.gilaMonster), { originState: "AZ", destinationState: "AZ" }),
+        "demo-az-export-heloderma",
+      ),
+    ).toBeUndefined();
   });
 
   it("possession permit above a length: exactly 2,400 mm is not above it", () => {
@@ -126,22 +178,31 @@ describe("demo state rules by effect", () => {
     const over = evaluate(buildAnimal(T.burmesePython, { lengthMm: 2401 }), { destinationState: "TX" });
     expect(finding(over, "demo-tx-possession-large-constrictors")?.severity).toBe("needs_document");
     // [practice] a possession rule binds the keeper in the state, not one sending the animal away from it
-    const leaving = evaluate(buildAnimal(T.burmesePython, { lengthMm: 2401 }), { originState: "TX", destinationState: "OK" });
+    const leaving = evaluate(buildAnimal(T.burmesePython, { lengthMm: 2401 }), {
+      originState: "TX",
+      destinationState: "OK",
+    });
     expect(finding(leaving, "demo-tx-possession-large-constrictors")).toBeUndefined();
   });
 
   it("certificate within 10 days, any species: day 10 passes, day 11 fails", () => {
     // [published] Gregorian calendar: 2026-05-02 to 2026-05-12 is 10 days, 2026-05-01 to 2026-05-12 is 11
     const statement = { statements: ["Examined and found free of signs of infectious disease"] };
-    const ok = evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "GA" }, [buildCvi({ ...statement, issuedOn: "2026-05-02" })]);
+    const ok = evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "GA" }, [
+      buildCvi({ ...statement, issuedOn: "2026-05-02" }),
+    ]);
     expect(finding(ok, "demo-ga-import-chelonian-cvi")?.satisfiedBy).not.toBeNull();
-    const late = evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "GA" }, [buildCvi({ ...statement, issuedOn: "2026-05-01" })]);
+    const late = evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "GA" }, [
+      buildCvi({ ...statement, issuedOn: "2026-05-01" }),
+    ]);
     expect(finding(late, "demo-ga-import-chelonian-cvi")?.message).toContain("issued 11 days before the ship date");
   });
 
   it("prohibition of a native genus, for wild-caught animals only", () => {
     // [practice] states commonly forbid importing wild-caught native turtles; demo rule
-    expect(evaluate(buildAnimal(T.easternBoxTurtle, { origin: "wild_caught" }), { destinationState: "PA" }).verdict).toBe("blocked");
+    expect(
+      evaluate(buildAnimal(T.easternBoxTurtle, { origin: "wild_caught" }), { destinationState: "PA" }).verdict,
+    ).toBe("blocked");
     expect(evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "PA" }).verdict).toBe("clear");
   });
 
@@ -149,7 +210,9 @@ describe("demo state rules by effect", () => {
     // [practice] "more than N" excludes N itself
     const rule = "demo-nc-import-bulk-salamanders";
     expect(finding(evaluate(buildAnimal(T.axolotl, { count: 25 }), { destinationState: "NC" }), rule)).toBeUndefined();
-    expect(finding(evaluate(buildAnimal(T.axolotl, { count: 26 }), { destinationState: "NC" }), rule)?.severity).toBe("needs_document");
+    expect(finding(evaluate(buildAnimal(T.axolotl, { count: 26 }), { destinationState: "NC" }), rule)?.severity).toBe(
+      "needs_document",
+    );
   });
 
   it("a condition on sex: males pass, females are caught, unknown sex is taken to be caught", () => {
@@ -157,7 +220,9 @@ describe("demo state rules by effect", () => {
     const rule = "demo-mi-possession-breeding-sliders";
     const facts = { destinationState: "MI", purpose: "breeding" } as const;
     expect(finding(evaluate(buildAnimal(T.redEaredSlider, { sex: "male" }), facts), rule)).toBeUndefined();
-    expect(finding(evaluate(buildAnimal(T.redEaredSlider, { sex: "female" }), facts), rule)?.severity).toBe("needs_document");
+    expect(finding(evaluate(buildAnimal(T.redEaredSlider, { sex: "female" }), facts), rule)?.severity).toBe(
+      "needs_document",
+    );
     expect(finding(evaluate(buildAnimal(T.redEaredSlider), facts), rule)?.message).toContain("its sex is not known");
   });
 
@@ -165,10 +230,15 @@ describe("demo state rules by effect", () => {
     // [practice] some states ban a group except under permit; demo rule for New York
     const rule = "demo-ny-import-crocodilians";
     expect(evaluate(buildAnimal(T.americanAlligator), { destinationState: "NY" }).verdict).toBe("blocked");
-    const permitted = evaluate(buildAnimal(T.americanAlligator), { destinationState: "NY" }, [permit("state_import_permit", "NY", { speciesCovered: ["Alligator mississippiensis"] })]);
+    const permitted = evaluate(buildAnimal(T.americanAlligator), { destinationState: "NY" }, [
+      permit("state_import_permit", "NY", { speciesCovered: ["Alligator mississippiensis"] }),
+    ]);
     expect(finding(permitted, rule)?.message).toContain("on file allows it");
     expect(permitted.verdict).toBe("clear");
     const advisory = evaluate(buildAnimal(T.dyeingDartFrog), { destinationState: "CA" });
-    expect([finding(advisory, "demo-ca-import-amphibian-advisory")?.severity, advisory.verdict]).toEqual(["advisory", "clear"]);
+    expect([finding(advisory, "demo-ca-import-amphibian-advisory")?.severity, advisory.verdict]).toEqual([
+      "advisory",
+      "clear",
+    ]);
   });
 });

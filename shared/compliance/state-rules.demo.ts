@@ -3,7 +3,10 @@ import { DEMO_RULE_NOTICE } from "./rule";
 
 const DEMO = { reviewedOn: "2026-12-01", reviewedBy: "Hatchway seed", demo: true } as const;
 const IN_FORCE = { effectiveFrom: null, effectiveTo: null } as const;
-const demoCitation = (what: string) => ({ text: `Invented for the Hatchway demo (${what}): ${DEMO_RULE_NOTICE}.`, url: null });
+const demoCitation = (what: string) => ({
+  text: `Invented for the Hatchway demo (${what}): ${DEMO_RULE_NOTICE}.`,
+  url: null,
+});
 
 /**
  * Every snake: the suborder, and the snake families in case a taxonomy source leaves the
@@ -11,13 +14,45 @@ const demoCitation = (what: string) => ({ text: `Invented for the Hatchway demo 
  */
 const SNAKES = [
   "Serpentes",
-  "Acrochordidae", "Aniliidae", "Anomalepididae", "Anomochilidae", "Atractaspididae", "Boidae",
-  "Bolyeriidae", "Calamariidae", "Candoiidae", "Charinidae", "Colubridae", "Cyclocoridae",
-  "Cylindrophiidae", "Dipsadidae", "Elapidae", "Erycidae", "Gerrhopilidae", "Homalopsidae",
-  "Lamprophiidae", "Leptotyphlopidae", "Loxocemidae", "Natricidae", "Pareidae", "Prosymnidae",
-  "Psammophiidae", "Pseudaspididae", "Pseudoxenodontidae", "Pseudoxyrhophiidae", "Pythonidae",
-  "Sanziniidae", "Sibynophiidae", "Tropidophiidae", "Typhlopidae", "Uropeltidae", "Viperidae",
-  "Xenodermidae", "Xenopeltidae", "Xenophidiidae", "Xenotyphlopidae",
+  "Acrochordidae",
+  "Aniliidae",
+  "Anomalepididae",
+  "Anomochilidae",
+  "Atractaspididae",
+  "Boidae",
+  "Bolyeriidae",
+  "Calamariidae",
+  "Candoiidae",
+  "Charinidae",
+  "Colubridae",
+  "Cyclocoridae",
+  "Cylindrophiidae",
+  "Dipsadidae",
+  "Elapidae",
+  "Erycidae",
+  "Gerrhopilidae",
+  "Homalopsidae",
+  "Lamprophiidae",
+  "Leptotyphlopidae",
+  "Loxocemidae",
+  "Natricidae",
+  "Pareidae",
+  "Prosymnidae",
+  "Psammophiidae",
+  "Pseudaspididae",
+  "Pseudoxenodontidae",
+  "Pseudoxyrhophiidae",
+  "Pythonidae",
+  "Sanziniidae",
+  "Sibynophiidae",
+  "Tropidophiidae",
+  "Typhlopidae",
+  "Uropeltidae",
+  "Viperidae",
+  "Xenodermidae",
+  "Xenopeltidae",
+  "Xenophidiidae",
+  "Xenotyphlopidae",
 ];
 
 /**
@@ -51,8 +86,12 @@ export const STATE_RULES: readonly Rule[] = [
     governs: "import",
     selector: { taxa: SNAKES },
     conditions: { venomous: true },
-    effect: { kind: "permit_required", permit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true } },
-    summary: "Demo rule: bringing a venomous snake into Ohio needs an Ohio import permit naming the species, held by the receiver.",
+    effect: {
+      kind: "permit_required",
+      permit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true },
+    },
+    summary:
+      "Demo rule: bringing a venomous snake into Ohio needs an Ohio import permit naming the species, held by the receiver.",
     citation: demoCitation("import permit for venomous snakes"),
     ...IN_FORCE,
     ...DEMO,
@@ -64,8 +103,12 @@ export const STATE_RULES: readonly Rule[] = [
     governs: "possession",
     selector: { taxa: ["Pythonidae", "Boidae"] },
     conditions: { lengthAboveMm: 2400 },
-    effect: { kind: "permit_required", permit: { documentKinds: ["possession_permit"], holder: "receiver", namesSpecies: true } },
-    summary: "Demo rule: keeping a python or boa longer than 2,400 mm (about 8 ft) in Texas needs a possession permit naming the species.",
+    effect: {
+      kind: "permit_required",
+      permit: { documentKinds: ["possession_permit"], holder: "receiver", namesSpecies: true },
+    },
+    summary:
+      "Demo rule: keeping a python or boa longer than 2,400 mm (about 8 ft) in Texas needs a possession permit naming the species.",
     citation: demoCitation("possession permit for large constrictors"),
     ...IN_FORCE,
     ...DEMO,
@@ -97,7 +140,8 @@ export const STATE_RULES: readonly Rule[] = [
     selector: { taxa: ["Terrapene"] },
     conditions: { origins: ["wild_caught"] },
     effect: { kind: "prohibited" },
-    summary: "Demo rule: wild-caught box turtles (genus Terrapene, native to the state) may not be brought into Pennsylvania.",
+    summary:
+      "Demo rule: wild-caught box turtles (genus Terrapene, native to the state) may not be brought into Pennsylvania.",
     citation: demoCitation("ban on a native genus"),
     ...IN_FORCE,
     ...DEMO,
@@ -109,8 +153,12 @@ export const STATE_RULES: readonly Rule[] = [
     governs: "export",
     selector: { taxa: ["Heloderma"] },
     conditions: {},
-    effect: { kind: "permit_required", permit: { documentKinds: ["export_permit"], holder: "sender", namesSpecies: true } },
-    summary: "Demo rule: sending a Gila monster or beaded lizard out of Arizona needs an Arizona export permit naming the species, held by the sender.",
+    effect: {
+      kind: "permit_required",
+      permit: { documentKinds: ["export_permit"], holder: "sender", namesSpecies: true },
+    },
+    summary:
+      "Demo rule: sending a Gila monster or beaded lizard out of Arizona needs an Arizona export permit naming the species, held by the sender.",
     citation: demoCitation("export permit for a native genus"),
     ...IN_FORCE,
     ...DEMO,
@@ -123,7 +171,8 @@ export const STATE_RULES: readonly Rule[] = [
     selector: { taxa: ["Amphibia"] },
     conditions: {},
     effect: { kind: "advisory" },
-    summary: "Demo rule: California may inspect amphibian shipments for chytrid fungus; keep the animals' health records with the box.",
+    summary:
+      "Demo rule: California may inspect amphibian shipments for chytrid fungus; keep the animals' health records with the box.",
     citation: demoCitation("advisory"),
     ...IN_FORCE,
     ...DEMO,
@@ -135,8 +184,15 @@ export const STATE_RULES: readonly Rule[] = [
     governs: "import",
     selector: { taxa: ["Caudata"] },
     conditions: { countAbove: 25 },
-    effect: { kind: "certificate_required", withinDays: 30, statements: [], accreditedVeterinarian: false, namesSpecies: true },
-    summary: "Demo rule: more than 25 salamanders of one kind coming into North Carolina need a health certificate issued within 30 days naming the species.",
+    effect: {
+      kind: "certificate_required",
+      withinDays: 30,
+      statements: [],
+      accreditedVeterinarian: false,
+      namesSpecies: true,
+    },
+    summary:
+      "Demo rule: more than 25 salamanders of one kind coming into North Carolina need a health certificate issued within 30 days naming the species.",
     citation: demoCitation("certificate above a count"),
     ...IN_FORCE,
     ...DEMO,
@@ -148,8 +204,12 @@ export const STATE_RULES: readonly Rule[] = [
     governs: "possession",
     selector: { taxa: ["Trachemys scripta"] },
     conditions: { sexes: ["female"], purposes: ["breeding"] },
-    effect: { kind: "permit_required", permit: { documentKinds: ["possession_permit"], holder: "receiver", namesSpecies: true } },
-    summary: "Demo rule: keeping female sliders for breeding in Michigan needs a possession licence naming the species.",
+    effect: {
+      kind: "permit_required",
+      permit: { documentKinds: ["possession_permit"], holder: "receiver", namesSpecies: true },
+    },
+    summary:
+      "Demo rule: keeping female sliders for breeding in Michigan needs a possession licence naming the species.",
     citation: demoCitation("possession licence by sex and purpose"),
     ...IN_FORCE,
     ...DEMO,
@@ -162,7 +222,8 @@ export const STATE_RULES: readonly Rule[] = [
     selector: { taxa: [...SNAKES, "Heloderma"] },
     conditions: { venomous: true },
     effect: { kind: "advisory" },
-    summary: "Demo rule: a venomous animal driven through Florida must stay in a locked, labelled container for the whole time it is in the state.",
+    summary:
+      "Demo rule: a venomous animal driven through Florida must stay in a locked, labelled container for the whole time it is in the state.",
     citation: demoCitation("transit notice"),
     ...IN_FORCE,
     ...DEMO,
@@ -178,7 +239,8 @@ export const STATE_RULES: readonly Rule[] = [
       kind: "prohibited",
       unlessPermit: { documentKinds: ["state_import_permit"], holder: "receiver", namesSpecies: true },
     },
-    summary: "Demo rule: crocodilians may come into New York only under a New York import permit naming the species, held by the receiver.",
+    summary:
+      "Demo rule: crocodilians may come into New York only under a New York import permit naming the species, held by the receiver.",
     citation: demoCitation("ban lifted by permit"),
     ...IN_FORCE,
     ...DEMO,

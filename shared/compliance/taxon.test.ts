@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_TAXA as T } from "./demo-taxa";
-import { ANY_TAXON, indexBySelector, itemsForTaxon, normalizeTaxonName, resolvedTaxonSchema, taxonMatchKeys, type TaxonSelector } from "./taxon";
+import {
+  ANY_TAXON,
+  indexBySelector,
+  itemsForTaxon,
+  normalizeTaxonName,
+  resolvedTaxonSchema,
+  taxonMatchKeys,
+  type TaxonSelector,
+} from "./taxon";
 
 const covers = (selector: TaxonSelector, taxon: Parameters<typeof taxonMatchKeys>[0]) =>
   itemsForTaxon(indexBySelector([{ selector }]), taxonMatchKeys(taxon)).length === 1;
@@ -9,7 +17,15 @@ describe("taxonMatchKeys", () => {
   it("holds the taxon, every ancestor, every synonym and the genus a synonym implies", () => {
     // [published] 9 CFR 74.1 calls the leopard tortoise Geochelone pardalis; [memory] Reptile Database: now Stigmochelys pardalis
     const keys = taxonMatchKeys(T.leopardTortoise);
-    for (const name of ["stigmochelys pardalis", "stigmochelys", "testudinidae", "testudines", "reptilia", "geochelone pardalis", "geochelone"]) {
+    for (const name of [
+      "stigmochelys pardalis",
+      "stigmochelys",
+      "testudinidae",
+      "testudines",
+      "reptilia",
+      "geochelone pardalis",
+      "geochelone",
+    ]) {
       expect(keys.has(name)).toBe(true);
     }
     expect(keys.has("kinixys")).toBe(false);
@@ -40,11 +56,18 @@ describe("selector matching", () => {
 describe("indexBySelector / itemsForTaxon", () => {
   it("returns each rule once, found under any of the taxon's names, and nothing for an unrelated taxon", () => {
     // [published] 9 CFR 74.1 names both Geochelone pardalis and G. sulcata: one rule, two names
-    const tortoiseRule = { id: "a", selector: { taxa: ["Geochelone pardalis", "Stigmochelys pardalis", "Testudinidae"] } };
+    const tortoiseRule = {
+      id: "a",
+      selector: { taxa: ["Geochelone pardalis", "Stigmochelys pardalis", "Testudinidae"] },
+    };
     const allRule = { id: "b", selector: { taxa: [ANY_TAXON] } };
     const seaRule = { id: "c", selector: { taxa: ["Testudines"], exceptTaxa: ["Testudinidae"] } };
     const index = indexBySelector([tortoiseRule, allRule, seaRule]);
-    expect(itemsForTaxon(index, taxonMatchKeys(T.leopardTortoise)).map((r) => r.id).sort()).toEqual(["a", "b"]);
+    expect(
+      itemsForTaxon(index, taxonMatchKeys(T.leopardTortoise))
+        .map((r) => r.id)
+        .sort(),
+    ).toEqual(["a", "b"]);
     expect(itemsForTaxon(index, taxonMatchKeys(T.cornSnake)).map((r) => r.id)).toEqual(["b"]);
   });
 });

@@ -6,8 +6,16 @@ import { LIMITS } from "@shared/constants";
  * order and family: Hawaii's ban covers every snake, suborder Serpentes.
  */
 export const LINEAGE_RANKS = [
-  "class", "order", "suborder", "infraorder", "superfamily", "family", "subfamily",
-  "genus", "species", "subspecies",
+  "class",
+  "order",
+  "suborder",
+  "infraorder",
+  "superfamily",
+  "family",
+  "subfamily",
+  "genus",
+  "species",
+  "subspecies",
 ] as const;
 export type LineageRank = (typeof LINEAGE_RANKS)[number];
 

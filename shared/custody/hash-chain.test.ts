@@ -1,5 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { canonicalJson, GENESIS_HASH, seal, sha256Hex, verifyChain, type ChainEntry, type SealedEntry } from "./hash-chain";
+import {
+  canonicalJson,
+  GENESIS_HASH,
+  seal,
+  sha256Hex,
+  verifyChain,
+  type ChainEntry,
+  type SealedEntry,
+} from "./hash-chain";
 
 describe("sha256Hex", () => {
   it('matches the FIPS 180-2 example for "abc" [published]', () => {
@@ -12,8 +20,12 @@ describe("sha256Hex", () => {
 
 describe("canonicalJson", () => {
   it("orders keys and prints values as RFC 8785 JCS does (its §3.2.3 example) [memory]", () => {
-    const input = JSON.parse('{"numbers":[333333333.33333329,1E30,4.50,2e-3,0.000000000000000000000000001],"string":"\\u20ac$\\u000F\\u000aA\'\\u0042\\u0022\\u005c\\\\\\"\\/","literals":[null,true,false]}');
-    expect(canonicalJson(input)).toBe('{"literals":[null,true,false],"numbers":[333333333.3333333,1e+30,4.5,0.002,1e-27],"string":"€$\\u000f\\nA\'B\\"\\\\\\\\\\"/"}');
+    const input = JSON.parse(
+      '{"numbers":[333333333.33333329,1E30,4.50,2e-3,0.000000000000000000000000001],"string":"\\u20ac$\\u000F\\u000aA\'\\u0042\\u0022\\u005c\\\\\\"\\/","literals":[null,true,false]}',
+    );
+    expect(canonicalJson(input)).toBe(
+      '{"literals":[null,true,false],"numbers":[333333333.3333333,1e+30,4.5,0.002,1e-27],"string":"€$\\u000f\\nA\'B\\"\\\\\\\\\\"/"}',
+    );
   });
   it("is independent of key insertion order and drops undefined", () => {
     expect(canonicalJson({ b: 1, a: { d: [1, 2], c: undefined } })).toBe(canonicalJson({ a: { d: [1, 2] }, b: 1 }));
@@ -24,7 +36,15 @@ function chain(n: number): SealedEntry[] {
   const out: SealedEntry[] = [];
   let prev = GENESIS_HASH;
   for (let seq = 1; seq <= n; seq++) {
-    const entry: ChainEntry = { transferId: "t-1", seq, kind: "handoff", actorId: "u-1", actorName: "Juno Park", at: new Date(Date.UTC(2027, 2, 9, 12, seq)).toISOString(), payload: { boxesCounted: seq } };
+    const entry: ChainEntry = {
+      transferId: "t-1",
+      seq,
+      kind: "handoff",
+      actorId: "u-1",
+      actorName: "Juno Park",
+      at: new Date(Date.UTC(2027, 2, 9, 12, seq)).toISOString(),
+      payload: { boxesCounted: seq },
+    };
     const sealed = seal(prev, entry);
     out.push(sealed);
     prev = sealed.hash;

@@ -58,10 +58,13 @@ export function verifyChain(entries: readonly SealedEntry[]): ChainCheck {
   for (let i = 0; i < entries.length; i++) {
     const e = entries[i]!;
     const expectedSeq = i + 1;
-    if (e.seq !== expectedSeq) return { intact: false, brokenAt: e.seq, reason: `entry ${expectedSeq} is missing or out of order` };
-    if (e.prevHash !== prev) return { intact: false, brokenAt: e.seq, reason: `entry ${e.seq} does not point at the entry before it` };
+    if (e.seq !== expectedSeq)
+      return { intact: false, brokenAt: e.seq, reason: `entry ${expectedSeq} is missing or out of order` };
+    if (e.prevHash !== prev)
+      return { intact: false, brokenAt: e.seq, reason: `entry ${e.seq} does not point at the entry before it` };
     const { prevHash: _p, hash, ...body } = e;
-    if (entryHash(prev, body) !== hash) return { intact: false, brokenAt: e.seq, reason: `entry ${e.seq} was changed after it was written` };
+    if (entryHash(prev, body) !== hash)
+      return { intact: false, brokenAt: e.seq, reason: `entry ${e.seq} was changed after it was written` };
     prev = hash;
   }
   return { intact: true, brokenAt: null, reason: null };

@@ -52,10 +52,26 @@ describe("addresses", () => {
 
 describe("describeIssues", () => {
   it("names the deepest field and the unknown key", () => {
-    const bad = organizationInputSchema.safeParse({ name: "X", kind: "zoo", address: { street: "s", city: "c", state: "OR", zip: 1 }, phone: "+1 503 555 0100", email: "a@b.co" });
+    const bad = organizationInputSchema.safeParse({
+      name: "X",
+      kind: "zoo",
+      address: { street: "s", city: "c", state: "OR", zip: 1 },
+      phone: "+1 503 555 0100",
+      email: "a@b.co",
+    });
     expect(bad.success).toBe(false);
-    expect(describeIssues((bad as { error: z.ZodError }).error)).toEqual({ field: "address.zip", message: "address.zip: expected a string" });
-    const extra = organizationInputSchema.safeParse({ name: "X", kind: "zoo", address: { street: "s", city: "c", state: "OR", zip: "97301" }, phone: "+1 503 555 0100", email: "a@b.co", owner: "me" });
+    expect(describeIssues((bad as { error: z.ZodError }).error)).toEqual({
+      field: "address.zip",
+      message: "address.zip: expected a string",
+    });
+    const extra = organizationInputSchema.safeParse({
+      name: "X",
+      kind: "zoo",
+      address: { street: "s", city: "c", state: "OR", zip: "97301" },
+      phone: "+1 503 555 0100",
+      email: "a@b.co",
+      owner: "me",
+    });
     expect(describeIssues((extra as { error: z.ZodError }).error).field).toBe("owner");
   });
 });

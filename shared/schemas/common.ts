@@ -73,7 +73,10 @@ export function describeIssues(error: z.ZodError): { field: string; message: str
   if (issue.code === "unrecognized_keys") {
     const keys = issue.keys.join(", ");
     const where = issue.path.length ? ` in ${field}` : "";
-    return { field: issue.keys[0] ?? field, message: `Unknown field${issue.keys.length > 1 ? "s" : ""}${where}: ${keys}.` };
+    return {
+      field: issue.keys[0] ?? field,
+      message: `Unknown field${issue.keys.length > 1 ? "s" : ""}${where}: ${keys}.`,
+    };
   }
   if (issue.code === "invalid_type") {
     // zod does not keep the input on the issue; its default message names what it received.

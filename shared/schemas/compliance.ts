@@ -71,7 +71,15 @@ export type DocumentDto = {
   issuedOn: string | null;
   expiry: { status: ExpiryStatus; daysLeft: number | null };
   details:
-    | (Pick<DocumentRecord, "speciesCovered" | "veterinarianName" | "veterinarianAccredited" | "inspectionDate" | "statements" | "animalsCovered"> & {
+    | (Pick<
+        DocumentRecord,
+        | "speciesCovered"
+        | "veterinarianName"
+        | "veterinarianAccredited"
+        | "inspectionDate"
+        | "statements"
+        | "animalsCovered"
+      > & {
         notes: string | null;
       })
     | null;
@@ -95,7 +103,12 @@ export const attachDocumentSchema = z.strictObject({ documentId: idSchema });
 
 export const overrideInputSchema = z.strictObject({ reason: requiredText(1000) });
 
-export type ComplianceOverrideDto = { reason: string; at: string; admin: { id: string; displayName: string }; transferVersion: number };
+export type ComplianceOverrideDto = {
+  reason: string;
+  at: string;
+  admin: { id: string; displayName: string };
+  transferVersion: number;
+};
 
 /**
  * `GET /api/transfers/:id/compliance`: the evaluation's public shape, then what the screen needs

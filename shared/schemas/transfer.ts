@@ -98,12 +98,21 @@ const transferFields = {
   expectedArrivalAt: instantSchema,
   purpose: z.enum(PURPOSES, { message: "Choose the purpose of the move" }),
   sale: z.boolean({ message: "Say whether this is a sale" }),
-  salePriceUsd: z.number().refine(Number.isFinite).refine((n) => n >= 0 && n <= 10_000_000, { message: "Enter a price from 0" }).nullable().optional(),
+  salePriceUsd: z
+    .number()
+    .refine(Number.isFinite)
+    .refine((n) => n >= 0 && n <= 10_000_000, { message: "Enter a price from 0" })
+    .nullable()
+    .optional(),
   handlingNotes: optionalText(LIMITS.textMax),
   /** The sender's own notes: never shown to the receiver or the courier. */
   privateNotes: optionalText(LIMITS.textMax),
-  containers: z.array(containerInputSchema).max(LIMITS.containersPerTransferMax, { message: `Use at most ${LIMITS.containersPerTransferMax} boxes` }),
-  animals: z.array(animalInputSchema).max(LIMITS.animalsPerTransferMax, { message: `Use at most ${LIMITS.animalsPerTransferMax} animal lines` }),
+  containers: z
+    .array(containerInputSchema)
+    .max(LIMITS.containersPerTransferMax, { message: `Use at most ${LIMITS.containersPerTransferMax} boxes` }),
+  animals: z
+    .array(animalInputSchema)
+    .max(LIMITS.animalsPerTransferMax, { message: `Use at most ${LIMITS.animalsPerTransferMax} animal lines` }),
 };
 
 type Shape = {
@@ -115,18 +124,27 @@ type Shape = {
 
 /** Cross-field rules: arrival after departure; each animal's box exists; box keys unique. */
 function crossChecks(value: Shape, ctx: z.RefinementCtx) {
-  if (value.plannedDepartureAt && value.expectedArrivalAt && Date.parse(value.expectedArrivalAt) <= Date.parse(value.plannedDepartureAt)) {
+  if (
+    value.plannedDepartureAt &&
+    value.expectedArrivalAt &&
+    Date.parse(value.expectedArrivalAt) <= Date.parse(value.plannedDepartureAt)
+  ) {
     ctx.addIssue({ code: "custom", path: ["expectedArrivalAt"], message: "Arrival must be after departure" });
   }
   if (value.containers) {
     const keys = new Set<string>();
     value.containers.forEach((c, i) => {
-      if (keys.has(c.key)) ctx.addIssue({ code: "custom", path: ["containers", i, "key"], message: "Two boxes share this key" });
+      if (keys.has(c.key))
+        ctx.addIssue({ code: "custom", path: ["containers", i, "key"], message: "Two boxes share this key" });
       keys.add(c.key);
     });
     value.animals?.forEach((a, i) => {
       if (a.containerKey !== null && !keys.has(a.containerKey)) {
-        ctx.addIssue({ code: "custom", path: ["animals", i, "containerKey"], message: "Choose one of this transfer's boxes" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["animals", i, "containerKey"],
+          message: "Choose one of this transfer's boxes",
+        });
       }
     });
   }
@@ -140,7 +158,11 @@ export type TransferInputParsed = z.output<typeof transferInputSchema>;
 export function createTransferSchema(now: Date) {
   return transferInputSchema.superRefine((value, ctx) => {
     if (Date.parse(value.plannedDepartureAt) < now.getTime() - 10 * 60_000) {
-      ctx.addIssue({ code: "custom", path: ["plannedDepartureAt"], message: "A new transfer cannot depart in the past" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["plannedDepartureAt"],
+        message: "A new transfer cannot depart in the past",
+      });
     }
   });
 }
@@ -182,7 +204,11 @@ export const handoffInputSchema = z.strictObject({
   seals: z
     .array(z.strictObject({ containerId: idSchema, sealNumber: optionalText(60), intact: z.boolean() }))
     .max(LIMITS.containersPerTransferMax),
-  boxTempF: z.number().refine(Number.isFinite, { message: "Enter a temperature" }).refine((t) => t >= -40 && t <= 160, { message: "Enter a temperature between -40 and 160 °F" }).nullable(),
+  boxTempF: z
+    .number()
+    .refine(Number.isFinite, { message: "Enter a temperature" })
+    .refine((t) => t >= -40 && t <= 160, { message: "Enter a temperature between -40 and 160 °F" })
+    .nullable(),
   place: z.strictObject({
     text: optionalText(200),
     lat: z.number().min(-90).max(90).nullable().optional(),
@@ -213,7 +239,14 @@ export const checkInInputSchema = z.strictObject({
   items: z.array(checkInItemSchema).max(LIMITS.animalsPerTransferMax),
   /** Animals that arrived but were not on the manifest. */
   extras: z
-    .array(z.strictObject({ taxonId: idSchema, count: wholeNumber(1, LIMITS.animalCountMax, "count"), sex: z.enum(SEXES), notes: optionalText(1000) }))
+    .array(
+      z.strictObject({
+        taxonId: idSchema,
+        count: wholeNumber(1, LIMITS.animalCountMax, "count"),
+        sex: z.enum(SEXES),
+        notes: optionalText(1000),
+      }),
+    )
     .max(100),
   notes: optionalText(LIMITS.textMax),
   signedName: requiredText(120),
@@ -244,10 +277,32 @@ export const registerQuerySchema = z.strictObject({
 
 // ---------------------------------------------------------------- responses
 
-export type OrgBriefDto = { id: string; name: string; kind: OrganizationKind; phone: string; email: string; address: { street: string; city: string; state: UsState; zip: string } };
+export type OrgBriefDto = {
+  id: string;
+  name: string;
+  kind: OrganizationKind;
+  phone: string;
+  email: string;
+  address: { street: string; city: string; state: UsState; zip: string };
+};
 export type PersonDto = { id: string; displayName: string; email: string };
-export type PlaceDto = { street: string; city: string; state: UsState; zip: string; lat: number | null; lon: number | null; timeZone: string | null };
-export type TaxonBriefDto = { id: string; scientificName: string; commonName: string | null; venomous: boolean; profileGroup: ProfileGroup | null; rank: string };
+export type PlaceDto = {
+  street: string;
+  city: string;
+  state: UsState;
+  zip: string;
+  lat: number | null;
+  lon: number | null;
+  timeZone: string | null;
+};
+export type TaxonBriefDto = {
+  id: string;
+  scientificName: string;
+  commonName: string | null;
+  venomous: boolean;
+  profileGroup: ProfileGroup | null;
+  rank: string;
+};
 
 export type ContainerDto = {
   id: string;
@@ -281,7 +336,13 @@ export type AnimalDto = {
   containerKey: string | null;
 };
 
-export type LegDto = { id: string; sequence: number; courier: { id: string; displayName: string; organizationName: string | null; phone: string | null }; fromLabel: string | null; toLabel: string | null };
+export type LegDto = {
+  id: string;
+  sequence: number;
+  courier: { id: string; displayName: string; organizationName: string | null; phone: string | null };
+  fromLabel: string | null;
+  toLabel: string | null;
+};
 
 export type HandoffDto = {
   handoffIndex: number;
@@ -299,7 +360,12 @@ export type HandoffDto = {
 };
 
 /** A problem with the packing the sender must resolve before sending for confirmation. */
-export type PackingFindingDto = { code: "mixed_species" | "unpacked_animal" | "empty_box" | "no_animals" | "no_boxes"; containerId: string | null; animalIds: string[]; message: string };
+export type PackingFindingDto = {
+  code: "mixed_species" | "unpacked_animal" | "empty_box" | "no_animals" | "no_boxes";
+  containerId: string | null;
+  animalIds: string[];
+  message: string;
+};
 
 export type DiscrepancyRowDto = {
   scientificName: string;
@@ -318,7 +384,16 @@ export type CheckInDto = {
   signedBy: { id: string; displayName: string };
   signedName: string;
   notes: string | null;
-  items: { animalId: string; arrivedWell: number; arrivedProblem: number; deadOnArrival: number; missing: number; problem: string | null; weightG: number | null; notes: string | null }[];
+  items: {
+    animalId: string;
+    arrivedWell: number;
+    arrivedProblem: number;
+    deadOnArrival: number;
+    missing: number;
+    problem: string | null;
+    weightG: number | null;
+    notes: string | null;
+  }[];
   extras: { taxon: TaxonBriefDto; count: number; sex: Sex; notes: string | null }[];
   discrepancies: DiscrepancyRowDto[];
   allAccountedFor: boolean;
@@ -410,12 +485,32 @@ export type CustodyEntryDto = {
   prevHash: string;
   hash: string;
 };
-export type CustodyLogDto = { entries: CustodyEntryDto[]; intact: boolean; brokenAt: number | null; reason: string | null };
+export type CustodyLogDto = {
+  entries: CustodyEntryDto[];
+  intact: boolean;
+  brokenAt: number | null;
+  reason: string | null;
+};
 
-export type TransferChangeDto = { at: string; actor: { id: string; displayName: string }; field: string; oldValue: unknown; newValue: unknown };
-export type MessageDto = { id: string; author: { id: string; displayName: string; organizationName: string | null }; body: string; at: string };
+export type TransferChangeDto = {
+  at: string;
+  actor: { id: string; displayName: string };
+  field: string;
+  oldValue: unknown;
+  newValue: unknown;
+};
+export type MessageDto = {
+  id: string;
+  author: { id: string; displayName: string; organizationName: string | null };
+  body: string;
+  at: string;
+};
 
-export type TaxonSearchHitDto = TaxonBriefDto & { commonNames: string[]; synonyms: string[]; matched: { name: string; kind: "scientific" | "common" | "synonym" } };
+export type TaxonSearchHitDto = TaxonBriefDto & {
+  commonNames: string[];
+  synonyms: string[];
+  matched: { name: string; kind: "scientific" | "common" | "synonym" };
+};
 
 export type RegisterEntryDto = {
   id: string;
@@ -431,10 +526,22 @@ export type RegisterEntryDto = {
   notes: string | null;
 };
 
-export type DirectoryOrganizationDto = { id: string; name: string; kind: OrganizationKind; city: string; state: UsState; zip: string; street: string; contacts: PersonDto[] };
+export type DirectoryOrganizationDto = {
+  id: string;
+  name: string;
+  kind: OrganizationKind;
+  city: string;
+  state: UsState;
+  zip: string;
+  street: string;
+  contacts: PersonDto[];
+};
 export type DirectoryCourierDto = { id: string; displayName: string; organizationName: string | null };
 
-export const CHECK_IN_OUTCOME_KEYS: Record<CheckInOutcome, "arrivedWell" | "arrivedProblem" | "deadOnArrival" | "missing"> = {
+export const CHECK_IN_OUTCOME_KEYS: Record<
+  CheckInOutcome,
+  "arrivedWell" | "arrivedProblem" | "deadOnArrival" | "missing"
+> = {
   arrived_well: "arrivedWell",
   arrived_problem: "arrivedProblem",
   dead_on_arrival: "deadOnArrival",

@@ -34,9 +34,7 @@ export function classifyAmbientF(tempF: number, bands: AdviceBandsF): AmbientBan
 
 /** What the guideline calls for on a route: a gate that stops shipping as is, or the pack to use. */
 export type GuidelineCall =
-  | { gate: "do_not_ship" }
-  | { gate: "hold" }
-  | { gate: "pack"; pack: "heat" | "cold" | "none" | "either" };
+  { gate: "do_not_ship" } | { gate: "hold" } | { gate: "pack"; pack: "heat" | "cold" | "none" | "either" };
 
 /**
  * Combines the bands of the coldest and the hottest daytime high on the route: a do-not-ship

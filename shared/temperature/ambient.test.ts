@@ -1,11 +1,22 @@
 import { describe, expect, it } from "vitest";
-import { ambientFromForecasts, ambientFromOverride, forecastWindow, indexForecasts, isPlausibleAmbientF } from "./ambient";
+import {
+  ambientFromForecasts,
+  ambientFromOverride,
+  forecastWindow,
+  indexForecasts,
+  isPlausibleAmbientF,
+} from "./ambient";
 import type { TransitPlace } from "./places";
 import { buildTransitTimeline } from "./timeline";
 
 const nashville: TransitPlace = { label: "Nashville, TN", lat: 36.12, lon: -86.67, timeZone: "America/Chicago" };
 const atlanta: TransitPlace = { label: "Atlanta, GA", lat: 33.749, lon: -84.388, timeZone: "America/New_York" };
-const trip = buildTransitTimeline({ mode: "ground_courier", origin: nashville, destination: atlanta, departAt: "2026-06-02T08:00:00-05:00" });
+const trip = buildTransitTimeline({
+  mode: "ground_courier",
+  origin: nashville,
+  destination: atlanta,
+  departAt: "2026-06-02T08:00:00-05:00",
+});
 
 describe("isPlausibleAmbientF", () => {
   it("accepts weather and rejects what no thermometer outdoors reads", () => {
@@ -39,7 +50,10 @@ describe("ambientFromForecasts", () => {
     // 0.18° of latitude ≈ 20 km, 0.045° ≈ 5 km (111.2 km per degree) [memory]
     const near = { lat: origin.lat + 0.045, lon: origin.lon, hours: hours(0) };
     const far = { lat: origin.lat + 0.18, lon: origin.lon, hours: hours(500) };
-    for (const forecasts of [[near, far], [far, near]]) {
+    for (const forecasts of [
+      [near, far],
+      [far, near],
+    ]) {
       expect(ambientFromForecasts(trip, indexForecasts(forecasts)).get(trip.points[0]!.at)).toBe(70);
     }
   });

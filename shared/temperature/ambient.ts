@@ -14,7 +14,12 @@ export type AmbientByHour = ReadonlyMap<string, number>;
 
 /** Whether a value can be an outside air temperature in °F (finite and within the recorded extremes). */
 export function isPlausibleAmbientF(tempF: unknown): tempF is number {
-  return typeof tempF === "number" && Number.isFinite(tempF) && tempF >= PLAUSIBLE_AMBIENT_F.min && tempF <= PLAUSIBLE_AMBIENT_F.max;
+  return (
+    typeof tempF === "number" &&
+    Number.isFinite(tempF) &&
+    tempF >= PLAUSIBLE_AMBIENT_F.min &&
+    tempF <= PLAUSIBLE_AMBIENT_F.max
+  );
 }
 
 /**
@@ -94,7 +99,9 @@ export function ambientFromOverride(timeline: TransitTimeline, samples: readonly
     const before = sorted[next - 1];
     const after = sorted[next];
     const tempF =
-      before && after ? before.tempF + ((after.tempF - before.tempF) * (ms - before.ms)) / (after.ms - before.ms) : (before ?? after)!.tempF;
+      before && after
+        ? before.tempF + ((after.tempF - before.tempF) * (ms - before.ms)) / (after.ms - before.ms)
+        : (before ?? after)!.tempF;
     ambient.set(point.at, tempF);
   }
   return ambient;

@@ -18,7 +18,15 @@ const airTrip = (departAt: string | number) =>
 // Tuesday 2 June 2026: a departure with no calendar warnings.
 const tuesday = airTrip("2026-06-02T10:00:00-04:00");
 
-const box: BoxSpec = { wall: "eps", wallThicknessMm: 25, lengthMm: 300, widthMm: 300, heightMm: 300, contentsG: 800, pack: "none" };
+const box: BoxSpec = {
+  wall: "eps",
+  wallThicknessMm: 25,
+  lengthMm: 300,
+  widthMm: 300,
+  heightMm: 300,
+  contentsG: 800,
+  pack: "none",
+};
 
 /**
  * Packs strong enough to decide the logic tests whatever the default estimates are: a heat pack
@@ -50,7 +58,11 @@ describe("assessTransit: verdicts", () => {
   it("ships a mild day as planned, in the exact API shape", () => {
     const result = assess({ tempF: 75 });
     expect(transitAssessmentSchema.parse(result)).toEqual(result);
-    expect(result).toMatchObject({ verdict: "ship", advice: { code: "ship_as_planned", pack: "none" }, hoursOutsideRange: 0 });
+    expect(result).toMatchObject({
+      verdict: "ship",
+      advice: { code: "ship_as_planned", pack: "none" },
+      hoursOutsideRange: 0,
+    });
     expect(result.ambientF).toEqual({ min: 75, max: 75 });
     expect(result.hours).toHaveLength(tuesday.points.length);
     expect(result.hours[0]).toMatchObject({ at: tuesday.points[0]!.at, place: "New York, NY", ambientF: 75 });
@@ -71,7 +83,11 @@ describe("assessTransit: verdicts", () => {
 
   it("keeps a planned heat pack that already does the job", () => {
     const result = assess({ tempF: 45, box: { ...box, pack: "heat_40h" } });
-    expect(result).toMatchObject({ verdict: "ship", advice: { code: "ship_as_planned", pack: "heat_40h" }, hoursOutsideRange: 0 });
+    expect(result).toMatchObject({
+      verdict: "ship",
+      advice: { code: "ship_as_planned", pack: "heat_40h" },
+      hoursOutsideRange: 0,
+    });
   });
 
   it("asks for the 72 h pack when the trip outlasts a 40 h pack", () => {
@@ -98,7 +114,11 @@ describe("assessTransit: verdicts", () => {
     // range (+0.85 K), so only the guideline decides here
     const gentle = { ...strongPacks, heat_40h: { kind: "heat" as const, ratedH: 10_000, peakW: 0.5, warmUpH: 0 } };
     const result = assess({ tempF: 75, box: { ...box, pack: "heat_40h" }, packs: gentle });
-    expect(result).toMatchObject({ verdict: "pack", advice: { code: "remove_pack", pack: "none" }, hoursOutsideRange: 0 });
+    expect(result).toMatchObject({
+      verdict: "pack",
+      advice: { code: "remove_pack", pack: "none" },
+      hoursOutsideRange: 0,
+    });
   });
 
   it("adds a cold pack for amphibians from 80 °F, not for reptiles", () => {
@@ -206,7 +226,12 @@ describe("safer departure", () => {
 
 describe("default packs", () => {
   it("ship a mild overnight box as planned", () => {
-    const result = assessTransit({ timeline: tuesday, ambientByHour: constantF(tuesday, 72), box, profile: DEFAULT_PROFILES.tropical_snake });
+    const result = assessTransit({
+      timeline: tuesday,
+      ambientByHour: constantF(tuesday, 72),
+      box,
+      profile: DEFAULT_PROFILES.tropical_snake,
+    });
     expect(result).toMatchObject({ verdict: "ship", advice: { code: "ship_as_planned" } });
   });
 
@@ -219,7 +244,12 @@ describe("default packs", () => {
       box: { ...box, pack: "heat_40h" },
       profile: DEFAULT_PROFILES.temperate_aquatic_turtle,
     });
-    const plain = assessTransit({ timeline: tuesday, ambientByHour: constantF(tuesday, 50), box, profile: DEFAULT_PROFILES.temperate_aquatic_turtle });
+    const plain = assessTransit({
+      timeline: tuesday,
+      ambientByHour: constantF(tuesday, 50),
+      box,
+      profile: DEFAULT_PROFILES.temperate_aquatic_turtle,
+    });
     const gainF = heated.hours.map((h, i) => h.insideF! - plain.hours[i]!.insideF!);
     expect(Math.max(...gainF)).toBeGreaterThan(8);
     expect(Math.max(...gainF)).toBeLessThan(4 * 1.69 * 1.8 + 0.5);

@@ -53,7 +53,8 @@ export function assessTransit(input: AssessmentInput): TransitAssessment {
   const { timeline, profile } = input;
   const ambientF = timeline.points.map((p) => input.ambientByHour.get(p.at));
   const sources = sourcesFor(input);
-  if (timeline.points.length === 0 || !ambientF.every(isPlausibleAmbientF)) return unavailable(timeline, ambientF, sources);
+  if (timeline.points.length === 0 || !ambientF.every(isPlausibleAmbientF))
+    return unavailable(timeline, ambientF, sources);
 
   const runs = new PackRuns(input, ambientF);
   const planned = runs.get(input.box.pack);
@@ -91,7 +92,12 @@ export function findSaferDeparture(input: AssessmentInput & { search: DepartureS
   for (let day = 1; day <= days; day++) {
     const timeline = search.timelineFor(sameLocalTimeLater(input.timeline, day));
     if (hasCalendarWarning(timeline)) continue;
-    const { verdict } = assessTransit({ ...input, timeline, ambientByHour: search.ambientFor(timeline), search: undefined });
+    const { verdict } = assessTransit({
+      ...input,
+      timeline,
+      ambientByHour: search.ambientFor(timeline),
+      search: undefined,
+    });
     if (verdict !== "ship" && verdict !== "pack") continue;
     if (timeline.warnings.length === 0) return timeline.departAt;
     fallback ??= timeline.departAt;
@@ -172,16 +178,22 @@ function adviceFor(kind: PackKind, planned: PackKind): AdviceCode {
  * and keeps the box in range; else the guideline's pack if the model agrees; else the planned
  * pack if the model says it is safe; else any pack that is; else postpone.
  */
-function chooseAdvice(call: GuidelineCall, planned: PackKind, runs: PackRuns, durationH: number): { code: AdviceCode; pack: PackKind | null } {
+function chooseAdvice(
+  call: GuidelineCall,
+  planned: PackKind,
+  runs: PackRuns,
+  durationH: number,
+): { code: AdviceCode; pack: PackKind | null } {
   if (call.gate === "do_not_ship") return { code: "postpone", pack: null };
   // A 40 h pack is spent before a longer trip ends.
   const heatPacks: PackKind[] = durationH <= 40 ? ["heat_40h", "heat_72h"] : ["heat_72h"];
   const guided: PackKind[] =
-    call.gate === "hold" ? [] : { heat: heatPacks, cold: ["cold" as const], none: ["none" as const], either: [] }[call.pack];
+    call.gate === "hold"
+      ? []
+      : { heat: heatPacks, cold: ["cold" as const], none: ["none" as const], either: [] }[call.pack];
   const plannedConforms = guided.includes(planned) || (call.gate === "pack" && call.pack === "heat" && isHeat(planned));
   const candidates = [...new Set<PackKind>([...guided, planned, "none", ...heatPacks, "cold"])];
-  const chosen =
-    plannedConforms && runs.inRange(planned) ? planned : candidates.find((kind) => runs.inRange(kind));
+  const chosen = plannedConforms && runs.inRange(planned) ? planned : candidates.find((kind) => runs.inRange(kind));
   if (call.gate === "hold") return { code: "hold_at_staffed_facility", pack: chosen ?? planned };
   if (!chosen) return { code: "postpone", pack: null };
   return { code: adviceFor(chosen, planned), pack: chosen };

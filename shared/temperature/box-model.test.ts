@@ -30,7 +30,12 @@ describe("Çengel, Heat Transfer, Example 4-1 (lumped capacitance)", () => {
   const diameterM = 0.001;
   const areaM2 = Math.PI * diameterM ** 2;
   const volumeM3 = (Math.PI * diameterM ** 3) / 6;
-  const resistanceKPerW = thermalResistanceKPerW({ areaM2, outsideFilmWPerM2K: 210, wallThicknessM: 0, conductivityWPerMK: 35 });
+  const resistanceKPerW = thermalResistanceKPerW({
+    areaM2,
+    outsideFilmWPerM2K: 210,
+    wallThicknessM: 0,
+    conductivityWPerMK: 35,
+  });
   const capacitanceJPerK = 8500 * volumeM3 * 320;
 
   it("is a lumped body (Bi = h·Lc/k ≤ 0.1)", () => {
@@ -172,7 +177,12 @@ describe("simulateInterior", () => {
   it("counts the time spent outside the safe range", () => {
     // from 22 °C toward 2 °C, the box passes 12 °C at t = τ·ln(20/10) (Çengel, eq. 4-4) [published]
     const tauS = thermal.resistanceKPerW * thermal.capacitanceJPerK;
-    const run = simulateInterior({ ...base, ambientC: constant(2), durationS: 12 * 3600, safeRangeC: { min: 12, max: 30 } });
+    const run = simulateInterior({
+      ...base,
+      ambientC: constant(2),
+      durationS: 12 * 3600,
+      safeRangeC: { min: 12, max: 30 },
+    });
     expect(Math.abs(run.secondsOutsideRange - (12 * 3600 - tauS * Math.log(2)))).toBeLessThanOrEqual(60);
   });
 });

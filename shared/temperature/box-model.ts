@@ -133,7 +133,8 @@ class IceState {
   }
 
   get tempC(): number {
-    if (this.absorbedJ < this.sensibleJ) return this.pack.startC + this.absorbedJ / (this.pack.iceKg * ICE_SPECIFIC_HEAT_J_PER_KGK);
+    if (this.absorbedJ < this.sensibleJ)
+      return this.pack.startC + this.absorbedJ / (this.pack.iceKg * ICE_SPECIFIC_HEAT_J_PER_KGK);
     if (this.absorbedJ < this.meltedJ) return 0;
     return (this.absorbedJ - this.meltedJ) / (this.pack.iceKg * WATER_SPECIFIC_HEAT_J_PER_KGK);
   }
@@ -182,7 +183,8 @@ export type SimulationResult = {
 export function simulateInterior(input: SimulationInput): SimulationResult {
   const { resistanceKPerW: r, capacitanceJPerK: c, pack, durationS } = input;
   if (!(r > 0) || !(c > 0) || !(durationS >= 0)) throw new RangeError("R, C must be positive and the duration ≥ 0");
-  if (pack.kind === "cold" && !(pack.startC <= 0 && pack.iceKg > 0)) throw new RangeError("a cold pack starts as ice at ≤ 0 °C");
+  if (pack.kind === "cold" && !(pack.startC <= 0 && pack.iceKg > 0))
+    throw new RangeError("a cold pack starts as ice at ≤ 0 °C");
   const sampleEveryS = input.sampleEveryS ?? S_PER_H;
   // The pack's own temperature steps explicitly: stable only for steps under half its time
   // constant (m·c_ice/U, the shorter of its ice and water phases).
@@ -201,7 +203,13 @@ export function simulateInterior(input: SimulationInput): SimulationResult {
   const meanShare = (tau / dt) * (1 - decay);
 
   let inside = input.initialInsideC;
-  const result: SimulationResult = { insideC: [inside], minC: inside, maxC: inside, secondsOutsideRange: 0, iceMeltedAtS: null };
+  const result: SimulationResult = {
+    insideC: [inside],
+    minC: inside,
+    maxC: inside,
+    secondsOutsideRange: 0,
+    iceMeltedAtS: null,
+  };
   for (let step = 0; step < totalSteps; step++) {
     const midS = (step + 0.5) * dt;
     const packC = ice?.tempC ?? 0;

@@ -1,8 +1,21 @@
 import { describe, expect, it } from "vitest";
-import { PACKING_ALLOWANCE_G, UNKNOWN_ANIMAL_WEIGHT_G, boxContentsG, mostCautiousProfile, profileForBox, type AnimalLine } from "./box-profile";
+import {
+  PACKING_ALLOWANCE_G,
+  UNKNOWN_ANIMAL_WEIGHT_G,
+  boxContentsG,
+  mostCautiousProfile,
+  profileForBox,
+  type AnimalLine,
+} from "./box-profile";
 import { DEFAULT_PROFILES } from "./profiles";
 
-const line = (over: Partial<AnimalLine>): AnimalLine => ({ count: 1, weightG: null, profileGroup: null, animalClass: null, ...over });
+const line = (over: Partial<AnimalLine>): AnimalLine => ({
+  count: 1,
+  weightG: null,
+  profileGroup: null,
+  animalClass: null,
+  ...over,
+});
 
 describe("boxContentsG", () => {
   it("adds recorded weights, an assumed weight for the others, and the packing allowance", () => {

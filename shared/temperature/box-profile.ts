@@ -31,7 +31,9 @@ export function boxContentsG(lines: readonly AnimalLine[]): number {
  */
 export function mostCautiousProfile(profiles: readonly TemperatureProfile[]): TemperatureProfile | undefined {
   const width = (p: TemperatureProfile) => p.safeTransitF.max - p.safeTransitF.min;
-  return [...profiles].sort((a, b) => width(a) - width(b) || a.safeTransitF.max - b.safeTransitF.max || a.group.localeCompare(b.group))[0];
+  return [...profiles].sort(
+    (a, b) => width(a) - width(b) || a.safeTransitF.max - b.safeTransitF.max || a.group.localeCompare(b.group),
+  )[0];
 }
 
 /**

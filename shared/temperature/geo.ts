@@ -14,8 +14,7 @@ const toDeg = (rad: number) => (rad * 180) / Math.PI;
 function centralAngleRad(from: LatLon, to: LatLon): number {
   const dLat = toRad(to.lat - from.lat);
   const dLon = toRad(to.lon - from.lon);
-  const h =
-    Math.sin(dLat / 2) ** 2 + Math.cos(toRad(from.lat)) * Math.cos(toRad(to.lat)) * Math.sin(dLon / 2) ** 2;
+  const h = Math.sin(dLat / 2) ** 2 + Math.cos(toRad(from.lat)) * Math.cos(toRad(to.lat)) * Math.sin(dLon / 2) ** 2;
   return 2 * Math.asin(Math.min(1, Math.sqrt(h)));
 }
 

@@ -23,7 +23,14 @@ describe("profileDataSchema", () => {
     // 70–91 °F none, 92–95 °F staffed facility only, 96 °F do not ship
     const bands = profileDataSchema.parse(snake).bandsF;
     expect([37, 38, 69, 70, 91, 92, 95, 96].map((f) => classifyAmbientF(f, bands))).toEqual([
-      "do_not_ship_cold", "heat_pack", "heat_pack", "none", "none", "hold", "hold", "do_not_ship_hot",
+      "do_not_ship_cold",
+      "heat_pack",
+      "heat_pack",
+      "none",
+      "none",
+      "hold",
+      "hold",
+      "do_not_ship_hot",
     ]);
   });
 

@@ -26,10 +26,15 @@ export const profileDataSchema = z
   })
   .superRefine((profile, ctx) => {
     const { safeTransitF: safe, bandsF: b } = profile;
-    if (!(safe.min < safe.max)) ctx.addIssue({ code: "custom", path: ["safeTransitF", "max"], message: "must be above the safe range's min" });
+    if (!(safe.min < safe.max))
+      ctx.addIssue({ code: "custom", path: ["safeTransitF", "max"], message: "must be above the safe range's min" });
     const rules: [keyof typeof b, boolean, string][] = [
       ["heatPackBelow", b.heatPackBelow > b.doNotShipBelow, "must be above doNotShipBelow"],
-      ["coldPackFrom", b.coldPackFrom === null || (b.coldPackFrom >= b.heatPackBelow && b.coldPackFrom < b.holdFrom), "must lie from heatPackBelow up to (not including) holdFrom"],
+      [
+        "coldPackFrom",
+        b.coldPackFrom === null || (b.coldPackFrom >= b.heatPackBelow && b.coldPackFrom < b.holdFrom),
+        "must lie from heatPackBelow up to (not including) holdFrom",
+      ],
       ["holdFrom", b.holdFrom >= b.heatPackBelow, "must not be below heatPackBelow"],
       ["doNotShipAbove", b.doNotShipAbove >= b.holdFrom, "must not be below holdFrom"],
     ];

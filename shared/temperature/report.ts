@@ -47,10 +47,21 @@ export type TemperatureReport = TransitAssessment & {
 
 export type CheckMark = "24h" | "4h" | "manual" | "gate";
 
-export type TemperatureCheckDto = { id: string; mark: CheckMark; checkedAt: string; transferVersion: number; verdict: Verdict; adviceCode: AdviceCode };
+export type TemperatureCheckDto = {
+  id: string;
+  mark: CheckMark;
+  checkedAt: string;
+  transferVersion: number;
+  verdict: Verdict;
+  adviceCode: AdviceCode;
+};
 
 /** The advice changed between two stored checks (set by the re-check before departure). */
-export type TemperatureAlertDto = { at: string; previous: { code: AdviceCode; message: string }; current: { code: AdviceCode; message: string } };
+export type TemperatureAlertDto = {
+  at: string;
+  previous: { code: AdviceCode; message: string };
+  current: { code: AdviceCode; message: string };
+};
 
 /** GET /api/transfers/:id/temperature. */
 export type TransferTemperatureDto = TemperatureReport & {

@@ -8,11 +8,20 @@ const valid = {
   departAt: "2026-06-02T10:00:00-05:00",
   mode: "overnight_air",
   profile: "tropical_snake",
-  box: { wall: "eps", wallThicknessMm: 25, lengthMm: 300, widthMm: 300, heightMm: 300, contentsG: 800, pack: "heat_40h" },
+  box: {
+    wall: "eps",
+    wallThicknessMm: 25,
+    lengthMm: 300,
+    widthMm: 300,
+    heightMm: 300,
+    contentsG: 800,
+    pack: "heat_40h",
+  },
   ambientOverrideF: [{ at: "2026-06-02T15:00:00Z", tempF: 55 }],
 };
 
-const issuesOf = (input: unknown) => whatIfInputSchema.safeParse(input).error?.issues.map((i) => i.path.join(".")) ?? [];
+const issuesOf = (input: unknown) =>
+  whatIfInputSchema.safeParse(input).error?.issues.map((i) => i.path.join(".")) ?? [];
 
 describe("whatIfInputSchema", () => {
   it("accepts the what-if of issue 5", () => {
@@ -34,7 +43,9 @@ describe("whatIfInputSchema", () => {
   });
 
   it("caps sizes with the shared LIMITS", () => {
-    expect(issuesOf({ ...valid, box: { ...valid.box, lengthMm: LIMITS.boxDimensionMmMax + 1 } })).toEqual(["box.lengthMm"]);
+    expect(issuesOf({ ...valid, box: { ...valid.box, lengthMm: LIMITS.boxDimensionMmMax + 1 } })).toEqual([
+      "box.lengthMm",
+    ]);
     expect(issuesOf({ ...valid, box: { ...valid.box, wallThicknessMm: 160 } })).toEqual(["box.wallThicknessMm"]);
     expect(issuesOf({ ...valid, box: { ...valid.box, contentsG: 0 } })).toEqual(["box.contentsG"]);
   });

@@ -26,7 +26,11 @@ export const boxInputSchema = z
   })
   .superRefine((box, ctx) => {
     if (Math.min(box.lengthMm, box.widthMm, box.heightMm) <= 2 * box.wallThicknessMm) {
-      ctx.addIssue({ code: "custom", path: ["wallThicknessMm"], message: "each dimension must exceed twice the wall thickness" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["wallThicknessMm"],
+        message: "each dimension must exceed twice the wall thickness",
+      });
     }
   });
 
@@ -75,7 +79,12 @@ export const transitAssessmentSchema = z.strictObject({
   insideF: rangeFSchema.nullable(),
   hoursOutsideRange: z.number().min(0).nullable(),
   hours: z.array(
-    z.strictObject({ at: instantSchema, place: z.string(), ambientF: z.number().nullable(), insideF: z.number().nullable() }),
+    z.strictObject({
+      at: instantSchema,
+      place: z.string(),
+      ambientF: z.number().nullable(),
+      insideF: z.number().nullable(),
+    }),
   ),
   suggestedDeparture: instantSchema.nullable(),
   sources: z.array(z.strictObject({ id: z.string(), title: z.string() })),

@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { haversineKm } from "./geo";
 import type { TransitPlace } from "./places";
-import { ARRIVAL_SLACK_H, buildTransitTimeline, hasCalendarWarning, plannedArrivalWarning, sameLocalTimeLater } from "./timeline";
+import {
+  ARRIVAL_SLACK_H,
+  buildTransitTimeline,
+  hasCalendarWarning,
+  plannedArrivalWarning,
+  sameLocalTimeLater,
+} from "./timeline";
 
 // Invented endpoints at real coordinates (the Rosetta Code airports and city centres).
 const nashville: TransitPlace = { label: "Nashville, TN", lat: 36.12, lon: -86.67, timeZone: "America/Chicago" };
@@ -12,7 +18,12 @@ const atlanta: TransitPlace = { label: "Atlanta, GA", lat: 33.749, lon: -84.388,
 
 describe("overnight air", () => {
   // Tuesday 2 June 2026, 10:00 EDT (UTC−4, 15 U.S.C. 260a) [published, secondary]
-  const tuesday = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-06-02T10:00:00-04:00" });
+  const tuesday = buildTransitTimeline({
+    mode: "overnight_air",
+    origin: newYork,
+    destination: losAngeles,
+    departAt: "2026-06-02T10:00:00-04:00",
+  });
 
   it("keeps the box at the origin until the 18:00 pickup and delivers at 10:30 the next morning", () => {
     // 18:00 EDT = 22:00Z; delivery 10:30 PDT (UTC−7) on 3 June = 17:30Z [published, secondary]
@@ -20,7 +31,11 @@ describe("overnight air", () => {
     expect(tuesday.durationH).toBeCloseTo(27.5, 9);
     const at = (iso: string) => tuesday.points.find((p) => p.at === iso);
     expect(at("2026-06-02T21:00:00.000Z")).toMatchObject({ segment: "origin", localTime: "2026-06-02T17:00-04:00" });
-    expect(tuesday.points.at(-1)).toMatchObject({ segment: "destination", timeZone: "America/Los_Angeles", localTime: "2026-06-03T11:00-07:00" });
+    expect(tuesday.points.at(-1)).toMatchObject({
+      segment: "destination",
+      timeZone: "America/Los_Angeles",
+      localTime: "2026-06-03T11:00-07:00",
+    });
     // hourly from 14:00Z on 2 June to 18:00Z on 3 June, both ends included
     expect(tuesday.points).toHaveLength(29);
   });
@@ -33,7 +48,13 @@ describe("overnight air", () => {
   });
 
   it("puts the night at the named hub", () => {
-    const viaHub = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, hub: memphis, departAt: "2026-06-02T10:00:00-04:00" });
+    const viaHub = buildTransitTimeline({
+      mode: "overnight_air",
+      origin: newYork,
+      destination: losAngeles,
+      hub: memphis,
+      departAt: "2026-06-02T10:00:00-04:00",
+    });
     const hubHours = viaHub.points.filter((p) => p.segment === "hub");
     expect(hubHours[0]?.at).toBe("2026-06-02T22:00:00.000Z");
     expect(hubHours.at(-1)?.at).toBe("2026-06-03T10:00:00.000Z");
@@ -49,21 +70,45 @@ describe("overnight air", () => {
 
   it("warns of a Saturday delivery and of Thursday's missing margin", () => {
     // 5 June 2026 is a Friday; 4 June a Thursday (Gregorian calendar) [practice]
-    const friday = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-06-05T09:00:00-04:00" });
-    expect(friday.warnings).toContainEqual(expect.objectContaining({ code: "weekend_in_transit", date: "2026-06-06", severity: "warning" }));
-    const thursday = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-06-04T09:00:00-04:00" });
+    const friday = buildTransitTimeline({
+      mode: "overnight_air",
+      origin: newYork,
+      destination: losAngeles,
+      departAt: "2026-06-05T09:00:00-04:00",
+    });
+    expect(friday.warnings).toContainEqual(
+      expect.objectContaining({ code: "weekend_in_transit", date: "2026-06-06", severity: "warning" }),
+    );
+    const thursday = buildTransitTimeline({
+      mode: "overnight_air",
+      origin: newYork,
+      destination: losAngeles,
+      departAt: "2026-06-04T09:00:00-04:00",
+    });
     expect(thursday.warnings.map((w) => w.code)).toEqual(["no_delay_margin"]);
     expect(hasCalendarWarning(thursday)).toBe(false);
   });
 
   it("warns when the box arrives on an observed federal holiday", () => {
     // 5 U.S.C. 6103 via OPM: Independence Day 2026 (Saturday) is observed Friday 3 July [published]
-    const beforeHoliday = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-07-02T09:00:00-04:00" });
-    expect(beforeHoliday.warnings).toContainEqual(expect.objectContaining({ code: "federal_holiday_in_transit", date: "2026-07-03" }));
+    const beforeHoliday = buildTransitTimeline({
+      mode: "overnight_air",
+      origin: newYork,
+      destination: losAngeles,
+      departAt: "2026-07-02T09:00:00-04:00",
+    });
+    expect(beforeHoliday.warnings).toContainEqual(
+      expect.objectContaining({ code: "federal_holiday_in_transit", date: "2026-07-03" }),
+    );
   });
 
   it("moves a departure after the pickup to the next day's pickup", () => {
-    const late = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-06-01T19:30:00-04:00" });
+    const late = buildTransitTimeline({
+      mode: "overnight_air",
+      origin: newYork,
+      destination: losAngeles,
+      departAt: "2026-06-01T19:30:00-04:00",
+    });
     expect(late.warnings[0]).toMatchObject({ code: "after_pickup_cutoff", date: "2026-06-01" });
     expect(late.arriveAt).toBe("2026-06-03T17:30:00.000Z");
   });
@@ -71,7 +116,12 @@ describe("overnight air", () => {
 
 describe("ground courier", () => {
   // Monday 1 June 2026, 06:00 CDT
-  const trip = buildTransitTimeline({ mode: "ground_courier", origin: nashville, destination: losAngeles, departAt: "2026-06-01T06:00:00-05:00" });
+  const trip = buildTransitTimeline({
+    mode: "ground_courier",
+    origin: nashville,
+    destination: losAngeles,
+    departAt: "2026-06-01T06:00:00-05:00",
+  });
 
   it("drives the great circle times the circuity factor", () => {
     // road ≈ great circle × 1.2 (Ballou, Rahardja and Sakai 2002) [memory]; BNA–LAX great
@@ -109,7 +159,12 @@ describe("ground courier", () => {
 
   it("warns when a long drive runs into the weekend", () => {
     // Thursday 4 June 2026 + 73 h reaches Sunday 7 June [practice]
-    const thursday = buildTransitTimeline({ mode: "ground_courier", origin: nashville, destination: losAngeles, departAt: "2026-06-04T06:00:00-05:00" });
+    const thursday = buildTransitTimeline({
+      mode: "ground_courier",
+      origin: nashville,
+      destination: losAngeles,
+      departAt: "2026-06-04T06:00:00-05:00",
+    });
     const codes = thursday.warnings.map((w) => `${w.code} ${w.date}`);
     expect(codes).toContain("weekend_in_transit 2026-06-06");
     expect(codes).toContain("weekend_in_transit 2026-06-07");
@@ -132,7 +187,12 @@ describe("hand delivery", () => {
   });
 
   it("refuses impossible options and dates", () => {
-    const base = { mode: "hand_delivery" as const, origin: nashville, destination: atlanta, departAt: "2026-06-02T08:00:00-05:00" };
+    const base = {
+      mode: "hand_delivery" as const,
+      origin: nashville,
+      destination: atlanta,
+      departAt: "2026-06-02T08:00:00-05:00",
+    };
     expect(() => buildTransitTimeline({ ...base, options: { driving: { averageSpeedKmh: 0 } } })).toThrow(RangeError);
     expect(() => buildTransitTimeline({ ...base, options: { driving: { circuityFactor: 0.9 } } })).toThrow(RangeError);
     expect(() => buildTransitTimeline({ ...base, departAt: "next Tuesday" })).toThrow(RangeError);
@@ -143,13 +203,23 @@ describe("hand delivery", () => {
 describe("sameLocalTimeLater", () => {
   it("keeps the local clock across a DST change", () => {
     // DST ends Sunday 1 November 2026 (15 U.S.C. 260a): 09:00 CDT → 09:00 CST is 25 h later [published, secondary]
-    const trip = buildTransitTimeline({ mode: "overnight_air", origin: nashville, destination: newYork, departAt: "2026-10-31T09:00:00-05:00" });
+    const trip = buildTransitTimeline({
+      mode: "overnight_air",
+      origin: nashville,
+      destination: newYork,
+      departAt: "2026-10-31T09:00:00-05:00",
+    });
     expect(new Date(sameLocalTimeLater(trip, 2)).toISOString()).toBe("2026-11-02T15:00:00.000Z");
   });
 });
 
 describe("planned arrival against the modelled trip", () => {
-  const tuesday = buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt: "2026-06-02T10:00:00-04:00" });
+  const tuesday = buildTransitTimeline({
+    mode: "overnight_air",
+    origin: newYork,
+    destination: losAngeles,
+    departAt: "2026-06-02T10:00:00-04:00",
+  });
   const delivery = Date.parse(tuesday.arriveAt); // 10:30 PDT on 3 June (see above)
   const h = 3_600_000;
 
@@ -168,7 +238,12 @@ describe("planned arrival against the modelled trip", () => {
 
   it("explains a road trip by the driver's hours", () => {
     // Nashville → Los Angeles by road is about 3,300 km: more than a day at the wheel under 49 CFR 395.3 [memory]
-    const road = buildTransitTimeline({ mode: "ground_courier", origin: nashville, destination: losAngeles, departAt: "2026-06-02T08:00:00-05:00" });
+    const road = buildTransitTimeline({
+      mode: "ground_courier",
+      origin: nashville,
+      destination: losAngeles,
+      departAt: "2026-06-02T08:00:00-05:00",
+    });
     const w = plannedArrivalWarning(road, Date.parse("2026-06-03T08:00:00-07:00"));
     expect(w?.code).toBe("arrives_after_planned");
     expect(w?.message).toMatch(/hours-of-service/);

@@ -132,7 +132,14 @@ export type TimelineRequest = {
 };
 
 /** A stretch of time the box spends in one state. Driving stretches carry their road km. */
-type Stay = { startMs: number; endMs: number; segment: TimelineSegment; waypoint?: number; fromKm?: number; toKm?: number };
+type Stay = {
+  startMs: number;
+  endMs: number;
+  segment: TimelineSegment;
+  waypoint?: number;
+  fromKm?: number;
+  toKm?: number;
+};
 
 type Schedule = { stays: Stay[]; waypoints: TransitPlace[]; roadKm: number | null; warnings: TransitWarning[] };
 
@@ -199,7 +206,8 @@ function airSchedule(request: TimelineRequest, departMs: number, air: AirOptions
   }
   // "Next morning" at the destination; a westward date-line crossing can need one more day.
   let morning = addDays(localDate(pickupMs, origin.timeZone), 1);
-  while (localClockToUtcMs(morning, air.stationArrivalLocal, destination.timeZone) <= pickupMs) morning = addDays(morning, 1);
+  while (localClockToUtcMs(morning, air.stationArrivalLocal, destination.timeZone) <= pickupMs)
+    morning = addDays(morning, 1);
   const stationMs = localClockToUtcMs(morning, air.stationArrivalLocal, destination.timeZone);
   const deliveryMs = localClockToUtcMs(morning, air.deliveryLocal, destination.timeZone);
   const waypoints = hub ? [origin, hub, destination] : [origin, destination];
@@ -236,14 +244,21 @@ function checkedDriving(options: DrivingOptions): DrivingOptions {
     if (typeof value !== "number" || !(value > 0)) throw new RangeError(`${key} must be positive`);
   }
   if (!(options.circuityFactor >= 1)) throw new RangeError("circuityFactor must be at least 1");
-  if (!(options.breakDurationH >= 0) || !(options.overnightRestH >= 0)) throw new RangeError("rest durations must be ≥ 0");
+  if (!(options.breakDurationH >= 0) || !(options.overnightRestH >= 0))
+    throw new RangeError("rest durations must be ≥ 0");
   for (const stop of options.stops ?? []) {
-    if (!(stop.afterDrivingH >= 0) || !(stop.durationH > 0)) throw new RangeError("stops need afterDrivingH ≥ 0 and durationH > 0");
+    if (!(stop.afterDrivingH >= 0) || !(stop.durationH > 0))
+      throw new RangeError("stops need afterDrivingH ≥ 0 and durationH > 0");
   }
   return options;
 }
 
-function drivingWaypoints(origin: TransitPlace, destination: TransitPlace, roadKm: number, spacingKm: number): TransitPlace[] {
+function drivingWaypoints(
+  origin: TransitPlace,
+  destination: TransitPlace,
+  roadKm: number,
+  spacingKm: number,
+): TransitPlace[] {
   const segments = Math.max(1, Math.round(haversineKm(origin, destination) / spacingKm));
   return Array.from({ length: segments + 1 }, (_, i) => {
     if (i === 0) return origin;
@@ -257,7 +272,9 @@ function drivingWaypoints(origin: TransitPlace, destination: TransitPlace, roadK
 function drivingSchedule(request: TimelineRequest, departMs: number, options: DrivingOptions): Schedule {
   const roadKm = haversineKm(request.origin, request.destination) * options.circuityFactor;
   const waypoints = drivingWaypoints(request.origin, request.destination, roadKm, options.waypointSpacingKm);
-  const stays = options.stops ? stopsPlan(departMs, roadKm, options, options.stops) : hoursOfServicePlan(departMs, roadKm, options);
+  const stays = options.stops
+    ? stopsPlan(departMs, roadKm, options, options.stops)
+    : hoursOfServicePlan(departMs, roadKm, options);
   return { stays, waypoints, roadKm, warnings: [] };
 }
 
@@ -265,7 +282,13 @@ function drivingSchedule(request: TimelineRequest, departMs: number, options: Dr
 const EPSILON_H = 1e-9;
 
 function driveStay(startMs: number, hours: number, fromKm: number, speedKmh: number): Stay {
-  return { startMs, endMs: startMs + hours * MS_PER_HOUR, segment: "en_route", fromKm, toKm: fromKm + hours * speedKmh };
+  return {
+    startMs,
+    endMs: startMs + hours * MS_PER_HOUR,
+    segment: "en_route",
+    fromKm,
+    toKm: fromKm + hours * speedKmh,
+  };
 }
 
 function restStay(startMs: number, hours: number, km: number, segment: TimelineSegment): Stay {
@@ -285,7 +308,12 @@ function hoursOfServicePlan(departMs: number, roadKm: number, o: DrivingOptions)
     [t, km, todayH] = [drive.endMs, drive.toKm!, todayH + hours];
     if (roadKm - km <= EPSILON_H * o.averageSpeedKmh) break;
     const overnight = todayH >= o.maxDrivingHPerDay - EPSILON_H;
-    const rest = restStay(t, overnight ? o.overnightRestH : o.breakDurationH, km, overnight ? "overnight_rest" : "rest_stop");
+    const rest = restStay(
+      t,
+      overnight ? o.overnightRestH : o.breakDurationH,
+      km,
+      overnight ? "overnight_rest" : "rest_stop",
+    );
     stays.push(rest);
     [t, todayH] = [rest.endMs, overnight ? 0 : todayH];
     if (t - departMs > MAX_TRANSIT_H * MS_PER_HOUR) break;
@@ -315,7 +343,11 @@ function stopsPlan(departMs: number, roadKm: number, o: DrivingOptions, stops: r
   return stays;
 }
 
-function locate(stay: Stay | undefined, atMs: number, schedule: Schedule): { waypoint: number; segment: TimelineSegment } {
+function locate(
+  stay: Stay | undefined,
+  atMs: number,
+  schedule: Schedule,
+): { waypoint: number; segment: TimelineSegment } {
   const last = schedule.waypoints.length - 1;
   if (!stay) return { waypoint: last, segment: "destination" };
   if (stay.waypoint !== undefined) return { waypoint: stay.waypoint, segment: stay.segment };
@@ -357,7 +389,8 @@ function nonWorkingDay(dateYmd: string): { code: TransitWarningCode; label: stri
   const holiday = federalHolidayOn(dateYmd);
   if (holiday) return { code: "federal_holiday_in_transit", label: `${holiday} (observed ${dateYmd})` };
   const weekday = weekdayOf(dateYmd);
-  if (weekday === 0 || weekday === 6) return { code: "weekend_in_transit", label: `${WEEKDAY_NAMES[weekday]} ${dateYmd}` };
+  if (weekday === 0 || weekday === 6)
+    return { code: "weekend_in_transit", label: `${WEEKDAY_NAMES[weekday]} ${dateYmd}` };
   return undefined;
 }
 
@@ -424,7 +457,16 @@ const MODE_REASON: Readonly<Record<TransportMode, string>> = {
 };
 
 function clockText(utcMs: number, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", month: "short", day: "numeric", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" }).format(utcMs);
+  return new Intl.DateTimeFormat("en-US", {
+    timeZone,
+    weekday: "short",
+    month: "short",
+    day: "numeric",
+    hour: "2-digit",
+    minute: "2-digit",
+    hourCycle: "h23",
+    timeZoneName: "short",
+  }).format(utcMs);
 }
 
 /**

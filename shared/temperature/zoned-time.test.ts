@@ -1,13 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  addDays,
-  localClockToUtcMs,
-  localDate,
-  localIsoTime,
-  timeZoneAt,
-  weekdayOf,
-  zonedParts,
-} from "./zoned-time";
+import { addDays, localClockToUtcMs, localDate, localIsoTime, timeZoneAt, weekdayOf, zonedParts } from "./zoned-time";
 
 describe("timeZoneAt", () => {
   it("finds the zones of the tz-lookup reference points", () => {
@@ -66,8 +58,12 @@ describe("local clock conversions", () => {
   it("resolves wall times just after the spring-forward change", () => {
     // 15 U.S.C. 260a: on 8 March 2026 Chicago clocks jump from 2:00 CST to 3:00 CDT, so
     // 03:30 local is 08:30Z and 02:30 does not exist (read as 03:30) [published, secondary]
-    expect(new Date(localClockToUtcMs("2026-03-08", "03:30", "America/Chicago")).toISOString()).toBe("2026-03-08T08:30:00.000Z");
-    expect(new Date(localClockToUtcMs("2026-03-08", "01:30", "America/Chicago")).toISOString()).toBe("2026-03-08T07:30:00.000Z");
+    expect(new Date(localClockToUtcMs("2026-03-08", "03:30", "America/Chicago")).toISOString()).toBe(
+      "2026-03-08T08:30:00.000Z",
+    );
+    expect(new Date(localClockToUtcMs("2026-03-08", "01:30", "America/Chicago")).toISOString()).toBe(
+      "2026-03-08T07:30:00.000Z",
+    );
   });
 
   it("writes local ISO times with the zone's offset", () => {

@@ -1,7 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { diffTransferDocuments, topLevelField, type EditableDocument } from "./diff";
 
-const labels = { container: (c: Record<string, unknown>) => String(c.label), animal: (a: Record<string, unknown>) => String(a.name) };
+const labels = {
+  container: (c: Record<string, unknown>) => String(c.label),
+  animal: (a: Record<string, unknown>) => String(a.name),
+};
 
 const base = (): EditableDocument => ({
   mode: "ground_courier",
@@ -24,10 +27,22 @@ describe("diffTransferDocuments", () => {
     ]);
   });
   it("shows added, removed and changed lines", () => {
-    const after = { ...base(), containers: [{ id: "c2", label: "Box B", pack: "heat_40h" }], animals: [{ id: "a1", name: "Pantherophis guttatus", count: 2 }] };
+    const after = {
+      ...base(),
+      containers: [{ id: "c2", label: "Box B", pack: "heat_40h" }],
+      animals: [{ id: "a1", name: "Pantherophis guttatus", count: 2 }],
+    };
     const d = diffTransferDocuments(base(), after, labels);
-    expect(d).toContainEqual({ field: "containers[Box A]", oldValue: { id: "c1", label: "Box A", pack: "none" }, newValue: null });
-    expect(d).toContainEqual({ field: "containers[Box B]", oldValue: null, newValue: { id: "c2", label: "Box B", pack: "heat_40h" } });
+    expect(d).toContainEqual({
+      field: "containers[Box A]",
+      oldValue: { id: "c1", label: "Box A", pack: "none" },
+      newValue: null,
+    });
+    expect(d).toContainEqual({
+      field: "containers[Box B]",
+      oldValue: null,
+      newValue: { id: "c2", label: "Box B", pack: "heat_40h" },
+    });
     expect(d).toContainEqual({ field: "animals[Pantherophis guttatus].count", oldValue: 3, newValue: 2 });
     expect(d.map((c) => topLevelField(c.field))).toEqual(["containers", "containers", "animals"]);
   });

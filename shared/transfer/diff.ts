@@ -23,7 +23,8 @@ function diffFlat(prefix: string, before: Record<string, unknown>, after: Record
 function diffList(name: string, before: Item[], after: Item[], label: (item: Item) => string, out: FieldChange[]) {
   const old = new Map(before.map((i) => [i.id, i]));
   const next = new Map(after.map((i) => [i.id, i]));
-  for (const item of before) if (!next.has(item.id)) out.push({ field: `${name}[${label(item)}]`, oldValue: item, newValue: null });
+  for (const item of before)
+    if (!next.has(item.id)) out.push({ field: `${name}[${label(item)}]`, oldValue: item, newValue: null });
   for (const item of after) {
     const was = old.get(item.id);
     if (!was) out.push({ field: `${name}[${label(item)}]`, oldValue: null, newValue: item });

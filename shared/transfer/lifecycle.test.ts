@@ -9,7 +9,8 @@ describe("life cycle", () => {
   it("walks the happy path in order and never backwards once in transit", () => {
     const path = ["draft", "awaiting_receiver", "ready", "in_transit", "delivered", "checked_in", "closed"] as const;
     for (let i = 0; i < path.length - 1; i++) expect(canTransition(path[i]!, path[i + 1]!)).toBe(true);
-    for (let i = 3; i < path.length; i++) for (let j = 0; j < i; j++) expect(canTransition(path[i]!, path[j]!)).toBe(false);
+    for (let i = 3; i < path.length; i++)
+      for (let j = 0; j < i; j++) expect(canTransition(path[i]!, path[j]!)).toBe(false);
   });
 
   it("cancels from every step before in transit and from none after", () => {

@@ -38,7 +38,9 @@ export const CANCELLABLE: readonly TransferStatus[] = ["draft", "awaiting_receiv
  */
 export function statusAfterEdit(current: TransferStatus, changedFields: readonly string[]): TransferStatus {
   if (current !== "ready") return current;
-  const material = changedFields.some((f) => MATERIAL_FIELDS.some((m) => f === m || f.startsWith(`${m}.`) || f.startsWith(`${m}[`)));
+  const material = changedFields.some((f) =>
+    MATERIAL_FIELDS.some((m) => f === m || f.startsWith(`${m}.`) || f.startsWith(`${m}[`)),
+  );
   return material ? "awaiting_receiver" : current;
 }
 

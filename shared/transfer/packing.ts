@@ -10,8 +10,15 @@ type Line = { id: string; containerId: string | null; taxonId: string; scientifi
  */
 export function packingFindings(boxes: readonly Box[], lines: readonly Line[]): PackingFindingDto[] {
   const findings: PackingFindingDto[] = [];
-  if (lines.length === 0) findings.push({ code: "no_animals", containerId: null, animalIds: [], message: "Add the animals that travel." });
-  if (boxes.length === 0) findings.push({ code: "no_boxes", containerId: null, animalIds: [], message: "Add the boxes the animals travel in." });
+  if (lines.length === 0)
+    findings.push({ code: "no_animals", containerId: null, animalIds: [], message: "Add the animals that travel." });
+  if (boxes.length === 0)
+    findings.push({
+      code: "no_boxes",
+      containerId: null,
+      animalIds: [],
+      message: "Add the boxes the animals travel in.",
+    });
 
   const unpacked = lines.filter((l) => l.containerId === null);
   if (unpacked.length > 0 && boxes.length > 0) {
@@ -25,7 +32,12 @@ export function packingFindings(boxes: readonly Box[], lines: readonly Line[]): 
   for (const box of boxes) {
     const inBox = lines.filter((l) => l.containerId === box.id);
     if (inBox.length === 0) {
-      findings.push({ code: "empty_box", containerId: box.id, animalIds: [], message: `${box.label} has no animals: remove it or pack something in it.` });
+      findings.push({
+        code: "empty_box",
+        containerId: box.id,
+        animalIds: [],
+        message: `${box.label} has no animals: remove it or pack something in it.`,
+      });
       continue;
     }
     const species = [...new Set(inBox.map((l) => l.scientificName))];

@@ -15,8 +15,16 @@ const NAV: NavItem[] = [
   { to: paths.home, label: "My legs", show: (s) => s.abilities.carryTransfers },
   { to: paths.register, label: "Register", show: (s) => s.abilities.draftTransfers },
   { to: paths.permits, label: "Permits", show: (s) => s.abilities.draftTransfers },
-  { to: paths.canItTravel, label: "Can it travel?", show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations },
-  { to: paths.planTrip, label: "Plan a trip", show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations },
+  {
+    to: paths.canItTravel,
+    label: "Can it travel?",
+    show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations,
+  },
+  {
+    to: paths.planTrip,
+    label: "Plan a trip",
+    show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations,
+  },
   { to: paths.admin.users, label: "People", show: (s) => s.abilities.manageUsers },
   { to: paths.admin.organizations, label: "Organisations", show: (s) => s.abilities.manageOrganizations },
   { to: paths.admin.rules, label: "Rules", show: (s) => s.abilities.manageOrganizations },
@@ -30,25 +38,38 @@ export function AppLayout() {
   const navigate = useNavigate();
   const location = useLocation();
 
-  if (session.isPending) return <div className="mx-auto max-w-6xl px-4"><Loading /></div>;
+  if (session.isPending)
+    return (
+      <div className="mx-auto max-w-6xl px-4">
+        <Loading />
+      </div>
+    );
   if (session.error) {
     return (
       <div className="mx-auto max-w-xl px-4 py-16">
-        <Notice tone="block" role="alert" title="Hatchway is not answering">{(session.error as Error).message}</Notice>
+        <Notice tone="block" role="alert" title="Hatchway is not answering">
+          {(session.error as Error).message}
+        </Notice>
       </div>
     );
   }
-  if (!session.data) return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
+  if (!session.data)
+    return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   const s = session.data;
 
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-card focus:px-3 focus:py-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-card focus:px-3 focus:py-2"
+      >
         Skip to content
       </a>
       <header className="border-b border-rule bg-paper-card/90">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-3">
-          <NavLink to={paths.home} className="font-display text-2xl font-bold text-fern">Hatchway</NavLink>
+          <NavLink to={paths.home} className="font-display text-2xl font-bold text-fern">
+            Hatchway
+          </NavLink>
           <nav aria-label="Main" className="order-3 w-full sm:order-none sm:w-auto">
             <ul className="flex flex-wrap gap-1">
               {NAV.filter((item) => item.show(s)).map((item) => (
@@ -69,10 +90,16 @@ export function AppLayout() {
           <div className="flex items-center gap-3">
             <UnitsSwitch />
             <div className="text-right text-sm leading-tight">
-              <p className="font-semibold" data-testid="signed-in-as">{s.user.displayName}</p>
+              <p className="font-semibold" data-testid="signed-in-as">
+                {s.user.displayName}
+              </p>
               <p className="text-ink-soft">{s.user.organization?.name ?? roleLabel[s.user.role]}</p>
             </div>
-            <Button variant="secondary" onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn) })} busy={signOut.isPending}>
+            <Button
+              variant="secondary"
+              onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn) })}
+              busy={signOut.isPending}
+            >
               Sign out
             </Button>
           </div>

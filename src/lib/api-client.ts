@@ -29,7 +29,12 @@ export function resetCsrf(): void {
   csrfToken = null;
 }
 
-type Options = { method?: "GET" | "POST" | "PUT" | "PATCH" | "DELETE"; body?: unknown; headers?: Record<string, string>; signal?: AbortSignal };
+type Options = {
+  method?: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+  body?: unknown;
+  headers?: Record<string, string>;
+  signal?: AbortSignal;
+};
 
 export async function api<T>(path: string, options: Options = {}, retried = false): Promise<T> {
   const method = options.method ?? "GET";
@@ -49,14 +54,22 @@ export async function api<T>(path: string, options: Options = {}, retried = fals
     throw new ApiError(0, "network", "Hatchway cannot be reached. Check your connection and try again.");
   }
   if (response.status === 204) return undefined as T;
-  const body = (await response.json().catch(() => null)) as { error?: { code: string; message: string; field?: string } } | null;
+  const body = (await response.json().catch(() => null)) as {
+    error?: { code: string; message: string; field?: string };
+  } | null;
   if (!response.ok) {
     const error = body?.error;
     if (response.status === 403 && error?.code === "csrf" && !retried) {
       resetCsrf();
       return api<T>(path, options, true);
     }
-    throw new ApiError(response.status, error?.code ?? "error", error?.message ?? `The request failed (${response.status}).`, error?.field, body as Record<string, unknown>);
+    throw new ApiError(
+      response.status,
+      error?.code ?? "error",
+      error?.message ?? `The request failed (${response.status}).`,
+      error?.field,
+      body as Record<string, unknown>,
+    );
   }
   return body as T;
 }

@@ -39,7 +39,9 @@ describe("formatting", () => {
   it("shows the time at a place in that place's zone", () => {
     // IANA tz database [published]: Chicago is UTC−6 (CST) before 2027-03-14; 2027-03-09 is a Tuesday.
     expect(spaced(formatDateTime("2027-03-09T21:00:00Z", "America/Chicago"))).toBe("Tue, Mar 9, 2027, 3:00 PM CST");
-    expect(spaced(formatDateTime("2027-07-14T16:00:00Z", "America/Los_Angeles"))).toBe("Wed, Jul 14, 2027, 9:00 AM PDT");
+    expect(spaced(formatDateTime("2027-07-14T16:00:00Z", "America/Los_Angeles"))).toBe(
+      "Wed, Jul 14, 2027, 9:00 AM PDT",
+    );
   });
 
   it("never shifts a calendar date", () => {

@@ -52,5 +52,7 @@ export function formatDateTime(iso: string, timeZone?: string | null): string {
 export function formatDate(isoDate: string): string {
   const date = new Date(`${isoDate.slice(0, 10)}T12:00:00Z`);
   if (Number.isNaN(date.getTime())) return isoDate;
-  return new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(date);
+  return new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(
+    date,
+  );
 }

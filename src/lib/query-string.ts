@@ -2,7 +2,8 @@
 export function toQueryString(params: Record<string, unknown>): string {
   const search = new URLSearchParams();
   for (const [key, value] of Object.entries(params)) {
-    if ((typeof value === "string" && value !== "") || typeof value === "number" || typeof value === "boolean") search.set(key, String(value));
+    if ((typeof value === "string" && value !== "") || typeof value === "number" || typeof value === "boolean")
+      search.set(key, String(value));
   }
   return search.toString();
 }

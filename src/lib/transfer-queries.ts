@@ -1,4 +1,10 @@
-import { infiniteQueryOptions, queryOptions, useInfiniteQuery, useQuery, type QueryClient } from "@tanstack/react-query";
+import {
+  infiniteQueryOptions,
+  queryOptions,
+  useInfiniteQuery,
+  useQuery,
+  type QueryClient,
+} from "@tanstack/react-query";
 import type { TransferDto, TransferListDto, TransferListQuery } from "@shared/schemas/transfer";
 import { api } from "./api-client";
 import { toQueryString } from "./query-string";
@@ -32,7 +38,8 @@ export const useTransfers = (filters: TransferListFilters) => useInfiniteQuery(t
 export const transferQueryOptions = (id: string) =>
   queryOptions({
     queryKey: transferKeys.detail(id),
-    queryFn: ({ signal }) => api<{ transfer: TransferDto }>(`/api/transfers/${encodeURIComponent(id)}`, { signal }).then((r) => r.transfer),
+    queryFn: ({ signal }) =>
+      api<{ transfer: TransferDto }>(`/api/transfers/${encodeURIComponent(id)}`, { signal }).then((r) => r.transfer),
   });
 
 export const useTransfer = (id: string) => useQuery(transferQueryOptions(id));

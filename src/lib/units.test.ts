@@ -1,5 +1,15 @@
 import { describe, expect, it } from "vitest";
-import { formatDimensions, formatLength, formatTemp, inToMm, lengthInputText, mmToIn, parseLengthMm, parseTempF, tempInputText } from "./units";
+import {
+  formatDimensions,
+  formatLength,
+  formatTemp,
+  inToMm,
+  lengthInputText,
+  mmToIn,
+  parseLengthMm,
+  parseTempF,
+  tempInputText,
+} from "./units";
 
 describe("lengths", () => {
   it("uses the international inch", () => {

@@ -13,17 +13,29 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const org = { name: "Bad Input Keepers", kind: "zoo", address: { street: "1 A St", city: "Salem", state: "OR", zip: "97301" }, phone: "+1 503 555 0100", email: "b@example.test" };
+const org = {
+  name: "Bad Input Keepers",
+  kind: "zoo",
+  address: { street: "1 A St", city: "Salem", state: "OR", zip: "97301" },
+  phone: "+1 503 555 0100",
+  email: "b@example.test",
+};
 
 function expectErrorShape(res: request.Response) {
-  expect(res.body).toEqual({ error: expect.objectContaining({ code: expect.any(String), message: expect.any(String) }) });
+  expect(res.body).toEqual({
+    error: expect.objectContaining({ code: expect.any(String), message: expect.any(String) }),
+  });
   expect(res.headers["x-correlation-id"]).toMatch(/^[0-9a-f-]{36}$/);
   expect(JSON.stringify(res.body)).not.toMatch(/\bat \S+:\d+|node_modules|SELECT |INSERT /);
 }
 
 describe("bad input", () => {
   it("malformed JSON is 400", async () => {
-    const res = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).set("Content-Type", "application/json").send('{"name": "unterminated');
+    const res = await admin.agent
+      .post("/api/organizations")
+      .set("X-CSRF-Token", admin.csrf)
+      .set("Content-Type", "application/json")
+      .send('{"name": "unterminated');
     expect(res.status).toBe(400);
     expectErrorShape(res);
   });
@@ -64,14 +76,26 @@ describe("bad input", () => {
   });
 
   it("form and text bodies are refused on JSON routes", async () => {
-    const form = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).type("form").send("name=x");
+    const form = await admin.agent
+      .post("/api/organizations")
+      .set("X-CSRF-Token", admin.csrf)
+      .type("form")
+      .send("name=x");
     expect(form.status).toBe(415);
-    const text = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).set("Content-Type", "text/plain").send("{}");
+    const text = await admin.agent
+      .post("/api/organizations")
+      .set("X-CSRF-Token", admin.csrf)
+      .set("Content-Type", "text/plain")
+      .send("{}");
     expect(text.status).toBe(415);
   });
 
   it("a JSON scalar or array at the top is 400", async () => {
-    const res = await admin.agent.post("/api/organizations").set("X-CSRF-Token", admin.csrf).set("Content-Type", "application/json").send('"just a string"');
+    const res = await admin.agent
+      .post("/api/organizations")
+      .set("X-CSRF-Token", admin.csrf)
+      .set("Content-Type", "application/json")
+      .send('"just a string"');
     expect(res.status).toBe(400);
     const arr = await admin.post("/api/organizations", [1, 2]);
     expect(arr.status).toBe(400);

@@ -1,7 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, signIn, type TestApp } from "../support/app";
 import { buildTransfer, buildUser, type TransferCast } from "../factories";
-import { decodeQrFromPng, drawnGlyphIds, extractPageTexts, pageSizesPt, renderPagePng } from "../../server/pdf/pdf-test-support";
+import {
+  decodeQrFromPng,
+  drawnGlyphIds,
+  extractPageTexts,
+  pageSizesPt,
+  renderPagePng,
+} from "../../server/pdf/pdf-test-support";
 
 let t: TestApp;
 let cast: TransferCast;
@@ -18,20 +24,23 @@ beforeAll(async () => {
     ],
   });
   // Hostile user text travels to the paper as text.
-  await t.ctx.pool.query(
-    "UPDATE transfer SET handling_notes = $2 WHERE id = $1",
-    [cast.transfer.id, `<script>alert(1)</script> \u202Eevil\u202C 🐍 ${"x".repeat(2000)}`],
-  );
+  await t.ctx.pool.query("UPDATE transfer SET handling_notes = $2 WHERE id = $1", [
+    cast.transfer.id,
+    `<script>alert(1)</script> \u202Eevil\u202C 🐍 ${"x".repeat(2000)}`,
+  ]);
 });
 afterAll(() => t.close());
 
 const fetchPdf = async (email: string, file: string) => {
   const client = await signIn(t.app, email);
-  return client.get(`/api/transfers/${cast.transfer.id}/${file}`).buffer(true).parse((res, done) => {
-    const chunks: Buffer[] = [];
-    res.on("data", (c: Buffer) => chunks.push(c));
-    res.on("end", () => done(null, Buffer.concat(chunks)));
-  });
+  return client
+    .get(`/api/transfers/${cast.transfer.id}/${file}`)
+    .buffer(true)
+    .parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on("data", (c: Buffer) => chunks.push(c));
+      res.on("end", () => done(null, Buffer.concat(chunks)));
+    });
 };
 
 describe("GET /api/transfers/:id/manifest.pdf", () => {
@@ -66,17 +75,23 @@ describe("temperature on the paper", () => {
   // 55–85 °F, salamanders 45–70 °F; the whole shipment must stay in their overlap, 55–70 °F.
   // °C by the conversion C = (F − 32) × 5/9 (NIST SP 811, B.8) [published].
   it("the manifest carries the last stored check and the band every box shares", async () => {
-    const text = (await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))).join("\n");
+    const text = (
+      await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))
+    ).join("\n");
     expect(text).toContain("Safe transit range: 55–70 °F (13–21 °C)");
     // The fixture was cleared to ship past the temperature gate with no weather service: the stored check says so.
     // The time is given in the origin's zone (Knoxville: Eastern), like the departure on the same page.
-    expect(text).toMatch(/Forecast unavailable \(forecast checked \w{3}, \w{3} \d{1,2}, \d{4}, \d{2}:\d{2} E[SD]T, when the transfer was cleared to ship\)/);
+    expect(text).toMatch(
+      /Forecast unavailable \(forecast checked \w{3}, \w{3} \d{1,2}, \d{4}, \d{2}:\d{2} E[SD]T, when the transfer was cleared to ship\)/,
+    );
     expect(text).toMatch(/Box A: Temperate snakes, 55–85 °F \(13–29 °C\)/);
     expect(text).toMatch(/Box C: Salamanders and newts, 45–70 °F \(7–21 °C\)/);
   });
 
   it("each box label carries its own animals' band", async () => {
-    const pages = await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "labels.pdf")).body as Buffer));
+    const pages = await extractPageTexts(
+      new Uint8Array((await fetchPdf(cast.sender.email, "labels.pdf")).body as Buffer),
+    );
     expect(pages[0]).toMatch(/55–85 °F/);
     expect(pages[2]).toMatch(/45–70 °F/);
     expect(pages[2]).not.toMatch(/55–85 °F/);
@@ -85,8 +100,17 @@ describe("temperature on the paper", () => {
   it("after an edit the stored check no longer speaks for the record", async () => {
     const sender = await signIn(t.app, cast.sender.email);
     const current = (await sender.get(`/api/transfers/${cast.transfer.id}`)).body.transfer as { version: number };
-    expect((await sender.patch(`/api/transfers/${cast.transfer.id}`, { version: current.version, handlingNotes: "Mist box C lightly before sealing." })).status).toBe(200);
-    const text = (await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))).join("\n");
+    expect(
+      (
+        await sender.patch(`/api/transfers/${cast.transfer.id}`, {
+          version: current.version,
+          handlingNotes: "Mist box C lightly before sealing.",
+        })
+      ).status,
+    ).toBe(200);
+    const text = (
+      await extractPageTexts(new Uint8Array((await fetchPdf(cast.sender.email, "manifest.pdf")).body as Buffer))
+    ).join("\n");
     expect(text).toContain("No forecast check of the transfer as it stands is on record.");
     expect(text).not.toMatch(/forecast checked/);
     expect(text).toContain("Safe transit range: 55–70 °F (13–21 °C)");
@@ -99,7 +123,11 @@ describe("GET /api/transfers/:id/labels.pdf", () => {
     expect(res.status).toBe(200);
     const bytes = new Uint8Array(res.body as Buffer);
     const sizes = await pageSizesPt(bytes);
-    expect(sizes).toEqual([{ width: 288, height: 432 }, { width: 288, height: 432 }, { width: 288, height: 432 }]);
+    expect(sizes).toEqual([
+      { width: 288, height: 432 },
+      { width: 288, height: 432 },
+      { width: 288, height: 432 },
+    ]);
     const pages = await extractPageTexts(bytes);
     expect(pages[0]).toContain("LIVE ANIMALS");
     expect(pages[0]).toMatch(/1\s*of\s*3/);

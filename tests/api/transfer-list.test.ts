@@ -27,7 +27,9 @@ async function walk(query: string): Promise<{ ids: string[]; pages: number }> {
   let cursor: string | null = null;
   let pages = 0;
   do {
-    const res = await sender.get(`/api/transfers?${query}&limit=2${cursor ? `&cursor=${encodeURIComponent(cursor)}` : ""}`);
+    const res = await sender.get(
+      `/api/transfers?${query}&limit=2${cursor ? `&cursor=${encodeURIComponent(cursor)}` : ""}`,
+    );
     expect(res.status).toBe(200);
     seen.push(...(res.body.transfers as { id: string }[]).map((x) => x.id));
     cursor = res.body.nextCursor as string | null;

@@ -11,7 +11,10 @@ afterAll(() => browser?.close());
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
 /** ISO 32000-1 §7.5.2 and ISO/IEC 15948 §5.2 signatures [published]; the rest is filler. */
 const PDF = Buffer.from("%PDF-1.4\n1 0 obj\n<< /Type /Catalog >>\nendobj\n%%EOF\n", "latin1");
-const PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64");
+const PNG = Buffer.from(
+  "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==",
+  "base64",
+);
 
 describe("compliance screens", () => {
   it("a member records a CVI, sees it expiring, uploads scans and previews the image", async () => {
@@ -58,7 +61,10 @@ describe("compliance screens", () => {
     await page.getByLabel("From").selectOption("CA");
     await page.getByLabel("To").selectOption("HI");
     await page.getByRole("combobox", { name: "Species" }).fill("Burmese python");
-    await page.getByRole("option", { name: /Python bivittatus/ }).first().click();
+    await page
+      .getByRole("option", { name: /Python bivittatus/ })
+      .first()
+      .click();
     await page.getByRole("button", { name: "Check the rules" }).click();
     // [published] 18 U.S.C. 42 / 50 CFR 16.15 and HRS 150A-6: both forbid this shipment
     await expect.poll(() => page.getByRole("status").filter({ hasText: "Blocked" }).count()).toBe(1);

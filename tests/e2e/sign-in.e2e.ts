@@ -9,10 +9,30 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 const ROLES = [
-  { email: "admin@demo.hatchway.test", name: "Hatchway Admin", sees: ["Transfers", "People", "Organisations", "Caught mail"], hidden: ["Register", "My legs"] },
-  { email: "sender@demo.hatchway.test", name: "Ruth Calder", sees: ["Transfers", "Register"], hidden: ["People", "Organisations", "Caught mail", "My legs"] },
-  { email: "receiver@demo.hatchway.test", name: "Milo Faraday", sees: ["Transfers", "Register"], hidden: ["People", "Organisations", "My legs"] },
-  { email: "courier@demo.hatchway.test", name: "Juno Park", sees: ["My legs"], hidden: ["Transfers", "Register", "People", "Organisations"] },
+  {
+    email: "admin@demo.hatchway.test",
+    name: "Hatchway Admin",
+    sees: ["Transfers", "People", "Organisations", "Caught mail"],
+    hidden: ["Register", "My legs"],
+  },
+  {
+    email: "sender@demo.hatchway.test",
+    name: "Ruth Calder",
+    sees: ["Transfers", "Register"],
+    hidden: ["People", "Organisations", "Caught mail", "My legs"],
+  },
+  {
+    email: "receiver@demo.hatchway.test",
+    name: "Milo Faraday",
+    sees: ["Transfers", "Register"],
+    hidden: ["People", "Organisations", "My legs"],
+  },
+  {
+    email: "courier@demo.hatchway.test",
+    name: "Juno Park",
+    sees: ["My legs"],
+    hidden: ["Transfers", "Register", "People", "Organisations"],
+  },
 ];
 
 describe("signing in", () => {
@@ -56,7 +76,9 @@ describe("signing in", () => {
     await expectAccessible(page);
     await screenshot(page, "admin-people");
     await page.getByRole("link", { name: "Organisations" }).click();
-    await expect.poll(() => page.getByRole("cell", { name: "Willow Marsh Nature Centre", exact: true }).count()).toBe(1);
+    await expect
+      .poll(() => page.getByRole("cell", { name: "Willow Marsh Nature Centre", exact: true }).count())
+      .toBe(1);
     await page.getByRole("button", { name: "Add organisation" }).click();
     await page.getByRole("button", { name: "Add organisation" }).click();
     await expect.poll(() => page.getByText("Fill this in").count()).toBeGreaterThan(0);

@@ -53,9 +53,13 @@ describe("temperature screens", () => {
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Plan a trip" }).click();
     const weather = page.getByRole("group", { name: "Demo weather scenario" });
     await weather.getByRole("button", { name: "Heat wave" }).click();
-    await expect.poll(() => weather.getByRole("button", { name: "Heat wave" }).getAttribute("aria-pressed")).toBe("true");
+    await expect
+      .poll(() => weather.getByRole("button", { name: "Heat wave" }).getAttribute("aria-pressed"))
+      .toBe("true");
     await weather.getByRole("button", { name: "Ordinary weather" }).click();
-    await expect.poll(() => weather.getByRole("button", { name: "Ordinary weather" }).getAttribute("aria-pressed")).toBe("true");
+    await expect
+      .poll(() => weather.getByRole("button", { name: "Ordinary weather" }).getAttribute("aria-pressed"))
+      .toBe("true");
     await context.close();
   });
 });

@@ -85,12 +85,21 @@ describe("one transfer from draft to check-in", () => {
     await page.getByRole("button", { name: "Confirm and clear to travel" }).click();
     // The weather fake's December forecast may block: the receiver then confirms with a reason.
     const status = await Promise.race([
-      page.getByText("Cleared to travel", { exact: true }).first().waitFor().then(() => "cleared"),
-      page.getByRole("button", { name: "Confirm anyway, with this reason" }).waitFor().then(() => "blocked"),
+      page
+        .getByText("Cleared to travel", { exact: true })
+        .first()
+        .waitFor()
+        .then(() => "cleared"),
+      page
+        .getByRole("button", { name: "Confirm anyway, with this reason" })
+        .waitFor()
+        .then(() => "blocked"),
     ]);
     if (status === "blocked") {
       await screenshot(page, "story-3a-receiver-temperature-block");
-      await page.getByLabel("Why it is safe to confirm anyway").fill("Heated van door to door; we collect at the depot ourselves.");
+      await page
+        .getByLabel("Why it is safe to confirm anyway")
+        .fill("Heated van door to door; we collect at the depot ourselves.");
       await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
     }
     await expect.poll(() => page.getByText("Cleared to travel", { exact: true }).count()).toBeGreaterThan(0);
@@ -112,7 +121,14 @@ describe("one transfer from draft to check-in", () => {
       await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
       if (kind === "pickup") await screenshot(page, "story-4-courier-pickup-form");
       await page.getByRole("button", { name: `Confirm the ${kind}` }).click();
-      await expect.poll(() => page.getByRole("status").filter({ hasText: /recorded/i }).count()).toBeGreaterThan(0);
+      await expect
+        .poll(() =>
+          page
+            .getByRole("status")
+            .filter({ hasText: /recorded/i })
+            .count(),
+        )
+        .toBeGreaterThan(0);
     }
     await expectAccessible(page);
     await screenshot(page, "story-5-courier-delivered");

@@ -65,7 +65,8 @@ export async function anonymousClient(app: Express): Promise<Client> {
     agent,
     csrf,
     get: (path) => agent.get(path),
-    post: (path, body) => (body === undefined ? withToken(agent.post(path)) : withToken(agent.post(path)).send(body as object)),
+    post: (path, body) =>
+      body === undefined ? withToken(agent.post(path)) : withToken(agent.post(path)).send(body as object),
     patch: (path, body) => withToken(agent.patch(path)).send(body as object),
     del: (path) => withToken(agent.delete(path)),
   };

@@ -12,14 +12,25 @@ export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
 }
 
 export const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
 export const DESKTOP = { viewport: { width: 1280, height: 860 } };
 
-export async function newPage(browser: Browser, device: typeof PHONE | typeof DESKTOP = DESKTOP): Promise<{ context: BrowserContext; page: Page }> {
+export async function newPage(
+  browser: Browser,
+  device: typeof PHONE | typeof DESKTOP = DESKTOP,
+): Promise<{ context: BrowserContext; page: Page }> {
   const context = await browser.newContext({ ...device, baseURL: inject("baseUrl") });
   const page = await context.newPage();
   return { context, page };

@@ -39,7 +39,11 @@ export default async function setup(project: TestProject) {
   await prepareDatabase(databaseUrl, { seed: true });
 
   const dist = path.join(OUTPUT_DIR, "dist-e2e");
-  const build = spawnSync(path.join(PROJECT_ROOT, "node_modules/.bin/vite"), ["build", "--logLevel", "error", "--outDir", dist, "--emptyOutDir"], { cwd: PROJECT_ROOT, stdio: "inherit" });
+  const build = spawnSync(
+    path.join(PROJECT_ROOT, "node_modules/.bin/vite"),
+    ["build", "--logLevel", "error", "--outDir", dist, "--emptyOutDir"],
+    { cwd: PROJECT_ROOT, stdio: "inherit" },
+  );
   if (build.status !== 0) throw new Error("the client build for the browser tests failed");
 
   mkdirSync(path.join(OUTPUT_DIR, "e2e-data"), { recursive: true });

@@ -6,5 +6,9 @@ export function newId(): string {
   return uuidv7();
 }
 
-export const idProperty = () => p.uuid().primary().onCreate(() => newId());
+export const idProperty = () =>
+  p
+    .uuid()
+    .primary()
+    .onCreate(() => newId());
 export const createdAtProperty = () => p.datetime().onCreate(() => new Date());

@@ -55,7 +55,10 @@ export const PermitDocumentSchema = defineEntity({
     notes: p.text().nullable(),
     createdBy: () => p.manyToOne(UserSchema).ref(),
     createdAt: createdAtProperty(),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
     /** When the holder was told the document expires soon; cleared when validTo changes. */
     reminderSentAt: p.datetime().nullable(),
   },

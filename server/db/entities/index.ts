@@ -3,19 +3,51 @@ import { OutboxMessageSchema } from "./outbox-message.entity";
 import { PasswordTokenSchema } from "./password-token.entity";
 import { UserSchema } from "./user.entity";
 import { TaxonNameSchema, TaxonSchema } from "./taxon.entity";
-import { AnimalSchema, ContainerSchema, LegSchema, MessageSchema, TransferChangeSchema, TransferSchema } from "./transfer.entity";
+import {
+  AnimalSchema,
+  ContainerSchema,
+  LegSchema,
+  MessageSchema,
+  TransferChangeSchema,
+  TransferSchema,
+} from "./transfer.entity";
 import { CustodyEntrySchema } from "./custody-entry.entity";
 import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
-  ComplianceEvaluationSchema, ComplianceOverrideSchema, ComplianceRuleSchema, DocumentScanSchema, PermitDocumentSchema, TransferDocumentSchema,
+  ComplianceEvaluationSchema,
+  ComplianceOverrideSchema,
+  ComplianceRuleSchema,
+  DocumentScanSchema,
+  PermitDocumentSchema,
+  TransferDocumentSchema,
 } from "./compliance.entity";
-import { ForecastHourSchema, TemperatureAlertSchema, TemperatureCheckSchema, TemperatureProfileSchema } from "./temperature.entity";
+import {
+  ForecastHourSchema,
+  TemperatureAlertSchema,
+  TemperatureCheckSchema,
+  TemperatureProfileSchema,
+} from "./temperature.entity";
 
 export {
-  OrganizationSchema, OutboxMessageSchema, PasswordTokenSchema, UserSchema, TaxonSchema, TaxonNameSchema, TransferSchema, ContainerSchema,
-  AnimalSchema, LegSchema, MessageSchema, TransferChangeSchema, CustodyEntrySchema, CheckInSchema, CheckInItemSchema, CheckInExtraSchema,
-  RegisterEntrySchema, IdempotencyKeySchema,
+  OrganizationSchema,
+  OutboxMessageSchema,
+  PasswordTokenSchema,
+  UserSchema,
+  TaxonSchema,
+  TaxonNameSchema,
+  TransferSchema,
+  ContainerSchema,
+  AnimalSchema,
+  LegSchema,
+  MessageSchema,
+  TransferChangeSchema,
+  CustodyEntrySchema,
+  CheckInSchema,
+  CheckInItemSchema,
+  CheckInExtraSchema,
+  RegisterEntrySchema,
+  IdempotencyKeySchema,
 };
 
 /** Every entity the ORM knows; new entities are added here once. */

@@ -17,9 +17,15 @@ export const OutboxMessageSchema = defineEntity({
     textBody: p.text(),
     /** What the message is about, for the admin's view and for de-duplication. */
     topic: p.string().length(100),
-    status: p.enum([...OUTBOX_STATUSES]).default("pending").index(),
+    status: p
+      .enum([...OUTBOX_STATUSES])
+      .default("pending")
+      .index(),
     attempts: p.integer().default(0),
-    nextAttemptAt: p.datetime().onCreate(() => new Date()).index(),
+    nextAttemptAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .index(),
     lastError: p.text().nullable(),
     sentAt: p.datetime().nullable(),
     createdAt: createdAtProperty(),

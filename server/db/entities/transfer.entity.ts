@@ -1,6 +1,14 @@
 import { defineEntity, p, type InferEntity } from "@mikro-orm/core";
 import {
-  ANIMAL_ORIGINS, IDENTIFIER_KINDS, LENGTH_KINDS, PACK_KINDS, PURPOSES, SEXES, TRANSFER_STATUSES, TRANSPORT_MODES, WALL_MATERIALS,
+  ANIMAL_ORIGINS,
+  IDENTIFIER_KINDS,
+  LENGTH_KINDS,
+  PACK_KINDS,
+  PURPOSES,
+  SEXES,
+  TRANSFER_STATUSES,
+  TRANSPORT_MODES,
+  WALL_MATERIALS,
 } from "@shared/constants";
 import { createdAtProperty, idProperty } from "./base";
 import { OrganizationSchema } from "./organization.entity";
@@ -52,7 +60,10 @@ export const TransferSchema = defineEntity({
     reconfirmationReason: p.text().nullable(),
     createdBy: () => p.manyToOne(UserSchema).ref(),
     createdAt: createdAtProperty(),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 export type Transfer = InferEntity<typeof TransferSchema>;

@@ -51,13 +51,43 @@ export class DemoSeeder extends Seeder {
       email: "dispatch@nightjar.example",
     });
 
-    await buildUser(em, { email: "admin@demo.hatchway.test", displayName: "Hatchway Admin", role: "admin", organization: null });
-    const sender = await buildUser(em, { email: "sender@demo.hatchway.test", displayName: "Ruth Calder", role: "member", organization: breeder });
-    const receiver = await buildUser(em, { email: "receiver@demo.hatchway.test", displayName: "Milo Faraday", role: "member", organization: centre });
-    const courier = await buildUser(em, { email: "courier@demo.hatchway.test", displayName: "Juno Park", role: "courier", organization: couriers });
-    const other = await buildUser(em, { email: "other@demo.hatchway.test", displayName: "Ivy Brandt", role: "member", organization: rescue });
+    await buildUser(em, {
+      email: "admin@demo.hatchway.test",
+      displayName: "Hatchway Admin",
+      role: "admin",
+      organization: null,
+    });
+    const sender = await buildUser(em, {
+      email: "sender@demo.hatchway.test",
+      displayName: "Ruth Calder",
+      role: "member",
+      organization: breeder,
+    });
+    const receiver = await buildUser(em, {
+      email: "receiver@demo.hatchway.test",
+      displayName: "Milo Faraday",
+      role: "member",
+      organization: centre,
+    });
+    const courier = await buildUser(em, {
+      email: "courier@demo.hatchway.test",
+      displayName: "Juno Park",
+      role: "courier",
+      organization: couriers,
+    });
+    const other = await buildUser(em, {
+      email: "other@demo.hatchway.test",
+      displayName: "Ivy Brandt",
+      role: "member",
+      organization: rescue,
+    });
     // A second driver for the relay leg of the demo's two-courier transfer.
-    const relay = await buildUser(em, { email: "relay@demo.hatchway.test", displayName: "Theo Brannock", role: "courier", organization: couriers });
+    const relay = await buildUser(em, {
+      email: "relay@demo.hatchway.test",
+      displayName: "Theo Brannock",
+      role: "courier",
+      organization: couriers,
+    });
     await seedDemoDocuments(em, { breeder, centre, rescue });
     await seedDemoTransfers(em, { sender, receiver, other, courier, relay });
   }

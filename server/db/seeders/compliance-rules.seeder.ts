@@ -26,6 +26,9 @@ export async function seedComplianceRules(client: pg.Pool | pg.Client): Promise<
       created_at: now,
     };
   });
-  await client.query("INSERT INTO compliance_rule SELECT * FROM json_populate_recordset(NULL::compliance_rule, $1::json)", [JSON.stringify(records)]);
+  await client.query(
+    "INSERT INTO compliance_rule SELECT * FROM json_populate_recordset(NULL::compliance_rule, $1::json)",
+    [JSON.stringify(records)],
+  );
   return records.length;
 }

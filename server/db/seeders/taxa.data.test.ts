@@ -46,7 +46,8 @@ describe("taxa seed: lineage", () => {
   it("lists every parent before its children", () => {
     const seen = new Set<string>();
     for (const taxon of TAXA) {
-      if (taxon.parent !== null) expect(seen.has(taxon.parent), `${taxon.scientificName} before ${taxon.parent}`).toBe(true);
+      if (taxon.parent !== null)
+        expect(seen.has(taxon.parent), `${taxon.scientificName} before ${taxon.parent}`).toBe(true);
       seen.add(taxon.scientificName);
     }
   });
@@ -106,7 +107,10 @@ describe("taxa seed: coverage", () => {
   it("gives every species and subspecies a common name and a known profile group", () => {
     for (const taxon of speciesLevel) {
       expect(taxon.commonNames.length, taxon.scientificName).toBeGreaterThan(0);
-      expect(taxon.commonNames.every((name) => name.trim() === name && name.length > 0), taxon.scientificName).toBe(true);
+      expect(
+        taxon.commonNames.every((name) => name.trim() === name && name.length > 0),
+        taxon.scientificName,
+      ).toBe(true);
       expect(PROFILE_GROUPS, taxon.scientificName).toContain(taxon.profileGroup);
     }
   });
@@ -115,8 +119,10 @@ describe("taxa seed: coverage", () => {
   it("keeps profile groups consistent within orders and families", () => {
     const groupOf = (name: string) => resolve(name)?.profileGroup;
     for (const taxon of speciesLevel) {
-      if (ancestorAt(taxon, "order")?.scientificName === "Caudata") expect(taxon.profileGroup, taxon.scientificName).toBe("salamander");
-      if (ancestorAt(taxon, "order")?.scientificName === "Crocodylia") expect(taxon.profileGroup, taxon.scientificName).toBe("crocodilian");
+      if (ancestorAt(taxon, "order")?.scientificName === "Caudata")
+        expect(taxon.profileGroup, taxon.scientificName).toBe("salamander");
+      if (ancestorAt(taxon, "order")?.scientificName === "Crocodylia")
+        expect(taxon.profileGroup, taxon.scientificName).toBe("crocodilian");
       if (ancestorAt(taxon, "family")?.scientificName === "Testudinidae") {
         expect(["temperate_tortoise", "tropical_tortoise"], taxon.scientificName).toContain(taxon.profileGroup);
       }
@@ -154,8 +160,17 @@ describe("taxa seed: outside facts", () => {
   // tortoises as family Testudinidae [memory]
   it("uses only turtle families that 16 U.S.C. 6602 names, plus Testudinidae", () => {
     const freshwater = [
-      "Carettochelyidae", "Chelidae", "Chelydridae", "Dermatemydidae", "Emydidae", "Geoemydidae",
-      "Kinosternidae", "Pelomedusidae", "Platysternidae", "Podocnemididae", "Trionychidae",
+      "Carettochelyidae",
+      "Chelidae",
+      "Chelydridae",
+      "Dermatemydidae",
+      "Emydidae",
+      "Geoemydidae",
+      "Kinosternidae",
+      "Pelomedusidae",
+      "Platysternidae",
+      "Podocnemididae",
+      "Trionychidae",
     ];
     const marine = ["Cheloniidae", "Dermochelyidae"];
     const turtleFamilies = TAXA.filter((taxon) => taxon.rank === "family" && taxon.parent === "Testudines");

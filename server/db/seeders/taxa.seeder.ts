@@ -32,7 +32,11 @@ export async function seedTaxa(client: pg.Pool | pg.Client): Promise<number> {
     for (const n of t.synonyms) names.push({ id: newId(), taxon_id: id, name: n, kind: "synonym" });
   }
   // json_populate_recordset maps JSON arrays onto the text[] columns.
-  await client.query("INSERT INTO taxon SELECT * FROM json_populate_recordset(NULL::taxon, $1::json)", [JSON.stringify(taxa)]);
-  await client.query("INSERT INTO taxon_name SELECT * FROM json_populate_recordset(NULL::taxon_name, $1::json)", [JSON.stringify(names)]);
+  await client.query("INSERT INTO taxon SELECT * FROM json_populate_recordset(NULL::taxon, $1::json)", [
+    JSON.stringify(taxa),
+  ]);
+  await client.query("INSERT INTO taxon_name SELECT * FROM json_populate_recordset(NULL::taxon_name, $1::json)", [
+    JSON.stringify(names),
+  ]);
   return taxa.length;
 }

@@ -62,7 +62,9 @@ describe("sign-in", () => {
     const user = await buildUser(em());
     const client = await anonymousClient(t.app);
     for (let i = 0; i < 3; i++) {
-      expect((await client.post("/api/auth/login", { email: user.email, password: "wrong-password" })).status).toBe(401);
+      expect((await client.post("/api/auth/login", { email: user.email, password: "wrong-password" })).status).toBe(
+        401,
+      );
     }
     const blocked = await client.post("/api/auth/login", { email: user.email, password: "hatchway-demo" });
     expect(blocked.status).toBe(429);
@@ -79,7 +81,9 @@ describe("per-address limit", () => {
       await strict.ctx.pool.query("DELETE FROM auth_throttle");
       const client = await anonymousClient(strict.app);
       for (let i = 0; i < 4; i++) {
-        expect((await client.post("/api/auth/login", { email: `spray-${i}@example.test`, password: "x".repeat(10) })).status).toBe(401);
+        expect(
+          (await client.post("/api/auth/login", { email: `spray-${i}@example.test`, password: "x".repeat(10) })).status,
+        ).toBe(401);
       }
       const res = await client.post("/api/auth/login", { email: "spray-new@example.test", password: "x".repeat(10) });
       expect(res.status).toBe(429);
@@ -96,7 +100,10 @@ describe("CSRF", () => {
     await agent.get("/api/auth/csrf");
     const missing = await agent.post("/api/auth/login").send({ email: user.email, password: "hatchway-demo" });
     expect(missing.status).toBe(403);
-    const wrong = await agent.post("/api/auth/login").set("X-CSRF-Token", "forged-token").send({ email: user.email, password: "hatchway-demo" });
+    const wrong = await agent
+      .post("/api/auth/login")
+      .set("X-CSRF-Token", "forged-token")
+      .send({ email: user.email, password: "hatchway-demo" });
     expect(wrong.status).toBe(403);
     expect(wrong.body.error.code).toBe("csrf");
   });
@@ -104,7 +111,13 @@ describe("CSRF", () => {
   it("refuses a signed-in write without the token, and a cross-site one with it", async () => {
     const admin = await buildUser(em(), { role: "admin", organization: null });
     const client = await signIn(t.app, admin.email);
-    const body = { name: "Heron Hollow", kind: "zoo", address: { street: "1 A St", city: "Salem", state: "OR", zip: "97301" }, phone: "+1 503 555 0100", email: "h@example.test" };
+    const body = {
+      name: "Heron Hollow",
+      kind: "zoo",
+      address: { street: "1 A St", city: "Salem", state: "OR", zip: "97301" },
+      phone: "+1 503 555 0100",
+      email: "h@example.test",
+    };
     expect((await client.agent.post("/api/organizations").send(body)).status).toBe(403);
     expect((await client.post("/api/organizations", body).set("Origin", "https://evil.example")).status).toBe(403);
     expect((await client.post("/api/organizations", body).set("Sec-Fetch-Site", "cross-site")).status).toBe(403);
@@ -156,7 +169,10 @@ describe("session", () => {
     const client = await signIn(t.app, user.email);
     expect((await client.get("/api/auth/me")).status).toBe(200);
     const longAgo = Date.now() - (t.env.SESSION_IDLE_MINUTES + 1) * 60_000;
-    await t.ctx.pool.query(`UPDATE session SET sess = jsonb_set(sess::jsonb, '{lastSeenAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`, [longAgo, user.id]);
+    await t.ctx.pool.query(
+      `UPDATE session SET sess = jsonb_set(sess::jsonb, '{lastSeenAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`,
+      [longAgo, user.id],
+    );
     expect((await client.get("/api/auth/me")).status).toBe(401);
   });
 
@@ -165,9 +181,15 @@ describe("session", () => {
     const client = await signIn(t.app, user.email);
     // Two minutes since the last touch: the next request writes the session (lastSeenAt) back.
     const twoMinutesAgo = Date.now() - 120_000;
-    await t.ctx.pool.query(`UPDATE session SET sess = jsonb_set(sess::jsonb, '{lastSeenAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`, [twoMinutesAgo, user.id]);
+    await t.ctx.pool.query(
+      `UPDATE session SET sess = jsonb_set(sess::jsonb, '{lastSeenAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`,
+      [twoMinutesAgo, user.id],
+    );
     expect((await client.get("/api/auth/me")).status).toBe(200);
-    const { rows } = await t.ctx.pool.query<{ sess: Record<string, unknown> }>(`SELECT sess FROM session WHERE sess->'passport'->>'user' = $1`, [user.id]);
+    const { rows } = await t.ctx.pool.query<{ sess: Record<string, unknown> }>(
+      `SELECT sess FROM session WHERE sess->'passport'->>'user' = $1`,
+      [user.id],
+    );
     expect(rows).toHaveLength(1);
     expect(rows[0]!.sess.lastSeenAt as number).toBeGreaterThan(twoMinutesAgo);
     expect(Object.keys(rows[0]!.sess).sort()).toEqual(["cookie", "createdAt", "csrfToken", "lastSeenAt", "passport"]);
@@ -177,7 +199,10 @@ describe("session", () => {
     const user = await buildUser(em());
     const client = await signIn(t.app, user.email);
     const created = Date.now() - (t.env.SESSION_ABSOLUTE_HOURS * 3600_000 + 60_000);
-    await t.ctx.pool.query(`UPDATE session SET sess = jsonb_set(sess::jsonb, '{createdAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`, [created, user.id]);
+    await t.ctx.pool.query(
+      `UPDATE session SET sess = jsonb_set(sess::jsonb, '{createdAt}', to_jsonb($1::bigint))::json WHERE sess->'passport'->>'user' = $2`,
+      [created, user.id],
+    );
     expect((await client.get("/api/auth/me")).status).toBe(401);
   });
 });

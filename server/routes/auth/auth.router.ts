@@ -18,15 +18,24 @@ import { hashPassword } from "../../auth/passwords";
 const invalidCredentials = () =>
   new HttpError(401, "invalid_credentials", "That e-mail and password do not match an active account.");
 
-function authenticate(auth: passport.PassportStatic, req: Request, res: Response, next: NextFunction): Promise<Actor | false> {
+function authenticate(
+  auth: passport.PassportStatic,
+  req: Request,
+  res: Response,
+  next: NextFunction,
+): Promise<Actor | false> {
   return new Promise((resolve, reject) => {
-    auth.authenticate("local", { session: false }, (err: unknown, user: Actor | false) => (err ? reject(err) : resolve(user)))(req, res, next);
+    auth.authenticate("local", { session: false }, (err: unknown, user: Actor | false) =>
+      err ? reject(err) : resolve(user),
+    )(req, res, next);
   });
 }
 
 function logIn(req: Request, user: Actor): Promise<void> {
   // passport regenerates the session id here; keepSessionInfo carries the CSRF token over.
-  return new Promise((resolve, reject) => req.logIn(user, { session: true, keepSessionInfo: true }, (err) => (err ? reject(err) : resolve())));
+  return new Promise((resolve, reject) =>
+    req.logIn(user, { session: true, keepSessionInfo: true }, (err) => (err ? reject(err) : resolve())),
+  );
 }
 
 export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Router {
@@ -76,7 +85,12 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
     const tokenHash = createHash("sha256").update(input.token).digest("hex");
     const token = await req.em.findOne(PasswordTokenSchema, { tokenHash }, { populate: ["user"] });
     if (!token || token.usedAt || token.expiresAt.getTime() < Date.now()) {
-      throw new HttpError(400, "invalid_token", "This link has expired or was already used. Ask an administrator for a new invitation.", { field: "token" });
+      throw new HttpError(
+        400,
+        "invalid_token",
+        "This link has expired or was already used. Ask an administrator for a new invitation.",
+        { field: "token" },
+      );
     }
     const user = await req.em.findOneOrFail(UserSchema, { id: token.user.id });
     user.passwordHash = await hashPassword(input.password);

@@ -41,7 +41,10 @@ function whatIfRouter(ctx: AppContext): Router {
       const suggestions = hits.map((hit) => ({ scientificName: hit.scientificName, commonName: hit.commonName }));
       const hint = suggestions.length ? ` Did you mean ${suggestions.map((s) => s.scientificName).join(", ")}?` : "";
       const field = `animals.${outcome.index}.scientificName`;
-      throw new HttpError(400, "unknown_species", `${field}: “${name}” is not in the species list.${hint}`, { field, suggestions });
+      throw new HttpError(400, "unknown_species", `${field}: “${name}” is not in the species list.${hint}`, {
+        field,
+        suggestions,
+      });
     }
     res.json(outcome.result);
   });

@@ -24,7 +24,11 @@ async function complianceFor(req: Request, transferId: string) {
   // An override answers a verdict that is not clear; once clear, there is nothing to show.
   const override = result.verdict === "clear" ? null : await currentOverride(em, transfer);
   const abilities = {
-    override: canOverrideCompliance(actor, role) && transfer.status === "awaiting_receiver" && result.verdict !== "clear" && !override,
+    override:
+      canOverrideCompliance(actor, role) &&
+      transfer.status === "awaiting_receiver" &&
+      result.verdict !== "clear" &&
+      !override,
     attachDocuments: canAttachDocuments(role, transfer.status as TransferStatus),
     readDocuments: canReadTransferDocuments(role),
   };
@@ -55,7 +59,12 @@ export function transferComplianceRouter(): Router {
   });
 
   router.delete("/:id/documents/:documentId", async (req, res) => {
-    await detachDocument({ em: req.em, actor: currentUser(req), transferId: idParam(req), documentId: idParam(req, "documentId") });
+    await detachDocument({
+      em: req.em,
+      actor: currentUser(req),
+      transferId: idParam(req),
+      documentId: idParam(req, "documentId"),
+    });
     res.status(204).end();
   });
 

@@ -16,8 +16,16 @@ export function directoryRouter(): Router {
   });
 
   router.get("/organizations", async (req, res) => {
-    const orgs = await req.em.find(OrganizationSchema, { kind: { $ne: "courier_service" } }, { orderBy: { name: "asc" } });
-    const members = await req.em.find(UserSchema, { role: "member", disabled: false, organization: { $in: orgs.map((o) => o.id) } }, { orderBy: { displayName: "asc" } });
+    const orgs = await req.em.find(
+      OrganizationSchema,
+      { kind: { $ne: "courier_service" } },
+      { orderBy: { name: "asc" } },
+    );
+    const members = await req.em.find(
+      UserSchema,
+      { role: "member", disabled: false, organization: { $in: orgs.map((o) => o.id) } },
+      { orderBy: { displayName: "asc" } },
+    );
     const organizations: DirectoryOrganizationDto[] = orgs.map((o) => ({
       id: o.id,
       name: o.name,
@@ -26,14 +34,24 @@ export function directoryRouter(): Router {
       city: o.city,
       state: o.state as UsState,
       zip: o.zip,
-      contacts: members.filter((m) => m.organization?.id === o.id).map((m) => ({ id: m.id, displayName: m.displayName, email: m.email })),
+      contacts: members
+        .filter((m) => m.organization?.id === o.id)
+        .map((m) => ({ id: m.id, displayName: m.displayName, email: m.email })),
     }));
     res.json({ organizations });
   });
 
   router.get("/couriers", async (req, res) => {
-    const couriers = await req.em.find(UserSchema, { role: "courier", disabled: false }, { populate: ["organization"], orderBy: { displayName: "asc" } });
-    const list: DirectoryCourierDto[] = couriers.map((c) => ({ id: c.id, displayName: c.displayName, organizationName: c.organization?.getEntity()?.name ?? null }));
+    const couriers = await req.em.find(
+      UserSchema,
+      { role: "courier", disabled: false },
+      { populate: ["organization"], orderBy: { displayName: "asc" } },
+    );
+    const list: DirectoryCourierDto[] = couriers.map((c) => ({
+      id: c.id,
+      displayName: c.displayName,
+      organizationName: c.organization?.getEntity()?.name ?? null,
+    }));
     res.json({ couriers: list });
   });
   return router;

@@ -28,35 +28,63 @@ afterAll(async () => {
 
 const ascii = (text: string) => Buffer.from(text, "latin1");
 /** Minimal files: the signatures of ISO 32000-1 §7.5.2 (PDF), ITU T.81 (JPEG SOI + APP0) and ISO/IEC 15948 §5.2 (PNG) [published]. */
-const PDF = Buffer.concat([ascii("%PDF-1.7\n%\xe2\xe3\xcf\xd3\n1 0 obj\n<< /Type /Catalog >>\nendobj\n"), ascii("%%EOF\n")]);
+const PDF = Buffer.concat([
+  ascii("%PDF-1.7\n%\xe2\xe3\xcf\xd3\n1 0 obj\n<< /Type /Catalog >>\nendobj\n"),
+  ascii("%%EOF\n"),
+]);
 const JPEG = Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0xff, 0xd9]);
-const PNG = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d, 0x49, 0x48, 0x44, 0x52]);
+const PNG = Buffer.from([
+  0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d, 0x49, 0x48, 0x44, 0x52,
+]);
 const HTML = ascii("<html><body><script>alert(1)</script></body></html>");
 const sha256 = (bytes: Buffer) => createHash("sha256").update(bytes).digest("hex");
 
 function permitBody(over: Record<string, unknown> = {}) {
   return {
-    kind: "state_import_permit", jurisdiction: "OR", number: `DEMO-OR-${Math.random().toString(36).slice(2, 8)}`, holderName: "Demo Keepers",
-    speciesCovered: ["Pantherophis guttatus"], validFrom: "2026-01-01", validTo: "2027-12-31", issuedOn: "2026-01-01",
-    veterinarianName: null, veterinarianAccredited: null, inspectionDate: null, statements: [], animalsCovered: [], ...over,
+    kind: "state_import_permit",
+    jurisdiction: "OR",
+    number: `DEMO-OR-${Math.random().toString(36).slice(2, 8)}`,
+    holderName: "Demo Keepers",
+    speciesCovered: ["Pantherophis guttatus"],
+    validFrom: "2026-01-01",
+    validTo: "2027-12-31",
+    issuedOn: "2026-01-01",
+    veterinarianName: null,
+    veterinarianAccredited: null,
+    inspectionDate: null,
+    statements: [],
+    animalsCovered: [],
+    ...over,
   };
 }
 
 const upload = (client: Client, documentId: string, body: Buffer, contentType: string, fileName?: string) => {
-  const req = client.agent.post(`/api/documents/${documentId}/scans`).set("X-CSRF-Token", client.csrf).set("Content-Type", contentType);
+  const req = client.agent
+    .post(`/api/documents/${documentId}/scans`)
+    .set("X-CSRF-Token", client.csrf)
+    .set("Content-Type", contentType);
   return (fileName ? req.set("X-File-Name", encodeURIComponent(fileName)) : req).send(body);
 };
 
 /** Every object in the fake bucket, read through the real SDK. */
 async function storedKeys(): Promise<string[]> {
-  const client = new S3Client({ endpoint: s3.endpoint, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
+  const client = new S3Client({
+    endpoint: s3.endpoint,
+    region: "us-east-1",
+    forcePathStyle: true,
+    credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" },
+  });
   const listed = await client.send(new ListObjectsV2Command({ Bucket: BUCKET }));
   client.destroy();
   return (listed.Contents ?? []).map((o) => o.Key ?? "").sort();
 }
 
 const scanRows = async (documentId: string) =>
-  (await em().getConnection().execute<{ n: number }[]>("SELECT count(*)::int AS n FROM document_scan WHERE document_id = ?", [documentId]))[0]!.n;
+  (
+    await em()
+      .getConnection()
+      .execute<{ n: number }[]>("SELECT count(*)::int AS n FROM document_scan WHERE document_id = ?", [documentId])
+  )[0]!.n;
 
 describe("permits and certificates", () => {
   let holder: Client;
@@ -67,11 +95,19 @@ describe("permits and certificates", () => {
   it("a member records one for the organisation; the shared schema's checks answer 400 with the field", async () => {
     const created = await holder.post("/api/documents", permitBody());
     expect(created.status, JSON.stringify(created.body)).toBe(201);
-    expect(created.body.document).toMatchObject({ kind: "state_import_permit", jurisdiction: "OR", abilities: { edit: true, upload: true, readScans: true }, scans: [] });
+    expect(created.body.document).toMatchObject({
+      kind: "state_import_permit",
+      jurisdiction: "OR",
+      abilities: { edit: true, upload: true, readScans: true },
+      scans: [],
+    });
     // [practice] a CVI without its issue date and veterinarian is no certificate
     const cvi = await holder.post("/api/documents", permitBody({ kind: "cvi", issuedOn: null }));
     expect([cvi.status, cvi.body.error.field]).toEqual([400, "issuedOn"]);
-    const backwards = await holder.post("/api/documents", permitBody({ validFrom: "2027-01-01", validTo: "2026-01-01" }));
+    const backwards = await holder.post(
+      "/api/documents",
+      permitBody({ validFrom: "2027-01-01", validTo: "2026-01-01" }),
+    );
     expect([backwards.status, backwards.body.error.field]).toEqual([400, "validTo"]);
     const list = await holder.get("/api/documents");
     expect(list.body.documents.map((d: { id: string }) => d.id)).toContain(created.body.document.id);
@@ -102,16 +138,24 @@ describe("scans in S3", () => {
     // [published] FIPS 180-4 SHA-256, as computed by Node's crypto
     const res = await upload(holder, documentId, PDF, "application/octet-stream", "../../etc/permit scan.pdf");
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body.scan).toMatchObject({ contentType: "application/pdf", sizeBytes: PDF.length, sha256: sha256(PDF), originalName: "permit scan.pdf" });
+    expect(res.body.scan).toMatchObject({
+      contentType: "application/pdf",
+      sizeBytes: PDF.length,
+      sha256: sha256(PDF),
+      originalName: "permit scan.pdf",
+    });
     const keys = await storedKeys();
     expect(keys.filter((k) => k.startsWith(`documents/${documentId}/`))).toHaveLength(1);
     expect(keys.join(" ")).not.toContain("permit scan");
 
-    const download = await holder.agent.get(res.body.scan.downloadUrl).buffer(true).parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on("data", (c: Buffer) => chunks.push(c));
-      r.on("end", () => done(null, Buffer.concat(chunks)));
-    });
+    const download = await holder.agent
+      .get(res.body.scan.downloadUrl)
+      .buffer(true)
+      .parse((r, done) => {
+        const chunks: Buffer[] = [];
+        r.on("data", (c: Buffer) => chunks.push(c));
+        r.on("end", () => done(null, Buffer.concat(chunks)));
+      });
     expect(download.status).toBe(200);
     expect(Buffer.compare(download.body as Buffer, PDF)).toBe(0);
     expect(download.headers["content-type"]).toBe("application/pdf");
@@ -123,7 +167,10 @@ describe("scans in S3", () => {
 
   it("decides the type by the bytes: a PNG declared as PDF is a PNG, a JPEG is a JPEG", async () => {
     // [published] PNG and JPEG signatures (ISO/IEC 15948 §5.2; ITU T.81 SOI marker)
-    expect((await upload(holder, documentId, PNG, "application/pdf")).body.scan).toMatchObject({ contentType: "image/png", originalName: "scan.png" });
+    expect((await upload(holder, documentId, PNG, "application/pdf")).body.scan).toMatchObject({
+      contentType: "image/png",
+      originalName: "scan.png",
+    });
     expect((await upload(holder, documentId, JPEG, "image/jpeg")).body.scan.contentType).toBe("image/jpeg");
   });
 
@@ -150,7 +197,9 @@ describe("scans in S3", () => {
     try {
       const res = await upload(holder, documentId, PDF, "application/pdf");
       expect(res.status).toBe(503);
-      expect(res.body.error.message).toBe("File storage is not answering right now; nothing was saved. Try again in a minute.");
+      expect(res.body.error.message).toBe(
+        "File storage is not answering right now; nothing was saved. Try again in a minute.",
+      );
       expect(await scanRows(documentId)).toBe(rows);
     } finally {
       s3 = await startS3Fake({ port, directory, bucket: BUCKET });
@@ -173,7 +222,16 @@ describe("scans in S3", () => {
     failing.flush = async () => {
       throw new Error("the database went away");
     };
-    await expect(uploadScan({ em: failing, storage: recording, actor, documentId: doc.body.document.id, body: PDF, fileName: undefined })).rejects.toThrow("the database went away");
+    await expect(
+      uploadScan({
+        em: failing,
+        storage: recording,
+        actor,
+        documentId: doc.body.document.id,
+        body: PDF,
+        fileName: undefined,
+      }),
+    ).rejects.toThrow("the database went away");
     expect(calls).toHaveLength(2);
     expect(calls[1]).toBe(calls[0]!.replace("put", "delete"));
     expect((await storedKeys()).filter((k) => k.startsWith(`documents/${doc.body.document.id}/`))).toEqual([]);
@@ -192,23 +250,36 @@ describe("who sees a document", () => {
   beforeAll(async () => {
     // Couriers assigned while the transfer waits for the receiver: no "ready to ship" gate is involved.
     cast = await buildTransfer(em(), { status: "awaiting_receiver" });
-    await assignLegs({ em: em(), actor: await actorOf(em(), cast.sender), transferId: cast.transfer.id, input: { legs: [{ courierId: cast.couriers[0]!.id }] } });
+    await assignLegs({
+      em: em(),
+      actor: await actorOf(em(), cast.sender),
+      transferId: cast.transfer.id,
+      input: { legs: [{ courierId: cast.couriers[0]!.id }] },
+    });
     sender = await signIn(t.app, cast.sender.email);
     receiver = await signIn(t.app, cast.receiver.email);
     courier = await signIn(t.app, cast.couriers[0]!.email);
     stranger = await signIn(t.app, (await buildUser(em(), { organization: await buildOrganization(em()) })).email);
-    documentId = (await sender.post("/api/documents", permitBody({ kind: "export_permit", jurisdiction: "TN", speciesCovered: ["Pantherophis guttatus"] }))).body.document.id;
+    documentId = (
+      await sender.post(
+        "/api/documents",
+        permitBody({ kind: "export_permit", jurisdiction: "TN", speciesCovered: ["Pantherophis guttatus"] }),
+      )
+    ).body.document.id;
     scanUrl = (await upload(sender, documentId, PDF, "application/pdf")).body.scan.downloadUrl;
   });
 
   it("the other party and the courier do not see it until a transfer they share uses it; strangers never", async () => {
-    for (const client of [receiver, courier, stranger]) expect((await client.get(`/api/documents/${documentId}`)).status).toBe(404);
+    for (const client of [receiver, courier, stranger])
+      expect((await client.get(`/api/documents/${documentId}`)).status).toBe(404);
     expect((await receiver.get(scanUrl)).status).toBe(404);
     // Only the holding organisation attaches its own documents.
     expect((await receiver.post(`/api/transfers/${cast.transfer.id}/documents`, { documentId })).status).toBe(404);
     const attached = await sender.post(`/api/transfers/${cast.transfer.id}/documents`, { documentId });
     expect(attached.status).toBe(201);
-    expect(attached.body.documents).toEqual([expect.objectContaining({ id: documentId, attached: true, holderSide: "sender" })]);
+    expect(attached.body.documents).toEqual([
+      expect.objectContaining({ id: documentId, attached: true, holderSide: "sender" }),
+    ]);
 
     const seen = await receiver.get(`/api/documents/${documentId}`);
     expect(seen.status).toBe(200);
@@ -220,7 +291,12 @@ describe("who sees a document", () => {
     // The courier reads the manifest entry, not the record's details or the scans.
     const carried = await courier.get(`/api/documents?transferId=${cast.transfer.id}`);
     expect(carried.status).toBe(200);
-    expect(carried.body.documents[0]).toMatchObject({ id: documentId, kind: "export_permit", details: null, scans: null });
+    expect(carried.body.documents[0]).toMatchObject({
+      id: documentId,
+      kind: "export_permit",
+      details: null,
+      scans: null,
+    });
     expect((await courier.get(scanUrl)).status).toBe(403);
 
     expect((await stranger.get(`/api/documents/${documentId}`)).status).toBe(404);

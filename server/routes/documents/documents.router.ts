@@ -11,7 +11,12 @@ import { parse } from "../../http/validate";
 import { canHoldDocuments, documentAbilities } from "../../policies/document.policy";
 import { presentDocument, presentScan } from "../../presenters/document.presenter";
 import {
-  createDocument, documentsForTransfer, loadDocumentForActor, scansOf, updateDocument, uploadScan,
+  createDocument,
+  documentsForTransfer,
+  loadDocumentForActor,
+  scansOf,
+  updateDocument,
+  uploadScan,
 } from "../../services/compliance/documents";
 import { scanBody } from "./scan-upload";
 
@@ -30,7 +35,11 @@ export function documentsRouter(ctx: AppContext): Router {
       return;
     }
     if (!canHoldDocuments(actor)) throw forbidden("Permits and certificates belong to a keeper organisation.");
-    const docs = await req.em.find(PermitDocumentSchema, { organization: actor.organization!.id }, { populate: ["organization"], orderBy: { validTo: "asc nulls last", createdAt: "desc" } });
+    const docs = await req.em.find(
+      PermitDocumentSchema,
+      { organization: actor.organization!.id },
+      { populate: ["organization"], orderBy: { validTo: "asc nulls last", createdAt: "desc" } },
+    );
     const scans = await scansOf(req.em, docs);
     res.json({ documents: docs.map((doc) => presentDocument(doc, "holder", scans.get(doc.id) ?? [])) });
   });
@@ -49,21 +58,34 @@ export function documentsRouter(ctx: AppContext): Router {
   });
 
   router.patch("/:id", async (req, res) => {
-    const doc = await updateDocument({ em: req.em, actor: currentUser(req), documentId: idParam(req), patch: req.body });
+    const doc = await updateDocument({
+      em: req.em,
+      actor: currentUser(req),
+      documentId: idParam(req),
+      patch: req.body,
+    });
     await req.em.populate(doc, ["organization"]);
     res.json({ document: presentDocument(doc, "holder", (await scansOf(req.em, [doc])).get(doc.id) ?? []) });
   });
 
   router.post("/:id/scans", scanBody, async (req, res) => {
     const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
-    const scan = await uploadScan({ em: req.em, storage: storageFor(ctx.env), actor: currentUser(req), documentId: idParam(req), body, fileName: req.header("X-File-Name") });
+    const scan = await uploadScan({
+      em: req.em,
+      storage: storageFor(ctx.env),
+      actor: currentUser(req),
+      documentId: idParam(req),
+      body,
+      fileName: req.header("X-File-Name"),
+    });
     res.status(201).json({ scan: presentScan(scan) });
   });
 
   // Streamed as an attachment in a sandbox: a scan is never rendered as a page of ours.
   router.get("/:id/scans/:scanId", async (req, res) => {
     const { doc, viewer } = await loadDocumentForActor(req.em, currentUser(req), idParam(req));
-    if (!documentAbilities(viewer).readScans) throw forbidden("Couriers see the document list for the manifest, not the scans.");
+    if (!documentAbilities(viewer).readScans)
+      throw forbidden("Couriers see the document list for the manifest, not the scans.");
     const scan = await req.em.findOne(DocumentScanSchema, { id: idParam(req, "scanId"), document: doc.id });
     if (!scan) throw notFound("That scan");
     const object = await storageFor(ctx.env).getObjectStream(scan.storageKey);

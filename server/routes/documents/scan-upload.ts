@@ -17,7 +17,13 @@ const raw = express.raw({ type: SCAN_UPLOAD_TYPES, limit: LIMITS.uploadBytesMax 
 export const scanBody: RequestHandler = (req, res, next) =>
   raw(req, res, (err?: { type?: string }) => {
     if (err?.type === "entity.too.large") {
-      return next(new HttpError(413, "too_large", `The file is larger than ${LIMITS.uploadBytesMax / (1024 * 1024)} MB. Scan it at a lower resolution or split it.`));
+      return next(
+        new HttpError(
+          413,
+          "too_large",
+          `The file is larger than ${LIMITS.uploadBytesMax / (1024 * 1024)} MB. Scan it at a lower resolution or split it.`,
+        ),
+      );
     }
     next(err);
   });

@@ -20,7 +20,10 @@ describe("GET /api/health", () => {
   it("answers 503 with db down when PostgreSQL is unreachable, and the process stays up", async () => {
     const t = await createTestApp();
     // Port 9 (discard) on loopback: nothing listens, connections are refused.
-    const deadPool = new pg.Pool({ connectionString: "postgres://hatchway@127.0.0.1:9/none", connectionTimeoutMillis: 1000 });
+    const deadPool = new pg.Pool({
+      connectionString: "postgres://hatchway@127.0.0.1:9/none",
+      connectionTimeoutMillis: 1000,
+    });
     const app = createApp({ ...t.ctx, pool: deadPool });
     try {
       const user = await buildUser(t.orm.em.fork());

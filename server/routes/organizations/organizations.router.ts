@@ -19,7 +19,13 @@ export function organizationsRouter(): Router {
 
   router.post("/", async (req, res) => {
     const input = parse(organizationInputSchema, req.body);
-    const org = req.em.create(OrganizationSchema, { name: input.name, kind: input.kind, ...input.address, phone: input.phone, email: input.email });
+    const org = req.em.create(OrganizationSchema, {
+      name: input.name,
+      kind: input.kind,
+      ...input.address,
+      phone: input.phone,
+      email: input.email,
+    });
     await req.em.flush();
     res.status(201).json({ organization: presentOrganization(org) });
   });

@@ -17,7 +17,8 @@ export function neutraliseCell(value: string): string {
 
 async function entriesFor(req: Request): Promise<RegisterEntryDto[]> {
   const actor = currentUser(req);
-  if (actor.role !== "member" || !actor.organization) throw forbidden("The collection register belongs to a keeper organisation.");
+  if (actor.role !== "member" || !actor.organization)
+    throw forbidden("The collection register belongs to a keeper organisation.");
   const q = parse(registerQuerySchema, req.query);
   const where: Record<string, unknown> = { organization: actor.organization.id };
   if (q.taxonId) where.taxon = q.taxonId;
@@ -25,9 +26,18 @@ async function entriesFor(req: Request): Promise<RegisterEntryDto[]> {
   if (q.from || q.to) where.dateAcquired = { ...(q.from ? { $gte: q.from } : {}), ...(q.to ? { $lte: q.to } : {}) };
   if (q.q) {
     const like = `%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    where.$or = [{ transferNumber: { $ilike: like } }, { sourceOrganizationName: { $ilike: like } }, { identifier: { $ilike: like } }, { taxon: { scientificName: { $ilike: like } } }];
+    where.$or = [
+      { transferNumber: { $ilike: like } },
+      { sourceOrganizationName: { $ilike: like } },
+      { identifier: { $ilike: like } },
+      { taxon: { scientificName: { $ilike: like } } },
+    ];
   }
-  const rows = await req.em.find(RegisterEntrySchema, where, { populate: ["taxon"], orderBy: { dateAcquired: "desc", createdAt: "desc" }, limit: 5000 });
+  const rows = await req.em.find(RegisterEntrySchema, where, {
+    populate: ["taxon"],
+    orderBy: { dateAcquired: "desc", createdAt: "desc" },
+    limit: 5000,
+  });
   return rows.map((r) => ({
     id: r.id,
     taxon: presentTaxon(r.taxon.getEntity()),
@@ -56,12 +66,37 @@ export function registerCsvRoute(): Router {
   const router = Router();
   router.get("/register.csv", requireUser, async (req, res) => {
     const entries = await entriesFor(req);
-    const header = ["Date acquired", "Scientific name", "Common name", "Sex", "Count", "Identifier", "Source organisation", "Transfer", "Condition on arrival", "Notes"];
+    const header = [
+      "Date acquired",
+      "Scientific name",
+      "Common name",
+      "Sex",
+      "Count",
+      "Identifier",
+      "Source organisation",
+      "Transfer",
+      "Condition on arrival",
+      "Notes",
+    ];
     const rows = entries.map((e) =>
-      [e.dateAcquired, e.taxon.scientificName, e.taxon.commonName ?? "", e.sex, String(e.count), e.identifier ?? "", e.sourceOrganization, e.transferNumber, e.condition, e.notes ?? ""].map(neutraliseCell),
+      [
+        e.dateAcquired,
+        e.taxon.scientificName,
+        e.taxon.commonName ?? "",
+        e.sex,
+        String(e.count),
+        e.identifier ?? "",
+        e.sourceOrganization,
+        e.transferNumber,
+        e.condition,
+        e.notes ?? "",
+      ].map(neutraliseCell),
     );
     res.setHeader("Content-Type", "text/csv; charset=utf-8");
-    res.setHeader("Content-Disposition", `attachment; filename="collection-register-${new Date().toISOString().slice(0, 10)}.csv"`);
+    res.setHeader(
+      "Content-Disposition",
+      `attachment; filename="collection-register-${new Date().toISOString().slice(0, 10)}.csv"`,
+    );
     res.setHeader("X-Content-Type-Options", "nosniff");
     res.send(stringify([header, ...rows]));
   });

@@ -10,7 +10,11 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const top = async (q: string) => (await client.get(`/api/taxa?q=${encodeURIComponent(q)}`)).body.taxa as { scientificName: string; matched: { kind: string; name: string } }[];
+const top = async (q: string) =>
+  (await client.get(`/api/taxa?q=${encodeURIComponent(q)}`)).body.taxa as {
+    scientificName: string;
+    matched: { kind: string; name: string };
+  }[];
 
 // Names from general herpetological usage [practice]; the leopard tortoise's move from
 // Geochelone to Stigmochelys is why 9 CFR 74.1 still prints "Geochelone pardalis" [published].

@@ -17,7 +17,9 @@ const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
  */
 export async function searchTaxa(ctx: AppContext, q: string, limit = 20): Promise<TaxonSearchHitDto[]> {
   const needle = q.toLowerCase();
-  const { rows } = await ctx.pool.query<TaxonRow & { synonyms: string[]; matched_name: string; matched_kind: "scientific" | "common" | "synonym" }>(
+  const { rows } = await ctx.pool.query<
+    TaxonRow & { synonyms: string[]; matched_name: string; matched_kind: "scientific" | "common" | "synonym" }
+  >(
     `SELECT t.id, t.rank, t.scientific_name, t.common_names, t.synonyms, t.venomous, t.profile_group, best.name AS matched_name, best.kind AS matched_kind
        FROM (
          SELECT DISTINCT ON (tn.taxon_id) tn.taxon_id, tn.name, tn.kind,

@@ -33,7 +33,16 @@ beforeEach(async () => {
   await clearCache();
 });
 
-const CONTRACT_KEYS = ["verdict", "advice", "ambientF", "insideF", "hoursOutsideRange", "hours", "suggestedDeparture", "sources"] as const;
+const CONTRACT_KEYS = [
+  "verdict",
+  "advice",
+  "ambientF",
+  "insideF",
+  "hoursOutsideRange",
+  "hours",
+  "suggestedDeparture",
+  "sources",
+] as const;
 
 /** The issue's public contract, exactly: the extra keys are ours, these must parse strictly. */
 function expectContract(body: Record<string, unknown>) {
@@ -50,7 +59,15 @@ function utcDaysAhead(days: number, hourUtc: number): string {
 }
 
 // A well-filled EPS box: 2 kg of contents barely cools in the hour of a short hand delivery.
-const box = { wall: "eps", wallThicknessMm: 38, lengthMm: 400, widthMm: 300, heightMm: 300, contentsG: 2000, pack: "none" };
+const box = {
+  wall: "eps",
+  wallThicknessMm: 38,
+  lengthMm: 400,
+  widthMm: 300,
+  heightMm: 300,
+  contentsG: 2000,
+  pack: "none",
+};
 // Real positions, invented trips: Honolulu → Hilo and Fairbanks → Anchorage by overnight air.
 const HONOLULU = { lat: 21.31, lon: -157.86 };
 const HILO = { lat: 19.72, lon: -155.08 };
@@ -60,7 +77,15 @@ const ANCHORAGE = { lat: 61.22, lon: -149.9 };
 /** Knoxville → Maryville, TN by hand (about 30 km): outside held at `tempF` all the way. */
 function steady(tempF: number, profile = "temperate_snake") {
   const departAt = "2027-03-09T15:00:00Z";
-  return { origin: { zip: "37917" }, destination: { zip: "37801" }, departAt, mode: "hand_delivery", profile, box, ambientOverrideF: [{ at: departAt, tempF }] };
+  return {
+    origin: { zip: "37917" },
+    destination: { zip: "37801" },
+    departAt,
+    mode: "hand_delivery",
+    profile,
+    box,
+    ambientOverrideF: [{ at: departAt, tempF }],
+  };
 }
 
 async function assess(body: unknown, client = member) {
@@ -88,19 +113,30 @@ describe("POST /api/temperature/assess with the caller's own outside temperature
 
   it("amphibian guideline edges: 79 °F as packed, 80 °F a cold pack", async () => {
     // [practice] REPTILES magazine shipping guide, amphibians: 70–79 °F none, 80–91 °F cold pack
-    expect(await assess(steady(79, "frog_toad"))).toMatchObject({ verdict: "ship", advice: { code: "ship_as_planned" } });
-    expect(await assess(steady(80, "frog_toad"))).toMatchObject({ verdict: "pack", advice: { code: "add_cold_pack", pack: "cold" } });
+    expect(await assess(steady(79, "frog_toad"))).toMatchObject({
+      verdict: "ship",
+      advice: { code: "ship_as_planned" },
+    });
+    expect(await assess(steady(80, "frog_toad"))).toMatchObject({
+      verdict: "pack",
+      advice: { code: "add_cold_pack", pack: "cold" },
+    });
   });
 
   it("finds the profile by scientific name, synonym or genus, and suggests names for a typo", async () => {
     const body = steady(75);
     const { profile: _profile, ...withoutProfile } = body;
     // [published] Elaphe guttata is the older name of the corn snake, Pantherophis guttatus (Reptile Database)
-    expect((await assess({ ...withoutProfile, scientificName: "Elaphe guttata" })).profile.group).toBe("temperate_snake");
+    expect((await assess({ ...withoutProfile, scientificName: "Elaphe guttata" })).profile.group).toBe(
+      "temperate_snake",
+    );
     // [published] Ambystoma is a salamander genus (class Amphibia): a genus-level entry takes the
     // narrowest amphibian range, tropical frogs 65–80 °F among the guideline defaults
     expect((await assess({ ...withoutProfile, scientificName: "Ambystoma" })).profile.group).toBe("tropical_frog");
-    const typo = await member.post("/api/temperature/assess", { ...withoutProfile, scientificName: "Pantherophis gutatus" });
+    const typo = await member.post("/api/temperature/assess", {
+      ...withoutProfile,
+      scientificName: "Pantherophis gutatus",
+    });
     expect(typo.status).toBe(400);
     expect(typo.body.error.field).toBe("scientificName");
     expect(typo.body.error.suggestions).toContain("Pantherophis guttatus");
@@ -110,16 +146,29 @@ describe("POST /api/temperature/assess with the caller's own outside temperature
     const unknownZip = await member.post("/api/temperature/assess", { ...steady(70), origin: { zip: "00000" } });
     expect(unknownZip.status).toBe(400);
     expect(unknownZip.body.error.field).toBe("origin.zip");
-    const both = await member.post("/api/temperature/assess", { ...steady(70), scientificName: "Pantherophis guttatus" });
+    const both = await member.post("/api/temperature/assess", {
+      ...steady(70),
+      scientificName: "Pantherophis guttatus",
+    });
     expect(both.body.error.field).toBe("profile");
-    expect((await member.post("/api/temperature/assess", { ...steady(70), box: { ...box, wallThicknessMm: 200 } })).body.error.field).toBe("box.wallThicknessMm");
+    expect(
+      (await member.post("/api/temperature/assess", { ...steady(70), box: { ...box, wallThicknessMm: 200 } })).body
+        .error.field,
+    ).toBe("box.wallThicknessMm");
     expect((await courier.post("/api/temperature/assess", steady(70))).status).toBe(403);
     expect((await (await anonymousClient(t.app)).post("/api/temperature/assess", steady(70))).status).toBe(401);
   });
 });
 
 describe("POST /api/temperature/assess with forecasts from the Open-Meteo fake", () => {
-  const trip = (origin: object, destination: object, departAt: string) => ({ origin, destination, departAt, mode: "overnight_air", profile: "temperate_snake", box });
+  const trip = (origin: object, destination: object, departAt: string) => ({
+    origin,
+    destination,
+    departAt,
+    mode: "overnight_air",
+    profile: "temperate_snake",
+    box,
+  });
 
   it("a heat wave in Hawaii: decoded from FlatBuffers by the real client, above 95 °F, postpone", async () => {
     fake.setScenario("heat_wave");
@@ -132,7 +181,9 @@ describe("POST /api/temperature/assess with forecasts from the Open-Meteo fake",
     // the fake's value at its 0.05° grid cell for the cached position (21.31, −157.86)
     const hour = body.hours[3];
     expect(hour.place).toBe("21.310, -157.860");
-    const expectedF = celsiusToFahrenheit(fakeTemperatureC(21.3, -157.85, Date.parse(hour.at) / 1000, SCENARIO_SHIFT_C.heat_wave));
+    const expectedF = celsiusToFahrenheit(
+      fakeTemperatureC(21.3, -157.85, Date.parse(hour.at) / 1000, SCENARIO_SHIFT_C.heat_wave),
+    );
     expect(hour.ambientF).toBeCloseTo(expectedF, 0);
     expect(body.sources.map((s: { id: string }) => s.id)).toContain("forecast");
   });
@@ -167,7 +218,13 @@ describe("POST /api/temperature/assess with forecasts from the Open-Meteo fake",
     fake.setScenario(scenario, { garbage });
     const body = await assess(trip(HONOLULU, HILO, utcDaysAhead(2, 22)));
     expectContract(body);
-    expect(body).toMatchObject({ verdict: "forecast_unavailable", advice: { code: "retry_when_forecast_available", pack: null }, ambientF: null, insideF: null, suggestedDeparture: null });
+    expect(body).toMatchObject({
+      verdict: "forecast_unavailable",
+      advice: { code: "retry_when_forecast_available", pack: null },
+      ambientF: null,
+      insideF: null,
+      suggestedDeparture: null,
+    });
     expect(body.hours.every((h: { ambientF: number | null }) => h.ambientF === null)).toBe(true);
     expect(body.sources.find((s: { id: string }) => s.id === "forecast-unavailable")?.title).toMatch(why);
     // nothing bad is cached
@@ -193,7 +250,12 @@ describe("GET /api/transfers/:id/temperature", () => {
     expect(["ship", "pack", "hold", "do_not_ship"]).toContain(res.body.verdict);
     // the factory's box: two corn snakes of unrecorded weight (a temperate colubrid)
     expect(res.body.boxes).toHaveLength(1);
-    expect(res.body.boxes[0]).toMatchObject({ label: "Box A", plannedPack: "none", contentsG: 300, profile: { group: "temperate_snake" } });
+    expect(res.body.boxes[0]).toMatchObject({
+      label: "Box A",
+      plannedPack: "none",
+      contentsG: 300,
+      profile: { group: "temperate_snake" },
+    });
     expect(res.body.profile.group).toBe("temperate_snake");
     expect(res.body.hours[0].place).toBe("Knoxville, TN");
     expect(res.body.hours.at(-1).place).toBe("Eugene, OR");
@@ -210,7 +272,10 @@ describe("GET /api/transfers/:id/temperature", () => {
     const cast = await buildTransfer(em(), { status: "awaiting_receiver" });
     fake.setScenario("outage");
     const res = await (await signIn(t.app, cast.receiver.email)).get(`/api/transfers/${cast.transfer.id}/temperature`);
-    expect(res.body).toMatchObject({ verdict: "forecast_unavailable", advice: { code: "retry_when_forecast_available" } });
+    expect(res.body).toMatchObject({
+      verdict: "forecast_unavailable",
+      advice: { code: "retry_when_forecast_available" },
+    });
     expect(res.body.boxes[0].verdict).toBe("forecast_unavailable");
   });
 });
@@ -225,7 +290,10 @@ describe("the ready-to-ship gate", () => {
     const refused = await receiver.post(path, { to: "ready" });
     expect(refused.status).toBe(409);
     expect(refused.body.error.message).toMatch(/override/);
-    expect(refused.body.error.temperature).toMatchObject({ verdict: "forecast_unavailable", boxes: [{ verdict: "forecast_unavailable" }] });
+    expect(refused.body.error.temperature).toMatchObject({
+      verdict: "forecast_unavailable",
+      boxes: [{ verdict: "forecast_unavailable" }],
+    });
 
     const unexplained = await receiver.post(path, { to: "ready", override: true });
     expect(unexplained.status).toBe(400);
@@ -240,12 +308,22 @@ describe("the ready-to-ship gate", () => {
     expect(log.intact).toBe(true);
     const kinds = log.entries.map((e: { kind: string }) => e.kind);
     expect(kinds.slice(-2)).toEqual(["override", "status_change"]);
-    expect(log.entries.at(-2).payload).toEqual({ gate: "temperature", verdict: "forecast_unavailable", advice: "retry_when_forecast_available", reason });
+    expect(log.entries.at(-2).payload).toEqual({
+      gate: "temperature",
+      verdict: "forecast_unavailable",
+      advice: "retry_when_forecast_available",
+      reason,
+    });
     expect(log.entries.at(-2).actor.id).toBeTruthy();
 
     // refusals change nothing; the confirmation keeps the check it was made on
-    const checks = await t.ctx.pool.query("SELECT mark, verdict, transfer_version FROM temperature_check WHERE transfer_id = $1", [cast.transfer.id]);
-    expect(checks.rows).toEqual([{ mark: "gate", verdict: "forecast_unavailable", transfer_version: cast.transfer.version }]);
+    const checks = await t.ctx.pool.query(
+      "SELECT mark, verdict, transfer_version FROM temperature_check WHERE transfer_id = $1",
+      [cast.transfer.id],
+    );
+    expect(checks.rows).toEqual([
+      { mark: "gate", verdict: "forecast_unavailable", transfer_version: cast.transfer.version },
+    ]);
     const shown = (await receiver.get(`/api/transfers/${cast.transfer.id}/temperature`)).body;
     expect(shown.checks).toMatchObject([{ mark: "gate", verdict: "forecast_unavailable" }]);
   });
@@ -261,18 +339,37 @@ describe("temperature profiles", () => {
     const snake = list.body.profiles.find((p: { group: string }) => p.group === "temperate_snake");
     // [practice] REPTILES magazine shipping guide, reptiles: do not ship below 38 °F, heat pack below 70 °F,
     // hold from 92 °F, do not ship above 95 °F; no cold-pack band
-    expect(snake).toMatchObject({ bandsF: { doNotShipBelow: 38, heatPackBelow: 70, coldPackFrom: null, holdFrom: 92, doNotShipAbove: 95 }, edited: false, updatedBy: null });
+    expect(snake).toMatchObject({
+      bandsF: { doNotShipBelow: 38, heatPackBelow: 70, coldPackFrom: null, holdFrom: 92, doNotShipAbove: 95 },
+      edited: false,
+      updatedBy: null,
+    });
     const frog = list.body.profiles.find((p: { group: string }) => p.group === "frog_toad");
     // [practice] same guide, amphibians: heat pack below 60 °F, cold pack from 80 °F
     expect(frog.bandsF).toMatchObject({ heatPackBelow: 60, coldPackFrom: 80 });
 
-    const { group: _group, guidelineDefault, edited: _edited, updatedAt: _updatedAt, updatedBy: _updatedBy, ...data } = snake;
-    const put = (client: Client, body: unknown, group = "temperate_snake") => client.agent.put(`/api/temperature/profiles/${group}`).set("X-CSRF-Token", client.csrf).send(body as object);
+    const {
+      group: _group,
+      guidelineDefault,
+      edited: _edited,
+      updatedAt: _updatedAt,
+      updatedBy: _updatedBy,
+      ...data
+    } = snake;
+    const put = (client: Client, body: unknown, group = "temperate_snake") =>
+      client.agent
+        .put(`/api/temperature/profiles/${group}`)
+        .set("X-CSRF-Token", client.csrf)
+        .send(body as object);
     expect((await put(member, data)).status).toBe(403);
 
     const edited = await put(admin, { ...data, safeTransitF: { min: 58, max: 84 } });
     expect(edited.status, JSON.stringify(edited.body)).toBe(200);
-    expect(edited.body.profile).toMatchObject({ safeTransitF: { min: 58, max: 84 }, edited: true, guidelineDefault: { safeTransitF: guidelineDefault.safeTransitF } });
+    expect(edited.body.profile).toMatchObject({
+      safeTransitF: { min: 58, max: 84 },
+      edited: true,
+      guidelineDefault: { safeTransitF: guidelineDefault.safeTransitF },
+    });
     expect(edited.body.profile.updatedBy.displayName).toBeTruthy();
     // the edit is what the next verdict uses
     expect((await assess(steady(75))).profile.safeTransitF).toEqual({ min: 58, max: 84 });
@@ -292,12 +389,22 @@ describe("temperature profiles", () => {
 
 describe("POST /api/dev/weather-scenario (demo)", () => {
   it("admins switch the fake's scenario, which empties the forecast cache", async () => {
-    await assess({ origin: HONOLULU, destination: HILO, departAt: utcDaysAhead(2, 22), mode: "overnight_air", profile: "temperate_snake", box });
+    await assess({
+      origin: HONOLULU,
+      destination: HILO,
+      departAt: utcDaysAhead(2, 22),
+      mode: "overnight_air",
+      profile: "temperate_snake",
+      box,
+    });
     const switched = await admin.post("/api/dev/weather-scenario", { scenario: "heat_wave" });
     expect(switched.status, JSON.stringify(switched.body)).toBe(200);
     expect(fake.scenario).toBe("heat_wave");
     expect((await t.ctx.pool.query("SELECT count(*)::int AS n FROM forecast_hour")).rows[0].n).toBe(0);
-    expect((await admin.get("/api/dev/weather-scenario")).body).toMatchObject({ scenario: "heat_wave", scenarios: expect.arrayContaining(["cold_snap"]) });
+    expect((await admin.get("/api/dev/weather-scenario")).body).toMatchObject({
+      scenario: "heat_wave",
+      scenarios: expect.arrayContaining(["cold_snap"]),
+    });
     expect((await admin.post("/api/dev/weather-scenario", { scenario: "blizzard" })).body.error.field).toBe("scenario");
     expect((await member.post("/api/dev/weather-scenario", { scenario: "normal" })).status).toBe(403);
   });

@@ -37,13 +37,19 @@ function registerTemperatureHooks(): void {
 }
 
 const groupParam = z.enum(PROFILE_GROUPS, { message: "Name a temperature profile group" });
-const scenarioSchema = z.strictObject({ scenario: z.string().regex(/^[a-z_]{1,40}$/, "a scenario name such as heat_wave") });
+const scenarioSchema = z.strictObject({
+  scenario: z.string().regex(/^[a-z_]{1,40}$/, "a scenario name such as heat_wave"),
+});
 const FAKE_CONTROL_TIMEOUT_MS = 3000;
 
 /** Asks the weather fake's control endpoint; a fake that does not answer is a 503. */
 async function callWeatherFake(controlUrl: string, init: RequestInit = {}): Promise<Response> {
   try {
-    return await fetch(controlUrl, { ...init, redirect: "error", signal: AbortSignal.timeout(FAKE_CONTROL_TIMEOUT_MS) });
+    return await fetch(controlUrl, {
+      ...init,
+      redirect: "error",
+      signal: AbortSignal.timeout(FAKE_CONTROL_TIMEOUT_MS),
+    });
   } catch (err) {
     throw unavailable(`The local weather fake is not answering (${(err as Error).message}).`);
   }
@@ -73,29 +79,43 @@ export function temperatureRouter(ctx: AppContext): Router {
     res.json(presentTransferTemperature(transfer, report, alert, checks));
   });
 
-  router.post("/temperature/assess", requirePolicy(canPlanTrips, "Planning a trip is for keepers and administrators."), async (req, res) => {
-    const input = parse(whatIfInputSchema, req.body);
-    const taxon = input.scientificName ? await findTaxonByName(req.em, input.scientificName) : null;
-    if (input.scientificName && !taxon) {
-      const suggestions = (await searchTaxa(ctx, input.scientificName, 5)).map((t) => t.scientificName);
-      throw badRequest(`scientificName: ${input.scientificName} is not in the species list`, { field: "scientificName", suggestions });
-    }
-    res.json(await assessWhatIf({ em: req.em, source, input, taxon, nowMs: Date.now() }));
-  });
+  router.post(
+    "/temperature/assess",
+    requirePolicy(canPlanTrips, "Planning a trip is for keepers and administrators."),
+    async (req, res) => {
+      const input = parse(whatIfInputSchema, req.body);
+      const taxon = input.scientificName ? await findTaxonByName(req.em, input.scientificName) : null;
+      if (input.scientificName && !taxon) {
+        const suggestions = (await searchTaxa(ctx, input.scientificName, 5)).map((t) => t.scientificName);
+        throw badRequest(`scientificName: ${input.scientificName} is not in the species list`, {
+          field: "scientificName",
+          suggestions,
+        });
+      }
+      res.json(await assessWhatIf({ em: req.em, source, input, taxon, nowMs: Date.now() }));
+    },
+  );
 
   router.get("/temperature/profiles", requireUser, async (req, res) => {
     const [profiles, rows] = await Promise.all([loadProfiles(req.em), loadProfileRows(req.em)]);
-    res.json({ profiles: PROFILE_GROUPS.map((g) => presentProfile(g, profiles[g], rows.get(g))), abilities: { edit: canEditTemperatureProfiles(currentUser(req)) } });
+    res.json({
+      profiles: PROFILE_GROUPS.map((g) => presentProfile(g, profiles[g], rows.get(g))),
+      abilities: { edit: canEditTemperatureProfiles(currentUser(req)) },
+    });
   });
 
-  router.put("/temperature/profiles/:group", requirePolicy(canEditTemperatureProfiles, "Only an administrator can edit temperature profiles."), async (req, res) => {
-    const group = parse(groupParam, req.params.group);
-    const data = parse(profileDataSchema, req.body);
-    await saveProfile({ em: req.em, actor: currentUser(req), input: { group, data } });
-    const em = req.em.fork();
-    const [profiles, rows] = await Promise.all([loadProfiles(em), loadProfileRows(em)]);
-    res.json({ profile: presentProfile(group, profiles[group], rows.get(group)) });
-  });
+  router.put(
+    "/temperature/profiles/:group",
+    requirePolicy(canEditTemperatureProfiles, "Only an administrator can edit temperature profiles."),
+    async (req, res) => {
+      const group = parse(groupParam, req.params.group);
+      const data = parse(profileDataSchema, req.body);
+      await saveProfile({ em: req.em, actor: currentUser(req), input: { group, data } });
+      const em = req.em.fork();
+      const [profiles, rows] = await Promise.all([loadProfiles(em), loadProfileRows(em)]);
+      res.json({ profile: presentProfile(group, profiles[group], rows.get(group)) });
+    },
+  );
 
   router.get("/dev/weather-scenario", requirePolicy(canSwitchWeatherScenario), async (_req, res) => {
     const response = await callWeatherFake(weatherFakeUrl(ctx));
@@ -106,9 +126,16 @@ export function temperatureRouter(ctx: AppContext): Router {
   router.post("/dev/weather-scenario", requirePolicy(canSwitchWeatherScenario), async (req, res) => {
     const controlUrl = weatherFakeUrl(ctx);
     const { scenario } = parse(scenarioSchema, req.body);
-    const response = await callWeatherFake(controlUrl, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ scenario }) });
+    const response = await callWeatherFake(controlUrl, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ scenario }),
+    });
     const body = (await response.json().catch(() => ({}))) as { scenario?: string; reason?: string };
-    if (!response.ok) throw badRequest(`scenario: ${body.reason ?? `the weather fake refused it (${response.status})`}`, { field: "scenario" });
+    if (!response.ok)
+      throw badRequest(`scenario: ${body.reason ?? `the weather fake refused it (${response.status})`}`, {
+        field: "scenario",
+      });
     // What the cache holds came from the old scenario; the demo should show the new one at once.
     await ctx.pool.query("DELETE FROM forecast_hour");
     res.json({ scenario: body.scenario ?? scenario });

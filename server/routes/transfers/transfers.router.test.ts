@@ -1,7 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
 import { createTestApp, signIn, type Client, type TestApp } from "../../../tests/support/app";
-import { buildOrganization, buildTransfer, buildUser, transferInput, type TransferCast } from "../../../tests/factories";
+import {
+  buildOrganization,
+  buildTransfer,
+  buildUser,
+  transferInput,
+  type TransferCast,
+} from "../../../tests/factories";
 
 let t: TestApp;
 const em = () => t.orm.em.fork();
@@ -10,7 +16,11 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-function handoffBody(transfer: { containers: { id: string; sealNumber: string | null }[] }, index: number, over: Record<string, unknown> = {}) {
+function handoffBody(
+  transfer: { containers: { id: string; sealNumber: string | null }[] },
+  index: number,
+  over: Record<string, unknown> = {},
+) {
   return {
     handoffIndex: index,
     boxesCounted: transfer.containers.length,
@@ -29,7 +39,12 @@ describe("drafting", () => {
     const sender = await buildUser(em());
     const receiverOrg = await buildOrganization(em(), { kind: "zoo", state: "OR", zip: "97401" });
     const client = await signIn(t.app, sender.email);
-    const input = await transferInput(em(), receiverOrg.id, { animals: [{ taxon: "Pantherophis guttatus", count: 3, sex: "female", box: "A" }, { taxon: "Terrapene carolina", count: 1, box: "B", lengthMm: 120 }] });
+    const input = await transferInput(em(), receiverOrg.id, {
+      animals: [
+        { taxon: "Pantherophis guttatus", count: 3, sex: "female", box: "A" },
+        { taxon: "Terrapene carolina", count: 1, box: "B", lengthMm: 120 },
+      ],
+    });
     const res = await client.post("/api/transfers", input);
     expect(res.status).toBe(201);
     const tr = res.body.transfer;
@@ -37,7 +52,10 @@ describe("drafting", () => {
     expect(tr.status).toBe("draft");
     expect(tr.viewerRole).toBe("sender");
     expect(tr.containers).toHaveLength(2);
-    expect(tr.animals.map((a: { taxon: { scientificName: string } }) => a.taxon.scientificName)).toEqual(["Pantherophis guttatus", "Terrapene carolina"]);
+    expect(tr.animals.map((a: { taxon: { scientificName: string } }) => a.taxon.scientificName)).toEqual([
+      "Pantherophis guttatus",
+      "Terrapene carolina",
+    ]);
     expect(tr.animals[0].containerId).toBe(tr.containers[0].id);
     // zipcodes package: 37917 is Knoxville, TN; tz-lookup puts it in America/New_York [published data].
     expect(tr.origin).toMatchObject({ city: "Knoxville", state: "TN", timeZone: "America/New_York" });
@@ -58,7 +76,12 @@ describe("drafting", () => {
   });
 
   it("two species in one box is a finding that blocks sending it for confirmation", async () => {
-    const cast = await buildTransfer(em(), { animals: [{ taxon: "Pantherophis guttatus", box: "A" }, { taxon: "Lampropeltis triangulum", box: "A" }] });
+    const cast = await buildTransfer(em(), {
+      animals: [
+        { taxon: "Pantherophis guttatus", box: "A" },
+        { taxon: "Lampropeltis triangulum", box: "A" },
+      ],
+    });
     const client = await signIn(t.app, cast.sender.email);
     const view = await client.get(`/api/transfers/${cast.transfer.id}`);
     expect(view.body.transfer.packingFindings[0]).toMatchObject({ code: "mixed_species" });
@@ -82,9 +105,14 @@ describe("bad input is a 400 that changes nothing", () => {
   it.each([0, -1, 1.5, "1e309", "3", null])("count %s", async (count) => {
     const before = (await client.get("/api/transfers")).body.transfers.length;
     // 1e309 overflows to Infinity when parsed: send it as raw JSON text.
-    const res = count === "1e309"
-      ? await client.agent.post("/api/transfers").set("X-CSRF-Token", client.csrf).set("Content-Type", "application/json").send(JSON.stringify(withAnimal({ count: 7 })).replace('"count":7', '"count":1e309'))
-      : await client.post("/api/transfers", withAnimal({ count }));
+    const res =
+      count === "1e309"
+        ? await client.agent
+            .post("/api/transfers")
+            .set("X-CSRF-Token", client.csrf)
+            .set("Content-Type", "application/json")
+            .send(JSON.stringify(withAnimal({ count: 7 })).replace('"count":7', '"count":1e309'))
+        : await client.post("/api/transfers", withAnimal({ count }));
     expect(res.status).toBe(400);
     expect(res.body.error.field).toBe("animals.0.count");
     expect((await client.get("/api/transfers")).body.transfers.length).toBe(before);
@@ -98,7 +126,11 @@ describe("bad input is a 400 that changes nothing", () => {
 
   it.each([
     ["arrival before departure", { expectedArrivalAt: "2020-01-01T00:00:00Z" }, "expectedArrivalAt"],
-    ["a departure in the past", { plannedDepartureAt: "2021-03-01T09:00:00-05:00", expectedArrivalAt: "2021-03-02T09:00:00-05:00" }, "plannedDepartureAt"],
+    [
+      "a departure in the past",
+      { plannedDepartureAt: "2021-03-01T09:00:00-05:00", expectedArrivalAt: "2021-03-02T09:00:00-05:00" },
+      "plannedDepartureAt",
+    ],
     ["an impossible date", { plannedDepartureAt: "2027-02-30T09:00:00Z" }, "plannedDepartureAt"],
     ["a date without an offset", { plannedDepartureAt: "2027-03-01T09:00:00" }, "plannedDepartureAt"],
   ])("%s", async (_name, patch, field) => {
@@ -126,24 +158,52 @@ describe("life cycle through the API", () => {
     const r = await signIn(t.app, cast.receiver.email);
     const id = cast.transfer.id;
     expect((await s.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(409); // skipping a step
-    expect((await s.post(`/api/transfers/${id}/transition`, { to: "awaiting_receiver" })).body.transfer.status).toBe("awaiting_receiver");
+    expect((await s.post(`/api/transfers/${id}/transition`, { to: "awaiting_receiver" })).body.transfer.status).toBe(
+      "awaiting_receiver",
+    );
     expect((await s.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(403); // the sender cannot confirm
     // No weather service in this test: the receiver confirms past "forecast unavailable" with a reason.
     expect((await r.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(409);
-    expect((await r.post(`/api/transfers/${id}/transition`, { to: "ready", override: true, reason: "Checked the forecast by phone" })).body.transfer.status).toBe("ready");
+    expect(
+      (
+        await r.post(`/api/transfers/${id}/transition`, {
+          to: "ready",
+          override: true,
+          reason: "Checked the forecast by phone",
+        })
+      ).body.transfer.status,
+    ).toBe("ready");
     expect((await r.post(`/api/transfers/${id}/transition`, { to: "in_transit" })).status).toBe(409); // only a pickup does that
-    const legs = await s.agent.put(`/api/transfers/${id}/legs`).set("X-CSRF-Token", s.csrf).send({ legs: [{ courierId: cast.couriers[0]!.id }] });
+    const legs = await s.agent
+      .put(`/api/transfers/${id}/legs`)
+      .set("X-CSRF-Token", s.csrf)
+      .send({ legs: [{ courierId: cast.couriers[0]!.id }] });
     expect(legs.status).toBe(200);
     const c = await signIn(t.app, cast.couriers[0]!.email);
     const tr = legs.body.transfer;
-    const pickup = await c.post(`/api/transfers/${id}/handoffs`, handoffBody(tr, 0)).set("Idempotency-Key", randomUUID());
+    const pickup = await c
+      .post(`/api/transfers/${id}/handoffs`, handoffBody(tr, 0))
+      .set("Idempotency-Key", randomUUID());
     expect(pickup.status).toBe(201);
     expect(pickup.body.transfer.status).toBe("in_transit");
-    const delivery = await r.post(`/api/transfers/${id}/handoffs`, handoffBody(tr, 1)).set("Idempotency-Key", randomUUID());
+    const delivery = await r
+      .post(`/api/transfers/${id}/handoffs`, handoffBody(tr, 1))
+      .set("Idempotency-Key", randomUUID());
     expect(delivery.body.transfer.status).toBe("delivered");
     const animals = delivery.body.transfer.animals;
     const checkIn = await r
-      .post(`/api/transfers/${id}/check-in`, { items: animals.map((a: { id: string; count: number }) => ({ animalId: a.id, arrivedWell: a.count, arrivedProblem: 0, deadOnArrival: 0, missing: 0 })), extras: [], signedName: "Receiver", acknowledged: true })
+      .post(`/api/transfers/${id}/check-in`, {
+        items: animals.map((a: { id: string; count: number }) => ({
+          animalId: a.id,
+          arrivedWell: a.count,
+          arrivedProblem: 0,
+          deadOnArrival: 0,
+          missing: 0,
+        })),
+        extras: [],
+        signedName: "Receiver",
+        acknowledged: true,
+      })
       .set("Idempotency-Key", randomUUID());
     expect(checkIn.status).toBe(201);
     expect(checkIn.body.transfer.status).toBe("checked_in");
@@ -152,14 +212,33 @@ describe("life cycle through the API", () => {
     const log = await r.get(`/api/transfers/${id}/custody`);
     expect(log.body.intact).toBe(true);
     // The other party hears of each step that needs them, through the outbox.
-    const mail = await t.ctx.pool.query<{ topic: string; to_address: string }>("SELECT topic, to_address FROM outbox_message WHERE subject LIKE $1 ORDER BY created_at", [`%${cast.transfer.number}%`]);
+    const mail = await t.ctx.pool.query<{ topic: string; to_address: string }>(
+      "SELECT topic, to_address FROM outbox_message WHERE subject LIKE $1 ORDER BY created_at",
+      [`%${cast.transfer.number}%`],
+    );
     expect(mail.rows.map((m) => m.topic)).toEqual([
-      "transfer.awaiting_confirmation", "transfer.confirmed", "transfer.picked_up", "transfer.picked_up", "transfer.delivered", "transfer.checked_in",
+      "transfer.awaiting_confirmation",
+      "transfer.confirmed",
+      "transfer.picked_up",
+      "transfer.picked_up",
+      "transfer.delivered",
+      "transfer.checked_in",
     ]);
     expect(mail.rows[0]!.to_address).toBe(cast.receiver.email);
     expect(mail.rows[1]!.to_address).toBe(cast.sender.email);
     expect(log.body.entries.map((e: { kind: string }) => e.kind)).toEqual([
-      "created", "status_change", "override", "status_change", "couriers_assigned", "handoff", "status_change", "handoff", "status_change", "check_in", "status_change", "status_change",
+      "created",
+      "status_change",
+      "override",
+      "status_change",
+      "couriers_assigned",
+      "handoff",
+      "status_change",
+      "handoff",
+      "status_change",
+      "check_in",
+      "status_change",
+      "status_change",
     ]);
   });
 
@@ -167,10 +246,16 @@ describe("life cycle through the API", () => {
     const draft = await buildTransfer(em(), { status: "awaiting_receiver" });
     const s = await signIn(t.app, draft.sender.email);
     expect((await s.post(`/api/transfers/${draft.transfer.id}/transition`, { to: "cancelled" })).status).toBe(400);
-    expect((await s.post(`/api/transfers/${draft.transfer.id}/transition`, { to: "cancelled", reason: "Weather" })).body.transfer.status).toBe("cancelled");
+    expect(
+      (await s.post(`/api/transfers/${draft.transfer.id}/transition`, { to: "cancelled", reason: "Weather" })).body
+        .transfer.status,
+    ).toBe("cancelled");
     const moving = await buildTransfer(em(), { status: "in_transit" });
     const s2 = await signIn(t.app, moving.sender.email);
-    expect((await s2.post(`/api/transfers/${moving.transfer.id}/transition`, { to: "cancelled", reason: "Too late" })).status).toBe(409);
+    expect(
+      (await s2.post(`/api/transfers/${moving.transfer.id}/transition`, { to: "cancelled", reason: "Too late" }))
+        .status,
+    ).toBe(409);
   });
 
   it("an edit of the animals after confirmation sends it back to the receiver, and the edit is kept", async () => {
@@ -178,9 +263,25 @@ describe("life cycle through the API", () => {
     const s = await signIn(t.app, cast.sender.email);
     const before = (await s.get(`/api/transfers/${cast.transfer.id}`)).body.transfer;
     const animals = before.animals.map((a: Record<string, unknown> & { taxon: { id: string } }) => ({
-      id: a.id, taxonId: a.taxon.id, count: 1, sex: a.sex, origin: a.origin, containerKey: a.containerKey,
+      id: a.id,
+      taxonId: a.taxon.id,
+      count: 1,
+      sex: a.sex,
+      origin: a.origin,
+      containerKey: a.containerKey,
     }));
-    const containers = before.containers.map((c: Record<string, unknown>) => ({ id: c.id, key: c.key, label: c.label, lengthMm: c.lengthMm, widthMm: c.widthMm, heightMm: c.heightMm, wallMaterial: c.wallMaterial, wallThicknessMm: c.wallThicknessMm, pack: c.pack, sealNumber: c.sealNumber }));
+    const containers = before.containers.map((c: Record<string, unknown>) => ({
+      id: c.id,
+      key: c.key,
+      label: c.label,
+      lengthMm: c.lengthMm,
+      widthMm: c.widthMm,
+      heightMm: c.heightMm,
+      wallMaterial: c.wallMaterial,
+      wallThicknessMm: c.wallThicknessMm,
+      pack: c.pack,
+      sealNumber: c.sealNumber,
+    }));
     const res = await s.patch(`/api/transfers/${cast.transfer.id}`, { version: before.version, animals, containers });
     expect(res.status).toBe(200);
     expect(res.body.transfer.status).toBe("awaiting_receiver");
@@ -188,7 +289,9 @@ describe("life cycle through the API", () => {
     const stale = await s.patch(`/api/transfers/${cast.transfer.id}`, { version: before.version, handlingNotes: "x" });
     expect(stale.status).toBe(409);
     const changes = (await s.get(`/api/transfers/${cast.transfer.id}/changes`)).body.changes;
-    expect(changes).toContainEqual(expect.objectContaining({ field: "animals[Pantherophis guttatus].count", oldValue: 2, newValue: 1 }));
+    expect(changes).toContainEqual(
+      expect.objectContaining({ field: "animals[Pantherophis guttatus].count", oldValue: 2, newValue: 1 }),
+    );
   });
 });
 
@@ -228,38 +331,92 @@ describe("who sees and does what", () => {
   const EDIT = { sender: 200, receiver: 403, courier: 403, unassignedCourier: 404, otherOrganization: 404, admin: 403 };
   it.each(Object.entries(EDIT))("edit: %s → %i", async (who, status) => {
     const current = (await clients.sender!.get(`/api/transfers/${cast.transfer.id}`)).body.transfer;
-    const res = await clients[who]!.patch(`/api/transfers/${cast.transfer.id}`, { version: current.version, handlingNotes: `note by ${who}` });
+    const res = await clients[who]!.patch(`/api/transfers/${cast.transfer.id}`, {
+      version: current.version,
+      handlingNotes: `note by ${who}`,
+    });
     expect(res.status).toBe(status);
   });
 
-  const HANDOFF = { sender: 201, receiver: 403, courier: 201, unassignedCourier: 404, otherOrganization: 404, admin: 403 };
+  const HANDOFF = {
+    sender: 201,
+    receiver: 403,
+    courier: 201,
+    unassignedCourier: 404,
+    otherOrganization: 404,
+    admin: 403,
+  };
   it.each(Object.entries(HANDOFF))("hand off (pickup): %s → %i", async (who, status) => {
-    const fresh = await buildTransfer(em(), { status: "ready", sender: cast.sender, receiver: cast.receiver, couriers: cast.couriers });
+    const fresh = await buildTransfer(em(), {
+      status: "ready",
+      sender: cast.sender,
+      receiver: cast.receiver,
+      couriers: cast.couriers,
+    });
     const view = (await clients.sender!.get(`/api/transfers/${fresh.transfer.id}`)).body.transfer;
-    const res = await clients[who]!.post(`/api/transfers/${fresh.transfer.id}/handoffs`, handoffBody(view, 0)).set("Idempotency-Key", randomUUID());
+    const res = await clients[who]!.post(`/api/transfers/${fresh.transfer.id}/handoffs`, handoffBody(view, 0)).set(
+      "Idempotency-Key",
+      randomUUID(),
+    );
     expect(res.status).toBe(status);
   });
 
-  const CHECK_IN = { sender: 403, receiver: 201, courier: 403, unassignedCourier: 404, otherOrganization: 404, admin: 403 };
+  const CHECK_IN = {
+    sender: 403,
+    receiver: 201,
+    courier: 403,
+    unassignedCourier: 404,
+    otherOrganization: 404,
+    admin: 403,
+  };
   it.each(Object.entries(CHECK_IN))("check in: %s → %i", async (who, status) => {
-    const fresh = await buildTransfer(em(), { status: "delivered", sender: cast.sender, receiver: cast.receiver, couriers: cast.couriers });
+    const fresh = await buildTransfer(em(), {
+      status: "delivered",
+      sender: cast.sender,
+      receiver: cast.receiver,
+      couriers: cast.couriers,
+    });
     const view = (await clients.sender!.get(`/api/transfers/${fresh.transfer.id}`)).body.transfer;
-    const body = { items: view.animals.map((a: { id: string; count: number }) => ({ animalId: a.id, arrivedWell: a.count, arrivedProblem: 0, deadOnArrival: 0, missing: 0 })), extras: [], signedName: "X", acknowledged: true };
-    const res = await clients[who]!.post(`/api/transfers/${fresh.transfer.id}/check-in`, body).set("Idempotency-Key", randomUUID());
+    const body = {
+      items: view.animals.map((a: { id: string; count: number }) => ({
+        animalId: a.id,
+        arrivedWell: a.count,
+        arrivedProblem: 0,
+        deadOnArrival: 0,
+        missing: 0,
+      })),
+      extras: [],
+      signedName: "X",
+      acknowledged: true,
+    };
+    const res = await clients[who]!.post(`/api/transfers/${fresh.transfer.id}/check-in`, body).set(
+      "Idempotency-Key",
+      randomUUID(),
+    );
     expect(res.status).toBe(status);
   });
 
   it("a courier taken off the transfer loses access on the next request", async () => {
-    const fresh = await buildTransfer(em(), { status: "ready", sender: cast.sender, receiver: cast.receiver, couriers: cast.couriers });
+    const fresh = await buildTransfer(em(), {
+      status: "ready",
+      sender: cast.sender,
+      receiver: cast.receiver,
+      couriers: cast.couriers,
+    });
     expect((await clients.courier!.get(`/api/transfers/${fresh.transfer.id}`)).status).toBe(200);
     const other = await buildUser(em(), { role: "courier" });
-    const res = await clients.sender!.agent.put(`/api/transfers/${fresh.transfer.id}/legs`).set("X-CSRF-Token", clients.sender!.csrf).send({ legs: [{ courierId: other.id }] });
+    const res = await clients
+      .sender!.agent.put(`/api/transfers/${fresh.transfer.id}/legs`)
+      .set("X-CSRF-Token", clients.sender!.csrf)
+      .send({ legs: [{ courierId: other.id }] });
     expect(res.status).toBe(200);
     expect((await clients.courier!.get(`/api/transfers/${fresh.transfer.id}`)).status).toBe(404);
   });
 
   it("lists show each caller only their own transfers", async () => {
-    const mine = (await clients.otherOrganization!.get("/api/transfers")).body.transfers.map((x: { id: string }) => x.id);
+    const mine = (await clients.otherOrganization!.get("/api/transfers")).body.transfers.map(
+      (x: { id: string }) => x.id,
+    );
     expect(mine).not.toContain(cast.transfer.id);
     const carried = (await clients.courier!.get("/api/transfers")).body.transfers.map((x: { id: string }) => x.id);
     expect(carried).toContain(cast.transfer.id);
@@ -273,7 +430,13 @@ describe("handoffs under pressure", () => {
     const cast = await buildTransfer(em(), { status: "ready" });
     const courier = await signIn(t.app, cast.couriers[0]!.email);
     const view = (await courier.get(`/api/transfers/${cast.transfer.id}`)).body.transfer;
-    const answers = await Promise.all(Array.from({ length: 20 }, () => courier.post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0)).set("Idempotency-Key", randomUUID())));
+    const answers = await Promise.all(
+      Array.from({ length: 20 }, () =>
+        courier
+          .post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0))
+          .set("Idempotency-Key", randomUUID()),
+      ),
+    );
     const statuses = answers.map((a) => a.status).sort();
     expect(statuses.filter((s) => s === 201)).toHaveLength(1);
     expect(statuses.filter((s) => s === 409)).toHaveLength(19);
@@ -287,13 +450,21 @@ describe("handoffs under pressure", () => {
     const courier = await signIn(t.app, cast.couriers[0]!.email);
     const view = (await courier.get(`/api/transfers/${cast.transfer.id}`)).body.transfer;
     const key = randomUUID();
-    const answers = await Promise.all(Array.from({ length: 20 }, () => courier.post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0)).set("Idempotency-Key", key)));
+    const answers = await Promise.all(
+      Array.from({ length: 20 }, () =>
+        courier.post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0)).set("Idempotency-Key", key),
+      ),
+    );
     expect(answers.filter((a) => a.status === 201).length).toBeGreaterThanOrEqual(1);
     expect(answers.every((a) => a.status === 201 || a.status === 409)).toBe(true);
-    const replay = await courier.post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0)).set("Idempotency-Key", key);
+    const replay = await courier
+      .post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0))
+      .set("Idempotency-Key", key);
     expect(replay.status).toBe(201);
     expect(replay.headers["idempotent-replayed"]).toBe("true");
-    const other = await courier.post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0, { boxTempF: 60 })).set("Idempotency-Key", key);
+    const other = await courier
+      .post(`/api/transfers/${cast.transfer.id}/handoffs`, handoffBody(view, 0, { boxTempF: 60 }))
+      .set("Idempotency-Key", key);
     expect(other.status).toBe(422);
     const log = (await courier.get(`/api/transfers/${cast.transfer.id}/custody`)).body;
     expect(log.entries.filter((e: { kind: string }) => e.kind === "handoff")).toHaveLength(1);
@@ -308,16 +479,29 @@ describe("handoffs under pressure", () => {
   });
 
   it("a short box count and a broken seal are recorded as found", async () => {
-    const cast = await buildTransfer(em(), { status: "ready", animals: [{ taxon: "Pogona vitticeps", box: "A" }, { taxon: "Pogona vitticeps", box: "B" }] });
+    const cast = await buildTransfer(em(), {
+      status: "ready",
+      animals: [
+        { taxon: "Pogona vitticeps", box: "A" },
+        { taxon: "Pogona vitticeps", box: "B" },
+      ],
+    });
     const courier = await signIn(t.app, cast.couriers[0]!.email);
     const view = (await courier.get(`/api/transfers/${cast.transfer.id}`)).body.transfer;
-    const body = handoffBody(view, 0, { boxesCounted: 1, seals: [{ containerId: view.containers[0].id, sealNumber: "WRONG-9", intact: false }] });
-    const res = await courier.post(`/api/transfers/${cast.transfer.id}/handoffs`, body).set("Idempotency-Key", randomUUID());
+    const body = handoffBody(view, 0, {
+      boxesCounted: 1,
+      seals: [{ containerId: view.containers[0].id, sealNumber: "WRONG-9", intact: false }],
+    });
+    const res = await courier
+      .post(`/api/transfers/${cast.transfer.id}/handoffs`, body)
+      .set("Idempotency-Key", randomUUID());
     expect(res.status).toBe(201);
     const h = res.body.transfer.handoffs[0];
     expect(h).toMatchObject({ boxesExpected: 2, boxesCounted: 1, kind: "pickup" });
     expect(h.seals[0]).toMatchObject({ sealNumber: "WRONG-9", expected: "SEAL-1", intact: false });
-    const entry = (await courier.get(`/api/transfers/${cast.transfer.id}/custody`)).body.entries.find((e: { kind: string }) => e.kind === "handoff");
+    const entry = (await courier.get(`/api/transfers/${cast.transfer.id}/custody`)).body.entries.find(
+      (e: { kind: string }) => e.kind === "handoff",
+    );
     expect(entry.payload).toMatchObject({ boxCountMatches: false, sealsUnchecked: [view.containers[1].id] });
     expect(entry.actor.id).toBe(cast.couriers[0]!.id);
   });
@@ -326,10 +510,16 @@ describe("handoffs under pressure", () => {
 describe("the custody log in the database", () => {
   it("refuses UPDATE, DELETE and TRUNCATE, and a transfer with entries cannot be deleted", async () => {
     const cast = await buildTransfer(em(), { status: "awaiting_receiver" });
-    await expect(t.ctx.pool.query("UPDATE custody_entry SET actor_name = 'x' WHERE transfer_id = $1", [cast.transfer.id])).rejects.toThrow(/append-only/);
-    await expect(t.ctx.pool.query("DELETE FROM custody_entry WHERE transfer_id = $1", [cast.transfer.id])).rejects.toThrow(/append-only/);
+    await expect(
+      t.ctx.pool.query("UPDATE custody_entry SET actor_name = 'x' WHERE transfer_id = $1", [cast.transfer.id]),
+    ).rejects.toThrow(/append-only/);
+    await expect(
+      t.ctx.pool.query("DELETE FROM custody_entry WHERE transfer_id = $1", [cast.transfer.id]),
+    ).rejects.toThrow(/append-only/);
     await expect(t.ctx.pool.query("TRUNCATE custody_entry CASCADE")).rejects.toThrow(/append-only/);
-    await expect(t.ctx.pool.query("DELETE FROM transfer WHERE id = $1", [cast.transfer.id])).rejects.toThrow(/foreign key|violates/);
+    await expect(t.ctx.pool.query("DELETE FROM transfer WHERE id = $1", [cast.transfer.id])).rejects.toThrow(
+      /foreign key|violates/,
+    );
   });
 
   it("tampering that slips past the triggers is detected by the chain", async () => {
@@ -339,7 +529,10 @@ describe("the custody log in the database", () => {
     const client = await t.ctx.pool.connect();
     try {
       await client.query("ALTER TABLE custody_entry DISABLE TRIGGER custody_entry_no_update_delete");
-      await client.query("UPDATE custody_entry SET payload = jsonb_set(payload, '{to}', '\"closed\"') WHERE transfer_id = $1 AND seq = 2", [cast.transfer.id]);
+      await client.query(
+        "UPDATE custody_entry SET payload = jsonb_set(payload, '{to}', '\"closed\"') WHERE transfer_id = $1 AND seq = 2",
+        [cast.transfer.id],
+      );
     } finally {
       await client.query("ALTER TABLE custody_entry ENABLE TRIGGER custody_entry_no_update_delete");
       client.release();

@@ -1,7 +1,15 @@
 import { Router, type Request } from "express";
 import {
-  checkInInputSchema, createTransferSchema, handoffInputSchema, legsInputSchema, messageInputSchema, transferListQuerySchema, transferPatchSchema, transitionSchema,
-  type MessageDto, type TransferChangeDto,
+  checkInInputSchema,
+  createTransferSchema,
+  handoffInputSchema,
+  legsInputSchema,
+  messageInputSchema,
+  transferListQuerySchema,
+  transferPatchSchema,
+  transitionSchema,
+  type MessageDto,
+  type TransferChangeDto,
 } from "@shared/schemas/transfer";
 import { idSchema } from "@shared/schemas/common";
 import type { Actor } from "../../auth/actor";
@@ -65,7 +73,8 @@ export function transfersRouter(): Router {
     const id = idParam(req);
     const actor = currentUser(req);
     const { role, facts } = await loadTransferForActor(req.em, id, actor);
-    if (!transferAbilities(actor, role, facts).edit) throw forbidden("Only the sender can edit this transfer, and only before the animals leave.");
+    if (!transferAbilities(actor, role, facts).edit)
+      throw forbidden("Only the sender can edit this transfer, and only before the animals leave.");
     const input = parse(transferPatchSchema, req.body);
     await updateTransfer({ em: req.em.fork(), actor, transferId: id, input });
     req.ctx.kickOutbox();
@@ -75,7 +84,12 @@ export function transfersRouter(): Router {
   router.post("/:id/transition", async (req, res) => {
     const id = idParam(req);
     const input = parse(transitionSchema, req.body);
-    await transitionTransfer({ em: req.em, actor: currentUser(req), transferId: id, input: { to: input.to, reason: input.reason ?? null, override: input.override } });
+    await transitionTransfer({
+      em: req.em,
+      actor: currentUser(req),
+      transferId: id,
+      input: { to: input.to, reason: input.reason ?? null, override: input.override },
+    });
     req.ctx.kickOutbox();
     res.json({ transfer: await presentForActor(req, id) });
   });
@@ -111,7 +125,10 @@ export function transfersRouter(): Router {
   });
 
   // The paper that travels with the animals: parties and the assigned courier (admins read).
-  for (const [file, render, what] of [["manifest.pdf", renderManifestPdf, "manifest"], ["labels.pdf", renderLabelsPdf, "box-labels"]] as const) {
+  for (const [file, render, what] of [
+    ["manifest.pdf", renderManifestPdf, "manifest"],
+    ["labels.pdf", renderLabelsPdf, "box-labels"],
+  ] as const) {
     router.get(`/:id/${file}`, async (req, res) => {
       const id = idParam(req);
       const actor = currentUser(req);
@@ -120,7 +137,10 @@ export function transfersRouter(): Router {
       const bytes = await render(presentManifestInput(view, await manifestExtras(req.ctx, id), new Date()));
       const name = `${view.t.number}-${what}.pdf`;
       res.setHeader("Content-Type", "application/pdf");
-      res.setHeader("Content-Disposition", `${req.query.download === "1" ? "attachment" : "inline"}; filename="${name}"`);
+      res.setHeader(
+        "Content-Disposition",
+        `${req.query.download === "1" ? "attachment" : "inline"}; filename="${name}"`,
+      );
       res.setHeader("X-Content-Type-Options", "nosniff");
       res.send(Buffer.from(bytes));
     });
@@ -136,7 +156,11 @@ export function transfersRouter(): Router {
     const id = idParam(req);
     const { role } = await loadTransferForActor(req.em, id, currentUser(req));
     if (role === "courier") throw forbidden("The edit history is for the sender and the receiver.");
-    const rows = await req.em.find(TransferChangeSchema, { transfer: id }, { orderBy: { createdAt: "desc" }, populate: ["actor"] });
+    const rows = await req.em.find(
+      TransferChangeSchema,
+      { transfer: id },
+      { orderBy: { createdAt: "desc" }, populate: ["actor"] },
+    );
     const changes: TransferChangeDto[] = rows.map((c) => ({
       at: c.createdAt.toISOString(),
       actor: { id: c.actor.id, displayName: c.actor.getEntity().displayName },
@@ -151,7 +175,11 @@ export function transfersRouter(): Router {
     const id = idParam(req);
     const { role } = await loadTransferForActor(req.em, id, currentUser(req));
     if (role === "courier") throw forbidden("The discussion is between the sender and the receiver.");
-    const rows = await req.em.find(MessageSchema, { transfer: id }, { orderBy: { createdAt: "asc" }, populate: ["author", "author.organization"] });
+    const rows = await req.em.find(
+      MessageSchema,
+      { transfer: id },
+      { orderBy: { createdAt: "asc" }, populate: ["author", "author.organization"] },
+    );
     res.json({ messages: rows.map(presentMessage) });
   });
 
@@ -159,9 +187,14 @@ export function transfersRouter(): Router {
     const id = idParam(req);
     const actor = currentUser(req);
     const { transfer, role, facts } = await loadTransferForActor(req.em, id, actor);
-    if (!transferAbilities(actor, role, facts).discuss) throw forbidden("Only the sender and the receiver can write here.");
+    if (!transferAbilities(actor, role, facts).discuss)
+      throw forbidden("Only the sender and the receiver can write here.");
     const { body } = parse(messageInputSchema, req.body);
-    const message = req.em.create(MessageSchema, { transfer: transfer as Transfer, author: req.em.getReference(UserSchema, actor.id), body });
+    const message = req.em.create(MessageSchema, {
+      transfer: transfer as Transfer,
+      author: req.em.getReference(UserSchema, actor.id),
+      body,
+    });
     await req.em.flush();
     await req.em.populate(message, ["author", "author.organization"]);
     res.status(201).json({ message: presentMessage(message) });
@@ -170,9 +203,25 @@ export function transfersRouter(): Router {
   return router;
 }
 
-function presentMessage(m: { id: string; body: string; createdAt: Date; author: { getEntity(): { id: string; displayName: string; organization?: { getEntity?(): { name: string } } | null } } }): MessageDto {
+function presentMessage(m: {
+  id: string;
+  body: string;
+  createdAt: Date;
+  author: {
+    getEntity(): { id: string; displayName: string; organization?: { getEntity?(): { name: string } } | null };
+  };
+}): MessageDto {
   const author = m.author.getEntity();
-  return { id: m.id, author: { id: author.id, displayName: author.displayName, organizationName: author.organization?.getEntity?.()?.name ?? null }, body: m.body, at: m.createdAt.toISOString() };
+  return {
+    id: m.id,
+    author: {
+      id: author.id,
+      displayName: author.displayName,
+      organizationName: author.organization?.getEntity?.()?.name ?? null,
+    },
+    body: m.body,
+    at: m.createdAt.toISOString(),
+  };
 }
 
 export type { Actor };

@@ -57,12 +57,21 @@ describe("admin routes", () => {
 });
 
 describe("organisations", () => {
-  const valid = { name: "Cattail Pond Zoo", kind: "zoo", address: { street: "3 Reed Way", city: "Boise", state: "ID", zip: "83702" }, phone: "+1 208 555 0111", email: "keepers@cattail.example" };
+  const valid = {
+    name: "Cattail Pond Zoo",
+    kind: "zoo",
+    address: { street: "3 Reed Way", city: "Boise", state: "ID", zip: "83702" },
+    phone: "+1 208 555 0111",
+    email: "keepers@cattail.example",
+  };
 
   it("admin creates, lists and edits one", async () => {
     const created = await admin.post("/api/organizations", valid);
     expect(created.status).toBe(201);
-    expect(created.body.organization).toMatchObject({ name: "Cattail Pond Zoo", address: { state: "ID", zip: "83702" } });
+    expect(created.body.organization).toMatchObject({
+      name: "Cattail Pond Zoo",
+      address: { state: "ID", zip: "83702" },
+    });
     const id = created.body.organization.id;
     expect(id).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-7[0-9a-f]{3}-/); // UUID v7
     const list = await admin.get("/api/organizations");
@@ -90,7 +99,10 @@ describe("organisations", () => {
   });
 
   it("an unknown id is 404 and a malformed id is 400", async () => {
-    expect((await admin.patch("/api/organizations/0190a7d2-0000-7000-8000-000000000000", { phone: "+1 208 555 0199" })).status).toBe(404);
+    expect(
+      (await admin.patch("/api/organizations/0190a7d2-0000-7000-8000-000000000000", { phone: "+1 208 555 0199" }))
+        .status,
+    ).toBe(404);
     expect((await admin.patch("/api/organizations/1", { phone: "+1 208 555 0199" })).status).toBe(400);
   });
 });
@@ -98,9 +110,18 @@ describe("organisations", () => {
 describe("users", () => {
   it("an invitation mails a one-time link that sets the password", async () => {
     const org = await buildOrganization(em());
-    const res = await admin.post("/api/users", { email: "Wren.Hale@Example.test", displayName: "Wren Hale", role: "member", organizationId: org.id });
+    const res = await admin.post("/api/users", {
+      email: "Wren.Hale@Example.test",
+      displayName: "Wren Hale",
+      role: "member",
+      organizationId: org.id,
+    });
     expect(res.status).toBe(201);
-    expect(res.body.user).toMatchObject({ email: "Wren.Hale@Example.test", invitationPending: true, organization: { id: org.id } });
+    expect(res.body.user).toMatchObject({
+      email: "Wren.Hale@Example.test",
+      invitationPending: true,
+      organization: { id: org.id },
+    });
 
     // Not sent in the request: it waits in the outbox until the worker runs.
     expect(smtp.messages.find((m) => m.to.some((a) => a.toLowerCase() === "wren.hale@example.test"))).toBeUndefined();
@@ -112,15 +133,26 @@ describe("users", () => {
     const token = link![1]!;
 
     const anon = await anonymousClient(t.app);
-    expect((await anon.post("/api/auth/login", { email: "wren.hale@example.test", password: "a brand new password" })).status).toBe(401);
+    expect(
+      (await anon.post("/api/auth/login", { email: "wren.hale@example.test", password: "a brand new password" }))
+        .status,
+    ).toBe(401);
     expect((await anon.post("/api/auth/password", { token, password: "a brand new password" })).status).toBe(204);
     expect((await anon.post("/api/auth/password", { token, password: "another new password" })).status).toBe(400);
-    expect((await anon.post("/api/auth/login", { email: "wren.hale@example.test", password: "a brand new password" })).status).toBe(200);
+    expect(
+      (await anon.post("/api/auth/login", { email: "wren.hale@example.test", password: "a brand new password" }))
+        .status,
+    ).toBe(200);
   });
 
   it("refuses a second account for the same e-mail in another case", async () => {
     const existing = await buildUser(em());
-    const res = await admin.post("/api/users", { email: existing.email.toUpperCase(), displayName: "Dup", role: "courier", organizationId: null });
+    const res = await admin.post("/api/users", {
+      email: existing.email.toUpperCase(),
+      displayName: "Dup",
+      role: "courier",
+      organizationId: null,
+    });
     expect(res.status).toBe(409);
   });
 

@@ -37,17 +37,21 @@ export function usersRouter(ctx: AppContext): Router {
     if (!user) throw notFound("That user");
     const actor = currentUser(req);
     if (user.id === actor.id && (input.disabled === true || (input.role && input.role !== "admin"))) {
-      throw badRequest("You cannot disable yourself or remove your own admin role.", { field: input.disabled ? "disabled" : "role" });
+      throw badRequest("You cannot disable yourself or remove your own admin role.", {
+        field: input.disabled ? "disabled" : "role",
+      });
     }
     if (input.organizationId !== undefined) {
       const org = input.organizationId ? await req.em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
-      if (input.organizationId && !org) throw badRequest("organizationId: no such organisation", { field: "organizationId" });
+      if (input.organizationId && !org)
+        throw badRequest("organizationId: no such organisation", { field: "organizationId" });
       user.organization = org ? ref(org) : null;
     }
     if (input.displayName !== undefined) user.displayName = input.displayName;
     if (input.role !== undefined) user.role = input.role;
     if (input.disabled !== undefined) user.disabled = input.disabled;
-    if (user.role === "member" && !user.organization) throw badRequest("A member needs an organisation.", { field: "organizationId" });
+    if (user.role === "member" && !user.organization)
+      throw badRequest("A member needs an organisation.", { field: "organizationId" });
     await req.em.flush();
     const pending = await req.em.count(PasswordTokenSchema, { user, usedAt: null });
     res.json({ user: presentUserForAdmin(user, !user.passwordHash && pending > 0) });

@@ -1,6 +1,11 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Purpose, UsState } from "@shared/constants";
-import { evaluateCompliance, type EvaluationAnimal, type EvaluationDocument, type TransferFacts } from "@shared/compliance/evaluate";
+import {
+  evaluateCompliance,
+  type EvaluationAnimal,
+  type EvaluationDocument,
+  type TransferFacts,
+} from "@shared/compliance/evaluate";
 import type { HolderSide } from "@shared/compliance/rule";
 import type { EvaluateRequest, EvaluateResponse } from "@shared/compliance/schemas";
 import { STATE_TRANSIT_POLICIES } from "@shared/compliance/state-rules.demo";
@@ -20,7 +25,9 @@ export type OnFileDocument = { doc: PermitDocument; holderSide: HolderSide | und
  */
 export function shipDateOf(transfer: Pick<Transfer, "plannedDepartureAt" | "originTimeZone">): string {
   const departureMs = transfer.plannedDepartureAt.getTime();
-  return transfer.originTimeZone ? localDate(departureMs, transfer.originTimeZone) : transfer.plannedDepartureAt.toISOString().slice(0, 10);
+  return transfer.originTimeZone
+    ? localDate(departureMs, transfer.originTimeZone)
+    : transfer.plannedDepartureAt.toISOString().slice(0, 10);
 }
 
 /** The facts rules read from a stored transfer. A stored transfer names no transit states. */
@@ -43,10 +50,19 @@ export async function documentsOnFile(em: EntityManager, transfer: Transfer): Pr
   const senderId = transfer.senderOrganization.id;
   const receiverId = transfer.receiverOrganization.id;
   // One query after the other: inside the gate's transaction they share one connection.
-  const docs = await em.find(PermitDocumentSchema, { organization: { $in: [senderId, receiverId] } }, { orderBy: { createdAt: "asc", id: "asc" } });
-  const attachments = await em.execute<{ document_id: string }[]>("SELECT document_id FROM transfer_document WHERE transfer_id = ?", [transfer.id], "all");
+  const docs = await em.find(
+    PermitDocumentSchema,
+    { organization: { $in: [senderId, receiverId] } },
+    { orderBy: { createdAt: "asc", id: "asc" } },
+  );
+  const attachments = await em.execute<{ document_id: string }[]>(
+    "SELECT document_id FROM transfer_document WHERE transfer_id = ?",
+    [transfer.id],
+    "all",
+  );
   const attached = new Set(attachments.map((a) => a.document_id));
-  const sideOf = (orgId: string): HolderSide | undefined => (senderId === receiverId ? undefined : orgId === senderId ? "sender" : "receiver");
+  const sideOf = (orgId: string): HolderSide | undefined =>
+    senderId === receiverId ? undefined : orgId === senderId ? "sender" : "receiver";
   return docs
     .map((doc) => ({ doc, holderSide: sideOf(doc.organization.id), attached: attached.has(doc.id) }))
     .sort((a, b) => Number(b.attached) - Number(a.attached));
@@ -65,7 +81,9 @@ export function evaluationDocumentOf({ doc, holderSide }: OnFileDocument): Evalu
     id: doc.id,
     number: doc.number,
     ...(holderSide ? { holderSide } : {}),
-    ...(doc.veterinarianAccredited === null || doc.veterinarianAccredited === undefined ? {} : { veterinarianAccredited: doc.veterinarianAccredited }),
+    ...(doc.veterinarianAccredited === null || doc.veterinarianAccredited === undefined
+      ? {}
+      : { veterinarianAccredited: doc.veterinarianAccredited }),
   };
 }
 
@@ -74,22 +92,45 @@ export async function evaluateTransfer(em: EntityManager, transfer: Transfer) {
   const animals = await em.find(AnimalSchema, { transfer: transfer.id }, { orderBy: { position: "asc" } });
   const documents = await documentsOnFile(em, transfer);
   const rules = await loadActiveRules(em);
-  const taxa = await resolveTaxaById(em, animals.map((a) => a.taxon.id));
+  const taxa = await resolveTaxaById(
+    em,
+    animals.map((a) => a.taxon.id),
+  );
   const lines: EvaluationAnimal[] = animals.map((a) => {
     const taxon = taxa.get(a.taxon.id);
     if (!taxon) throw new Error(`animal ${a.id}: taxon ${a.taxon.id} is not in the catalogue`);
-    return { scientificName: taxon.scientificName, taxon, count: a.count, lengthMm: a.lengthMm ?? null, origin: a.origin, sex: a.sex };
+    return {
+      scientificName: taxon.scientificName,
+      taxon,
+      count: a.count,
+      lengthMm: a.lengthMm ?? null,
+      origin: a.origin,
+      sex: a.sex,
+    };
   });
   const facts = transferFactsOf(transfer);
-  const result = evaluateCompliance({ facts, animals: lines, documents: documents.map(evaluationDocumentOf), rules, transitPolicies: STATE_TRANSIT_POLICIES });
+  const result = evaluateCompliance({
+    facts,
+    animals: lines,
+    documents: documents.map(evaluationDocumentOf),
+    rules,
+    transitPolicies: STATE_TRANSIT_POLICIES,
+  });
   return { result, facts, documents };
 }
 
-export type WhatIfOutcome = { ok: true; result: EvaluateResponse } | { ok: false; index: number; scientificName: string };
+export type WhatIfOutcome =
+  { ok: true; result: EvaluateResponse } | { ok: false; index: number; scientificName: string };
 
 /** The what-if of `POST /api/compliance/evaluate`: nothing is stored. Fails on the first unknown species. */
 export async function evaluateWhatIf(em: EntityManager, request: EvaluateRequest): Promise<WhatIfOutcome> {
-  const [taxa, rules] = await Promise.all([findTaxaByName(em, request.animals.map((a) => a.scientificName)), loadActiveRules(em)]);
+  const [taxa, rules] = await Promise.all([
+    findTaxaByName(
+      em,
+      request.animals.map((a) => a.scientificName),
+    ),
+    loadActiveRules(em),
+  ]);
   const lines: EvaluationAnimal[] = [];
   for (const [index, animal] of request.animals.entries()) {
     const taxon = taxa.get(normalizeTaxonName(animal.scientificName));
@@ -97,6 +138,12 @@ export async function evaluateWhatIf(em: EntityManager, request: EvaluateRequest
     lines.push({ ...animal, taxon });
   }
   const { animals: _animals, documents, ...facts } = request;
-  const result = evaluateCompliance({ facts, animals: lines, documents, rules, transitPolicies: STATE_TRANSIT_POLICIES });
+  const result = evaluateCompliance({
+    facts,
+    animals: lines,
+    documents,
+    rules,
+    transitPolicies: STATE_TRANSIT_POLICIES,
+  });
   return { ok: true, result };
 }

@@ -30,10 +30,22 @@ describe("expiry reminders (scheduled task)", () => {
     const second = await buildUser(em(), { organization: org });
     const gone = await buildUser(em(), { organization: org, disabled: true });
     const client = await signIn(t.app, first.email);
-    const permit = (number: string, validTo: string) => client.post("/api/documents", {
-      kind: "possession_permit", jurisdiction: "TN", number, holderName: org.name, speciesCovered: [], validFrom: null, validTo,
-      issuedOn: null, veterinarianName: null, veterinarianAccredited: null, inspectionDate: null, statements: [], animalsCovered: [],
-    });
+    const permit = (number: string, validTo: string) =>
+      client.post("/api/documents", {
+        kind: "possession_permit",
+        jurisdiction: "TN",
+        number,
+        holderName: org.name,
+        speciesCovered: [],
+        validFrom: null,
+        validTo,
+        issuedOn: null,
+        veterinarianName: null,
+        veterinarianAccredited: null,
+        inspectionDate: null,
+        statements: [],
+        animalsCovered: [],
+      });
     const soon = await permit("DEMO-TN-30", addDays(today, 30));
     await permit("DEMO-TN-31", addDays(today, 31));
     await permit("DEMO-TN-PAST", addDays(today, -1));
@@ -41,7 +53,9 @@ describe("expiry reminders (scheduled task)", () => {
     expect(await runTask(t.ctx, EXPIRY_REMINDER_TASK)).toBe(true);
     for (const member of [first, second]) {
       const mails = await mailTo(member.email);
-      expect(mails.map((m) => m.subject)).toEqual([`Possession permit or licence DEMO-TN-30 expires on ${addDays(today, 30)}`]);
+      expect(mails.map((m) => m.subject)).toEqual([
+        `Possession permit or licence DEMO-TN-30 expires on ${addDays(today, 30)}`,
+      ]);
       expect(mails[0]!.text_body).toContain("in 30 days");
       expect(mails[0]!.text_body).toContain("/permits");
     }

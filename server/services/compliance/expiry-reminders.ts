@@ -28,16 +28,29 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
       // SKIP LOCKED: two servers never claim the same document.
       { orderBy: { validTo: "asc", id: "asc" }, limit: BATCH, lockMode: LockMode.PESSIMISTIC_PARTIAL_WRITE },
     );
-    const orgs = new Map((await tx.find(OrganizationSchema, { id: { $in: [...new Set(docs.map((d) => d.organization.id))] } })).map((o) => [o.id, o]));
+    const orgs = new Map(
+      (await tx.find(OrganizationSchema, { id: { $in: [...new Set(docs.map((d) => d.organization.id))] } })).map(
+        (o) => [o.id, o],
+      ),
+    );
     for (const doc of docs) {
       const org = orgs.get(doc.organization.id)!;
       const members = await tx.find(UserSchema, { organization: org.id, role: "member", disabled: false });
       const { daysLeft } = expiryOf(doc.validTo ?? null, today);
       for (const member of members) {
-        enqueueMail(tx, documentExpiryMail({
-          to: member.email, name: member.displayName, organization: org.name, kind: DOCUMENT_KIND_LABELS[doc.kind], number: doc.number,
-          validTo: doc.validTo as string, daysLeft: daysLeft ?? 0, link: appLink("/permits"),
-        }));
+        enqueueMail(
+          tx,
+          documentExpiryMail({
+            to: member.email,
+            name: member.displayName,
+            organization: org.name,
+            kind: DOCUMENT_KIND_LABELS[doc.kind],
+            number: doc.number,
+            validTo: doc.validTo as string,
+            daysLeft: daysLeft ?? 0,
+            link: appLink("/permits"),
+          }),
+        );
       }
       doc.reminderSentAt = new Date();
     }
@@ -50,4 +63,8 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
 
 export const EXPIRY_REMINDER_TASK = "compliance.document-expiry-reminders";
 
-export const expiryReminderTask: ScheduledTask = { name: EXPIRY_REMINDER_TASK, everyMs: 60 * 60 * 1000, run: (ctx) => sendExpiryReminders(ctx).then(() => undefined) };
+export const expiryReminderTask: ScheduledTask = {
+  name: EXPIRY_REMINDER_TASK,
+  everyMs: 60 * 60 * 1000,
+  run: (ctx) => sendExpiryReminders(ctx).then(() => undefined),
+};

@@ -19,19 +19,29 @@ export function recordEvaluation(em: EntityManager, transfer: Transfer, result: 
 
 /** The override standing for the transfer's current version, if any. */
 export function currentOverride(em: EntityManager, transfer: Pick<Transfer, "id" | "version">) {
-  return em.findOne(ComplianceOverrideSchema, { transfer: transfer.id, transferVersion: transfer.version }, { orderBy: { createdAt: "desc" }, populate: ["admin"] });
+  return em.findOne(
+    ComplianceOverrideSchema,
+    { transfer: transfer.id, transferVersion: transfer.version },
+    { orderBy: { createdAt: "desc" }, populate: ["admin"] },
+  );
 }
 
 /** The 409's sentence: what stops the transfer, in the words of its findings. */
 function blockedMessage(result: EvaluateResponse): string {
-  const open = result.animals.flatMap((a) => a.findings.filter((f) => f.satisfiedBy === null && f.severity !== "advisory").map((f) => ({ animal: a.scientificName, f })));
+  const open = result.animals.flatMap((a) =>
+    a.findings
+      .filter((f) => f.satisfiedBy === null && f.severity !== "advisory")
+      .map((f) => ({ animal: a.scientificName, f })),
+  );
   const first = open[0];
   const more = open.length > 1 ? ` (and ${open.length - 1} more finding${open.length > 2 ? "s" : ""})` : "";
   const what =
     result.verdict === "blocked"
       ? "The compliance check blocks this transfer"
       : "The compliance check still needs documents for this transfer";
-  const detail = first ? `: ${first.animal}: ${first.f.missing ? `missing ${first.f.missing}` : first.f.message}${more}` : "";
+  const detail = first
+    ? `: ${first.animal}: ${first.f.missing ? `missing ${first.f.missing}` : first.f.message}${more}`
+    : "";
   return `${what}${detail}. Add the documents, change the transfer, or ask an administrator to override with a reason.`;
 }
 

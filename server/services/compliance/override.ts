@@ -14,20 +14,46 @@ import { currentOverride, recordEvaluation } from "./gate";
  * with the verdict and the reason are written in one transaction. An edit of the transfer
  * (a new version) ends the override.
  */
-export async function overrideCompliance({ em, actor, transferId, input }: { em: EntityManager; actor: Actor; transferId: string; input: { reason: string } }) {
+export async function overrideCompliance({
+  em,
+  actor,
+  transferId,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  transferId: string;
+  input: { reason: string };
+}) {
   return em.transactional(async (tx) => {
     const { transfer, role } = await loadTransferForActor(tx, transferId, actor, { lock: true });
-    if (!canOverrideCompliance(actor, role)) throw forbidden("Only an administrator can override the compliance check.");
+    if (!canOverrideCompliance(actor, role))
+      throw forbidden("Only an administrator can override the compliance check.");
     if (transfer.status !== "awaiting_receiver") {
       throw conflict("An override applies to a transfer waiting for the receiver's confirmation.");
     }
     if (await currentOverride(tx, transfer)) throw conflict("This version of the transfer is already overridden.");
     const { result } = await evaluateTransfer(tx, transfer);
     if (result.verdict === "clear") throw conflict("There is nothing to override: the compliance check is clear.");
-    const override = tx.create(ComplianceOverrideSchema, { transfer: transfer.id, transferVersion: transfer.version, reason: input.reason, admin: actor.id });
+    const override = tx.create(ComplianceOverrideSchema, {
+      transfer: transfer.id,
+      transferVersion: transfer.version,
+      reason: input.reason,
+      admin: actor.id,
+    });
     recordEvaluation(tx, transfer, result);
-    const open = result.animals.flatMap((a) => a.findings.filter((f) => f.satisfiedBy === null && f.severity !== "advisory").map((f) => ({ scientificName: a.scientificName, ruleId: f.ruleId, ruleVersion: f.ruleVersion })));
-    await appendCustody(tx, transfer.id, actor, "override", { gate: "compliance", verdict: result.verdict, reason: input.reason, transferVersion: transfer.version, findings: open });
+    const open = result.animals.flatMap((a) =>
+      a.findings
+        .filter((f) => f.satisfiedBy === null && f.severity !== "advisory")
+        .map((f) => ({ scientificName: a.scientificName, ruleId: f.ruleId, ruleVersion: f.ruleVersion })),
+    );
+    await appendCustody(tx, transfer.id, actor, "override", {
+      gate: "compliance",
+      verdict: result.verdict,
+      reason: input.reason,
+      transferVersion: transfer.version,
+      findings: open,
+    });
     await tx.flush();
     return override;
   });

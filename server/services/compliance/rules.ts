@@ -10,8 +10,14 @@ import { badRequest, conflict, notFound } from "../../http/errors";
 import { findTaxaByName } from "./taxa";
 
 /** Every stored version, grouped by rule and oldest first. */
-async function versionsByRule(em: EntityManager, where: { ruleKey?: string } = {}): Promise<Map<string, ComplianceRule[]>> {
-  const rows = await em.find(ComplianceRuleSchema, where, { orderBy: { ruleKey: "asc", version: "asc" }, populate: ["createdBy"] });
+async function versionsByRule(
+  em: EntityManager,
+  where: { ruleKey?: string } = {},
+): Promise<Map<string, ComplianceRule[]>> {
+  const rows = await em.find(ComplianceRuleSchema, where, {
+    orderBy: { ruleKey: "asc", version: "asc" },
+    populate: ["createdBy"],
+  });
   const grouped = new Map<string, ComplianceRule[]>();
   for (const row of rows) {
     const versions = grouped.get(row.ruleKey);
@@ -34,7 +40,11 @@ export async function loadActiveRules(em: EntityManager): Promise<readonly Rule[
   const rowCount = counted?.n ?? 0;
   const cached = activeRulesCache.get(em.getDriver());
   if (cached?.rowCount === rowCount) return cached.rules;
-  const rows = await em.execute<{ rule_key: string; data: Rule; retired: boolean }[]>("SELECT rule_key, data, retired FROM compliance_rule ORDER BY rule_key, version", [], "all");
+  const rows = await em.execute<{ rule_key: string; data: Rule; retired: boolean }[]>(
+    "SELECT rule_key, data, retired FROM compliance_rule ORDER BY rule_key, version",
+    [],
+    "all",
+  );
   const retired = new Map(rows.map((row) => [row.rule_key, row.retired]));
   const rules = Object.freeze(rows.filter((row) => !retired.get(row.rule_key)).map((row) => row.data));
   // A version added between the two reads only makes the next call read again.
@@ -43,18 +53,31 @@ export async function loadActiveRules(em: EntityManager): Promise<readonly Rule[
 }
 
 /** The newest version of each rule, filtered by jurisdiction and by a taxon name at any rank. */
-export async function listCurrentRules(em: EntityManager, query: RuleListQuery): Promise<{ current: ComplianceRule; versionCount: number }[]> {
+export async function listCurrentRules(
+  em: EntityManager,
+  query: RuleListQuery,
+): Promise<{ current: ComplianceRule; versionCount: number }[]> {
   const grouped = await versionsByRule(em);
-  let current = [...grouped.values()].map((versions) => ({ current: versions[versions.length - 1] as ComplianceRule, versionCount: versions.length }));
+  let current = [...grouped.values()].map((versions) => ({
+    current: versions[versions.length - 1] as ComplianceRule,
+    versionCount: versions.length,
+  }));
   if (query.jurisdiction) current = current.filter(({ current: row }) => row.data.jurisdiction === query.jurisdiction);
   if (query.taxon) {
     const wanted = normalizeTaxonName(query.taxon);
     const taxon = (await findTaxaByName(em, [query.taxon])).get(wanted);
     if (taxon) {
-      const covering = new Set(itemsForTaxon(indexBySelector(current.map(({ current: row }) => ({ selector: row.data.selector, row }))), taxonMatchKeys(taxon)).map((item) => item.row));
+      const covering = new Set(
+        itemsForTaxon(
+          indexBySelector(current.map(({ current: row }) => ({ selector: row.data.selector, row }))),
+          taxonMatchKeys(taxon),
+        ).map((item) => item.row),
+      );
       current = current.filter(({ current: row }) => covering.has(row));
     } else {
-      current = current.filter(({ current: row }) => row.data.selector.taxa.some((name) => normalizeTaxonName(name).includes(wanted)));
+      current = current.filter(({ current: row }) =>
+        row.data.selector.taxa.some((name) => normalizeTaxonName(name).includes(wanted)),
+      );
     }
   }
   return current;
@@ -85,7 +108,9 @@ async function flushVersion(em: EntityManager, row: ComplianceRule): Promise<Com
     await em.flush();
   } catch (err) {
     if (err instanceof UniqueConstraintViolationException) {
-      throw conflict(`Someone else saved version ${row.version} of this rule a moment ago. Reload it and make your change again.`);
+      throw conflict(
+        `Someone else saved version ${row.version} of this rule a moment ago. Reload it and make your change again.`,
+      );
     }
     throw err;
   }
@@ -97,19 +122,35 @@ async function flushVersion(em: EntityManager, row: ComplianceRule): Promise<Com
  * Saves an edit of a rule as its next version; the previous versions stay as they were. The
  * input must name the rule and the version after the newest one (409 when someone was faster).
  */
-export async function appendRuleVersion({ em, actor, ruleKey, input }: { em: EntityManager; actor: Actor; ruleKey: string; input: RuleVersionInput }) {
-  if (input.rule.id !== ruleKey) throw badRequest("rule.id: a rule keeps its id; create a new rule instead", { field: "rule.id" });
+export async function appendRuleVersion({
+  em,
+  actor,
+  ruleKey,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  ruleKey: string;
+  input: RuleVersionInput;
+}) {
+  if (input.rule.id !== ruleKey)
+    throw badRequest("rule.id: a rule keeps its id; create a new rule instead", { field: "rule.id" });
   const newest = await em.findOne(ComplianceRuleSchema, { ruleKey }, { orderBy: { version: "desc" } });
   if (!newest) throw notFound("That rule");
   if (input.rule.version !== newest.version + 1) {
-    throw conflict(`This rule is at version ${newest.version}, so the edit must be version ${newest.version + 1}. Reload it and make your change again.`, { currentVersion: newest.version });
+    throw conflict(
+      `This rule is at version ${newest.version}, so the edit must be version ${newest.version + 1}. Reload it and make your change again.`,
+      { currentVersion: newest.version },
+    );
   }
   return flushVersion(em, insertVersion(em, actor, input));
 }
 
 /** Adds a rule to the library as its version 1. */
 export async function createRule({ em, actor, input }: { em: EntityManager; actor: Actor; input: RuleVersionInput }) {
-  if (input.rule.version !== 1) throw badRequest("rule.version: a new rule starts at version 1", { field: "rule.version" });
-  if (await em.count(ComplianceRuleSchema, { ruleKey: input.rule.id })) throw conflict(`A rule with the id ${input.rule.id} exists already.`);
+  if (input.rule.version !== 1)
+    throw badRequest("rule.version: a new rule starts at version 1", { field: "rule.version" });
+  if (await em.count(ComplianceRuleSchema, { ruleKey: input.rule.id }))
+    throw conflict(`A rule with the id ${input.rule.id} exists already.`);
   return flushVersion(em, insertVersion(em, actor, input));
 }

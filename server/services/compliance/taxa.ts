@@ -38,7 +38,14 @@ export function resolvedTaxonOf(nodeId: string, nodes: ReadonlyMap<string, Taxon
   };
 }
 
-type NodeRow = { id: string; rank: TaxonRank; scientific_name: string; parent_id: string | null; synonyms: string[]; venomous: boolean };
+type NodeRow = {
+  id: string;
+  rank: TaxonRank;
+  scientific_name: string;
+  parent_id: string | null;
+  synonyms: string[];
+  venomous: boolean;
+};
 
 /** The catalogue rows from the taxa chosen by `startSql` (a query of taxon ids) up to their classes. */
 const lineageSql = (startSql: string) => `chain AS (
@@ -52,7 +59,17 @@ const NODES_JSON = `(SELECT coalesce(json_agg(DISTINCT jsonb_build_object('id', 
 
 function resolveAll(ids: readonly string[], rows: readonly NodeRow[]): Map<string, ResolvedTaxon> {
   const nodes = new Map<string, TaxonNode>(
-    rows.map((r) => [r.id, { id: r.id, rank: r.rank, scientificName: r.scientific_name, parentId: r.parent_id, synonyms: r.synonyms, venomous: r.venomous }]),
+    rows.map((r) => [
+      r.id,
+      {
+        id: r.id,
+        rank: r.rank,
+        scientificName: r.scientific_name,
+        parentId: r.parent_id,
+        synonyms: r.synonyms,
+        venomous: r.venomous,
+      },
+    ]),
   );
   return new Map(ids.filter((id) => nodes.has(id)).map((id) => [id, resolvedTaxonOf(id, nodes)]));
 }
@@ -89,7 +106,10 @@ export async function findTaxaByName(em: EntityManager, names: readonly string[]
     "all",
   );
   const named = row?.named ?? [];
-  const taxa = resolveAll(named.map((n) => n.taxon_id), row?.nodes ?? []);
+  const taxa = resolveAll(
+    named.map((n) => n.taxon_id),
+    row?.nodes ?? [],
+  );
   const byKey = new Map<string, ResolvedTaxon>();
   for (const { key, taxon_id } of named) {
     const taxon = taxa.get(taxon_id);

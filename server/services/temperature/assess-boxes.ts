@@ -2,13 +2,28 @@
  * One trip, one or more boxes: the timeline, the outside temperatures (forecast or a what-if's
  * own) and each box's verdict under its own profile. The trip's answer is its worst box's.
  */
-import { ambientFromForecasts, ambientFromOverride, type AmbientByHour, type HourlyTempF } from "@shared/temperature/ambient";
+import {
+  ambientFromForecasts,
+  ambientFromOverride,
+  type AmbientByHour,
+  type HourlyTempF,
+} from "@shared/temperature/ambient";
 import { assessTransit } from "@shared/temperature/assess";
 import type { BoxSpec } from "@shared/temperature/box-model";
 import type { TemperatureProfile } from "@shared/temperature/profiles";
-import { VERDICT_SEVERITY, type BoxTemperature, type ProfileSummary, type TemperatureReport } from "@shared/temperature/report";
+import {
+  VERDICT_SEVERITY,
+  type BoxTemperature,
+  type ProfileSummary,
+  type TemperatureReport,
+} from "@shared/temperature/report";
 import type { TransitAssessment } from "@shared/temperature/schemas";
-import { buildTransitTimeline, plannedArrivalWarning, type TimelineRequest, type TransitTimeline } from "@shared/temperature/timeline";
+import {
+  buildTransitTimeline,
+  plannedArrivalWarning,
+  type TimelineRequest,
+  type TransitTimeline,
+} from "@shared/temperature/timeline";
 import { forecastIndexFor, unavailableText, type WeatherSource } from "./forecasts";
 
 export type BoxToAssess = { containerId: string | null; label: string; box: BoxSpec; profile: TemperatureProfile };
@@ -23,22 +38,45 @@ type AmbientLookup = { ambientFor: (timeline: TransitTimeline) => AmbientByHour;
 
 const NO_AMBIENT: AmbientByHour = new Map();
 
-const summary = (p: TemperatureProfile): ProfileSummary => ({ group: p.group, label: p.label, safeTransitF: { ...p.safeTransitF } });
+const summary = (p: TemperatureProfile): ProfileSummary => ({
+  group: p.group,
+  label: p.label,
+  safeTransitF: { ...p.safeTransitF },
+});
 
 async function ambientLookup(plan: AmbientPlan, timeline: TransitTimeline): Promise<AmbientLookup> {
   if (plan.kind === "override") return { ambientFor: (t) => ambientFromOverride(t, plan.samples), extraSources: [] };
   if (!plan.source) {
-    return { ambientFor: () => NO_AMBIENT, extraSources: [{ id: "forecast-unavailable", title: "Forecast unavailable: no weather service is configured. The check cannot say the box is safe." }] };
+    return {
+      ambientFor: () => NO_AMBIENT,
+      extraSources: [
+        {
+          id: "forecast-unavailable",
+          title: "Forecast unavailable: no weather service is configured. The check cannot say the box is safe.",
+        },
+      ],
+    };
   }
   const outcome = await forecastIndexFor(plan.source, timeline, plan.nowMs);
   if (!outcome.ok) {
-    return { ambientFor: () => NO_AMBIENT, extraSources: [{ id: "forecast-unavailable", title: unavailableText(outcome.reason, outcome.detail) }] };
+    return {
+      ambientFor: () => NO_AMBIENT,
+      extraSources: [{ id: "forecast-unavailable", title: unavailableText(outcome.reason, outcome.detail) }],
+    };
   }
   return { ambientFor: (t) => ambientFromForecasts(t, outcome.index), extraSources: [] };
 }
 
 // Only reached with no outside temperatures, where the box plays no part in the answer.
-const PLACEHOLDER_BOX: BoxSpec = { wall: "eps", wallThicknessMm: 25, lengthMm: 300, widthMm: 300, heightMm: 300, contentsG: 500, pack: "none" };
+const PLACEHOLDER_BOX: BoxSpec = {
+  wall: "eps",
+  wallThicknessMm: 25,
+  lengthMm: 300,
+  widthMm: 300,
+  heightMm: 300,
+  contentsG: 500,
+  pack: "none",
+};
 
 function boxSummary(b: BoxToAssess, result: TransitAssessment): BoxTemperature {
   return {
@@ -58,13 +96,35 @@ function boxSummary(b: BoxToAssess, result: TransitAssessment): BoxTemperature {
  * The answer when a trip cannot be assessed at all (a place that cannot be located, no box with
  * animals): "forecast unavailable" with the reason in `sources`, never a kind of "ship".
  */
-export function unassessable(trip: Pick<TimelineRequest, "mode" | "departAt">, boxes: readonly BoxToAssess[], fallback: TemperatureProfile, why: Source): TemperatureReport {
+export function unassessable(
+  trip: Pick<TimelineRequest, "mode" | "departAt">,
+  boxes: readonly BoxToAssess[],
+  fallback: TemperatureProfile,
+  why: Source,
+): TemperatureReport {
   const at = new Date(trip.departAt).toISOString();
-  const timeline: TransitTimeline = { mode: trip.mode, departAt: at, arriveAt: at, durationH: 0, greatCircleKm: 0, roadKm: null, waypoints: [], points: [], warnings: [] };
-  const assess = (b: Pick<BoxToAssess, "box" | "profile">) => assessTransit({ timeline, ambientByHour: NO_AMBIENT, box: b.box, profile: b.profile });
+  const timeline: TransitTimeline = {
+    mode: trip.mode,
+    departAt: at,
+    arriveAt: at,
+    durationH: 0,
+    greatCircleKm: 0,
+    roadKm: null,
+    waypoints: [],
+    points: [],
+    warnings: [],
+  };
+  const assess = (b: Pick<BoxToAssess, "box" | "profile">) =>
+    assessTransit({ timeline, ambientByHour: NO_AMBIENT, box: b.box, profile: b.profile });
   const shown = boxes[0] ?? { box: PLACEHOLDER_BOX, profile: fallback };
   const result = assess(shown);
-  return { ...result, sources: [...result.sources, why], profile: summary(shown.profile), warnings: [], boxes: boxes.map((b) => boxSummary(b, assess(b))) };
+  return {
+    ...result,
+    sources: [...result.sources, why],
+    profile: summary(shown.profile),
+    warnings: [],
+    boxes: boxes.map((b) => boxSummary(b, assess(b))),
+  };
 }
 
 /**
@@ -79,7 +139,11 @@ export async function assessBoxes(
   fallback: TemperatureProfile,
   plannedArrivalMs?: number,
 ): Promise<TemperatureReport> {
-  if (boxes.length === 0) return unassessable(request, boxes, fallback, { id: "no-boxes", title: "No box holds animals yet: there is nothing to assess." });
+  if (boxes.length === 0)
+    return unassessable(request, boxes, fallback, {
+      id: "no-boxes",
+      title: "No box holds animals yet: there is nothing to assess.",
+    });
   const timeline = buildTransitTimeline(request);
   const lookup = await ambientLookup(plan, timeline);
 
@@ -87,14 +151,24 @@ export async function assessBoxes(
   const timelineFor = (departMs: number) => buildTransitTimeline({ ...request, departAt: departMs });
   const search = { timelineFor, ambientFor: lookup.ambientFor };
   const ambientByHour = lookup.ambientFor(timeline);
-  const assessed = boxes.map((b) => ({ ...b, result: assessTransit({ timeline, ambientByHour, box: b.box, profile: b.profile, ambientSource, search }) }));
-  const worst = assessed.reduce((w, b) => (VERDICT_SEVERITY.indexOf(b.result.verdict) < VERDICT_SEVERITY.indexOf(w.result.verdict) ? b : w));
+  const assessed = boxes.map((b) => ({
+    ...b,
+    result: assessTransit({ timeline, ambientByHour, box: b.box, profile: b.profile, ambientSource, search }),
+  }));
+  const worst = assessed.reduce((w, b) =>
+    VERDICT_SEVERITY.indexOf(b.result.verdict) < VERDICT_SEVERITY.indexOf(w.result.verdict) ? b : w,
+  );
 
   const suggested = worst.result.suggestedDeparture;
   const suitsEveryBox = (departAt: string) => {
     const later = timelineFor(Date.parse(departAt));
     const ambient = lookup.ambientFor(later);
-    return assessed.every((b) => ["ship", "pack"].includes(assessTransit({ timeline: later, ambientByHour: ambient, box: b.box, profile: b.profile, ambientSource }).verdict));
+    return assessed.every((b) =>
+      ["ship", "pack"].includes(
+        assessTransit({ timeline: later, ambientByHour: ambient, box: b.box, profile: b.profile, ambientSource })
+          .verdict,
+      ),
+    );
   };
 
   const arrival = plannedArrivalMs === undefined ? null : plannedArrivalWarning(timeline, plannedArrivalMs);

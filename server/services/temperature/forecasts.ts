@@ -43,13 +43,21 @@ const positionOf = (k: Key): LatLon => ({ lat: k.latE2 / 100, lon: k.lonE2 / 100
  * safer-departure search tries, up to the service's horizon. A trip ending beyond the horizon,
  * or any failure of the service, is "unavailable" with the reason.
  */
-export async function forecastIndexFor(source: WeatherSource, timeline: TransitTimeline, nowMs: number): Promise<ForecastOutcome> {
+export async function forecastIndexFor(
+  source: WeatherSource,
+  timeline: TransitTimeline,
+  nowMs: number,
+): Promise<ForecastOutcome> {
   const window = forecastWindow(timeline);
   const fromMs = Math.floor(Date.parse(window.fromHour) / MS_PER_HOUR) * MS_PER_HOUR;
   const horizonMs = Math.floor((nowMs + FORECAST_HORIZON_DAYS * MS_PER_DAY) / MS_PER_HOUR) * MS_PER_HOUR;
   const tripEndMs = Date.parse(timeline.points.at(-1)?.at ?? timeline.arriveAt);
   if (tripEndMs > horizonMs) {
-    return { ok: false, reason: "beyond_horizon", detail: `forecasts reach ${FORECAST_HORIZON_DAYS} days ahead; the trip ends later` };
+    return {
+      ok: false,
+      reason: "beyond_horizon",
+      detail: `forecasts reach ${FORECAST_HORIZON_DAYS} days ahead; the trip ends later`,
+    };
   }
   const toMs = Math.min(Math.ceil(Date.parse(window.toHour) / MS_PER_HOUR) * MS_PER_HOUR, horizonMs);
   const hoursWanted = (toMs - fromMs) / MS_PER_HOUR + 1;
@@ -95,7 +103,12 @@ async function readCache(db: Queryable, keys: readonly Key[], fromMs: number, to
   return series;
 }
 
-async function writeCache(db: Queryable, keys: readonly Key[], forecasts: readonly PointForecast[], nowMs: number): Promise<void> {
+async function writeCache(
+  db: Queryable,
+  keys: readonly Key[],
+  forecasts: readonly PointForecast[],
+  nowMs: number,
+): Promise<void> {
   const lat: number[] = [];
   const lon: number[] = [];
   const hour: string[] = [];
@@ -121,7 +134,9 @@ async function writeCache(db: Queryable, keys: readonly Key[], forecasts: readon
 
 /** Deletes cached hours nobody will use again. Returns how many. */
 export async function pruneForecastCache(db: Queryable, nowMs: number): Promise<number> {
-  const { rowCount } = await db.query("DELETE FROM forecast_hour WHERE fetched_at < $1", [new Date(nowMs - FORECAST_KEEP_MS)]);
+  const { rowCount } = await db.query("DELETE FROM forecast_hour WHERE fetched_at < $1", [
+    new Date(nowMs - FORECAST_KEEP_MS),
+  ]);
   return rowCount ?? 0;
 }
 

@@ -31,6 +31,15 @@ export const temperatureGate: ReadyGate = async ({ em, actor, transfer, input })
       { temperature: report },
     );
   }
-  if (!input.reason) throw badRequest("reason: say why the animals should travel despite the temperature check; it goes into the custody log", { field: "reason" });
-  await appendCustody(em, transfer.id, actor, "override", { gate: "temperature", verdict: report.verdict, advice: report.advice.code, reason: input.reason });
+  if (!input.reason)
+    throw badRequest(
+      "reason: say why the animals should travel despite the temperature check; it goes into the custody log",
+      { field: "reason" },
+    );
+  await appendCustody(em, transfer.id, actor, "override", {
+    gate: "temperature",
+    verdict: report.verdict,
+    advice: report.advice.code,
+    reason: input.reason,
+  });
 };

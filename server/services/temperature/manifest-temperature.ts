@@ -18,13 +18,20 @@ function safeRangeOf(report: TemperatureReport): ManifestTemperature["safeRangeF
 
 /** Each box's own band by container id, for its label. */
 function boxRangesOf(report: TemperatureReport): NonNullable<ManifestTemperature["boxRangesF"]> {
-  return Object.fromEntries(report.boxes.flatMap((b) => (b.containerId ? [[b.containerId, { minF: b.profile.safeTransitF.min, maxF: b.profile.safeTransitF.max }]] : [])));
+  return Object.fromEntries(
+    report.boxes.flatMap((b) =>
+      b.containerId ? [[b.containerId, { minF: b.profile.safeTransitF.min, maxF: b.profile.safeTransitF.max }]] : [],
+    ),
+  );
 }
 
-const rangeText = (b: TemperatureReport["boxes"][number]) => formatTempRangeF(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
+const rangeText = (b: TemperatureReport["boxes"][number]) =>
+  formatTempRangeF(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
 
 function packingNotesOf(report: TemperatureReport, withAdvice: boolean): string | null {
-  const lines = report.boxes.map((b) => `${b.label}: ${b.profile.label}, ${rangeText(b)}${withAdvice ? ` — ${b.advice.message}` : ""}`);
+  const lines = report.boxes.map(
+    (b) => `${b.label}: ${b.profile.label}, ${rangeText(b)}${withAdvice ? ` — ${b.advice.message}` : ""}`,
+  );
   return lines.length ? lines.join("\n") : null;
 }
 
@@ -41,7 +48,9 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
   const check = await latestCheck(em, transferId);
   // A check still speaks for the record when nothing in it (route, dates, boxes, animals) was edited
   // since; courier assignments, handoffs and status changes do not change the temperature picture.
-  const editedSince = check ? await em.count(TransferChangeSchema, { transfer: transferId, createdAt: { $gt: check.checkedAt } }) : 0;
+  const editedSince = check
+    ? await em.count(TransferChangeSchema, { transfer: transferId, createdAt: { $gt: check.checkedAt } })
+    : 0;
   if (check && editedSince === 0) {
     const report = check.result as TemperatureReport;
     // In the origin's zone, like the departure on the same page.
@@ -49,7 +58,10 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
     const when = `${at}, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
     return {
       temperature: {
-        advice: [`${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`, ...report.warnings.filter((w) => w.severity === "warning").map((w) => w.message)].join("\n"),
+        advice: [
+          `${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
+          ...report.warnings.filter((w) => w.severity === "warning").map((w) => w.message),
+        ].join("\n"),
         safeRangeF: safeRangeOf(report),
         packingNotes: packingNotesOf(report, true),
         boxRangesF: boxRangesOf(report),

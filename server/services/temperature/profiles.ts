@@ -27,7 +27,15 @@ export async function loadProfileRows(em: EntityManager): Promise<Map<ProfileGro
 }
 
 /** Replaces a group's profile with an admin's edit (already validated). */
-export async function saveProfile({ em, actor, input }: { em: EntityManager; actor: Actor; input: { group: ProfileGroup; data: ProfileData } }) {
+export async function saveProfile({
+  em,
+  actor,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  input: { group: ProfileGroup; data: ProfileData };
+}) {
   const values = { data: input.data, updatedBy: ref(em.getReference(UserSchema, actor.id)), updatedAt: new Date() };
   const row = await em.findOne(TemperatureProfileSchema, { profileGroup: input.group });
   if (row) em.assign(row, values);

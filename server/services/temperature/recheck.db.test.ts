@@ -30,8 +30,16 @@ beforeAll(async () => {
   // Knoxville, TN → Eugene, OR overnight; two corn snakes in an EPS box (the factory's transfer)
   cast = await buildTransfer(em(), { status: "awaiting_receiver" });
   idle = await buildTransfer(em(), { status: "awaiting_receiver" });
-  await transitionTransfer({ em: em(), actor: await actorOf(em(), cast.receiver), transferId: cast.transfer.id, input: { to: "ready" } });
-  await t.ctx.pool.query("UPDATE transfer SET planned_departure_at = $1 WHERE id = ANY($2::uuid[])", [DEPARTURE, [cast.transfer.id, idle.transfer.id]]);
+  await transitionTransfer({
+    em: em(),
+    actor: await actorOf(em(), cast.receiver),
+    transferId: cast.transfer.id,
+    input: { to: "ready" },
+  });
+  await t.ctx.pool.query("UPDATE transfer SET planned_departure_at = $1 WHERE id = ANY($2::uuid[])", [
+    DEPARTURE,
+    [cast.transfer.id, idle.transfer.id],
+  ]);
 });
 afterAll(async () => {
   vi.useRealTimers();
@@ -40,10 +48,24 @@ afterAll(async () => {
 });
 
 const checksOf = async (transferId: string) =>
-  (await t.ctx.pool.query<{ mark: string; advice_code: string }>("SELECT mark, advice_code FROM temperature_check WHERE transfer_id = $1 ORDER BY checked_at, id", [transferId])).rows;
+  (
+    await t.ctx.pool.query<{ mark: string; advice_code: string }>(
+      "SELECT mark, advice_code FROM temperature_check WHERE transfer_id = $1 ORDER BY checked_at, id",
+      [transferId],
+    )
+  ).rows;
 const alertsOf = async (transferId: string) =>
-  (await t.ctx.pool.query("SELECT previous_advice_code, advice_code FROM temperature_alert WHERE transfer_id = $1", [transferId])).rows;
-const queuedMail = async () => (await t.ctx.pool.query<{ to_address: string }>("SELECT to_address FROM outbox_message WHERE topic = 'transfer.temperature_changed'")).rows;
+  (
+    await t.ctx.pool.query("SELECT previous_advice_code, advice_code FROM temperature_alert WHERE transfer_id = $1", [
+      transferId,
+    ])
+  ).rows;
+const queuedMail = async () =>
+  (
+    await t.ctx.pool.query<{ to_address: string }>(
+      "SELECT to_address FROM outbox_message WHERE topic = 'transfer.temperature_changed'",
+    )
+  ).rows;
 
 describe("the re-check 24 h and 4 h before departure", () => {
   it("keeps each result; a normal → heat-wave change flags the transfer and e-mails both parties", async () => {
@@ -72,7 +94,9 @@ describe("the re-check 24 h and 4 h before departure", () => {
     expect(fake.requests).toHaveLength(1);
     // [practice] REPTILES magazine shipping guide: above 95 °F do not ship (a +8 °C heat wave on a Tennessee July afternoon)
     expect((await checksOf(cast.transfer.id)).at(-1)).toEqual({ mark: "4h", advice_code: "postpone" });
-    expect(await alertsOf(cast.transfer.id)).toEqual([{ previous_advice_code: "add_cold_pack", advice_code: "postpone" }]);
+    expect(await alertsOf(cast.transfer.id)).toEqual([
+      { previous_advice_code: "add_cold_pack", advice_code: "postpone" },
+    ]);
 
     const recipients = (await queuedMail()).map((m) => m.to_address).sort();
     expect(recipients).toEqual([cast.sender.email, cast.receiver.email].sort());

@@ -38,13 +38,23 @@ async function recheckTransfer(ctx: AppContext, transferId: string, mark: DueMar
   return ctx.orm.em.fork().transactional(async (em) => {
     const transfer = await em.findOne(TransferSchema, { id: transferId }, { lockMode: LockMode.PESSIMISTIC_WRITE });
     if (!transfer || transfer.status !== "ready") return false;
-    if ((await em.count(TemperatureCheckSchema, { transfer, transferVersion: transfer.version, mark })) > 0) return false;
+    if ((await em.count(TemperatureCheckSchema, { transfer, transferVersion: transfer.version, mark })) > 0)
+      return false;
     const previous = await latestCheck(em, transfer.id);
-    const report = await assessTransferTemperature({ em, source: { weatherUrl: ctx.env.WEATHER_URL, db: ctx.pool }, transfer, nowMs: now.getTime() });
+    const report = await assessTransferTemperature({
+      em,
+      source: { weatherUrl: ctx.env.WEATHER_URL, db: ctx.pool },
+      transfer,
+      nowMs: now.getTime(),
+    });
     const check = recordCheck(em, transfer, mark, report, now);
     if (!previous || previous.adviceCode === check.adviceCode) return false;
     raiseAlert(em, transfer, previous, check, now);
-    const words = { summary: CHECK_MARK_WORDS[mark], previousAdvice: previous.result.advice.message, advice: report.advice.message };
+    const words = {
+      summary: CHECK_MARK_WORDS[mark],
+      previousAdvice: previous.result.advice.message,
+      advice: report.advice.message,
+    };
     await notifyParty(em, transfer, "sender", "temperature_changed", null, words);
     await notifyParty(em, transfer, "receiver", "temperature_changed", null, words);
     return true;

@@ -11,7 +11,10 @@ import { loadProfiles, type ProfileTable } from "./profiles";
 const CLASS_OF_TAXON: Readonly<Record<string, AnimalClass>> = { Reptilia: "reptile", Amphibia: "amphibian" };
 
 /** The class (reptile, amphibian) of each taxon, read up the taxon tree. */
-export async function animalClasses(em: EntityManager, taxonIds: readonly string[]): Promise<Map<string, AnimalClass | null>> {
+export async function animalClasses(
+  em: EntityManager,
+  taxonIds: readonly string[],
+): Promise<Map<string, AnimalClass | null>> {
   if (taxonIds.length === 0) return new Map();
   const rows = await em.execute<{ id: string; class_name: string | null }[]>(
     `WITH RECURSIVE up AS (
@@ -41,7 +44,10 @@ async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileT
     em.find(ContainerSchema, { transfer }, { orderBy: { position: "asc" } }),
     em.find(AnimalSchema, { transfer }, { populate: ["taxon"] }),
   ]);
-  const classes = await animalClasses(em, animals.map((a) => a.taxon.id));
+  const classes = await animalClasses(
+    em,
+    animals.map((a) => a.taxon.id),
+  );
   const lineOf = (a: (typeof animals)[number]): AnimalLine => ({
     count: a.count,
     weightG: a.weightG ?? null,
@@ -57,7 +63,15 @@ async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileT
         containerId: c.id,
         label: c.label,
         profile: profileForBox(lines, everyLine, profiles),
-        box: { wall: c.wallMaterial, wallThicknessMm: c.wallThicknessMm, lengthMm: c.lengthMm, widthMm: c.widthMm, heightMm: c.heightMm, contentsG: boxContentsG(lines), pack: c.pack },
+        box: {
+          wall: c.wallMaterial,
+          wallThicknessMm: c.wallThicknessMm,
+          lengthMm: c.lengthMm,
+          widthMm: c.widthMm,
+          heightMm: c.heightMm,
+          contentsG: boxContentsG(lines),
+          pack: c.pack,
+        },
       },
     ];
   });
@@ -68,7 +82,17 @@ async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileT
  * holds animals under its animals' profile, forecasts through the cache. A place that cannot be
  * located or a source that cannot answer gives "forecast unavailable".
  */
-export async function assessTransferTemperature({ em, source, transfer, nowMs }: { em: EntityManager; source: WeatherSource | null; transfer: Transfer; nowMs: number }): Promise<TemperatureReport> {
+export async function assessTransferTemperature({
+  em,
+  source,
+  transfer,
+  nowMs,
+}: {
+  em: EntityManager;
+  source: WeatherSource | null;
+  transfer: Transfer;
+  nowMs: number;
+}): Promise<TemperatureReport> {
   const profiles = await loadProfiles(em);
   const boxes = await boxesOf(em, transfer, profiles);
   const origin = placeOf(transfer, "origin");
@@ -76,12 +100,24 @@ export async function assessTransferTemperature({ em, source, transfer, nowMs }:
   const fallback = profileForBox([], [], profiles);
   const trip = { mode: transfer.mode, departAt: transfer.plannedDepartureAt.getTime() };
   if (!origin || !destination) {
-    return unassessable(trip, boxes, fallback, { id: "place-unknown", title: `The ${origin ? "destination" : "origin"} ZIP code could not be located, so there is no forecast for it.` });
+    return unassessable(trip, boxes, fallback, {
+      id: "place-unknown",
+      title: `The ${origin ? "destination" : "origin"} ZIP code could not be located, so there is no forecast for it.`,
+    });
   }
   try {
-    return await assessBoxes({ ...trip, origin, destination }, boxes, { kind: "forecast", source, nowMs }, fallback, transfer.expectedArrivalAt.getTime());
+    return await assessBoxes(
+      { ...trip, origin, destination },
+      boxes,
+      { kind: "forecast", source, nowMs },
+      fallback,
+      transfer.expectedArrivalAt.getTime(),
+    );
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
-    return unassessable(trip, boxes, fallback, { id: "route-unplanned", title: `The trip could not be laid out hour by hour: ${err.message}.` });
+    return unassessable(trip, boxes, fallback, {
+      id: "route-unplanned",
+      title: `The trip could not be laid out hour by hour: ${err.message}.`,
+    });
   }
 }

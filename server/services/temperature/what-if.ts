@@ -25,16 +25,28 @@ export async function findTaxonByName(em: EntityManager, name: string): Promise<
 
 function placeOrFail(input: PlaceInputParsed, field: string): TransitPlace {
   const place = resolvePlace(input);
-  if (!place) throw badRequest(`${field}.zip: no US ZIP code ${"zip" in input ? input.zip : ""} is known`, { field: `${field}.zip` });
+  if (!place)
+    throw badRequest(`${field}.zip: no US ZIP code ${"zip" in input ? input.zip : ""} is known`, {
+      field: `${field}.zip`,
+    });
   return place;
 }
 
 /** The profile for a what-if: the group named, or the taxon's (a genus takes its class's most cautious). */
-async function whatIfProfile(em: EntityManager, input: WhatIfInput, taxon: ProfileTaxon | null): Promise<TemperatureProfile> {
+async function whatIfProfile(
+  em: EntityManager,
+  input: WhatIfInput,
+  taxon: ProfileTaxon | null,
+): Promise<TemperatureProfile> {
   const profiles = await loadProfiles(em);
   if (input.profile) return profiles[input.profile];
   const classes = taxon ? await animalClasses(em, [taxon.id]) : new Map();
-  const line: AnimalLine = { count: 1, weightG: null, profileGroup: taxon?.profileGroup ?? null, animalClass: (taxon && classes.get(taxon.id)) ?? null };
+  const line: AnimalLine = {
+    count: 1,
+    weightG: null,
+    profileGroup: taxon?.profileGroup ?? null,
+    animalClass: (taxon && classes.get(taxon.id)) ?? null,
+  };
   return profileForBox([line], [line], profiles);
 }
 
@@ -42,14 +54,33 @@ async function whatIfProfile(em: EntityManager, input: WhatIfInput, taxon: Profi
  * A trip planned before any transfer exists: one box, one profile, the forecast through the
  * cache or the caller's own outside temperatures. Stores nothing but forecasts.
  */
-export async function assessWhatIf({ em, source, input, taxon, nowMs }: { em: EntityManager; source: WeatherSource; input: WhatIfInput; taxon: ProfileTaxon | null; nowMs: number }): Promise<TemperatureReport> {
+export async function assessWhatIf({
+  em,
+  source,
+  input,
+  taxon,
+  nowMs,
+}: {
+  em: EntityManager;
+  source: WeatherSource;
+  input: WhatIfInput;
+  taxon: ProfileTaxon | null;
+  nowMs: number;
+}): Promise<TemperatureReport> {
   const origin = placeOrFail(input.origin, "origin");
   const destination = placeOrFail(input.destination, "destination");
   const hub = input.hub ? placeOrFail(input.hub, "hub") : undefined;
   const profile = await whatIfProfile(em, input, taxon);
-  const plan: AmbientPlan = input.ambientOverrideF ? { kind: "override", samples: input.ambientOverrideF } : { kind: "forecast", source, nowMs };
+  const plan: AmbientPlan = input.ambientOverrideF
+    ? { kind: "override", samples: input.ambientOverrideF }
+    : { kind: "forecast", source, nowMs };
   try {
-    return await assessBoxes({ mode: input.mode, origin, destination, hub, departAt: input.departAt }, [{ containerId: null, label: "Box", box: input.box, profile }], plan, profile);
+    return await assessBoxes(
+      { mode: input.mode, origin, destination, hub, departAt: input.departAt },
+      [{ containerId: null, label: "Box", box: input.box, profile }],
+      plan,
+      profile,
+    );
   } catch (err) {
     if (err instanceof RangeError) throw badRequest(`mode: ${err.message}`, { field: "mode" });
     throw err;

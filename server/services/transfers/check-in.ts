@@ -5,7 +5,12 @@ import type { checkInInputSchema } from "@shared/schemas/transfer";
 import { computeDiscrepancies, outcomeTotal } from "@shared/checkin/discrepancy";
 import type { Actor } from "../../auth/actor";
 import { AnimalSchema } from "../../db/entities/transfer.entity";
-import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "../../db/entities/check-in.entity";
+import {
+  CheckInExtraSchema,
+  CheckInItemSchema,
+  CheckInSchema,
+  RegisterEntrySchema,
+} from "../../db/entities/check-in.entity";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
@@ -18,7 +23,8 @@ import { notifyParty } from "./notify";
 type CheckInParsed = z.output<typeof checkInInputSchema>;
 
 function describe(rows: ReturnType<typeof computeDiscrepancies>): string {
-  const sum = (k: "arrivedWell" | "arrivedProblem" | "deadOnArrival" | "missing" | "extra") => rows.reduce((n, r) => n + r[k], 0);
+  const sum = (k: "arrivedWell" | "arrivedProblem" | "deadOnArrival" | "missing" | "extra") =>
+    rows.reduce((n, r) => n + r[k], 0);
   const parts = [`${sum("arrivedWell")} arrived well`];
   if (sum("arrivedProblem")) parts.push(`${sum("arrivedProblem")} with a problem`);
   if (sum("deadOnArrival")) parts.push(`${sum("deadOnArrival")} dead on arrival`);
@@ -32,59 +38,137 @@ function describe(rows: ReturnType<typeof computeDiscrepancies>): string {
  * came but were not listed, and the discrepancy against the manifest. Accepted animals enter
  * the receiver's collection register; the sender is told.
  */
-export async function checkInTransfer({ em, actor, transferId, input }: { em: EntityManager; actor: Actor; transferId: string; input: CheckInParsed }) {
+export async function checkInTransfer({
+  em,
+  actor,
+  transferId,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  transferId: string;
+  input: CheckInParsed;
+}) {
   return em.transactional(async (tx) => {
     const { transfer: t, role, facts } = await loadTransferForActor(tx, transferId, actor, { lock: true });
-    if (t.status !== "delivered") throw conflict(t.status === "checked_in" || t.status === "closed" ? "This transfer is already checked in." : "Check-in opens once the delivery to the receiver is recorded.");
-    if (!transferAbilities(actor, role, facts).checkIn) throw forbidden("Only a member of the receiving organisation can check the animals in.");
+    if (t.status !== "delivered")
+      throw conflict(
+        t.status === "checked_in" || t.status === "closed"
+          ? "This transfer is already checked in."
+          : "Check-in opens once the delivery to the receiver is recorded.",
+      );
+    if (!transferAbilities(actor, role, facts).checkIn)
+      throw forbidden("Only a member of the receiving organisation can check the animals in.");
 
     const animals = await tx.find(AnimalSchema, { transfer: t }, { orderBy: { position: "asc" }, populate: ["taxon"] });
     const byId = new Map(animals.map((a) => [a.id, a]));
     const seen = new Set<string>();
     input.items.forEach((item, i) => {
       const animal = byId.get(item.animalId);
-      if (!animal) throw badRequest(`items.${i}.animalId: not an animal of this transfer`, { field: `items.${i}.animalId` });
-      if (seen.has(item.animalId)) throw badRequest(`items.${i}.animalId: this animal line is listed twice`, { field: `items.${i}.animalId` });
+      if (!animal)
+        throw badRequest(`items.${i}.animalId: not an animal of this transfer`, { field: `items.${i}.animalId` });
+      if (seen.has(item.animalId))
+        throw badRequest(`items.${i}.animalId: this animal line is listed twice`, { field: `items.${i}.animalId` });
       seen.add(item.animalId);
       if (outcomeTotal(item) !== animal.count) {
-        throw badRequest(`items.${i}: the outcomes add up to ${outcomeTotal(item)}, but the manifest lists ${animal.count}`, { field: `items.${i}` });
+        throw badRequest(
+          `items.${i}: the outcomes add up to ${outcomeTotal(item)}, but the manifest lists ${animal.count}`,
+          { field: `items.${i}` },
+        );
       }
     });
     const unlisted = animals.findIndex((a) => !seen.has(a.id));
-    if (unlisted >= 0) throw badRequest(`items: give an outcome for every animal line (line ${unlisted + 1} is missing)`, { field: "items" });
-    const extraTaxa = input.extras.length ? await tx.find(TaxonSchema, { id: { $in: input.extras.map((e) => e.taxonId) } }) : [];
+    if (unlisted >= 0)
+      throw badRequest(`items: give an outcome for every animal line (line ${unlisted + 1} is missing)`, {
+        field: "items",
+      });
+    const extraTaxa = input.extras.length
+      ? await tx.find(TaxonSchema, { id: { $in: input.extras.map((e) => e.taxonId) } })
+      : [];
     const taxonById = new Map(extraTaxa.map((x) => [x.id, x]));
     input.extras.forEach((e, i) => {
-      if (!taxonById.has(e.taxonId)) throw badRequest(`extras.${i}.taxonId: no such species in the catalogue`, { field: `extras.${i}.taxonId` });
+      if (!taxonById.has(e.taxonId))
+        throw badRequest(`extras.${i}.taxonId: no such species in the catalogue`, { field: `extras.${i}.taxonId` });
     });
 
     const signedAt = new Date();
-    const checkIn = tx.create(CheckInSchema, { transfer: t, signedBy: tx.getReference(UserSchema, actor.id), signedName: input.signedName, signedAt, notes: input.notes ?? null });
+    const checkIn = tx.create(CheckInSchema, {
+      transfer: t,
+      signedBy: tx.getReference(UserSchema, actor.id),
+      signedName: input.signedName,
+      signedAt,
+      notes: input.notes ?? null,
+    });
     const sender = await tx.findOneOrFail(OrganizationSchema, { id: t.senderOrganization.id });
     const receiverOrg = tx.getReference(OrganizationSchema, t.receiverOrganization.id);
     const dateAcquired = signedAt.toISOString().slice(0, 10);
     for (const item of input.items) {
       const animal = byId.get(item.animalId)!;
-      tx.create(CheckInItemSchema, { checkIn, animal, arrivedWell: item.arrivedWell, arrivedProblem: item.arrivedProblem, deadOnArrival: item.deadOnArrival, missing: item.missing, problem: item.problem ?? null, weightG: item.weightG ?? null, notes: item.notes ?? null });
-      for (const [condition, count] of [["well", item.arrivedWell], ["problem", item.arrivedProblem]] as const) {
+      tx.create(CheckInItemSchema, {
+        checkIn,
+        animal,
+        arrivedWell: item.arrivedWell,
+        arrivedProblem: item.arrivedProblem,
+        deadOnArrival: item.deadOnArrival,
+        missing: item.missing,
+        problem: item.problem ?? null,
+        weightG: item.weightG ?? null,
+        notes: item.notes ?? null,
+      });
+      for (const [condition, count] of [
+        ["well", item.arrivedWell],
+        ["problem", item.arrivedProblem],
+      ] as const) {
         if (count === 0) continue;
         tx.create(RegisterEntrySchema, {
-          organization: receiverOrg, taxon: animal.taxon, sex: animal.sex, count, identifier: animal.identifier ?? null, dateAcquired,
-          sourceOrganization: sender, sourceOrganizationName: sender.name, transfer: t, transferNumber: t.number, animal, condition,
+          organization: receiverOrg,
+          taxon: animal.taxon,
+          sex: animal.sex,
+          count,
+          identifier: animal.identifier ?? null,
+          dateAcquired,
+          sourceOrganization: sender,
+          sourceOrganizationName: sender.name,
+          transfer: t,
+          transferNumber: t.number,
+          animal,
+          condition,
           notes: condition === "problem" ? (item.problem ?? null) : null,
         });
       }
     }
-    for (const e of input.extras) tx.create(CheckInExtraSchema, { checkIn, taxon: ref(taxonById.get(e.taxonId)!), count: e.count, sex: e.sex, notes: e.notes ?? null });
+    for (const e of input.extras)
+      tx.create(CheckInExtraSchema, {
+        checkIn,
+        taxon: ref(taxonById.get(e.taxonId)!),
+        count: e.count,
+        sex: e.sex,
+        notes: e.notes ?? null,
+      });
 
     const rows = computeDiscrepancies(
-      animals.map((a) => ({ id: a.id, taxonId: a.taxon.id, scientificName: a.taxon.getEntity().scientificName, sex: a.sex, count: a.count })),
+      animals.map((a) => ({
+        id: a.id,
+        taxonId: a.taxon.id,
+        scientificName: a.taxon.getEntity().scientificName,
+        sex: a.sex,
+        count: a.count,
+      })),
       input.items,
-      input.extras.map((e) => ({ taxonId: e.taxonId, scientificName: taxonById.get(e.taxonId)!.scientificName, sex: e.sex, count: e.count })),
+      input.extras.map((e) => ({
+        taxonId: e.taxonId,
+        scientificName: taxonById.get(e.taxonId)!.scientificName,
+        sex: e.sex,
+        count: e.count,
+      })),
     );
     const summary = describe(rows);
     await appendCustody(tx, t.id, actor, "check_in", { signedName: input.signedName, summary, discrepancies: rows });
-    await appendCustody(tx, t.id, actor, "status_change", { from: "delivered", to: "checked_in", reason: "check-in signed" });
+    await appendCustody(tx, t.id, actor, "status_change", {
+      from: "delivered",
+      to: "checked_in",
+      reason: "check-in signed",
+    });
     t.status = "checked_in";
     t.version += 1;
     await notifyParty(tx, t, "sender", "checked_in", actor, { summary });

@@ -6,21 +6,25 @@ import { CustodyEntrySchema } from "../../db/entities/custody-entry.entity";
 import { TransferSchema } from "../../db/entities/transfer.entity";
 
 export type CustodyKind =
-  | "created"
-  | "status_change"
-  | "handoff"
-  | "check_in"
-  | "couriers_assigned"
-  | "override"
-  | "correction";
+  "created" | "status_change" | "handoff" | "check_in" | "couriers_assigned" | "override" | "correction";
 
 /**
  * Appends a sealed entry to a transfer's custody log. Call inside the transaction that makes
  * the change, after locking the transfer row, so the sequence and the chain cannot fork.
  * Actor and time come from the session and the server clock, never from the request.
  */
-export async function appendCustody(em: EntityManager, transferId: string, actor: Actor | null, kind: CustodyKind, payload: Record<string, unknown>) {
-  const last = await em.findOne(CustodyEntrySchema, { transfer: transferId }, { orderBy: { seq: "desc" }, fields: ["seq", "hash"] });
+export async function appendCustody(
+  em: EntityManager,
+  transferId: string,
+  actor: Actor | null,
+  kind: CustodyKind,
+  payload: Record<string, unknown>,
+) {
+  const last = await em.findOne(
+    CustodyEntrySchema,
+    { transfer: transferId },
+    { orderBy: { seq: "desc" }, fields: ["seq", "hash"] },
+  );
   const sealed = seal(last?.hash ?? GENESIS_HASH, {
     transferId,
     seq: (last?.seq ?? 0) + 1,
@@ -60,7 +64,15 @@ export async function readCustodyLog(em: EntityManager, transferId: string): Pro
   }));
   const check = verifyChain(sealed);
   return {
-    entries: sealed.map((e) => ({ seq: e.seq, kind: e.kind, at: e.at, actor: { id: e.actorId, displayName: e.actorName }, payload: e.payload as Record<string, unknown>, prevHash: e.prevHash, hash: e.hash })),
+    entries: sealed.map((e) => ({
+      seq: e.seq,
+      kind: e.kind,
+      at: e.at,
+      actor: { id: e.actorId, displayName: e.actorName },
+      payload: e.payload as Record<string, unknown>,
+      prevHash: e.prevHash,
+      hash: e.hash,
+    })),
     ...check,
   };
 }

@@ -19,7 +19,17 @@ type HandoffParsed = z.output<typeof handoffInputSchema>;
  * found, never corrected. The first handoff puts the transfer on the road; the last one
  * delivers it.
  */
-export async function recordHandoff({ em, actor, transferId, input }: { em: EntityManager; actor: Actor; transferId: string; input: HandoffParsed }) {
+export async function recordHandoff({
+  em,
+  actor,
+  transferId,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  transferId: string;
+  input: HandoffParsed;
+}) {
   try {
     return await em.transactional(async (tx) => {
       const { transfer: t, role, facts, legs } = await loadTransferForActor(tx, transferId, actor, { lock: true });
@@ -27,7 +37,8 @@ export async function recordHandoff({ em, actor, transferId, input }: { em: Enti
       const allowed = handoffAllowed(actor, role, facts);
       if (allowed === null) {
         if (facts.legCourierIds.length === 0) throw conflict("No courier is assigned yet.");
-        if (!["ready", "in_transit"].includes(t.status)) throw conflict(`A handoff cannot be recorded while the transfer is ${t.status.replace("_", " ")}.`);
+        if (!["ready", "in_transit"].includes(t.status))
+          throw conflict(`A handoff cannot be recorded while the transfer is ${t.status.replace("_", " ")}.`);
         throw forbidden("This handoff is for another courier or the receiver to record.");
       }
       if (input.handoffIndex !== allowed) throw conflict(`The next handoff to record is number ${allowed + 1}.`);
@@ -35,12 +46,19 @@ export async function recordHandoff({ em, actor, transferId, input }: { em: Enti
       const containers = await tx.find(ContainerSchema, { transfer: t }, { orderBy: { position: "asc" } });
       const known = new Map(containers.map((c) => [c.id, c]));
       input.seals.forEach((s, i) => {
-        if (!known.has(s.containerId)) throw badRequest(`seals.${i}.containerId: not a box of this transfer`, { field: `seals.${i}.containerId` });
+        if (!known.has(s.containerId))
+          throw badRequest(`seals.${i}.containerId: not a box of this transfer`, { field: `seals.${i}.containerId` });
       });
       const kind = handoffKind(input.handoffIndex, legs.length);
       const seals = input.seals.map((s) => {
         const expected = known.get(s.containerId)!.sealNumber ?? null;
-        return { containerId: s.containerId, sealNumber: s.sealNumber ?? null, expected, matches: expected === null || s.sealNumber === expected, intact: s.intact };
+        return {
+          containerId: s.containerId,
+          sealNumber: s.sealNumber ?? null,
+          expected,
+          matches: expected === null || s.sealNumber === expected,
+          intact: s.intact,
+        };
       });
       const payload = {
         handoffIndex: input.handoffIndex,
@@ -53,7 +71,12 @@ export async function recordHandoff({ em, actor, transferId, input }: { em: Enti
         seals,
         sealsUnchecked: containers.filter((c) => !input.seals.some((s) => s.containerId === c.id)).map((c) => c.id),
         boxTempF: input.boxTempF,
-        place: { text: input.place.text ?? null, lat: input.place.lat ?? null, lon: input.place.lon ?? null, accuracyM: input.place.accuracyM ?? null },
+        place: {
+          text: input.place.text ?? null,
+          lat: input.place.lat ?? null,
+          lon: input.place.lon ?? null,
+          accuracyM: input.place.accuracyM ?? null,
+        },
         notes: input.notes ?? null,
         acknowledged: true,
       };

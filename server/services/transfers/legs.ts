@@ -10,25 +10,50 @@ import { loadTransferForActor } from "./load";
 type LegsParsed = { legs: { courierId: string; fromLabel?: string | null; toLabel?: string | null }[] };
 
 /** The sender names the couriers, leg by leg, before the animals leave. */
-export async function assignLegs({ em, actor, transferId, input }: { em: EntityManager; actor: Actor; transferId: string; input: LegsParsed }) {
+export async function assignLegs({
+  em,
+  actor,
+  transferId,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  transferId: string;
+  input: LegsParsed;
+}) {
   return em.transactional(async (tx) => {
     const { transfer, role, facts, legs: old } = await loadTransferForActor(tx, transferId, actor, { lock: true });
-    if (!transferAbilities(actor, role, facts).assignCouriers) throw forbidden("Only the sender can assign couriers, and only before the animals leave.");
+    if (!transferAbilities(actor, role, facts).assignCouriers)
+      throw forbidden("Only the sender can assign couriers, and only before the animals leave.");
     const ids = [...new Set(input.legs.map((l) => l.courierId))];
     const couriers = await tx.find(UserSchema, { id: { $in: ids }, role: "courier", disabled: false });
     const byId = new Map(couriers.map((c) => [c.id, c]));
     input.legs.forEach((l, i) => {
-      if (!byId.has(l.courierId)) throw badRequest(`legs.${i}.courierId: choose an active courier`, { field: `legs.${i}.courierId` });
-      if (i > 0 && input.legs[i - 1]!.courierId === l.courierId) throw badRequest(`legs.${i}.courierId: the same courier cannot hand over to themselves`, { field: `legs.${i}.courierId` });
+      if (!byId.has(l.courierId))
+        throw badRequest(`legs.${i}.courierId: choose an active courier`, { field: `legs.${i}.courierId` });
+      if (i > 0 && input.legs[i - 1]!.courierId === l.courierId)
+        throw badRequest(`legs.${i}.courierId: the same courier cannot hand over to themselves`, {
+          field: `legs.${i}.courierId`,
+        });
     });
     for (const leg of old) tx.remove(leg);
     await tx.flush();
     input.legs.forEach((l, i) =>
-      tx.create(LegSchema, { transfer, sequence: i + 1, courier: byId.get(l.courierId)!, fromLabel: l.fromLabel ?? null, toLabel: l.toLabel ?? null }),
+      tx.create(LegSchema, {
+        transfer,
+        sequence: i + 1,
+        courier: byId.get(l.courierId)!,
+        fromLabel: l.fromLabel ?? null,
+        toLabel: l.toLabel ?? null,
+      }),
     );
     transfer.version += 1;
     await appendCustody(tx, transfer.id, actor, "couriers_assigned", {
-      legs: input.legs.map((l, i) => ({ sequence: i + 1, courierId: l.courierId, courierName: byId.get(l.courierId)!.displayName })),
+      legs: input.legs.map((l, i) => ({
+        sequence: i + 1,
+        courierId: l.courierId,
+        courierName: byId.get(l.courierId)!.displayName,
+      })),
     });
     await tx.flush();
     return transfer;

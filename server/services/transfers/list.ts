@@ -1,7 +1,12 @@
 import { createHash } from "node:crypto";
 import type pg from "pg";
 import type { z } from "zod";
-import type { transferListQuerySchema, TransferListDto, TransferSummaryDto, ViewerRole } from "@shared/schemas/transfer";
+import type {
+  transferListQuerySchema,
+  TransferListDto,
+  TransferSummaryDto,
+  ViewerRole,
+} from "@shared/schemas/transfer";
 import type { TransferStatus, TransportMode, UsState } from "@shared/constants";
 import type { Actor } from "../../auth/actor";
 import { badRequest } from "../../http/errors";
@@ -10,26 +15,49 @@ type Query = z.output<typeof transferListQuerySchema>;
 
 const sha1 = (text: string) => createHash("sha1").update(text).digest("hex").slice(0, 16);
 
-const SORT_COLUMNS = { departure: "planned_departure_at", number: "number", status: "status", updated: "updated_at" } as const;
+const SORT_COLUMNS = {
+  departure: "planned_departure_at",
+  number: "number",
+  status: "status",
+  updated: "updated_at",
+} as const;
 
 type Row = {
-  id: string; number: string; status: TransferStatus; mode: TransportMode; planned_departure_ms: number; expected_arrival_ms: number; updated_ms: number;
-  sender_organization_id: string; sender_name: string; receiver_organization_id: string; receiver_name: string;
-  origin_city: string; origin_state: UsState; origin_time_zone: string | null; destination_city: string; destination_state: UsState; animal_count: number; species_count: number; sort_value: string;
+  id: string;
+  number: string;
+  status: TransferStatus;
+  mode: TransportMode;
+  planned_departure_ms: number;
+  expected_arrival_ms: number;
+  updated_ms: number;
+  sender_organization_id: string;
+  sender_name: string;
+  receiver_organization_id: string;
+  receiver_name: string;
+  origin_city: string;
+  origin_state: UsState;
+  origin_time_zone: string | null;
+  destination_city: string;
+  destination_state: UsState;
+  animal_count: number;
+  species_count: number;
+  sort_value: string;
 };
 
 function decodeCursor(cursor: string | undefined): [unknown, string] | null {
   if (!cursor) return null;
   try {
     const value = JSON.parse(Buffer.from(cursor, "base64url").toString("utf8"));
-    if (Array.isArray(value) && value.length === 2 && typeof value[1] === "string" && /^[0-9a-f-]{36}$/.test(value[1])) return value as [unknown, string];
+    if (Array.isArray(value) && value.length === 2 && typeof value[1] === "string" && /^[0-9a-f-]{36}$/.test(value[1]))
+      return value as [unknown, string];
   } catch {
     // fall through
   }
   throw badRequest("cursor: this page link is not valid; start from the first page", { field: "cursor" });
 }
 
-const encodeCursor = (sortValue: string, id: string) => Buffer.from(JSON.stringify([sortValue, id])).toString("base64url");
+const encodeCursor = (sortValue: string, id: string) =>
+  Buffer.from(JSON.stringify([sortValue, id])).toString("base64url");
 
 /**
  * One page of the transfers the caller may see, newest departure first by default, with
@@ -46,20 +74,27 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
   const filters: string[] = [];
   if (q.status) filters.push(`status = ${p(q.status)}`);
   if (q.departFrom) filters.push(`planned_departure_at >= ${p(`${q.departFrom}T00:00:00Z`)}::timestamptz`);
-  if (q.departTo) filters.push(`planned_departure_at < (${p(`${q.departTo}T00:00:00Z`)}::timestamptz + interval '1 day')`);
+  if (q.departTo)
+    filters.push(`planned_departure_at < (${p(`${q.departTo}T00:00:00Z`)}::timestamptz + interval '1 day')`);
   if (q.q) {
     const like = p(`%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
-    filters.push(`(number ILIKE ${like} OR EXISTS (SELECT 1 FROM organization o WHERE o.id IN (transfer.sender_organization_id, transfer.receiver_organization_id) AND o.name ILIKE ${like}))`);
+    filters.push(
+      `(number ILIKE ${like} OR EXISTS (SELECT 1 FROM organization o WHERE o.id IN (transfer.sender_organization_id, transfer.receiver_organization_id) AND o.name ILIKE ${like}))`,
+    );
   }
   const cursor = decodeCursor(q.cursor);
-  if (cursor) filters.push(`(${col}, id) ${cmp} (${p(cursor[0])}::${col.endsWith("_at") ? "timestamptz" : "text"}, ${p(cursor[1])}::uuid)`);
+  if (cursor)
+    filters.push(
+      `(${col}, id) ${cmp} (${p(cursor[0])}::${col.endsWith("_at") ? "timestamptz" : "text"}, ${p(cursor[1])}::uuid)`,
+    );
   const limit = p(q.limit + 1);
 
   const orgId = actor.organization?.id ?? null;
   const branches: string[] = [];
   const where = (visibility: string) => [visibility, ...filters].join(" AND ");
   if (actor.role === "admin") branches.push(where("TRUE"));
-  else if (actor.role === "courier") branches.push(where(`id IN (SELECT transfer_id FROM leg WHERE courier_id = ${p(actor.id)})`));
+  else if (actor.role === "courier")
+    branches.push(where(`id IN (SELECT transfer_id FROM leg WHERE courier_id = ${p(actor.id)})`));
   else if (orgId) {
     const org = p(orgId);
     if (q.role !== "receiving") branches.push(where(`sender_organization_id = ${org}`));
@@ -69,7 +104,9 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
   if (branches.length === 0) return { transfers: [], nextCursor: null };
 
   // Each branch walks its own index in order and stops at the page size; the union is small.
-  const picked = branches.map((w) => `(SELECT id, ${col} AS sort_value FROM transfer WHERE ${w} ORDER BY ${order} LIMIT ${limit})`).join(" UNION ALL ");
+  const picked = branches
+    .map((w) => `(SELECT id, ${col} AS sort_value FROM transfer WHERE ${w} ORDER BY ${order} LIMIT ${limit})`)
+    .join(" UNION ALL ");
   const sql = `
     WITH page AS (SELECT DISTINCT id, sort_value FROM (${picked}) u ORDER BY ${order.replace(col, "sort_value")} LIMIT ${limit})
     SELECT t.id, t.number, t.status, t.mode,
@@ -93,7 +130,13 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
   const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
   const roleOf = (r: Row): ViewerRole =>
-    actor.role === "admin" ? "admin" : actor.role === "courier" ? "courier" : r.sender_organization_id === orgId ? "sender" : "receiver";
+    actor.role === "admin"
+      ? "admin"
+      : actor.role === "courier"
+        ? "courier"
+        : r.sender_organization_id === orgId
+          ? "sender"
+          : "receiver";
   const transfers: TransferSummaryDto[] = page.map((r) => ({
     id: r.id,
     number: r.number,

@@ -10,8 +10,17 @@ import { viewerRoleFor, type TransferFacts } from "../../policies/transfer.polic
  * Loads a transfer the caller may see, with what the policy needs. Anyone else gets the same
  * 404 as for a transfer that does not exist: existence must not leak.
  */
-export async function loadTransferForActor(em: EntityManager, id: string, actor: Actor, options: { lock?: boolean } = {}) {
-  const transfer = await em.findOne(TransferSchema, { id }, options.lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {});
+export async function loadTransferForActor(
+  em: EntityManager,
+  id: string,
+  actor: Actor,
+  options: { lock?: boolean } = {},
+) {
+  const transfer = await em.findOne(
+    TransferSchema,
+    { id },
+    options.lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {},
+  );
   if (!transfer) throw notFound("That transfer");
   const legs = await em.find(LegSchema, { transfer }, { orderBy: { sequence: "asc" } });
   const handoffsDone = await em.count(CustodyEntrySchema, { transfer, kind: "handoff" });

@@ -11,13 +11,33 @@ import { appLink } from "../../mail/links";
  * Queues an e-mail to one party of a transfer, in the caller's transaction: the named
  * contact when there is one and the account is active, otherwise every active member.
  */
-export async function notifyParty(em: EntityManager, t: Transfer, party: "sender" | "receiver", topic: TransferMailTopic, actor: Actor | null, extra: Record<string, string> = {}) {
+export async function notifyParty(
+  em: EntityManager,
+  t: Transfer,
+  party: "sender" | "receiver",
+  topic: TransferMailTopic,
+  actor: Actor | null,
+  extra: Record<string, string> = {},
+) {
   const orgRef = party === "sender" ? t.senderOrganization : t.receiverOrganization;
   const contactRef = party === "sender" ? t.senderContact : t.receiverContact;
   const contact = contactRef ? await em.findOne(UserSchema, { id: contactRef.id, disabled: false }) : null;
-  const recipients = contact ? [contact] : await em.find(UserSchema, { organization: orgRef.id, role: "member", disabled: false });
+  const recipients = contact
+    ? [contact]
+    : await em.find(UserSchema, { organization: orgRef.id, role: "member", disabled: false });
   const org = await em.findOneOrFail(OrganizationSchema, { id: orgRef.id });
   for (const r of recipients) {
-    enqueueMail(em, transferMail(topic, { to: r.email, name: r.displayName, organization: org.name, number: t.number, actor: actor?.displayName ?? "Hatchway", link: appLink(`/transfers/${t.id}`), ...extra }));
+    enqueueMail(
+      em,
+      transferMail(topic, {
+        to: r.email,
+        name: r.displayName,
+        organization: org.name,
+        number: t.number,
+        actor: actor?.displayName ?? "Hatchway",
+        link: appLink(`/transfers/${t.id}`),
+        ...extra,
+      }),
+    );
   }
 }

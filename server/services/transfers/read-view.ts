@@ -1,50 +1,195 @@
 import type pg from "pg";
-import type { AnimalOrigin, IdentifierKind, LengthKind, OrganizationKind, PackKind, ProfileGroup, Purpose, Sex, TransferStatus, TransportMode, WallMaterial } from "@shared/constants";
+import type {
+  AnimalOrigin,
+  IdentifierKind,
+  LengthKind,
+  OrganizationKind,
+  PackKind,
+  ProfileGroup,
+  Purpose,
+  Sex,
+  TransferStatus,
+  TransportMode,
+  WallMaterial,
+} from "@shared/constants";
 
 /** A transfer and everything its page shows, read in one round trip (plain rows, no ORM). */
 export type TransferView = {
   t: {
-    id: string; number: string; status: TransferStatus; version: number; mode: TransportMode; purpose: Purpose; sale: boolean; sale_price_usd: number | null;
-    sender_organization_id: string; receiver_organization_id: string;
-    origin_street: string; origin_city: string; origin_state: string; origin_zip: string; origin_lat: number | null; origin_lon: number | null; origin_time_zone: string | null;
-    destination_street: string; destination_city: string; destination_state: string; destination_zip: string; destination_lat: number | null; destination_lon: number | null; destination_time_zone: string | null;
-    planned_departure_at: string; expected_arrival_at: string; handling_notes: string | null; sender_private_notes: string | null; receiver_private_notes: string | null;
-    confirmed_at: string | null; cancelled_reason: string | null; reconfirmation_reason: string | null; created_at: string; updated_at: string;
+    id: string;
+    number: string;
+    status: TransferStatus;
+    version: number;
+    mode: TransportMode;
+    purpose: Purpose;
+    sale: boolean;
+    sale_price_usd: number | null;
+    sender_organization_id: string;
+    receiver_organization_id: string;
+    origin_street: string;
+    origin_city: string;
+    origin_state: string;
+    origin_zip: string;
+    origin_lat: number | null;
+    origin_lon: number | null;
+    origin_time_zone: string | null;
+    destination_street: string;
+    destination_city: string;
+    destination_state: string;
+    destination_zip: string;
+    destination_lat: number | null;
+    destination_lon: number | null;
+    destination_time_zone: string | null;
+    planned_departure_at: string;
+    expected_arrival_at: string;
+    handling_notes: string | null;
+    sender_private_notes: string | null;
+    receiver_private_notes: string | null;
+    confirmed_at: string | null;
+    cancelled_reason: string | null;
+    reconfirmation_reason: string | null;
+    created_at: string;
+    updated_at: string;
   };
   sender: OrgRow;
   receiver: OrgRow;
   senderContact: PersonRow | null;
   receiverContact: PersonRow | null;
-  containers: { id: string; key: string; position: number; label: string; length_mm: number; width_mm: number; height_mm: number; wall_material: WallMaterial; wall_thickness_mm: number; pack: PackKind; seal_number: string | null }[];
-  animals: {
-    id: string; position: number; container_id: string | null; count: number; sex: Sex; identifier: string | null; identifier_kind: IdentifierKind | null; origin: AnimalOrigin;
-    length_mm: number | null; length_kind: LengthKind | null; weight_g: number | null; hatch_date: string | null; notes: string | null; taxon: TaxonRowView;
+  containers: {
+    id: string;
+    key: string;
+    position: number;
+    label: string;
+    length_mm: number;
+    width_mm: number;
+    height_mm: number;
+    wall_material: WallMaterial;
+    wall_thickness_mm: number;
+    pack: PackKind;
+    seal_number: string | null;
   }[];
-  legs: { id: string; sequence: number; from_label: string | null; to_label: string | null; courier_id: string; courier_name: string; org_name: string | null; org_phone: string | null }[];
+  animals: {
+    id: string;
+    position: number;
+    container_id: string | null;
+    count: number;
+    sex: Sex;
+    identifier: string | null;
+    identifier_kind: IdentifierKind | null;
+    origin: AnimalOrigin;
+    length_mm: number | null;
+    length_kind: LengthKind | null;
+    weight_g: number | null;
+    hatch_date: string | null;
+    notes: string | null;
+    taxon: TaxonRowView;
+  }[];
+  legs: {
+    id: string;
+    sequence: number;
+    from_label: string | null;
+    to_label: string | null;
+    courier_id: string;
+    courier_name: string;
+    org_name: string | null;
+    org_phone: string | null;
+  }[];
   handoffs: { actor_id: string | null; actor_name: string; at: string; payload: Record<string, unknown> }[];
   checkIn: {
-    signed_at: string; signed_name: string; notes: string | null; signed_by_id: string; signed_by_name: string;
-    items: { animal_id: string; arrived_well: number; arrived_problem: number; dead_on_arrival: number; missing: number; problem: string | null; weight_g: number | null; notes: string | null }[];
+    signed_at: string;
+    signed_name: string;
+    notes: string | null;
+    signed_by_id: string;
+    signed_by_name: string;
+    items: {
+      animal_id: string;
+      arrived_well: number;
+      arrived_problem: number;
+      dead_on_arrival: number;
+      missing: number;
+      problem: string | null;
+      weight_g: number | null;
+      notes: string | null;
+    }[];
     extras: { count: number; sex: Sex; notes: string | null; taxon: TaxonRowView }[];
   } | null;
 };
-type OrgRow = { id: string; name: string; kind: OrganizationKind; street: string; city: string; state: string; zip: string; phone: string; email: string };
+type OrgRow = {
+  id: string;
+  name: string;
+  kind: OrganizationKind;
+  street: string;
+  city: string;
+  state: string;
+  zip: string;
+  phone: string;
+  email: string;
+};
 type PersonRow = { id: string; display_name: string; email: string };
-export type TaxonRowView = { id: string; rank: string; scientific_name: string; common_names: string[]; venomous: boolean; profile_group: ProfileGroup | null };
+export type TaxonRowView = {
+  id: string;
+  rank: string;
+  scientific_name: string;
+  common_names: string[];
+  venomous: boolean;
+  profile_group: ProfileGroup | null;
+};
 
 const TAXON_JSON = (alias: string) =>
   `json_build_object('id', ${alias}.id, 'rank', ${alias}.rank, 'scientific_name', ${alias}.scientific_name, 'common_names', ${alias}.common_names, 'venomous', ${alias}.venomous, 'profile_group', ${alias}.profile_group)`;
 
 /** Columns by name (json_build_object is several times cheaper than to_jsonb(row) and says what the page reads). */
-const jsonOf = (alias: string, columns: readonly string[]) => `json_build_object(${columns.map((c) => `'${c}', ${alias}.${c}`).join(", ")})`;
+const jsonOf = (alias: string, columns: readonly string[]) =>
+  `json_build_object(${columns.map((c) => `'${c}', ${alias}.${c}`).join(", ")})`;
 const T_JSON = jsonOf("t", [
-  "id", "number", "status", "version", "mode", "purpose", "sale", "sale_price_usd", "sender_organization_id", "receiver_organization_id",
-  "origin_street", "origin_city", "origin_state", "origin_zip", "origin_lat", "origin_lon", "origin_time_zone",
-  "destination_street", "destination_city", "destination_state", "destination_zip", "destination_lat", "destination_lon", "destination_time_zone",
-  "planned_departure_at", "expected_arrival_at", "handling_notes", "sender_private_notes", "receiver_private_notes",
-  "confirmed_at", "cancelled_reason", "reconfirmation_reason", "created_at", "updated_at",
+  "id",
+  "number",
+  "status",
+  "version",
+  "mode",
+  "purpose",
+  "sale",
+  "sale_price_usd",
+  "sender_organization_id",
+  "receiver_organization_id",
+  "origin_street",
+  "origin_city",
+  "origin_state",
+  "origin_zip",
+  "origin_lat",
+  "origin_lon",
+  "origin_time_zone",
+  "destination_street",
+  "destination_city",
+  "destination_state",
+  "destination_zip",
+  "destination_lat",
+  "destination_lon",
+  "destination_time_zone",
+  "planned_departure_at",
+  "expected_arrival_at",
+  "handling_notes",
+  "sender_private_notes",
+  "receiver_private_notes",
+  "confirmed_at",
+  "cancelled_reason",
+  "reconfirmation_reason",
+  "created_at",
+  "updated_at",
 ]);
-const CONTAINER_JSON = jsonOf("c", ["id", "key", "position", "label", "length_mm", "width_mm", "height_mm", "wall_material", "wall_thickness_mm", "pack", "seal_number"]);
+const CONTAINER_JSON = jsonOf("c", [
+  "id",
+  "key",
+  "position",
+  "label",
+  "length_mm",
+  "width_mm",
+  "height_mm",
+  "wall_material",
+  "wall_thickness_mm",
+  "pack",
+  "seal_number",
+]);
 
 export const TRANSFER_VIEW_SQL = `
 SELECT json_build_object(
@@ -76,6 +221,10 @@ WHERE t.id = $1`;
 
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
-  const { rows } = await pool.query<{ view: TransferView }>({ name: "transfer-view-v1", text: TRANSFER_VIEW_SQL, values: [id] });
+  const { rows } = await pool.query<{ view: TransferView }>({
+    name: "transfer-view-v1",
+    text: TRANSFER_VIEW_SQL,
+    values: [id],
+  });
   return rows[0]?.view ?? null;
 }

@@ -44,13 +44,30 @@ async function checkCanSubmit(em: EntityManager, t: Transfer) {
   ]);
   const findings = packingFindings(
     containers.map((c) => ({ id: c.id, label: c.label })),
-    animals.map((a) => ({ id: a.id, containerId: a.container?.id ?? null, taxonId: a.taxon.id, scientificName: a.taxon.getEntity().scientificName })),
+    animals.map((a) => ({
+      id: a.id,
+      containerId: a.container?.id ?? null,
+      taxonId: a.taxon.id,
+      scientificName: a.taxon.getEntity().scientificName,
+    })),
   );
-  if (findings.length) throw conflict(`Resolve the packing first: ${findings.map((f) => f.message).join(" ")}`, { findings });
-  if (t.plannedDepartureAt.getTime() < Date.now()) throw conflict("The planned departure is in the past: change the date first.");
+  if (findings.length)
+    throw conflict(`Resolve the packing first: ${findings.map((f) => f.message).join(" ")}`, { findings });
+  if (t.plannedDepartureAt.getTime() < Date.now())
+    throw conflict("The planned departure is in the past: change the date first.");
 }
 
-export async function transitionTransfer({ em, actor, transferId, input }: { em: EntityManager; actor: Actor; transferId: string; input: Parsed }) {
+export async function transitionTransfer({
+  em,
+  actor,
+  transferId,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  transferId: string;
+  input: Parsed;
+}) {
   return em.transactional(async (tx) => {
     const { transfer: t, role, facts } = await loadTransferForActor(tx, transferId, actor, { lock: true });
     const from = t.status as TransferStatus;
@@ -58,11 +75,18 @@ export async function transitionTransfer({ em, actor, transferId, input }: { em:
     const abilities = transferAbilities(actor, role, facts);
     if (to === from) throw conflict(`The transfer is already ${STATUS_WORDS[to].toLowerCase()}.`);
     const viaEvent = EVENT_DRIVEN[to];
-    if (viaEvent && canTransition(from, to)) throw conflict(`A transfer becomes “${STATUS_WORDS[to]}” through ${viaEvent}, not by request.`);
-    if (!canTransition(from, to)) throw conflict(`A transfer that is “${STATUS_WORDS[from]}” cannot become “${STATUS_WORDS[to]}”.`);
+    if (viaEvent && canTransition(from, to))
+      throw conflict(`A transfer becomes “${STATUS_WORDS[to]}” through ${viaEvent}, not by request.`);
+    if (!canTransition(from, to))
+      throw conflict(`A transfer that is “${STATUS_WORDS[from]}” cannot become “${STATUS_WORDS[to]}”.`);
     const needed = abilityFor(from, to);
     const allowed = needed ? abilities[needed] === true : abilities.withdraw || abilities.sendBack;
-    if (!allowed) throw forbidden(role === "admin" ? "Administrators can read transfers but not move them." : "Your part in this transfer does not allow that step.");
+    if (!allowed)
+      throw forbidden(
+        role === "admin"
+          ? "Administrators can read transfers but not move them."
+          : "Your part in this transfer does not allow that step.",
+      );
     if ((to === "cancelled" || (role === "receiver" && to === "draft")) && !input.reason) {
       throw badRequest("reason: say why, so the other party knows", { field: "reason" });
     }
@@ -82,8 +106,10 @@ export async function transitionTransfer({ em, actor, transferId, input }: { em:
 
     if (to === "awaiting_receiver") await notifyParty(tx, t, "receiver", "awaiting_confirmation", actor);
     if (to === "ready") await notifyParty(tx, t, "sender", "confirmed", actor);
-    if (to === "draft" && role === "receiver") await notifyParty(tx, t, "sender", "sent_back", actor, { reason: input.reason ?? "" });
-    if (to === "cancelled" && from !== "draft") await notifyParty(tx, t, "receiver", "cancelled", actor, { reason: input.reason ?? "" });
+    if (to === "draft" && role === "receiver")
+      await notifyParty(tx, t, "sender", "sent_back", actor, { reason: input.reason ?? "" });
+    if (to === "cancelled" && from !== "draft")
+      await notifyParty(tx, t, "receiver", "cancelled", actor, { reason: input.reason ?? "" });
     await tx.flush();
     return t;
   });

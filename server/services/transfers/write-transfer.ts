@@ -12,7 +12,14 @@ import type { Actor } from "../../auth/actor";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
-import { AnimalSchema, ContainerSchema, TransferChangeSchema, TransferSchema, type Container, type Transfer } from "../../db/entities/transfer.entity";
+import {
+  AnimalSchema,
+  ContainerSchema,
+  TransferChangeSchema,
+  TransferSchema,
+  type Container,
+  type Transfer,
+} from "../../db/entities/transfer.entity";
 import { badRequest, conflict, forbidden } from "../../http/errors";
 import { appendCustody } from "./custody";
 import { notifyParty } from "./notify";
@@ -24,7 +31,9 @@ type PatchParsed = z.output<typeof transferPatchSchema>;
 function locate(address: Address, field: "origin" | "destination") {
   const place = placeFromZip(address.zip.slice(0, 5));
   if (place?.state && place.state !== address.state) {
-    throw badRequest(`${field}.zip: ZIP ${address.zip} is in ${place.state}, not ${address.state}`, { field: `${field}.zip` });
+    throw badRequest(`${field}.zip: ZIP ${address.zip} is in ${place.state}, not ${address.state}`, {
+      field: `${field}.zip`,
+    });
   }
   return { lat: place?.lat ?? null, lon: place?.lon ?? null, timeZone: place?.timeZone ?? null };
 }
@@ -43,13 +52,20 @@ function addressColumns(side: "origin" | "destination", address: Address) {
 }
 
 async function resolveReceiver(em: EntityManager, actor: Actor, organizationId: string, contactId: string | null) {
-  if (organizationId === actor.organization?.id) throw badRequest("receiverOrganizationId: the receiver must be another organisation", { field: "receiverOrganizationId" });
+  if (organizationId === actor.organization?.id)
+    throw badRequest("receiverOrganizationId: the receiver must be another organisation", {
+      field: "receiverOrganizationId",
+    });
   const org = await em.findOne(OrganizationSchema, { id: organizationId });
-  if (!org || org.kind === "courier_service") throw badRequest("receiverOrganizationId: choose a keeper organisation", { field: "receiverOrganizationId" });
+  if (!org || org.kind === "courier_service")
+    throw badRequest("receiverOrganizationId: choose a keeper organisation", { field: "receiverOrganizationId" });
   let contact = null;
   if (contactId) {
     contact = await em.findOne(UserSchema, { id: contactId, organization: org, role: "member", disabled: false });
-    if (!contact) throw badRequest("receiverContactId: choose a member of the receiving organisation", { field: "receiverContactId" });
+    if (!contact)
+      throw badRequest("receiverContactId: choose a member of the receiving organisation", {
+        field: "receiverContactId",
+      });
   }
   return { org, contact };
 }
@@ -60,32 +76,57 @@ async function resolveTaxa(em: EntityManager, animals: TransferInputParsed["anim
   const byId = new Map(taxa.map((t) => [t.id, t]));
   animals.forEach((a, i) => {
     const taxon = byId.get(a.taxonId);
-    if (!taxon) throw badRequest(`animals.${i}.taxonId: no such species in the catalogue`, { field: `animals.${i}.taxonId` });
-    if (!["species", "subspecies", "genus"].includes(taxon.rank)) throw badRequest(`animals.${i}.taxonId: choose a species (not a ${taxon.rank})`, { field: `animals.${i}.taxonId` });
+    if (!taxon)
+      throw badRequest(`animals.${i}.taxonId: no such species in the catalogue`, { field: `animals.${i}.taxonId` });
+    if (!["species", "subspecies", "genus"].includes(taxon.rank))
+      throw badRequest(`animals.${i}.taxonId: choose a species (not a ${taxon.rank})`, {
+        field: `animals.${i}.taxonId`,
+      });
   });
   return byId;
 }
 
 /** Replaces the transfer's boxes and animal lines with the given lists, keeping ids that match. */
-async function replaceLines(em: EntityManager, transfer: Transfer, input: Pick<TransferInputParsed, "containers" | "animals">) {
+async function replaceLines(
+  em: EntityManager,
+  transfer: Transfer,
+  input: Pick<TransferInputParsed, "containers" | "animals">,
+) {
   const taxa = await resolveTaxa(em, input.animals);
-  const [oldContainers, oldAnimals] = await Promise.all([em.find(ContainerSchema, { transfer }), em.find(AnimalSchema, { transfer })]);
+  const [oldContainers, oldAnimals] = await Promise.all([
+    em.find(ContainerSchema, { transfer }),
+    em.find(AnimalSchema, { transfer }),
+  ]);
   const oldC = new Map(oldContainers.map((c) => [c.id, c]));
   const oldA = new Map(oldAnimals.map((a) => [a.id, a]));
   const byKey = new Map<string, Container>();
 
   input.containers.forEach((c, position) => {
-    if (c.id && !oldC.has(c.id)) throw badRequest(`containers.${position}.id: not a box of this transfer`, { field: `containers.${position}.id` });
+    if (c.id && !oldC.has(c.id))
+      throw badRequest(`containers.${position}.id: not a box of this transfer`, { field: `containers.${position}.id` });
     const values = {
-      key: c.key, position, label: c.label, lengthMm: c.lengthMm, widthMm: c.widthMm, heightMm: c.heightMm,
-      wallMaterial: c.wallMaterial, wallThicknessMm: c.wallThicknessMm, pack: c.pack, sealNumber: c.sealNumber ?? null,
+      key: c.key,
+      position,
+      label: c.label,
+      lengthMm: c.lengthMm,
+      widthMm: c.widthMm,
+      heightMm: c.heightMm,
+      wallMaterial: c.wallMaterial,
+      wallThicknessMm: c.wallThicknessMm,
+      pack: c.pack,
+      sealNumber: c.sealNumber ?? null,
     };
-    const entity: Container = c.id ? em.assign(oldC.get(c.id)!, values) : em.create(ContainerSchema, { ...values, transfer });
+    const entity: Container = c.id
+      ? em.assign(oldC.get(c.id)!, values)
+      : em.create(ContainerSchema, { ...values, transfer });
     if (c.id) oldC.delete(c.id);
     byKey.set(c.key, entity);
   });
   input.animals.forEach((a, position) => {
-    if (a.id && !oldA.has(a.id)) throw badRequest(`animals.${position}.id: not an animal line of this transfer`, { field: `animals.${position}.id` });
+    if (a.id && !oldA.has(a.id))
+      throw badRequest(`animals.${position}.id: not an animal line of this transfer`, {
+        field: `animals.${position}.id`,
+      });
     const values = {
       position,
       taxon: ref(taxa.get(a.taxonId)!),
@@ -119,39 +160,51 @@ async function newNumber(em: EntityManager): Promise<string> {
 }
 
 /** The sender drafts a transfer: parties, route, dates, boxes and animals. */
-export async function createTransfer({ em, actor, input }: { em: EntityManager; actor: Actor; input: TransferInputParsed }) {
-  if (actor.role !== "member" || !actor.organization) throw forbidden("Only a member of a keeper organisation can draft a transfer.");
-  return em.transactional(async (tx) => {
-    const receiver = await resolveReceiver(tx, actor, input.receiverOrganizationId, input.receiverContactId);
-    const transfer = tx.create(TransferSchema, {
-      number: await newNumber(tx),
-      status: "draft",
-      version: 1,
-      senderOrganization: tx.getReference(OrganizationSchema, actor.organization!.id),
-      senderContact: tx.getReference(UserSchema, actor.id),
-      receiverOrganization: receiver.org,
-      receiverContact: receiver.contact,
-      ...(addressColumns("origin", input.origin) as object),
-      ...(addressColumns("destination", input.destination) as object),
-      mode: input.mode,
-      plannedDepartureAt: new Date(input.plannedDepartureAt),
-      expectedArrivalAt: new Date(input.expectedArrivalAt),
-      purpose: input.purpose,
-      sale: input.sale,
-      salePriceUsd: input.salePriceUsd ?? null,
-      handlingNotes: input.handlingNotes ?? null,
-      senderPrivateNotes: input.privateNotes ?? null,
-      createdBy: tx.getReference(UserSchema, actor.id),
-    } as never) as Transfer;
-    await tx.flush();
-    await replaceLines(tx, transfer, input);
-    await appendCustody(tx, transfer.id, actor, "created", { number: transfer.number, status: "draft" });
-    await tx.flush();
-    return transfer;
-  }).catch((err) => {
-    if (err instanceof UniqueConstraintViolationException) throw conflict("That transfer number was just taken; try again.");
-    throw err;
-  });
+export async function createTransfer({
+  em,
+  actor,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  input: TransferInputParsed;
+}) {
+  if (actor.role !== "member" || !actor.organization)
+    throw forbidden("Only a member of a keeper organisation can draft a transfer.");
+  return em
+    .transactional(async (tx) => {
+      const receiver = await resolveReceiver(tx, actor, input.receiverOrganizationId, input.receiverContactId);
+      const transfer = tx.create(TransferSchema, {
+        number: await newNumber(tx),
+        status: "draft",
+        version: 1,
+        senderOrganization: tx.getReference(OrganizationSchema, actor.organization!.id),
+        senderContact: tx.getReference(UserSchema, actor.id),
+        receiverOrganization: receiver.org,
+        receiverContact: receiver.contact,
+        ...(addressColumns("origin", input.origin) as object),
+        ...(addressColumns("destination", input.destination) as object),
+        mode: input.mode,
+        plannedDepartureAt: new Date(input.plannedDepartureAt),
+        expectedArrivalAt: new Date(input.expectedArrivalAt),
+        purpose: input.purpose,
+        sale: input.sale,
+        salePriceUsd: input.salePriceUsd ?? null,
+        handlingNotes: input.handlingNotes ?? null,
+        senderPrivateNotes: input.privateNotes ?? null,
+        createdBy: tx.getReference(UserSchema, actor.id),
+      } as never) as Transfer;
+      await tx.flush();
+      await replaceLines(tx, transfer, input);
+      await appendCustody(tx, transfer.id, actor, "created", { number: transfer.number, status: "draft" });
+      await tx.flush();
+      return transfer;
+    })
+    .catch((err) => {
+      if (err instanceof UniqueConstraintViolationException)
+        throw conflict("That transfer number was just taken; try again.");
+      throw err;
+    });
 }
 
 /** The editable content of a transfer as one document, for the edit history. */
@@ -164,7 +217,12 @@ async function editableDocument(em: EntityManager, t: Transfer): Promise<Editabl
     receiverOrganizationId: t.receiverOrganization.id,
     receiverContactId: t.receiverContact?.id ?? null,
     origin: { street: t.originStreet, city: t.originCity, state: t.originState, zip: t.originZip },
-    destination: { street: t.destinationStreet, city: t.destinationCity, state: t.destinationState, zip: t.destinationZip },
+    destination: {
+      street: t.destinationStreet,
+      city: t.destinationCity,
+      state: t.destinationState,
+      zip: t.destinationZip,
+    },
     mode: t.mode,
     plannedDepartureAt: t.plannedDepartureAt.toISOString(),
     expectedArrivalAt: t.expectedArrivalAt.toISOString(),
@@ -173,10 +231,28 @@ async function editableDocument(em: EntityManager, t: Transfer): Promise<Editabl
     salePriceUsd: t.salePriceUsd ?? null,
     handlingNotes: t.handlingNotes ?? null,
     privateNotes: t.senderPrivateNotes ?? null,
-    containers: containers.map((c) => ({ id: c.id, label: c.label, lengthMm: c.lengthMm, widthMm: c.widthMm, heightMm: c.heightMm, wallMaterial: c.wallMaterial, wallThicknessMm: c.wallThicknessMm, pack: c.pack, sealNumber: c.sealNumber ?? null })),
+    containers: containers.map((c) => ({
+      id: c.id,
+      label: c.label,
+      lengthMm: c.lengthMm,
+      widthMm: c.widthMm,
+      heightMm: c.heightMm,
+      wallMaterial: c.wallMaterial,
+      wallThicknessMm: c.wallThicknessMm,
+      pack: c.pack,
+      sealNumber: c.sealNumber ?? null,
+    })),
     animals: animals.map((a) => ({
-      id: a.id, taxon: a.taxon.getEntity().scientificName, count: a.count, sex: a.sex, identifier: a.identifier ?? null, origin: a.origin,
-      lengthMm: a.lengthMm ?? null, weightG: a.weightG ?? null, hatchDate: a.hatchDate ?? null, notes: a.notes ?? null,
+      id: a.id,
+      taxon: a.taxon.getEntity().scientificName,
+      count: a.count,
+      sex: a.sex,
+      identifier: a.identifier ?? null,
+      origin: a.origin,
+      lengthMm: a.lengthMm ?? null,
+      weightG: a.weightG ?? null,
+      hatchDate: a.hatchDate ?? null,
+      notes: a.notes ?? null,
       box: a.container ? (containers.find((c) => c.id === a.container!.id)?.label ?? null) : null,
     })),
   };
@@ -187,15 +263,35 @@ async function editableDocument(em: EntityManager, t: Transfer): Promise<Editabl
  * changed field is kept with its old and new value; a material change after the receiver
  * confirmed sends the transfer back for confirmation.
  */
-export async function updateTransfer({ em, actor, transferId, input }: { em: EntityManager; actor: Actor; transferId: string; input: PatchParsed }) {
+export async function updateTransfer({
+  em,
+  actor,
+  transferId,
+  input,
+}: {
+  em: EntityManager;
+  actor: Actor;
+  transferId: string;
+  input: PatchParsed;
+}) {
   return em.transactional(async (tx) => {
     const t = await tx.findOneOrFail(TransferSchema, { id: transferId }, { lockMode: LockMode.PESSIMISTIC_WRITE });
-    if (t.version !== input.version) throw conflict("Someone changed this transfer after you opened it. Reload to see their changes, then edit again.", { currentVersion: t.version });
-    if (!EDITABLE.includes(t.status)) throw conflict(`A transfer that is ${t.status.replace("_", " ")} can no longer be edited.`);
+    if (t.version !== input.version)
+      throw conflict(
+        "Someone changed this transfer after you opened it. Reload to see their changes, then edit again.",
+        { currentVersion: t.version },
+      );
+    if (!EDITABLE.includes(t.status))
+      throw conflict(`A transfer that is ${t.status.replace("_", " ")} can no longer be edited.`);
     const before = await editableDocument(tx, t);
 
     if (input.receiverOrganizationId !== undefined || input.receiverContactId !== undefined) {
-      const r = await resolveReceiver(tx, actor, input.receiverOrganizationId ?? t.receiverOrganization.id, input.receiverContactId === undefined ? (t.receiverContact?.id ?? null) : input.receiverContactId);
+      const r = await resolveReceiver(
+        tx,
+        actor,
+        input.receiverOrganizationId ?? t.receiverOrganization.id,
+        input.receiverContactId === undefined ? (t.receiverContact?.id ?? null) : input.receiverContactId,
+      );
       t.receiverOrganization = ref(r.org);
       t.receiverContact = r.contact ? ref(r.contact) : null;
     }
@@ -204,7 +300,8 @@ export async function updateTransfer({ em, actor, transferId, input }: { em: Ent
     if (input.mode !== undefined) t.mode = input.mode;
     if (input.plannedDepartureAt !== undefined) t.plannedDepartureAt = new Date(input.plannedDepartureAt);
     if (input.expectedArrivalAt !== undefined) t.expectedArrivalAt = new Date(input.expectedArrivalAt);
-    if (t.expectedArrivalAt <= t.plannedDepartureAt) throw badRequest("expectedArrivalAt: Arrival must be after departure", { field: "expectedArrivalAt" });
+    if (t.expectedArrivalAt <= t.plannedDepartureAt)
+      throw badRequest("expectedArrivalAt: Arrival must be after departure", { field: "expectedArrivalAt" });
     if (input.purpose !== undefined) t.purpose = input.purpose;
     if (input.sale !== undefined) t.sale = input.sale;
     if (input.salePriceUsd !== undefined) t.salePriceUsd = input.salePriceUsd ?? null;
@@ -212,7 +309,9 @@ export async function updateTransfer({ em, actor, transferId, input }: { em: Ent
     if (input.privateNotes !== undefined) t.senderPrivateNotes = input.privateNotes ?? null;
     if (input.containers !== undefined || input.animals !== undefined) {
       if (input.containers === undefined || input.animals === undefined) {
-        throw badRequest("containers: send boxes and animals together, so every animal names its box", { field: input.containers === undefined ? "containers" : "animals" });
+        throw badRequest("containers: send boxes and animals together, so every animal names its box", {
+          field: input.containers === undefined ? "containers" : "animals",
+        });
       }
       await replaceLines(tx, t, { containers: input.containers, animals: input.animals });
     }
@@ -235,12 +334,19 @@ export async function updateTransfer({ em, actor, transferId, input }: { em: Ent
         newValue: hidden ? "(hidden)" : c.newValue,
       });
     }
-    const next = statusAfterEdit(t.status, changes.map((c) => topLevelField(c.field)));
+    const next = statusAfterEdit(
+      t.status,
+      changes.map((c) => topLevelField(c.field)),
+    );
     t.version += 1;
     if (next !== t.status) {
       const fields = [...new Set(changes.map((c) => topLevelField(c.field)))].join(", ");
       t.reconfirmationReason = `Changed after confirmation: ${fields}`;
-      await appendCustody(tx, t.id, actor, "status_change", { from: t.status, to: next, reason: t.reconfirmationReason });
+      await appendCustody(tx, t.id, actor, "status_change", {
+        from: t.status,
+        to: next,
+        reason: t.reconfirmationReason,
+      });
       t.status = next;
       t.confirmedAt = null;
       t.confirmedBy = null;

@@ -7,7 +7,12 @@ export function NotFoundRoute() {
       <p className="font-display text-5xl text-fern">404</p>
       <h1 className="mt-2 text-2xl font-semibold">This page is not in the notebook</h1>
       <p className="mt-2 text-ink-soft">The link may be old, or the record may belong to someone else.</p>
-      <Link to={paths.home} className="mt-6 inline-flex min-h-11 items-center rounded-md bg-fern px-4 font-medium text-paper-card">Back to Hatchway</Link>
+      <Link
+        to={paths.home}
+        className="mt-6 inline-flex min-h-11 items-center rounded-md bg-fern px-4 font-medium text-paper-card"
+      >
+        Back to Hatchway
+      </Link>
     </div>
   );
 }

@@ -8,7 +8,11 @@ const styles: Record<Variant, string> = {
   ghost: "bg-transparent text-fern hover:bg-fern-light border border-transparent",
 };
 
-export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; size?: "md" | "lg"; busy?: boolean };
+export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & {
+  variant?: Variant;
+  size?: "md" | "lg";
+  busy?: boolean;
+};
 
 export const Button = forwardRef<HTMLButtonElement, ButtonProps>(function Button(
   { variant = "primary", size = "md", busy = false, className = "", children, disabled, ...rest },
@@ -23,7 +27,9 @@ export const Button = forwardRef<HTMLButtonElement, ButtonProps>(function Button
       aria-busy={busy || undefined}
       {...rest}
     >
-      {busy ? <span className="h-4 w-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden /> : null}
+      {busy ? (
+        <span className="h-4 w-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden />
+      ) : null}
       {children}
     </button>
   );

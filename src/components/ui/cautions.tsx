@@ -8,8 +8,8 @@ export function TransportCautions() {
         <li>Keep boxes out of direct sun and out of closed cars.</li>
         <li>Heat packs never touch an animal's container.</li>
         <li>
-          Hatchway's checks are a planning aid, not legal or veterinary advice — confirm with the state wildlife agency and a
-          licensed veterinarian.
+          Hatchway's checks are a planning aid, not legal or veterinary advice — confirm with the state wildlife agency
+          and a licensed veterinarian.
         </li>
       </ul>
     </Notice>

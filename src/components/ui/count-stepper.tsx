@@ -24,7 +24,13 @@ export function CountStepper({ label, value, onChange, min = 0, max = 10_000, hi
         {label}
       </label>
       <div className="flex items-center gap-2">
-        <button type="button" className={button} aria-label={`One fewer: ${label}`} onClick={() => onChange(clamp(value - 1))} disabled={value <= min}>
+        <button
+          type="button"
+          className={button}
+          aria-label={`One fewer: ${label}`}
+          onClick={() => onChange(clamp(value - 1))}
+          disabled={value <= min}
+        >
           −
         </button>
         <input
@@ -42,7 +48,13 @@ export function CountStepper({ label, value, onChange, min = 0, max = 10_000, hi
           }}
           className="h-12 w-20 rounded-md border border-rule bg-paper-card px-2 text-center text-xl font-semibold text-ink focus:border-fern focus:outline-none"
         />
-        <button type="button" className={button} aria-label={`One more: ${label}`} onClick={() => onChange(clamp(value + 1))} disabled={value >= max}>
+        <button
+          type="button"
+          className={button}
+          aria-label={`One more: ${label}`}
+          onClick={() => onChange(clamp(value + 1))}
+          disabled={value >= max}
+        >
           +
         </button>
       </div>

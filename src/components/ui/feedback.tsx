@@ -11,10 +11,23 @@ const marks: Record<Tone, string> = { info: "i", caution: "!", block: "×", ok: 
 const markColours: Record<Tone, string> = { info: "bg-slate", caution: "bg-amber", block: "bg-brick", ok: "bg-fern" };
 
 /** A notice in the notebook's margin: information, a caution, a block, or all clear. */
-export function Notice({ tone = "info", title, children, role }: { tone?: Tone; title?: string; children?: ReactNode; role?: "alert" | "status" }) {
+export function Notice({
+  tone = "info",
+  title,
+  children,
+  role,
+}: {
+  tone?: Tone;
+  title?: string;
+  children?: ReactNode;
+  role?: "alert" | "status";
+}) {
   return (
     <div role={role} className={`flex gap-3 rounded-card border-l-4 border px-4 py-3 ${tones[tone]}`}>
-      <span aria-hidden className={`mt-0.5 flex h-6 w-6 shrink-0 items-center justify-center rounded-full text-sm font-bold text-paper-card ${markColours[tone]}`}>
+      <span
+        aria-hidden
+        className={`mt-0.5 flex h-6 w-6 shrink-0 items-center justify-center rounded-full text-sm font-bold text-paper-card ${markColours[tone]}`}
+      >
         {marks[tone]}
       </span>
       <div className="flex flex-col gap-1">
@@ -55,5 +68,9 @@ export function Badge({ tone = "info", children }: { tone?: Tone | "neutral"; ch
           : tone === "block"
             ? "bg-brick-bg text-brick border-brick-line"
             : "bg-slate-bg text-slate border-slate";
-  return <span className={`inline-flex items-center rounded-full border px-2.5 py-0.5 text-xs font-semibold ${palette}`}>{children}</span>;
+  return (
+    <span className={`inline-flex items-center rounded-full border px-2.5 py-0.5 text-xs font-semibold ${palette}`}>
+      {children}
+    </span>
+  );
 }

@@ -23,7 +23,11 @@ describe("TextField", () => {
 
 describe("Notice", () => {
   it("announces a block as an alert", () => {
-    render(<Notice tone="block" role="alert" title="Not signed in">Try again</Notice>);
+    render(
+      <Notice tone="block" role="alert" title="Not signed in">
+        Try again
+      </Notice>,
+    );
     expect(screen.getByRole("alert")).toHaveTextContent("Not signed in");
   });
 });

@@ -1,4 +1,11 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from "react";
+import {
+  forwardRef,
+  useId,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from "react";
 
 type FieldShellProps = { label: string; error?: string; hint?: ReactNode; id: string; children: ReactNode };
 
@@ -9,7 +16,11 @@ function FieldShell({ label, error, hint, id, children }: FieldShellProps) {
         {label}
       </label>
       {children}
-      {hint && !error ? <p id={`${id}-hint`} className="text-sm text-ink-soft">{hint}</p> : null}
+      {hint && !error ? (
+        <p id={`${id}-hint`} className="text-sm text-ink-soft">
+          {hint}
+        </p>
+      ) : null}
       {error ? (
         <p id={`${id}-error`} role="alert" className="text-sm font-medium text-brick">
           {error}
@@ -24,7 +35,10 @@ const control =
 
 type InputProps = InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string; hint?: ReactNode };
 
-export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextField({ label, error, hint, id, className = "", ...rest }, ref) {
+export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextField(
+  { label, error, hint, id, className = "", ...rest },
+  ref,
+) {
   const auto = useId();
   const fieldId = id ?? auto;
   return (
@@ -41,9 +55,17 @@ export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextF
   );
 });
 
-type SelectProps = SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string; hint?: ReactNode; options: { value: string; label: string }[] };
+type SelectProps = SelectHTMLAttributes<HTMLSelectElement> & {
+  label: string;
+  error?: string;
+  hint?: ReactNode;
+  options: { value: string; label: string }[];
+};
 
-export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField({ label, error, hint, id, options, className = "", ...rest }, ref) {
+export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField(
+  { label, error, hint, id, options, className = "", ...rest },
+  ref,
+) {
   const auto = useId();
   const fieldId = id ?? auto;
   return (
@@ -68,7 +90,10 @@ export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function S
 
 type TextAreaProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; error?: string; hint?: ReactNode };
 
-export const TextAreaField = forwardRef<HTMLTextAreaElement, TextAreaProps>(function TextAreaField({ label, error, hint, id, className = "", ...rest }, ref) {
+export const TextAreaField = forwardRef<HTMLTextAreaElement, TextAreaProps>(function TextAreaField(
+  { label, error, hint, id, className = "", ...rest },
+  ref,
+) {
   const auto = useId();
   const fieldId = id ?? auto;
   return (

@@ -1,10 +1,25 @@
 import { forwardRef, useId, useState } from "react";
-import { lengthInputText, lengthUnit, parseLengthMm, parseTempF, tempInputText, tempUnit, type UnitSystem } from "@/lib/units";
+import {
+  lengthInputText,
+  lengthUnit,
+  parseLengthMm,
+  parseTempF,
+  tempInputText,
+  tempUnit,
+  type UnitSystem,
+} from "@/lib/units";
 import { useUnitSystem } from "@/lib/units-preference";
 
 type Kind = "length" | "temperature";
 
-const codec: Record<Kind, { unit: (s: UnitSystem) => string; text: (v: number | null | undefined, s: UnitSystem) => string; parse: (t: string, s: UnitSystem) => number | null }> = {
+const codec: Record<
+  Kind,
+  {
+    unit: (s: UnitSystem) => string;
+    text: (v: number | null | undefined, s: UnitSystem) => string;
+    parse: (t: string, s: UnitSystem) => number | null;
+  }
+> = {
   length: { unit: lengthUnit, text: lengthInputText, parse: parseLengthMm },
   temperature: { unit: tempUnit, text: tempInputText, parse: parseTempF },
 };
@@ -27,7 +42,10 @@ type Props = {
  * A measurement typed in the unit the user chose (inches or mm, °F or °C) and kept in the
  * stored unit. Switching units re-shows the same stored value; it never rewrites it.
  */
-export const MeasureField = forwardRef<HTMLInputElement, Props>(function MeasureField({ kind, label, value, onChange, onBlur, name, error, hint, className = "" }, ref) {
+export const MeasureField = forwardRef<HTMLInputElement, Props>(function MeasureField(
+  { kind, label, value, onChange, onBlur, name, error, hint, className = "" },
+  ref,
+) {
   const [system] = useUnitSystem();
   const { unit, text: toText, parse } = codec[kind];
   const [text, setText] = useState(() => toText(value, system));

@@ -1,6 +1,16 @@
 import type { ReactNode } from "react";
 
-export function PageHeader({ title, eyebrow, actions, children }: { title: string; eyebrow?: string; actions?: ReactNode; children?: ReactNode }) {
+export function PageHeader({
+  title,
+  eyebrow,
+  actions,
+  children,
+}: {
+  title: string;
+  eyebrow?: string;
+  actions?: ReactNode;
+  children?: ReactNode;
+}) {
   return (
     <header className="mb-6 flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
       <div>
@@ -13,9 +23,22 @@ export function PageHeader({ title, eyebrow, actions, children }: { title: strin
   );
 }
 
-export function Card({ title, children, actions, className = "" }: { title?: string; children: ReactNode; actions?: ReactNode; className?: string }) {
+export function Card({
+  title,
+  children,
+  actions,
+  className = "",
+}: {
+  title?: string;
+  children: ReactNode;
+  actions?: ReactNode;
+  className?: string;
+}) {
   return (
-    <section className={`rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5 ${className}`} aria-label={title}>
+    <section
+      className={`rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5 ${className}`}
+      aria-label={title}
+    >
       {title || actions ? (
         <div className="mb-3 flex items-center justify-between gap-3">
           {title ? <h2 className="text-lg font-semibold">{title}</h2> : <span />}

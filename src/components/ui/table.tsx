@@ -14,7 +14,11 @@ export function Table({ caption, head, children }: { caption: string; head: Reac
 }
 
 export function Th({ children, className = "" }: { children?: ReactNode; className?: string }) {
-  return <th scope="col" className={`px-3 py-2.5 font-semibold ${className}`}>{children}</th>;
+  return (
+    <th scope="col" className={`px-3 py-2.5 font-semibold ${className}`}>
+      {children}
+    </th>
+  );
 }
 
 export function Td({ children, className = "" }: { children?: ReactNode; className?: string }) {

@@ -28,10 +28,20 @@ function hit(id: string, scientificName: string, commonName: string): TaxonSearc
 
 /** A stand-in for GET /api/taxa: plain substring matching over the three taxa. */
 function fakeSearch() {
-  return vi.fn(async (q: string) => TAXA.filter((t) => `${t.scientificName} ${t.commonName}`.toLowerCase().includes(q.toLowerCase())));
+  return vi.fn(async (q: string) =>
+    TAXA.filter((t) => `${t.scientificName} ${t.commonName}`.toLowerCase().includes(q.toLowerCase())),
+  );
 }
 
-function Harness({ search, onChange, onSubmit = () => {} }: { search: ReturnType<typeof fakeSearch>; onChange?: (t: TaxonBriefDto | null) => void; onSubmit?: () => void }) {
+function Harness({
+  search,
+  onChange,
+  onSubmit = () => {},
+}: {
+  search: ReturnType<typeof fakeSearch>;
+  onChange?: (t: TaxonBriefDto | null) => void;
+  onSubmit?: () => void;
+}) {
   const [value, setValue] = useState<TaxonBriefDto | null>(null);
   return (
     <form
@@ -68,10 +78,11 @@ describe("TaxonCombobox", () => {
     const list = await screen.findByRole("listbox");
     expect(input).toHaveAttribute("aria-expanded", "true");
     expect(input.getAttribute("aria-controls")).toBe(list.id);
-    expect(within(list).getAllByRole("option").map((o) => o.textContent)).toEqual([
-      "Pogona vitticeps — Central bearded dragon",
-      "Pogona henrylawsoni — Rankin's dragon",
-    ]);
+    expect(
+      within(list)
+        .getAllByRole("option")
+        .map((o) => o.textContent),
+    ).toEqual(["Pogona vitticeps — Central bearded dragon", "Pogona henrylawsoni — Rankin's dragon"]);
     expect(within(list).getAllByRole("option")[0]!.querySelector("i")).toHaveTextContent("Pogona vitticeps");
   });
 

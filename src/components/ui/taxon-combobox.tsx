@@ -23,7 +23,17 @@ type Props = {
  * letters of a scientific, common or old name; Down/Up move through the suggestions, Enter
  * takes one, Escape closes the list (and clears the text when it is already closed).
  */
-export function TaxonCombobox({ label, value, onChange, search, onBlur, error, hint, minChars = 2, debounceMs = 200 }: Props) {
+export function TaxonCombobox({
+  label,
+  value,
+  onChange,
+  search,
+  onBlur,
+  error,
+  hint,
+  minChars = 2,
+  debounceMs = 200,
+}: Props) {
   const id = useId();
   const listId = `${id}-list`;
   const [text, setText] = useState(value?.scientificName ?? "");
@@ -140,7 +150,8 @@ export function TaxonCombobox({ label, value, onChange, search, onBlur, error, h
             : `${hits.length} species found. Use the up and down arrows to choose.`
           : "";
   const messageVisible = status === "failed" || (status === "done" && open && hits.length === 0);
-  const described = [error ? `${id}-error` : null, hint && !error ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
+  const described =
+    [error ? `${id}-error` : null, hint && !error ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
 
   return (
     <div className="relative flex flex-col gap-1">

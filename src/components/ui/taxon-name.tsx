@@ -2,7 +2,13 @@ import type { TaxonBriefDto } from "@shared/schemas/transfer";
 import { Badge } from "./feedback";
 
 /** A species as keepers write it: the scientific name in italics, then the common name. */
-export function TaxonName({ taxon, showVenomous = true }: { taxon: Pick<TaxonBriefDto, "scientificName" | "commonName" | "venomous">; showVenomous?: boolean }) {
+export function TaxonName({
+  taxon,
+  showVenomous = true,
+}: {
+  taxon: Pick<TaxonBriefDto, "scientificName" | "commonName" | "venomous">;
+  showVenomous?: boolean;
+}) {
   return (
     <span>
       <i>{taxon.scientificName}</i>

@@ -4,7 +4,15 @@ import userEvent from "@testing-library/user-event";
 import { MeasureField } from "./measure-field";
 import { UnitsSwitch } from "./units-switch";
 
-function Screen({ tempF, lengthMm, onTemp = () => {} }: { tempF: number | null; lengthMm: number | null; onTemp?: (v: number | null) => void }) {
+function Screen({
+  tempF,
+  lengthMm,
+  onTemp = () => {},
+}: {
+  tempF: number | null;
+  lengthMm: number | null;
+  onTemp?: (v: number | null) => void;
+}) {
   return (
     <>
       <UnitsSwitch />
@@ -26,7 +34,10 @@ describe("UnitsSwitch", () => {
     await userEvent.click(screen.getByRole("button", { name: "Degrees Celsius and millimetres" }));
     expect(screen.getByLabelText("Box temperature (°C)")).toHaveValue("35");
     expect(screen.getByLabelText("Carapace (mm)")).toHaveValue("101.6");
-    expect(screen.getByRole("button", { name: "Degrees Celsius and millimetres" })).toHaveAttribute("aria-pressed", "true");
+    expect(screen.getByRole("button", { name: "Degrees Celsius and millimetres" })).toHaveAttribute(
+      "aria-pressed",
+      "true",
+    );
     expect(localStorage.getItem("hatchway.units")).toBe("metric");
   });
 

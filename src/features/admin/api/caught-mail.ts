@@ -2,7 +2,16 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
 
 export type CaughtMail = { id: number; from: string; to: string[]; subject: string; text: string; receivedAt: string };
-export type OutboxEntry = { id: string; to: string; subject: string; status: string; attempts: number; lastError: string | null; createdAt: string; sentAt: string | null };
+export type OutboxEntry = {
+  id: string;
+  to: string;
+  subject: string;
+  status: string;
+  attempts: number;
+  lastError: string | null;
+  createdAt: string;
+  sentAt: string | null;
+};
 
 export const caughtMailKey = ["admin", "caught-mail"] as const;
 

@@ -15,7 +15,8 @@ export const useOrganizations = () => useQuery(organizationsQueryOptions());
 export function useCreateOrganization() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: OrganizationInput) => api<{ organization: OrganizationDto }>("/api/organizations", { method: "POST", body: input }),
+    mutationFn: (input: OrganizationInput) =>
+      api<{ organization: OrganizationDto }>("/api/organizations", { method: "POST", body: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: organizationsKey }),
   });
 }

@@ -5,7 +5,10 @@ import { api } from "@/lib/api-client";
 export const usersKey = ["admin", "users"] as const;
 
 export const usersQueryOptions = () =>
-  queryOptions({ queryKey: usersKey, queryFn: () => api<{ users: AdminUserDto[] }>("/api/users").then((r) => r.users) });
+  queryOptions({
+    queryKey: usersKey,
+    queryFn: () => api<{ users: AdminUserDto[] }>("/api/users").then((r) => r.users),
+  });
 
 export const useUsers = () => useQuery(usersQueryOptions());
 
@@ -20,7 +23,8 @@ export function useInviteUser() {
 export function useUpdateUser() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, patch }: { id: string; patch: UserPatch }) => api<{ user: AdminUserDto }>(`/api/users/${id}`, { method: "PATCH", body: patch }),
+    mutationFn: ({ id, patch }: { id: string; patch: UserPatch }) =>
+      api<{ user: AdminUserDto }>(`/api/users/${id}`, { method: "PATCH", body: patch }),
     onSuccess: () => client.invalidateQueries({ queryKey: usersKey }),
   });
 }

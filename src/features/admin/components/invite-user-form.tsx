@@ -22,22 +22,39 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
     defaultValues: { email: "", displayName: "", role: "member", organizationId: null },
   });
   const errors = form.formState.errors;
-  const orgOptions = [{ value: "", label: "— none —" }, ...(orgs.data ?? []).map((o) => ({ value: o.id, label: o.name }))];
+  const orgOptions = [
+    { value: "", label: "— none —" },
+    ...(orgs.data ?? []).map((o) => ({ value: o.id, label: o.name })),
+  ];
 
   return (
     <form
       className="grid gap-4 sm:grid-cols-2"
       noValidate
-      onSubmit={form.handleSubmit((values) => invite.mutate(values, { onSuccess: () => { form.reset(); onDone(); } }))}
+      onSubmit={form.handleSubmit((values) =>
+        invite.mutate(values, {
+          onSuccess: () => {
+            form.reset();
+            onDone();
+          },
+        }),
+      )}
     >
       {invite.error ? (
         <div className="sm:col-span-2">
-          <Notice tone="block" role="alert">{invite.error instanceof ApiError ? invite.error.message : "The invitation was not sent."}</Notice>
+          <Notice tone="block" role="alert">
+            {invite.error instanceof ApiError ? invite.error.message : "The invitation was not sent."}
+          </Notice>
         </div>
       ) : null}
       <TextField label="Name" error={errors.displayName?.message} {...form.register("displayName")} />
       <TextField label="E-mail" type="email" error={errors.email?.message} {...form.register("email")} />
-      <SelectField label="Role" options={USER_ROLES.map((r) => ({ value: r, label: roleLabel[r] }))} error={errors.role?.message} {...form.register("role")} />
+      <SelectField
+        label="Role"
+        options={USER_ROLES.map((r) => ({ value: r, label: roleLabel[r] }))}
+        error={errors.role?.message}
+        {...form.register("role")}
+      />
       <SelectField
         label="Organisation"
         options={orgOptions}
@@ -45,8 +62,12 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
         {...form.register("organizationId", { setValueAs: (v: string) => (v === "" ? null : v) })}
       />
       <div className="sm:col-span-2 flex gap-2">
-        <Button type="submit" busy={invite.isPending}>Send invitation</Button>
-        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={invite.isPending}>
+          Send invitation
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -21,7 +21,13 @@ export function OrganizationForm({ existing, onDone }: { existing?: Organization
   const form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(organizationInputSchema),
     defaultValues: existing
-      ? { name: existing.name, kind: existing.kind, address: existing.address, phone: existing.phone, email: existing.email }
+      ? {
+          name: existing.name,
+          kind: existing.kind,
+          address: existing.address,
+          phone: existing.phone,
+          email: existing.email,
+        }
       : { name: "", kind: "breeder", address: { street: "", city: "", state: "TN", zip: "" }, phone: "", email: "" },
   });
   const e = form.formState.errors;
@@ -34,20 +40,35 @@ export function OrganizationForm({ existing, onDone }: { existing?: Organization
     <form className="grid gap-4 sm:grid-cols-2" onSubmit={submit} noValidate>
       {mutation.error ? (
         <div className="sm:col-span-2">
-          <Notice tone="block" role="alert">{mutation.error instanceof ApiError ? mutation.error.message : "Not saved."}</Notice>
+          <Notice tone="block" role="alert">
+            {mutation.error instanceof ApiError ? mutation.error.message : "Not saved."}
+          </Notice>
         </div>
       ) : null}
       <TextField label="Name" error={e.name?.message} {...form.register("name")} />
-      <SelectField label="Kind" options={ORGANIZATION_KINDS.map((k) => ({ value: k, label: organizationKindLabel[k] }))} {...form.register("kind")} />
+      <SelectField
+        label="Kind"
+        options={ORGANIZATION_KINDS.map((k) => ({ value: k, label: organizationKindLabel[k] }))}
+        {...form.register("kind")}
+      />
       <TextField label="Street" error={e.address?.street?.message} {...form.register("address.street")} />
       <TextField label="City" error={e.address?.city?.message} {...form.register("address.city")} />
-      <SelectField label="State" options={US_STATES.map((s) => ({ value: s, label: s }))} error={e.address?.state?.message} {...form.register("address.state")} />
+      <SelectField
+        label="State"
+        options={US_STATES.map((s) => ({ value: s, label: s }))}
+        error={e.address?.state?.message}
+        {...form.register("address.state")}
+      />
       <TextField label="ZIP" inputMode="numeric" error={e.address?.zip?.message} {...form.register("address.zip")} />
       <TextField label="Phone (24-hour contact)" type="tel" error={e.phone?.message} {...form.register("phone")} />
       <TextField label="E-mail" type="email" error={e.email?.message} {...form.register("email")} />
       <div className="flex gap-2 sm:col-span-2">
-        <Button type="submit" busy={mutation.isPending}>{existing ? "Save changes" : "Add organisation"}</Button>
-        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={mutation.isPending}>
+          {existing ? "Save changes" : "Add organisation"}
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

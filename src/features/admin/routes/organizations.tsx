@@ -14,29 +14,62 @@ export function OrganizationsRoute() {
 
   return (
     <>
-      <PageHeader title="Organisations" eyebrow="Administration" actions={editing ? null : <Button onClick={() => setEditing("new")}>Add organisation</Button>}>
+      <PageHeader
+        title="Organisations"
+        eyebrow="Administration"
+        actions={editing ? null : <Button onClick={() => setEditing("new")}>Add organisation</Button>}
+      >
         Breeders, nature centres, rescues, zoos, private keepers and courier services.
       </PageHeader>
       {editing ? (
         <Card title={editing === "new" ? "New organisation" : `Edit ${editing.name}`} className="mb-6">
-          <OrganizationForm key={editing === "new" ? "new" : editing.id} existing={editing === "new" ? undefined : editing} onDone={() => setEditing(null)} />
+          <OrganizationForm
+            key={editing === "new" ? "new" : editing.id}
+            existing={editing === "new" ? undefined : editing}
+            onDone={() => setEditing(null)}
+          />
         </Card>
       ) : null}
       {orgs.isPending ? (
         <Loading label="Loading organisations…" />
       ) : orgs.error ? (
-        <Notice tone="block" role="alert">{(orgs.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(orgs.error as Error).message}
+        </Notice>
       ) : orgs.data.length === 0 ? (
         <EmptyState title="No organisations yet">Add the first one with the button above.</EmptyState>
       ) : (
-        <Table caption="Organisations" head={<tr><Th>Name</Th><Th>Kind</Th><Th>Address</Th><Th>Contact</Th><Th><span className="sr-only">Actions</span></Th></tr>}>
+        <Table
+          caption="Organisations"
+          head={
+            <tr>
+              <Th>Name</Th>
+              <Th>Kind</Th>
+              <Th>Address</Th>
+              <Th>Contact</Th>
+              <Th>
+                <span className="sr-only">Actions</span>
+              </Th>
+            </tr>
+          }
+        >
           {orgs.data.map((o) => (
             <tr key={o.id}>
               <Td className="font-medium">{o.name}</Td>
               <Td>{organizationKindLabel[o.kind]}</Td>
-              <Td>{o.address.street}, {o.address.city}, {o.address.state} {o.address.zip}</Td>
-              <Td>{o.phone}<br /><span className="text-ink-soft">{o.email}</span></Td>
-              <Td className="text-right"><Button variant="secondary" onClick={() => setEditing(o)}>Edit</Button></Td>
+              <Td>
+                {o.address.street}, {o.address.city}, {o.address.state} {o.address.zip}
+              </Td>
+              <Td>
+                {o.phone}
+                <br />
+                <span className="text-ink-soft">{o.email}</span>
+              </Td>
+              <Td className="text-right">
+                <Button variant="secondary" onClick={() => setEditing(o)}>
+                  Edit
+                </Button>
+              </Td>
             </tr>
           ))}
         </Table>

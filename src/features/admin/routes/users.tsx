@@ -16,20 +16,34 @@ export function UsersRoute() {
 
   return (
     <>
-      <PageHeader title="People" eyebrow="Administration" actions={!inviting ? <Button onClick={() => setInviting(true)}>Invite someone</Button> : null}>
+      <PageHeader
+        title="People"
+        eyebrow="Administration"
+        actions={!inviting ? <Button onClick={() => setInviting(true)}>Invite someone</Button> : null}
+      >
         Everyone who can sign in to Hatchway, their role and their organisation.
       </PageHeader>
       {inviting ? (
         <Card title="Invite someone" className="mb-6">
-          <p className="mb-4 text-sm text-ink-soft">They get an e-mail with a one-time link to choose a password (valid 72 hours).</p>
+          <p className="mb-4 text-sm text-ink-soft">
+            They get an e-mail with a one-time link to choose a password (valid 72 hours).
+          </p>
           <InviteUserForm onDone={() => setInviting(false)} />
         </Card>
       ) : null}
-      {update.error ? <div className="mb-4"><Notice tone="block" role="alert">{update.error instanceof ApiError ? update.error.message : "The change was not saved."}</Notice></div> : null}
+      {update.error ? (
+        <div className="mb-4">
+          <Notice tone="block" role="alert">
+            {update.error instanceof ApiError ? update.error.message : "The change was not saved."}
+          </Notice>
+        </div>
+      ) : null}
       {users.isPending ? (
         <Loading label="Loading people…" />
       ) : users.error ? (
-        <Notice tone="block" role="alert">{(users.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(users.error as Error).message}
+        </Notice>
       ) : users.data.length === 0 ? (
         <EmptyState title="Nobody here yet">Invite the first person with the button above.</EmptyState>
       ) : (
@@ -42,7 +56,9 @@ export function UsersRoute() {
               <Th>Organisation</Th>
               <Th>Role</Th>
               <Th>State</Th>
-              <Th><span className="sr-only">Actions</span></Th>
+              <Th>
+                <span className="sr-only">Actions</span>
+              </Th>
             </tr>
           }
         >
@@ -52,21 +68,36 @@ export function UsersRoute() {
               <Td>{u.email}</Td>
               <Td>{u.organization?.name ?? <span className="text-ink-faint">—</span>}</Td>
               <Td>
-                <label className="sr-only" htmlFor={`role-${u.id}`}>Role of {u.displayName}</label>
+                <label className="sr-only" htmlFor={`role-${u.id}`}>
+                  Role of {u.displayName}
+                </label>
                 <select
                   id={`role-${u.id}`}
                   className="min-h-10 rounded-md border border-rule bg-paper-card px-2"
                   value={u.role}
                   onChange={(e) => update.mutate({ id: u.id, patch: { role: e.target.value as UserRole } })}
                 >
-                  {USER_ROLES.map((r) => <option key={r} value={r}>{roleLabel[r]}</option>)}
+                  {USER_ROLES.map((r) => (
+                    <option key={r} value={r}>
+                      {roleLabel[r]}
+                    </option>
+                  ))}
                 </select>
               </Td>
               <Td>
-                {u.disabled ? <Badge tone="block">Disabled</Badge> : u.invitationPending ? <Badge tone="caution">Invited</Badge> : <Badge tone="ok">Active</Badge>}
+                {u.disabled ? (
+                  <Badge tone="block">Disabled</Badge>
+                ) : u.invitationPending ? (
+                  <Badge tone="caution">Invited</Badge>
+                ) : (
+                  <Badge tone="ok">Active</Badge>
+                )}
               </Td>
               <Td className="text-right">
-                <Button variant="secondary" onClick={() => update.mutate({ id: u.id, patch: { disabled: !u.disabled } })}>
+                <Button
+                  variant="secondary"
+                  onClick={() => update.mutate({ id: u.id, patch: { disabled: !u.disabled } })}
+                >
                   {u.disabled ? "Enable" : "Disable"}
                 </Button>
               </Td>

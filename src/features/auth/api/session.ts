@@ -49,5 +49,7 @@ export function useSignOut() {
 }
 
 export function useSetPassword() {
-  return useMutation({ mutationFn: (input: SetPasswordInput) => api<void>("/api/auth/password", { method: "POST", body: input }) });
+  return useMutation({
+    mutationFn: (input: SetPasswordInput) => api<void>("/api/auth/password", { method: "POST", body: input }),
+  });
 }

@@ -7,7 +7,6 @@ import { ApiError } from "@/lib/api-client";
 import { safeNext } from "@/lib/safe-next";
 import { useSession, useSignIn } from "../api/session";
 
-
 export function SignInRoute() {
   const session = useSession();
   const signIn = useSignIn();
@@ -22,24 +21,45 @@ export function SignInRoute() {
     event.preventDefault();
     signIn.mutate({ email, password }, { onSuccess: () => navigate(safeNext(params.get("next")), { replace: true }) });
   };
-  const error = signIn.error instanceof ApiError ? signIn.error.message : signIn.error ? "Signing in failed. Try again." : null;
+  const error =
+    signIn.error instanceof ApiError ? signIn.error.message : signIn.error ? "Signing in failed. Try again." : null;
 
   return (
     <main className="flex min-h-screen items-center justify-center px-4 py-10">
       <div className="w-full max-w-md">
         <div className="mb-6 text-center">
           <p className="font-display text-4xl font-bold text-fern">Hatchway</p>
-          <p className="mt-2 text-ink-soft">The shared record for animals on the move, from the sender&rsquo;s shelf to the receiver&rsquo;s enclosure.</p>
+          <p className="mt-2 text-ink-soft">
+            The shared record for animals on the move, from the sender&rsquo;s shelf to the receiver&rsquo;s enclosure.
+          </p>
         </div>
-        <form onSubmit={submit} className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-6 shadow-card" noValidate>
+        <form
+          onSubmit={submit}
+          className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-6 shadow-card"
+          noValidate
+        >
           <h1 className="text-xl font-semibold">Sign in</h1>
           {error ? (
             <Notice tone="block" role="alert" title="Not signed in">
               {error}
             </Notice>
           ) : null}
-          <TextField label="E-mail" type="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
-          <TextField label="Password" type="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} />
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            required
+            value={email}
+            onChange={(e) => setEmail(e.target.value)}
+          />
+          <TextField
+            label="Password"
+            type="password"
+            autoComplete="current-password"
+            required
+            value={password}
+            onChange={(e) => setPassword(e.target.value)}
+          />
           <Button type="submit" size="lg" busy={signIn.isPending}>
             Sign in
           </Button>

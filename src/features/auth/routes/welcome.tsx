@@ -19,13 +19,20 @@ export function WelcomeRoute() {
   const [params] = useSearchParams();
   const token = params.get("token") ?? "";
   const setPassword = useSetPassword();
-  const form = useForm<z.infer<typeof formSchema>>({ resolver: zodResolver(formSchema), defaultValues: { password: "", confirm: "" } });
+  const form = useForm<z.infer<typeof formSchema>>({
+    resolver: zodResolver(formSchema),
+    defaultValues: { password: "", confirm: "" },
+  });
 
   if (setPassword.isSuccess) {
     return (
       <main className="mx-auto max-w-md px-4 py-16">
         <Notice tone="ok" title="Password saved">
-          You can now <Link className="font-semibold text-fern underline" to={paths.signIn}>sign in</Link>.
+          You can now{" "}
+          <Link className="font-semibold text-fern underline" to={paths.signIn}>
+            sign in
+          </Link>
+          .
         </Notice>
       </main>
     );
@@ -38,11 +45,31 @@ export function WelcomeRoute() {
         noValidate
       >
         <h1 className="text-xl font-semibold">Choose your Hatchway password</h1>
-        <p className="text-sm text-ink-soft">At least 8 characters. A short sentence is easy to remember and hard to guess.</p>
-        {setPassword.error ? <Notice tone="block" role="alert">{setPassword.error instanceof ApiError ? setPassword.error.message : "That did not work."}</Notice> : null}
-        <TextField label="New password" type="password" autoComplete="new-password" error={form.formState.errors.password?.message} {...form.register("password")} />
-        <TextField label="Type it again" type="password" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register("confirm")} />
-        <Button type="submit" busy={setPassword.isPending}>Save password</Button>
+        <p className="text-sm text-ink-soft">
+          At least 8 characters. A short sentence is easy to remember and hard to guess.
+        </p>
+        {setPassword.error ? (
+          <Notice tone="block" role="alert">
+            {setPassword.error instanceof ApiError ? setPassword.error.message : "That did not work."}
+          </Notice>
+        ) : null}
+        <TextField
+          label="New password"
+          type="password"
+          autoComplete="new-password"
+          error={form.formState.errors.password?.message}
+          {...form.register("password")}
+        />
+        <TextField
+          label="Type it again"
+          type="password"
+          autoComplete="new-password"
+          error={form.formState.errors.confirm?.message}
+          {...form.register("confirm")}
+        />
+        <Button type="submit" busy={setPassword.isPending}>
+          Save password
+        </Button>
       </form>
     </main>
   );

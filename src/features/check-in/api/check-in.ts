@@ -14,7 +14,8 @@ export const checkIn = (transferId: string, input: CheckInInput, idempotencyKey:
 export function useCheckIn(transferId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: ({ input, idempotencyKey }: { input: CheckInInput; idempotencyKey: string }) => checkIn(transferId, input, idempotencyKey),
+    mutationFn: ({ input, idempotencyKey }: { input: CheckInInput; idempotencyKey: string }) =>
+      checkIn(transferId, input, idempotencyKey),
     onSuccess: (transfer) => storeTransfer(client, transfer),
   });
 }

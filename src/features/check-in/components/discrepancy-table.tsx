@@ -27,10 +27,16 @@ export function DiscrepancyTable({ checkIn }: { checkIn: CheckInDto }) {
           <caption className="sr-only">Arrivals compared with the manifest</caption>
           <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
             <tr>
-              <th scope="col" className="px-3 py-2.5">Species</th>
-              <th scope="col" className="px-3 py-2.5">Sex</th>
+              <th scope="col" className="px-3 py-2.5">
+                Species
+              </th>
+              <th scope="col" className="px-3 py-2.5">
+                Sex
+              </th>
               {columns.map(([key, label]) => (
-                <th key={key} scope="col" className="px-3 py-2.5 text-right">{label}</th>
+                <th key={key} scope="col" className="px-3 py-2.5 text-right">
+                  {label}
+                </th>
               ))}
             </tr>
           </thead>
@@ -39,10 +45,15 @@ export function DiscrepancyTable({ checkIn }: { checkIn: CheckInDto }) {
               const off = r.arrivedWell !== r.expected || r.extra > 0;
               return (
                 <tr key={`${r.taxonId}-${r.sex}`} className={off ? "bg-amber-bg/60" : undefined}>
-                  <th scope="row" className="px-3 py-2.5 text-left font-normal"><i>{r.scientificName}</i></th>
+                  <th scope="row" className="px-3 py-2.5 text-left font-normal">
+                    <i>{r.scientificName}</i>
+                  </th>
                   <td className="px-3 py-2.5">{sexLabel[r.sex]}</td>
                   {columns.map(([key]) => (
-                    <td key={key} className={`px-3 py-2.5 text-right tabular-nums ${key !== "expected" && key !== "arrivedWell" && r[key] > 0 ? "font-bold text-brick" : ""}`}>
+                    <td
+                      key={key}
+                      className={`px-3 py-2.5 text-right tabular-nums ${key !== "expected" && key !== "arrivedWell" && r[key] > 0 ? "font-bold text-brick" : ""}`}
+                    >
                       {r[key]}
                     </td>
                   ))}

@@ -15,12 +15,21 @@ export function ExtrasEditor({ taxa, rememberTaxon, search }: Props) {
   const extras = useFieldArray({ control, name: "extras", keyName: "fieldKey" });
   return (
     <section aria-labelledby="extras-title" className="grid gap-3">
-      <h2 id="extras-title" className="text-xl font-semibold">Arrived but not listed</h2>
-      {extras.fields.length === 0 ? <p className="text-ink-soft">Nothing extra? Good. If a box held an animal the manifest does not list, add it here.</p> : null}
+      <h2 id="extras-title" className="text-xl font-semibold">
+        Arrived but not listed
+      </h2>
+      {extras.fields.length === 0 ? (
+        <p className="text-ink-soft">
+          Nothing extra? Good. If a box held an animal the manifest does not list, add it here.
+        </p>
+      ) : null}
       {extras.fields.map((field, i) => {
         const e = formState.errors.extras?.[i];
         return (
-          <fieldset key={field.fieldKey} className="grid gap-3 rounded-card border border-amber-line bg-paper-card p-4 sm:grid-cols-4">
+          <fieldset
+            key={field.fieldKey}
+            className="grid gap-3 rounded-card border border-amber-line bg-paper-card p-4 sm:grid-cols-4"
+          >
             <legend className="px-1 font-semibold">Extra {i + 1}</legend>
             <div className="sm:col-span-4">
               <Controller
@@ -41,13 +50,30 @@ export function ExtrasEditor({ taxa, rememberTaxon, search }: Props) {
                 )}
               />
             </div>
-            <TextField label="How many" type="number" inputMode="numeric" min={1} step={1} error={e?.count?.message} {...register(`extras.${i}.count`, { valueAsNumber: true })} />
-            <SelectField label="Sex" options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))} {...register(`extras.${i}.sex`)} />
+            <TextField
+              label="How many"
+              type="number"
+              inputMode="numeric"
+              min={1}
+              step={1}
+              error={e?.count?.message}
+              {...register(`extras.${i}.count`, { valueAsNumber: true })}
+            />
+            <SelectField
+              label="Sex"
+              options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))}
+              {...register(`extras.${i}.sex`)}
+            />
             <div className="sm:col-span-2">
               <TextField label="Notes" error={e?.notes?.message} {...register(`extras.${i}.notes`)} />
             </div>
             <div className="sm:col-span-4">
-              <Button type="button" variant="ghost" onClick={() => extras.remove(i)} aria-label={`Remove extra ${i + 1}`}>
+              <Button
+                type="button"
+                variant="ghost"
+                onClick={() => extras.remove(i)}
+                aria-label={`Remove extra ${i + 1}`}
+              >
                 Remove
               </Button>
             </div>
@@ -55,7 +81,11 @@ export function ExtrasEditor({ taxa, rememberTaxon, search }: Props) {
         );
       })}
       <div>
-        <Button type="button" variant="secondary" onClick={() => extras.append({ taxonId: "", count: 1, sex: "unknown", notes: "" })}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() => extras.append({ taxonId: "", count: 1, sex: "unknown", notes: "" })}
+        >
           Add an animal that was not listed
         </Button>
       </div>

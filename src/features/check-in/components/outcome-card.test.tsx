@@ -10,7 +10,14 @@ import { outcomeMismatch } from "./outcome-sum";
 const line: AnimalDto = {
   id: "00000000-0000-4000-8000-000000000001",
   position: 0,
-  taxon: { id: "00000000-0000-4000-8000-0000000000aa", scientificName: "Terrapene carolina", commonName: "Common box turtle", venomous: false, profileGroup: null, rank: "species" },
+  taxon: {
+    id: "00000000-0000-4000-8000-0000000000aa",
+    scientificName: "Terrapene carolina",
+    commonName: "Common box turtle",
+    venomous: false,
+    profileGroup: null,
+    rank: "species",
+  },
   count: 5,
   sex: "unknown",
   identifier: null,
@@ -26,7 +33,13 @@ const line: AnimalDto = {
 };
 
 function Harness() {
-  const [value, setValue] = useState<CheckInItemInput>({ animalId: line.id, arrivedWell: 0, arrivedProblem: 0, deadOnArrival: 0, missing: 0 });
+  const [value, setValue] = useState<CheckInItemInput>({
+    animalId: line.id,
+    arrivedWell: 0,
+    arrivedProblem: 0,
+    deadOnArrival: 0,
+    missing: 0,
+  });
   return <OutcomeCard animal={line} boxLabel="Box 1" value={value} onChange={setValue} />;
 }
 
@@ -75,7 +88,11 @@ describe("outcomeMismatch", () => {
   it("is silent only for an exact account", () => {
     // Same sources as above: well + problem + dead + missing = count.
     expect(outcomeMismatch(3, { arrivedWell: 1, arrivedProblem: 1, deadOnArrival: 0, missing: 1 })).toBeNull();
-    expect(outcomeMismatch(3, { arrivedWell: 1, arrivedProblem: 0, deadOnArrival: 0, missing: 1 })).toMatch(/1 of 3 not accounted for/);
-    expect(outcomeMismatch(1, { arrivedWell: 1, arrivedProblem: 0, deadOnArrival: 1, missing: 0 })).toMatch(/add up to 2/);
+    expect(outcomeMismatch(3, { arrivedWell: 1, arrivedProblem: 0, deadOnArrival: 0, missing: 1 })).toMatch(
+      /1 of 3 not accounted for/,
+    );
+    expect(outcomeMismatch(1, { arrivedWell: 1, arrivedProblem: 0, deadOnArrival: 1, missing: 0 })).toMatch(
+      /add up to 2/,
+    );
   });
 });

@@ -24,19 +24,32 @@ export function OutcomeCard({ animal: a, boxLabel, value, onChange, errors }: Pr
   const set = (patch: Partial<CheckInItemInput>) => onChange({ ...value, ...patch });
   const titleId = `outcome-${a.id}`;
   return (
-    <article aria-labelledby={titleId} className={`grid gap-4 rounded-card border bg-paper-card p-4 shadow-card ${mismatch ? "border-amber-line" : "border-fern-ring"}`}>
+    <article
+      aria-labelledby={titleId}
+      className={`grid gap-4 rounded-card border bg-paper-card p-4 shadow-card ${mismatch ? "border-amber-line" : "border-fern-ring"}`}
+    >
       <header>
         <h3 id={titleId} className="text-lg font-semibold">
           {a.count} × <TaxonName taxon={a.taxon} />
         </h3>
         <p className="text-sm text-ink-soft">
-          {[sexLabel[a.sex], a.identifier ? `ID ${a.identifier}` : null, boxLabel ? `in ${boxLabel}` : "not in a box"].filter(Boolean).join(" · ")}
+          {[sexLabel[a.sex], a.identifier ? `ID ${a.identifier}` : null, boxLabel ? `in ${boxLabel}` : "not in a box"]
+            .filter(Boolean)
+            .join(" · ")}
         </p>
       </header>
       <div className="grid gap-4 sm:grid-cols-2">
         {CHECK_IN_OUTCOMES.map((outcome) => {
           const field = CHECK_IN_OUTCOME_KEYS[outcome];
-          return <CountStepper key={outcome} label={outcomeLabel[outcome]} value={value[field]} max={a.count} onChange={(n) => set({ [field]: n })} />;
+          return (
+            <CountStepper
+              key={outcome}
+              label={outcomeLabel[outcome]}
+              value={value[field]}
+              max={a.count}
+              onChange={(n) => set({ [field]: n })}
+            />
+          );
         })}
       </div>
       {mismatch ? (
@@ -49,12 +62,22 @@ export function OutcomeCard({ animal: a, boxLabel, value, onChange, errors }: Pr
         </p>
       )}
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant="secondary" onClick={() => set({ arrivedWell: a.count, arrivedProblem: 0, deadOnArrival: 0, missing: 0 })}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() => set({ arrivedWell: a.count, arrivedProblem: 0, deadOnArrival: 0, missing: 0 })}
+        >
           All {a.count} arrived well
         </Button>
       </div>
       {value.arrivedProblem > 0 ? (
-        <TextAreaField label="What was wrong?" hint="e.g. shell damage, retained shed, weak, dehydrated" value={value.problem ?? ""} onChange={(e) => set({ problem: e.target.value })} error={errors?.problem} />
+        <TextAreaField
+          label="What was wrong?"
+          hint="e.g. shell damage, retained shed, weak, dehydrated"
+          value={value.problem ?? ""}
+          onChange={(e) => set({ problem: e.target.value })}
+          error={errors?.problem}
+        />
       ) : null}
       <div className="grid gap-3 sm:grid-cols-3">
         <TextField
@@ -68,7 +91,12 @@ export function OutcomeCard({ animal: a, boxLabel, value, onChange, errors }: Pr
           error={errors?.weightG}
         />
         <div className="sm:col-span-2">
-          <TextField label="Notes (optional)" value={value.notes ?? ""} onChange={(e) => set({ notes: e.target.value })} error={errors?.notes} />
+          <TextField
+            label="Notes (optional)"
+            value={value.notes ?? ""}
+            onChange={(e) => set({ notes: e.target.value })}
+            error={errors?.notes}
+          />
         </div>
       </div>
     </article>

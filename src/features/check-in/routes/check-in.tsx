@@ -37,7 +37,16 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
     resolver: zodResolver(checkInInputSchema),
     defaultValues: {
       // Every count starts at zero: the receiver says what they found, line by line.
-      items: animals.map((a) => ({ animalId: a.id, arrivedWell: 0, arrivedProblem: 0, deadOnArrival: 0, missing: 0, problem: "", weightG: null, notes: "" })),
+      items: animals.map((a) => ({
+        animalId: a.id,
+        arrivedWell: 0,
+        arrivedProblem: 0,
+        deadOnArrival: 0,
+        missing: 0,
+        problem: "",
+        weightG: null,
+        notes: "",
+      })),
       extras: [],
       notes: "",
       signedName: signer,
@@ -49,7 +58,9 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
   const submit = form.handleSubmit((input) => {
     const off = input.items.filter((item, i) => outcomeTotal(item) !== animals[i]!.count).length;
     if (off > 0) {
-      setSumError(`${off === 1 ? "One line does not" : `${off} lines do not`} add up to the number listed. Fix the counts marked in amber.`);
+      setSumError(
+        `${off === 1 ? "One line does not" : `${off} lines do not`} add up to the number listed. Fix the counts marked in amber.`,
+      );
       return;
     }
     setSumError(null);
@@ -59,9 +70,13 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
   return (
     <FormProvider {...form}>
       <form onSubmit={submit} noValidate className="grid gap-6">
-        <Notice tone="info">Open every container and check each animal against its line: species, sex, markings, condition, shell or skin.</Notice>
+        <Notice tone="info">
+          Open every container and check each animal against its line: species, sex, markings, condition, shell or skin.
+        </Notice>
         <section aria-labelledby="lines-title" className="grid gap-4">
-          <h2 id="lines-title" className="text-xl font-semibold">Listed animals</h2>
+          <h2 id="lines-title" className="text-xl font-semibold">
+            Listed animals
+          </h2>
           {animals.map((a, i) => (
             <Controller
               key={a.id}
@@ -73,7 +88,11 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
                   boxLabel={a.containerId ? (boxLabel.get(a.containerId) ?? null) : null}
                   value={field.value}
                   onChange={field.onChange}
-                  errors={{ problem: e.items?.[i]?.problem?.message, weightG: e.items?.[i]?.weightG?.message, notes: e.items?.[i]?.notes?.message }}
+                  errors={{
+                    problem: e.items?.[i]?.problem?.message,
+                    weightG: e.items?.[i]?.weightG?.message,
+                    notes: e.items?.[i]?.notes?.message,
+                  }}
                 />
               )}
             />
@@ -82,12 +101,27 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
 
         <ExtrasEditor taxa={taxa} rememberTaxon={(tx) => setTaxa((m) => ({ ...m, [tx.id]: tx }))} search={searchTaxa} />
 
-        <section aria-labelledby="sign-title" className="grid gap-3 rounded-card border border-rule bg-paper-card p-4 shadow-card">
-          <h2 id="sign-title" className="text-xl font-semibold">Sign</h2>
+        <section
+          aria-labelledby="sign-title"
+          className="grid gap-3 rounded-card border border-rule bg-paper-card p-4 shadow-card"
+        >
+          <h2 id="sign-title" className="text-xl font-semibold">
+            Sign
+          </h2>
           <TextAreaField label="Notes on the arrival (optional)" error={e.notes?.message} {...form.register("notes")} />
-          <TextField label="Your name, as a signature" autoComplete="name" error={e.signedName?.message} {...form.register("signedName")} />
+          <TextField
+            label="Your name, as a signature"
+            autoComplete="name"
+            error={e.signedName?.message}
+            {...form.register("signedName")}
+          />
           <label className="flex min-h-12 cursor-pointer items-start gap-3">
-            <input type="checkbox" className="mt-1 h-6 w-6 shrink-0 accent-fern" aria-describedby={e.acknowledged ? "ack-error" : undefined} {...form.register("acknowledged")} />
+            <input
+              type="checkbox"
+              className="mt-1 h-6 w-6 shrink-0 accent-fern"
+              aria-describedby={e.acknowledged ? "ack-error" : undefined}
+              {...form.register("acknowledged")}
+            />
             <span>I opened every container and checked every animal, and what I recorded here is what I found.</span>
           </label>
           {e.acknowledged ? (
@@ -95,10 +129,16 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
               {e.acknowledged.message}
             </p>
           ) : null}
-          {sumError ? <Notice tone="block" role="alert">{sumError}</Notice> : null}
+          {sumError ? (
+            <Notice tone="block" role="alert">
+              {sumError}
+            </Notice>
+          ) : null}
           {submitCheckIn.error ? (
             <Notice tone="block" role="alert" title="Not signed">
-              {submitCheckIn.error instanceof ApiError ? submitCheckIn.error.message : "Check your connection and press the button again; it will count once."}
+              {submitCheckIn.error instanceof ApiError
+                ? submitCheckIn.error.message
+                : "Check your connection and press the button again; it will count once."}
             </Notice>
           ) : null}
           <div>
@@ -125,7 +165,9 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
       <DiscrepancyTable checkIn={c} />
       {c.extras.length ? (
         <section aria-labelledby="extras-done" className="grid gap-2">
-          <h2 id="extras-done" className="text-lg font-semibold">Arrived but not listed</h2>
+          <h2 id="extras-done" className="text-lg font-semibold">
+            Arrived but not listed
+          </h2>
           <ul className="list-disc pl-5">
             {c.extras.map((x, i) => (
               <li key={i}>
@@ -147,7 +189,12 @@ export function CheckInRoute() {
   const viewer = useViewer();
   const transfer = useTransfer(transferId);
   if (transfer.isPending) return <Loading label="Loading the transfer…" />;
-  if (transfer.error) return <Notice tone="block" role="alert" title="This transfer did not load">{(transfer.error as Error).message}</Notice>;
+  if (transfer.error)
+    return (
+      <Notice tone="block" role="alert" title="This transfer did not load">
+        {(transfer.error as Error).message}
+      </Notice>
+    );
   const t = transfer.data;
   return (
     <div className="grid gap-5">
@@ -157,7 +204,12 @@ export function CheckInRoute() {
         actions={
           <>
             <StatusBadge status={t.status} />
-            <Link to={paths.transfers.detail.href(t.id)} className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline">Back to the transfer</Link>
+            <Link
+              to={paths.transfers.detail.href(t.id)}
+              className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+            >
+              Back to the transfer
+            </Link>
           </>
         }
       />
@@ -166,7 +218,9 @@ export function CheckInRoute() {
       ) : t.abilities.checkIn ? (
         <CheckInForm transfer={t} signer={viewer.user.displayName} />
       ) : (
-        <Notice tone="info" title="Not ready for check-in">The receiver checks the animals in once the delivery is recorded.</Notice>
+        <Notice tone="info" title="Not ready for check-in">
+          The receiver checks the animals in once the delivery is recorded.
+        </Notice>
       )}
     </div>
   );

@@ -10,18 +10,24 @@ export const documentsQueryOptions = () =>
   });
 
 /** The caller's organisation's permits and certificates. */
-export const useDocuments = (options: { enabled?: boolean } = {}) => useQuery({ ...documentsQueryOptions(), enabled: options.enabled ?? true });
+export const useDocuments = (options: { enabled?: boolean } = {}) =>
+  useQuery({ ...documentsQueryOptions(), enabled: options.enabled ?? true });
 
 /** A record changed: its own list, and every transfer's verdict that may lean on it. */
 function useInvalidateDocuments() {
   const client = useQueryClient();
-  return () => client.invalidateQueries({ queryKey: complianceKeys.all, predicate: (q) => q.queryKey[1] === "documents" || q.queryKey[1] === "transfer" });
+  return () =>
+    client.invalidateQueries({
+      queryKey: complianceKeys.all,
+      predicate: (q) => q.queryKey[1] === "documents" || q.queryKey[1] === "transfer",
+    });
 }
 
 export function useCreateDocument() {
   const invalidate = useInvalidateDocuments();
   return useMutation({
-    mutationFn: (input: DocumentInput) => api<{ document: DocumentDto }>("/api/documents", { method: "POST", body: input }).then((r) => r.document),
+    mutationFn: (input: DocumentInput) =>
+      api<{ document: DocumentDto }>("/api/documents", { method: "POST", body: input }).then((r) => r.document),
     onSuccess: invalidate,
   });
 }
@@ -30,14 +36,23 @@ export function useUpdateDocument() {
   const invalidate = useInvalidateDocuments();
   return useMutation({
     mutationFn: ({ id, input }: { id: string; input: DocumentInput }) =>
-      api<{ document: DocumentDto }>(`/api/documents/${encodeURIComponent(id)}`, { method: "PATCH", body: input }).then((r) => r.document),
+      api<{ document: DocumentDto }>(`/api/documents/${encodeURIComponent(id)}`, { method: "PATCH", body: input }).then(
+        (r) => r.document,
+      ),
     onSuccess: invalidate,
   });
 }
 
 async function errorOf(response: Response): Promise<ApiError> {
-  const body = (await response.json().catch(() => null)) as { error?: { code: string; message: string; field?: string } } | null;
-  return new ApiError(response.status, body?.error?.code ?? "error", body?.error?.message ?? `The request failed (${response.status}).`, body?.error?.field);
+  const body = (await response.json().catch(() => null)) as {
+    error?: { code: string; message: string; field?: string };
+  } | null;
+  return new ApiError(
+    response.status,
+    body?.error?.code ?? "error",
+    body?.error?.message ?? `The request failed (${response.status}).`,
+    body?.error?.field,
+  );
 }
 
 /**
@@ -53,7 +68,12 @@ async function uploadScan(documentId: string, file: File): Promise<ScanDto> {
     response = await fetch(`/api/documents/${encodeURIComponent(documentId)}/scans`, {
       method: "POST",
       credentials: "same-origin",
-      headers: { "Content-Type": "application/octet-stream", "X-CSRF-Token": csrfToken, "X-File-Name": encodeURIComponent(file.name), Accept: "application/json" },
+      headers: {
+        "Content-Type": "application/octet-stream",
+        "X-CSRF-Token": csrfToken,
+        "X-File-Name": encodeURIComponent(file.name),
+        Accept: "application/json",
+      },
       body: file,
     });
   } catch {
@@ -65,7 +85,10 @@ async function uploadScan(documentId: string, file: File): Promise<ScanDto> {
 
 export function useUploadScan() {
   const invalidate = useInvalidateDocuments();
-  return useMutation({ mutationFn: ({ documentId, file }: { documentId: string; file: File }) => uploadScan(documentId, file), onSuccess: invalidate });
+  return useMutation({
+    mutationFn: ({ documentId, file }: { documentId: string; file: File }) => uploadScan(documentId, file),
+    onSuccess: invalidate,
+  });
 }
 
 /** A scan's bytes, for an inline preview through an object URL (the download itself is an attachment). */

@@ -5,6 +5,7 @@ import { api } from "@/lib/api-client";
 /** "Can this travel?": a what-if evaluation; the server stores nothing. */
 export function useEvaluate() {
   return useMutation({
-    mutationFn: (request: EvaluateRequest) => api<EvaluateResponse>("/api/compliance/evaluate", { method: "POST", body: request }),
+    mutationFn: (request: EvaluateRequest) =>
+      api<EvaluateResponse>("/api/compliance/evaluate", { method: "POST", body: request }),
   });
 }

@@ -1,5 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { RuleHistoryDto, RuleListQuery, RuleSummaryDto, RuleVersionDto, RuleVersionInput } from "@shared/schemas/compliance";
+import type {
+  RuleHistoryDto,
+  RuleListQuery,
+  RuleSummaryDto,
+  RuleVersionDto,
+  RuleVersionInput,
+} from "@shared/schemas/compliance";
 import { api } from "@/lib/api-client";
 import { toQueryString } from "@/lib/query-string";
 import { complianceKeys } from "./keys";
@@ -7,7 +13,10 @@ import { complianceKeys } from "./keys";
 export const rulesQueryOptions = (filters: RuleListQuery) =>
   queryOptions({
     queryKey: complianceKeys.ruleList(filters),
-    queryFn: ({ signal }) => api<{ rules: RuleSummaryDto[] }>(`/api/compliance/rules?${toQueryString(filters)}`, { signal }).then((r) => r.rules),
+    queryFn: ({ signal }) =>
+      api<{ rules: RuleSummaryDto[] }>(`/api/compliance/rules?${toQueryString(filters)}`, { signal }).then(
+        (r) => r.rules,
+      ),
   });
 
 export const useRules = (filters: RuleListQuery) => useQuery(rulesQueryOptions(filters));
@@ -25,7 +34,10 @@ export function useSaveRuleVersion() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (input: RuleVersionInput) =>
-      api<{ version: RuleVersionDto }>(`/api/compliance/rules/${encodeURIComponent(input.rule.id)}/versions`, { method: "POST", body: input }),
+      api<{ version: RuleVersionDto }>(`/api/compliance/rules/${encodeURIComponent(input.rule.id)}/versions`, {
+        method: "POST",
+        body: input,
+      }),
     onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.rules() }),
   });
 }

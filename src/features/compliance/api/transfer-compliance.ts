@@ -17,7 +17,10 @@ export const useTransferCompliance = (transferId: string) => useQuery(transferCo
 export const transferDocumentsQueryOptions = (transferId: string) =>
   queryOptions({
     queryKey: complianceKeys.transferDocuments(transferId),
-    queryFn: ({ signal }) => api<{ documents: TransferDocumentDto[] }>(`/api/documents?transferId=${encodeURIComponent(transferId)}`, { signal }).then((r) => r.documents),
+    queryFn: ({ signal }) =>
+      api<{ documents: TransferDocumentDto[] }>(`/api/documents?transferId=${encodeURIComponent(transferId)}`, {
+        signal,
+      }).then((r) => r.documents),
   });
 
 export const useTransferDocuments = (transferId: string, options: { enabled?: boolean } = {}) =>
@@ -27,7 +30,8 @@ export const useTransferDocuments = (transferId: string, options: { enabled?: bo
 export function useOverrideCompliance(transferId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (reason: string) => api<TransferComplianceDto>(`${base(transferId)}/compliance/override`, { method: "POST", body: { reason } }),
+    mutationFn: (reason: string) =>
+      api<TransferComplianceDto>(`${base(transferId)}/compliance/override`, { method: "POST", body: { reason } }),
     onSuccess: (compliance) => {
       client.setQueryData(complianceKeys.transfer(transferId), compliance);
       void client.invalidateQueries({ queryKey: transferKeys.detail(transferId) });
@@ -38,7 +42,11 @@ export function useOverrideCompliance(transferId: string) {
 export function useAttachDocument(transferId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (documentId: string) => api<{ documents: TransferDocumentDto[] }>(`${base(transferId)}/documents`, { method: "POST", body: { documentId } }),
+    mutationFn: (documentId: string) =>
+      api<{ documents: TransferDocumentDto[] }>(`${base(transferId)}/documents`, {
+        method: "POST",
+        body: { documentId },
+      }),
     onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.transfer(transferId) }),
   });
 }
@@ -46,7 +54,8 @@ export function useAttachDocument(transferId: string) {
 export function useDetachDocument(transferId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (documentId: string) => api<void>(`${base(transferId)}/documents/${encodeURIComponent(documentId)}`, { method: "DELETE" }),
+    mutationFn: (documentId: string) =>
+      api<void>(`${base(transferId)}/documents/${encodeURIComponent(documentId)}`, { method: "DELETE" }),
     onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.transfer(transferId) }),
   });
 }

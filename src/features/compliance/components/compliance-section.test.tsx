@@ -13,16 +13,28 @@ const TRANSFER_ID = "00000000-0000-4000-8000-0000000000aa";
 function complianceDto(abilities: Partial<TransferComplianceDto["abilities"]> = {}): TransferComplianceDto {
   const facts = buildFacts();
   const result = evaluateCompliance(buildInput({ facts, animals: [buildAnimal(DEMO_TAXA.leopardTortoise)] }));
-  return { ...result, shipDate: facts.shipDate, override: null, abilities: { override: false, attachDocuments: false, readDocuments: true, ...abilities } };
+  return {
+    ...result,
+    shipDate: facts.shipDate,
+    override: null,
+    abilities: { override: false, attachDocuments: false, readDocuments: true, ...abilities },
+  };
 }
 
 function renderSection(dto: TransferComplianceDto) {
-  vi.stubGlobal("fetch", vi.fn(async (url: string) => {
-    const body = url.endsWith("/compliance") ? dto : { documents: [] };
-    return new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
-  }));
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (url: string) => {
+      const body = url.endsWith("/compliance") ? dto : { documents: [] };
+      return new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
+    }),
+  );
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  return render(<QueryClientProvider client={client}><ComplianceSection transferId={TRANSFER_ID} /></QueryClientProvider>);
+  return render(
+    <QueryClientProvider client={client}>
+      <ComplianceSection transferId={TRANSFER_ID} />
+    </QueryClientProvider>,
+  );
 }
 
 afterEach(() => vi.unstubAllGlobals());

@@ -16,23 +16,32 @@ export function ComplianceSection({ transferId }: { transferId: string }) {
   const headingId = useId();
   const compliance = useTransferCompliance(transferId);
   return (
-    <section aria-labelledby={headingId} className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5">
-      <h2 id={headingId} className="text-lg font-semibold">Rules and permits</h2>
+    <section
+      aria-labelledby={headingId}
+      className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5"
+    >
+      <h2 id={headingId} className="text-lg font-semibold">
+        Rules and permits
+      </h2>
       {compliance.isPending ? (
         <Loading label="Checking the rules…" />
       ) : compliance.error ? (
-        <Notice tone="block" role="alert">{(compliance.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(compliance.error as Error).message}
+        </Notice>
       ) : (
         <>
           <VerdictBanner verdict={compliance.data.verdict} overridden={compliance.data.override !== null} />
           {compliance.data.override ? (
             <Notice tone="info" title="Overridden by an administrator">
-              {compliance.data.override.admin.displayName}, {new Date(compliance.data.override.at).toLocaleString()}: “{compliance.data.override.reason}”
+              {compliance.data.override.admin.displayName}, {new Date(compliance.data.override.at).toLocaleString()}: “
+              {compliance.data.override.reason}”
             </Notice>
           ) : null}
           <p className="text-sm text-ink-soft">
-            Checked for the ship date {compliance.data.shipDate}, with the permits and certificates the sender and the receiver have on file:{" "}
-            {compliance.data.rulesUsed.length} rule{compliance.data.rulesUsed.length === 1 ? " applies" : "s apply"}.
+            Checked for the ship date {compliance.data.shipDate}, with the permits and certificates the sender and the
+            receiver have on file: {compliance.data.rulesUsed.length} rule
+            {compliance.data.rulesUsed.length === 1 ? " applies" : "s apply"}.
           </p>
           <FindingsByAnimal animals={compliance.data.animals} />
           {compliance.data.abilities.readDocuments ? (

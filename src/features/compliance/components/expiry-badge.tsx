@@ -8,6 +8,17 @@ const TONE = { open: "neutral", valid: "ok", expiring: "caution", expired: "bloc
 export function ExpiryBadge({ expiry }: { expiry: DocumentDto["expiry"] }) {
   const days = expiry.daysLeft;
   const detail =
-    expiry.status === "expiring" ? (days === 0 ? " — last day today" : ` — ${days} day${days === 1 ? "" : "s"} left`) : expiry.status === "expired" && days !== null ? ` — ${-days} day${days === -1 ? "" : "s"} ago` : "";
-  return <Tag tone={TONE[expiry.status]}>{EXPIRY_LABELS[expiry.status]}{detail}</Tag>;
+    expiry.status === "expiring"
+      ? days === 0
+        ? " — last day today"
+        : ` — ${days} day${days === 1 ? "" : "s"} left`
+      : expiry.status === "expired" && days !== null
+        ? ` — ${-days} day${days === -1 ? "" : "s"} ago`
+        : "";
+  return (
+    <Tag tone={TONE[expiry.status]}>
+      {EXPIRY_LABELS[expiry.status]}
+      {detail}
+    </Tag>
+  );
 }

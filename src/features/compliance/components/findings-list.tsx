@@ -10,8 +10,12 @@ function FindingItem({ finding }: { finding: Finding }) {
   return (
     <li className="flex flex-col gap-1.5 border-t border-rule py-3 first:border-t-0">
       <div className="flex flex-wrap items-center gap-2">
-        <Tag tone={satisfied ? "ok" : SEVERITY_TONE[finding.severity]}>{satisfied ? "Covered" : SEVERITY_LABELS[finding.severity]}</Tag>
-        <span className="text-sm font-semibold">{finding.jurisdiction === "US" ? "Federal" : jurisdictionName(finding.jurisdiction)}</span>
+        <Tag tone={satisfied ? "ok" : SEVERITY_TONE[finding.severity]}>
+          {satisfied ? "Covered" : SEVERITY_LABELS[finding.severity]}
+        </Tag>
+        <span className="text-sm font-semibold">
+          {finding.jurisdiction === "US" ? "Federal" : jurisdictionName(finding.jurisdiction)}
+        </span>
       </div>
       <p className="text-sm leading-relaxed">{finding.message}</p>
       {satisfied ? (
@@ -24,7 +28,12 @@ function FindingItem({ finding }: { finding: Finding }) {
       <p className="text-xs text-ink-soft">
         Source:{" "}
         {finding.citation.url ? (
-          <a href={finding.citation.url} target="_blank" rel="noopener noreferrer" className="text-fern underline underline-offset-2">
+          <a
+            href={finding.citation.url}
+            target="_blank"
+            rel="noopener noreferrer"
+            className="text-fern underline underline-offset-2"
+          >
             {finding.citation.text}
           </a>
         ) : (
@@ -41,7 +50,11 @@ export function FindingsByAnimal({ animals }: { animals: EvaluateResponse["anima
   return (
     <div className="flex flex-col gap-4">
       {animals.map((animal, index) => (
-        <section key={`${animal.scientificName}-${index}`} aria-label={`Findings for ${animal.scientificName}`} className="rounded-card border border-rule bg-paper px-4 py-2">
+        <section
+          key={`${animal.scientificName}-${index}`}
+          aria-label={`Findings for ${animal.scientificName}`}
+          className="rounded-card border border-rule bg-paper px-4 py-2"
+        >
           <h3 className="pt-2 font-semibold">
             <i>{animal.scientificName}</i>
           </h3>

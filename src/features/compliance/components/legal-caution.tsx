@@ -4,8 +4,9 @@ import { Notice } from "@/components/ui/feedback";
 export function LegalCaution() {
   return (
     <Notice tone="caution" title="Not legal advice">
-      This summary is a planning aid built from the rule library, not legal advice. Rules change: before the animals travel, confirm
-      the requirements with the state wildlife agency of each state on the route and with a licensed veterinarian.
+      This summary is a planning aid built from the rule library, not legal advice. Rules change: before the animals
+      travel, confirm the requirements with the state wildlife agency of each state on the route and with a licensed
+      veterinarian.
     </Notice>
   );
 }

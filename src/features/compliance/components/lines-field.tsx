@@ -1,9 +1,21 @@
 import { useState } from "react";
 import { TextAreaField } from "@/components/ui/field";
 
-type Props = { label: string; value: readonly string[]; onChange: (lines: string[]) => void; onBlur?: () => void; error?: string; hint?: string; name?: string };
+type Props = {
+  label: string;
+  value: readonly string[];
+  onChange: (lines: string[]) => void;
+  onBlur?: () => void;
+  error?: string;
+  hint?: string;
+  name?: string;
+};
 
-const linesOf = (text: string) => text.split("\n").map((line) => line.trim()).filter(Boolean);
+const linesOf = (text: string) =>
+  text
+    .split("\n")
+    .map((line) => line.trim())
+    .filter(Boolean);
 
 /**
  * A list of names or statements, one per line. The text is kept as typed (a new empty line

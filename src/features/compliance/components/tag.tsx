@@ -7,5 +7,9 @@ import { Badge } from "@/components/ui/feedback";
  */
 export function Tag({ tone, children }: ComponentProps<typeof Badge>) {
   if (tone !== "caution") return <Badge tone={tone}>{children}</Badge>;
-  return <span className="inline-flex items-center rounded-full border border-amber-line bg-amber-bg px-2.5 py-0.5 text-xs font-semibold text-ink">{children}</span>;
+  return (
+    <span className="inline-flex items-center rounded-full border border-amber-line bg-amber-bg px-2.5 py-0.5 text-xs font-semibold text-ink">
+      {children}
+    </span>
+  );
 }

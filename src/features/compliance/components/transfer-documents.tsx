@@ -11,29 +11,48 @@ import { useAttachDocument, useDetachDocument, useTransferDocuments } from "../a
 import { ExpiryBadge } from "./expiry-badge";
 import { ScanList } from "./scan-list";
 
-const issuer = (d: Pick<DocumentDto, "jurisdiction">) => (d.jurisdiction === "US" ? "federal" : jurisdictionName(d.jurisdiction));
+const issuer = (d: Pick<DocumentDto, "jurisdiction">) =>
+  d.jurisdiction === "US" ? "federal" : jurisdictionName(d.jurisdiction);
 const validity = (d: Pick<DocumentDto, "validFrom" | "validTo">) =>
   d.validFrom || d.validTo ? `valid ${d.validFrom ?? "…"} to ${d.validTo ?? "…"}` : "no validity dates";
 
-function UsedDocument({ doc, transferId, canDetach }: { doc: TransferDocumentDto; transferId: string; canDetach: boolean }) {
+function UsedDocument({
+  doc,
+  transferId,
+  canDetach,
+}: {
+  doc: TransferDocumentDto;
+  transferId: string;
+  canDetach: boolean;
+}) {
   const detach = useDetachDocument(transferId);
   const [open, setOpen] = useState(false);
   return (
     <li className="flex flex-col gap-2 border-t border-rule py-3 first:border-t-0">
       <div className="flex flex-wrap items-center gap-2">
-        <span className="font-medium">{DOCUMENT_KIND_LABELS[doc.kind]} no. {doc.number}</span>
+        <span className="font-medium">
+          {DOCUMENT_KIND_LABELS[doc.kind]} no. {doc.number}
+        </span>
         <ExpiryBadge expiry={doc.expiry} />
         {doc.attached ? <Badge tone="neutral">Attached</Badge> : null}
       </div>
       <p className="text-sm text-ink-soft">
         {issuer(doc)}, {validity(doc)} · held by {doc.organization.name}
         {doc.holderSide ? ` (the ${doc.holderSide})` : ""}
-        {doc.satisfies.length ? ` · satisfies ${doc.satisfies.map((s) => `${s.ruleId} for ${s.scientificName}`).join("; ")}` : ""}
+        {doc.satisfies.length
+          ? ` · satisfies ${doc.satisfies.map((s) => `${s.ruleId} for ${s.scientificName}`).join("; ")}`
+          : ""}
       </p>
       <div className="flex flex-wrap gap-2">
-        {doc.scans ? <Button variant="ghost" onClick={() => setOpen(!open)} aria-expanded={open}>{open ? "Hide scans" : `Scans (${doc.scans.length})`}</Button> : null}
+        {doc.scans ? (
+          <Button variant="ghost" onClick={() => setOpen(!open)} aria-expanded={open}>
+            {open ? "Hide scans" : `Scans (${doc.scans.length})`}
+          </Button>
+        ) : null}
         {canDetach && doc.attached && doc.abilities.edit ? (
-          <Button variant="secondary" busy={detach.isPending} onClick={() => detach.mutate(doc.id)}>Take off this transfer</Button>
+          <Button variant="secondary" busy={detach.isPending} onClick={() => detach.mutate(doc.id)}>
+            Take off this transfer
+          </Button>
         ) : null}
       </div>
       {open ? <ScanList document={doc} /> : null}
@@ -48,7 +67,12 @@ function AttachControl({ transferId, used }: { transferId: string; used: readonl
   const usedIds = new Set(used.filter((d) => d.attached).map((d) => d.id));
   const candidates = (own.data ?? []).filter((d) => !usedIds.has(d.id));
   if (own.isPending) return <Loading label="Loading your documents…" />;
-  if (candidates.length === 0) return <p className="text-sm text-ink-soft">All of your organisation's documents are attached, or it has none yet (add them on the Permits page).</p>;
+  if (candidates.length === 0)
+    return (
+      <p className="text-sm text-ink-soft">
+        All of your organisation's documents are attached, or it has none yet (add them on the Permits page).
+      </p>
+    );
   return (
     <div className="flex flex-wrap items-end gap-2">
       <div className="min-w-64 flex-1">
@@ -56,11 +80,27 @@ function AttachControl({ transferId, used }: { transferId: string; used: readonl
           label="Attach one of your documents"
           value={chosen}
           onChange={(e) => setChosen(e.target.value)}
-          options={[{ value: "", label: "Choose a document" }, ...candidates.map((d) => ({ value: d.id, label: `${DOCUMENT_KIND_LABELS[d.kind]} no. ${d.number} (${issuer(d)})` }))]}
+          options={[
+            { value: "", label: "Choose a document" },
+            ...candidates.map((d) => ({
+              value: d.id,
+              label: `${DOCUMENT_KIND_LABELS[d.kind]} no. ${d.number} (${issuer(d)})`,
+            })),
+          ]}
         />
       </div>
-      <Button disabled={!chosen} busy={attach.isPending} onClick={() => attach.mutate(chosen, { onSuccess: () => setChosen("") })}>Attach</Button>
-      {attach.error ? <Notice tone="block" role="alert">{attach.error instanceof ApiError ? attach.error.message : "Not attached."}</Notice> : null}
+      <Button
+        disabled={!chosen}
+        busy={attach.isPending}
+        onClick={() => attach.mutate(chosen, { onSuccess: () => setChosen("") })}
+      >
+        Attach
+      </Button>
+      {attach.error ? (
+        <Notice tone="block" role="alert">
+          {attach.error instanceof ApiError ? attach.error.message : "Not attached."}
+        </Notice>
+      ) : null}
     </div>
   );
 }
@@ -69,13 +109,22 @@ function AttachControl({ transferId, used }: { transferId: string; used: readonl
 export function TransferDocuments({ transferId, canAttach }: { transferId: string; canAttach: boolean }) {
   const docs = useTransferDocuments(transferId);
   if (docs.isPending) return <Loading label="Loading the documents…" />;
-  if (docs.error) return <Notice tone="block" role="alert">{(docs.error as Error).message}</Notice>;
+  if (docs.error)
+    return (
+      <Notice tone="block" role="alert">
+        {(docs.error as Error).message}
+      </Notice>
+    );
   return (
     <div className="flex flex-col gap-3">
       {docs.data.length === 0 ? (
         <p className="text-sm text-ink-soft">No permit or certificate on file is used by this transfer yet.</p>
       ) : (
-        <ul>{docs.data.map((doc) => <UsedDocument key={doc.id} doc={doc} transferId={transferId} canDetach={canAttach} />)}</ul>
+        <ul>
+          {docs.data.map((doc) => (
+            <UsedDocument key={doc.id} doc={doc} transferId={transferId} canDetach={canAttach} />
+          ))}
+        </ul>
       )}
       {canAttach ? <AttachControl transferId={transferId} used={docs.data} /> : null}
     </div>

@@ -28,11 +28,28 @@ type Form = UseFormReturn<FormIn, unknown, FormOut>;
 const stateOptions = US_STATES.map((s) => ({ value: s, label: `${jurisdictionName(s)} (${s})` }));
 const emptyToNull = (value: unknown) => (value === "" || value === undefined ? null : value);
 const today = () => new Date().toISOString().slice(0, 10);
-const newAnimal = (): FormIn["animals"][number] => ({ scientificName: "", count: 1, lengthMm: null, origin: "captive_bred", sex: "unknown" });
-const newDocument = (): FormIn["documents"][number] => ({ kind: "cvi", jurisdiction: "US", speciesCovered: [], validFrom: null, validTo: null, issuedOn: today(), statements: [] });
+const newAnimal = (): FormIn["animals"][number] => ({
+  scientificName: "",
+  count: 1,
+  lengthMm: null,
+  origin: "captive_bred",
+  sex: "unknown",
+});
+const newDocument = (): FormIn["documents"][number] => ({
+  kind: "cvi",
+  jurisdiction: "US",
+  speciesCovered: [],
+  validFrom: null,
+  validTo: null,
+  issuedOn: today(),
+  statements: [],
+});
 
 /** "Python bivittatus" as a brief taxon for the picker, which shows what was chosen by its name. */
-const chosen = (scientificName: string) => (scientificName ? { id: scientificName, scientificName, commonName: null, venomous: false, profileGroup: null, rank: "species" } : null);
+const chosen = (scientificName: string) =>
+  scientificName
+    ? { id: scientificName, scientificName, commonName: null, venomous: false, profileGroup: null, rank: "species" }
+    : null;
 
 function AnimalRows({ form }: { form: Form }) {
   const rows = useFieldArray({ control: form.control, name: "animals" });
@@ -41,22 +58,72 @@ function AnimalRows({ form }: { form: Form }) {
     <fieldset className="flex flex-col gap-3">
       <legend className="text-sm font-semibold">Animals</legend>
       {rows.fields.map((row, index) => (
-        <div key={row.id} className="grid items-start gap-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-2">
+        <div
+          key={row.id}
+          className="grid items-start gap-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-2"
+        >
           <div className="sm:col-span-2">
-            <Controller control={form.control} name={`animals.${index}.scientificName`} render={({ field }) => (
-              <TaxonCombobox label="Species" value={chosen(field.value)} onChange={(taxon) => field.onChange(taxon?.scientificName ?? "")} onBlur={field.onBlur} search={searchTaxa} error={e?.[index]?.scientificName?.message} />
-            )} />
+            <Controller
+              control={form.control}
+              name={`animals.${index}.scientificName`}
+              render={({ field }) => (
+                <TaxonCombobox
+                  label="Species"
+                  value={chosen(field.value)}
+                  onChange={(taxon) => field.onChange(taxon?.scientificName ?? "")}
+                  onBlur={field.onBlur}
+                  search={searchTaxa}
+                  error={e?.[index]?.scientificName?.message}
+                />
+              )}
+            />
           </div>
-          <TextField label="Count" type="number" min={1} error={e?.[index]?.count?.message} {...form.register(`animals.${index}.count`, { valueAsNumber: true })} />
-          <Controller control={form.control} name={`animals.${index}.lengthMm`} render={({ field }) => (
-            <MeasureField kind="length" label="Length" hint="Carapace for turtles" value={field.value} onChange={field.onChange} onBlur={field.onBlur} error={e?.[index]?.lengthMm?.message} />
-          )} />
-          <SelectField label="Origin" options={ANIMAL_ORIGINS.map((o) => ({ value: o, label: animalOriginLabel[o] }))} {...form.register(`animals.${index}.origin`)} />
-          <SelectField label="Sex" options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))} {...form.register(`animals.${index}.sex`)} />
-          <Button type="button" variant="ghost" className="justify-self-start" disabled={rows.fields.length === 1} onClick={() => rows.remove(index)}>Remove this line</Button>
+          <TextField
+            label="Count"
+            type="number"
+            min={1}
+            error={e?.[index]?.count?.message}
+            {...form.register(`animals.${index}.count`, { valueAsNumber: true })}
+          />
+          <Controller
+            control={form.control}
+            name={`animals.${index}.lengthMm`}
+            render={({ field }) => (
+              <MeasureField
+                kind="length"
+                label="Length"
+                hint="Carapace for turtles"
+                value={field.value}
+                onChange={field.onChange}
+                onBlur={field.onBlur}
+                error={e?.[index]?.lengthMm?.message}
+              />
+            )}
+          />
+          <SelectField
+            label="Origin"
+            options={ANIMAL_ORIGINS.map((o) => ({ value: o, label: animalOriginLabel[o] }))}
+            {...form.register(`animals.${index}.origin`)}
+          />
+          <SelectField
+            label="Sex"
+            options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))}
+            {...form.register(`animals.${index}.sex`)}
+          />
+          <Button
+            type="button"
+            variant="ghost"
+            className="justify-self-start"
+            disabled={rows.fields.length === 1}
+            onClick={() => rows.remove(index)}
+          >
+            Remove this line
+          </Button>
         </div>
       ))}
-      <Button type="button" variant="secondary" className="self-start" onClick={() => rows.append(newAnimal())}>Add a species</Button>
+      <Button type="button" variant="secondary" className="self-start" onClick={() => rows.append(newAnimal())}>
+        Add a species
+      </Button>
     </fieldset>
   );
 }
@@ -69,23 +136,75 @@ function DocumentRows({ form }: { form: Form }) {
       <legend className="text-sm font-semibold">Permits and certificates you would have (optional)</legend>
       {rows.fields.map((row, index) => (
         <div key={row.id} className="grid gap-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-3">
-          <SelectField label="Kind" options={DOCUMENT_KINDS.map((k) => ({ value: k, label: DOCUMENT_KIND_LABELS[k] }))} {...form.register(`documents.${index}.kind`)} />
-          <SelectField label="Issued by" options={JURISDICTIONS.map((j) => ({ value: j, label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})` }))} {...form.register(`documents.${index}.jurisdiction`)} />
-          <SelectField label="Held by" options={[{ value: "", label: "Either party" }, { value: "sender", label: "The sender" }, { value: "receiver", label: "The receiver" }]}
-            {...form.register(`documents.${index}.holderSide`, { setValueAs: (v: unknown) => (v === "" || v == null ? undefined : v) })} />
-          <TextField label="Issued on" type="date" error={e?.[index]?.issuedOn?.message} {...form.register(`documents.${index}.issuedOn`, { setValueAs: emptyToNull })} />
-          <TextField label="Valid from" type="date" error={e?.[index]?.validFrom?.message} {...form.register(`documents.${index}.validFrom`, { setValueAs: emptyToNull })} />
-          <TextField label="Valid to" type="date" error={e?.[index]?.validTo?.message} {...form.register(`documents.${index}.validTo`, { setValueAs: emptyToNull })} />
-          <Controller control={form.control} name={`documents.${index}.speciesCovered`} render={({ field }) => (
-            <LinesField label="Species named, one per line" value={field.value} onChange={field.onChange} />
-          )} />
-          <Controller control={form.control} name={`documents.${index}.statements`} render={({ field }) => (
-            <LinesField label="Statements, one per line" hint="e.g. examined and found free of ticks" value={field.value} onChange={field.onChange} />
-          )} />
-          <Button type="button" variant="ghost" className="self-end" onClick={() => rows.remove(index)}>Remove</Button>
+          <SelectField
+            label="Kind"
+            options={DOCUMENT_KINDS.map((k) => ({ value: k, label: DOCUMENT_KIND_LABELS[k] }))}
+            {...form.register(`documents.${index}.kind`)}
+          />
+          <SelectField
+            label="Issued by"
+            options={JURISDICTIONS.map((j) => ({
+              value: j,
+              label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})`,
+            }))}
+            {...form.register(`documents.${index}.jurisdiction`)}
+          />
+          <SelectField
+            label="Held by"
+            options={[
+              { value: "", label: "Either party" },
+              { value: "sender", label: "The sender" },
+              { value: "receiver", label: "The receiver" },
+            ]}
+            {...form.register(`documents.${index}.holderSide`, {
+              setValueAs: (v: unknown) => (v === "" || v == null ? undefined : v),
+            })}
+          />
+          <TextField
+            label="Issued on"
+            type="date"
+            error={e?.[index]?.issuedOn?.message}
+            {...form.register(`documents.${index}.issuedOn`, { setValueAs: emptyToNull })}
+          />
+          <TextField
+            label="Valid from"
+            type="date"
+            error={e?.[index]?.validFrom?.message}
+            {...form.register(`documents.${index}.validFrom`, { setValueAs: emptyToNull })}
+          />
+          <TextField
+            label="Valid to"
+            type="date"
+            error={e?.[index]?.validTo?.message}
+            {...form.register(`documents.${index}.validTo`, { setValueAs: emptyToNull })}
+          />
+          <Controller
+            control={form.control}
+            name={`documents.${index}.speciesCovered`}
+            render={({ field }) => (
+              <LinesField label="Species named, one per line" value={field.value} onChange={field.onChange} />
+            )}
+          />
+          <Controller
+            control={form.control}
+            name={`documents.${index}.statements`}
+            render={({ field }) => (
+              <LinesField
+                label="Statements, one per line"
+                hint="e.g. examined and found free of ticks"
+                value={field.value}
+                onChange={field.onChange}
+              />
+            )}
+          />
+          <Button type="button" variant="ghost" className="self-end" onClick={() => rows.remove(index)}>
+            Remove
+          </Button>
         </div>
       ))}
-      <Button type="button" variant="secondary" className="self-start" onClick={() => rows.append(newDocument())}>Add a permit or certificate</Button>
+      <Button type="button" variant="secondary" className="self-start" onClick={() => rows.append(newDocument())}>
+        Add a permit or certificate
+      </Button>
     </fieldset>
   );
 }
@@ -102,8 +221,14 @@ function UnknownSpecies({ error, form }: { error: ApiError; form: Form }) {
       {index >= 0 && detail.suggestions?.length ? (
         <div className="mt-2 flex flex-wrap gap-2">
           {detail.suggestions.map((s) => (
-            <Button key={s.scientificName} type="button" variant="secondary" onClick={() => form.setValue(`animals.${index}.scientificName`, s.scientificName)}>
-              <i>{s.scientificName}</i>{s.commonName ? ` (${s.commonName})` : ""}
+            <Button
+              key={s.scientificName}
+              type="button"
+              variant="secondary"
+              onClick={() => form.setValue(`animals.${index}.scientificName`, s.scientificName)}
+            >
+              <i>{s.scientificName}</i>
+              {s.commonName ? ` (${s.commonName})` : ""}
             </Button>
           ))}
         </div>
@@ -117,7 +242,16 @@ export function CanItTravelRoute() {
   const evaluate = useEvaluate();
   const form: Form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(evaluateRequestSchema),
-    defaultValues: { originState: "TN", destinationState: "OH", transitStates: [], shipDate: addDays(today(), 3), purpose: "private_keeping", sale: false, animals: [newAnimal()], documents: [] },
+    defaultValues: {
+      originState: "TN",
+      destinationState: "OH",
+      transitStates: [],
+      shipDate: addDays(today(), 3),
+      purpose: "private_keeping",
+      sale: false,
+      animals: [newAnimal()],
+      documents: [],
+    },
   });
   const e = form.formState.errors;
   const submit = form.handleSubmit((request) => evaluate.mutate(request));
@@ -126,18 +260,45 @@ export function CanItTravelRoute() {
   return (
     <>
       <PageHeader title="Can this travel?">
-        Check animals against the federal rules and those of the states on the route before you draft a transfer. Nothing is saved.
+        Check animals against the federal rules and those of the states on the route before you draft a transfer.
+        Nothing is saved.
       </PageHeader>
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Card>
           <form onSubmit={submit} noValidate className="flex flex-col gap-5">
             <div className="grid gap-4 sm:grid-cols-2">
-              <SelectField label="From" options={stateOptions} error={e.originState?.message} {...form.register("originState")} />
-              <SelectField label="To" options={stateOptions} error={e.destinationState?.message} {...form.register("destinationState")} />
-              <TextField label="Through (ground routes)" hint="USPS codes in order, e.g. KY, OH" error={e.transitStates?.message ?? e.transitStates?.[0]?.message}
-                {...form.register("transitStates", { setValueAs: (v: unknown) => (typeof v === "string" ? v.split(/[\s,]+/).map((s) => s.toUpperCase()).filter(Boolean) : v) })} />
+              <SelectField
+                label="From"
+                options={stateOptions}
+                error={e.originState?.message}
+                {...form.register("originState")}
+              />
+              <SelectField
+                label="To"
+                options={stateOptions}
+                error={e.destinationState?.message}
+                {...form.register("destinationState")}
+              />
+              <TextField
+                label="Through (ground routes)"
+                hint="USPS codes in order, e.g. KY, OH"
+                error={e.transitStates?.message ?? e.transitStates?.[0]?.message}
+                {...form.register("transitStates", {
+                  setValueAs: (v: unknown) =>
+                    typeof v === "string"
+                      ? v
+                          .split(/[\s,]+/)
+                          .map((s) => s.toUpperCase())
+                          .filter(Boolean)
+                      : v,
+                })}
+              />
               <TextField label="Ship date" type="date" error={e.shipDate?.message} {...form.register("shipDate")} />
-              <SelectField label="Purpose" options={PURPOSES.map((p) => ({ value: p, label: purposeLabel[p] }))} {...form.register("purpose")} />
+              <SelectField
+                label="Purpose"
+                options={PURPOSES.map((p) => ({ value: p, label: purposeLabel[p] }))}
+                {...form.register("purpose")}
+              />
               <label className="flex min-h-11 items-center gap-2 self-end text-sm">
                 <input type="checkbox" className="h-5 w-5" {...form.register("sale")} />
                 The animals are sold (or given in connection with a business)
@@ -145,14 +306,18 @@ export function CanItTravelRoute() {
             </div>
             <AnimalRows form={form} />
             <DocumentRows form={form} />
-            <Button type="submit" size="lg" className="self-start" busy={evaluate.isPending}>Check the rules</Button>
+            <Button type="submit" size="lg" className="self-start" busy={evaluate.isPending}>
+              Check the rules
+            </Button>
           </form>
         </Card>
         <div className="flex flex-col gap-4" aria-live="polite">
           {error instanceof ApiError && error.code === "unknown_species" ? (
             <UnknownSpecies error={error} form={form} />
           ) : error ? (
-            <Notice tone="block" role="alert">{error instanceof ApiError ? error.message : "The check did not run."}</Notice>
+            <Notice tone="block" role="alert">
+              {error instanceof ApiError ? error.message : "The check did not run."}
+            </Notice>
           ) : null}
           {evaluate.data ? (
             <>
@@ -161,7 +326,9 @@ export function CanItTravelRoute() {
             </>
           ) : (
             <Notice tone="info" title="How this works">
-              Each species is looked up with its older names, then every rule of the library that applies on the ship date is listed with its source. Add the permits and certificates you would have to see whether they satisfy the rules.
+              Each species is looked up with its older names, then every rule of the library that applies on the ship
+              date is listed with its source. Add the permits and certificates you would have to see whether they
+              satisfy the rules.
             </Notice>
           )}
           <LegalCaution />

@@ -18,21 +18,48 @@ function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) 
   return (
     <>
       <tr>
-        <Td className="font-medium">{DOCUMENT_KIND_LABELS[doc.kind]}<br /><span className="text-ink-soft">no. {doc.number}</span></Td>
+        <Td className="font-medium">
+          {DOCUMENT_KIND_LABELS[doc.kind]}
+          <br />
+          <span className="text-ink-soft">no. {doc.number}</span>
+        </Td>
         <Td>{doc.jurisdiction === "US" ? "Federal" : jurisdictionName(doc.jurisdiction)}</Td>
-        <Td>{species.length ? species.map((name) => <i key={name} className="block">{name}</i>) : <span className="text-ink-soft">—</span>}</Td>
-        <Td>{doc.validFrom ?? "…"} to {doc.validTo ?? "…"}<div className="mt-1"><ExpiryBadge expiry={doc.expiry} /></div></Td>
+        <Td>
+          {species.length ? (
+            species.map((name) => (
+              <i key={name} className="block">
+                {name}
+              </i>
+            ))
+          ) : (
+            <span className="text-ink-soft">—</span>
+          )}
+        </Td>
+        <Td>
+          {doc.validFrom ?? "…"} to {doc.validTo ?? "…"}
+          <div className="mt-1">
+            <ExpiryBadge expiry={doc.expiry} />
+          </div>
+        </Td>
         <Td>
           <Button variant="ghost" onClick={() => setShowScans(!showScans)} aria-expanded={showScans}>
             {doc.scans?.length ?? 0} scan{doc.scans?.length === 1 ? "" : "s"}
           </Button>
         </Td>
-        <Td className="text-right">{doc.abilities.edit ? <Button variant="secondary" onClick={onEdit}>Edit</Button> : null}</Td>
+        <Td className="text-right">
+          {doc.abilities.edit ? (
+            <Button variant="secondary" onClick={onEdit}>
+              Edit
+            </Button>
+          ) : null}
+        </Td>
       </tr>
       {showScans ? (
         <tr>
           <Td className="bg-paper" />
-          <td colSpan={5} className="bg-paper px-3 py-3"><ScanList document={doc} /></td>
+          <td colSpan={5} className="bg-paper px-3 py-3">
+            <ScanList document={doc} />
+          </td>
         </tr>
       ) : null}
     </>
@@ -48,23 +75,60 @@ export function DocumentsRoute() {
 
   return (
     <>
-      <PageHeader title="Permits and certificates" eyebrow={viewer.user.organization?.name} actions={editing ? null : <Button onClick={() => setEditing("new")}>Add a document</Button>}>
-        Import, possession and export permits, federal permits, captive-bred registrations and CVIs your organisation holds. The other party of a transfer sees one only when that transfer uses it.
+      <PageHeader
+        title="Permits and certificates"
+        eyebrow={viewer.user.organization?.name}
+        actions={editing ? null : <Button onClick={() => setEditing("new")}>Add a document</Button>}
+      >
+        Import, possession and export permits, federal permits, captive-bred registrations and CVIs your organisation
+        holds. The other party of a transfer sees one only when that transfer uses it.
       </PageHeader>
       {editing ? (
-        <Card title={editing === "new" ? "New permit or certificate" : `Edit ${DOCUMENT_KIND_LABELS[editing.kind].toLowerCase()} no. ${editing.number}`} className="mb-6">
-          <DocumentForm key={editing === "new" ? "new" : editing.id} existing={editing === "new" ? undefined : editing} holderName={holderName} onDone={() => setEditing(null)} />
+        <Card
+          title={
+            editing === "new"
+              ? "New permit or certificate"
+              : `Edit ${DOCUMENT_KIND_LABELS[editing.kind].toLowerCase()} no. ${editing.number}`
+          }
+          className="mb-6"
+        >
+          <DocumentForm
+            key={editing === "new" ? "new" : editing.id}
+            existing={editing === "new" ? undefined : editing}
+            holderName={holderName}
+            onDone={() => setEditing(null)}
+          />
         </Card>
       ) : null}
       {docs.isPending ? (
         <Loading label="Loading the documents…" />
       ) : docs.error ? (
-        <Notice tone="block" role="alert">{(docs.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(docs.error as Error).message}
+        </Notice>
       ) : docs.data.length === 0 ? (
-        <EmptyState title="No permits or certificates yet">Add the first one with the button above; you can attach scans to it afterwards.</EmptyState>
+        <EmptyState title="No permits or certificates yet">
+          Add the first one with the button above; you can attach scans to it afterwards.
+        </EmptyState>
       ) : (
-        <Table caption="Permits and certificates" head={<tr><Th>Document</Th><Th>Issued by</Th><Th>Species</Th><Th>Validity</Th><Th>Scans</Th><Th><span className="sr-only">Actions</span></Th></tr>}>
-          {docs.data.map((doc) => <DocumentRow key={doc.id} doc={doc} onEdit={() => setEditing(doc)} />)}
+        <Table
+          caption="Permits and certificates"
+          head={
+            <tr>
+              <Th>Document</Th>
+              <Th>Issued by</Th>
+              <Th>Species</Th>
+              <Th>Validity</Th>
+              <Th>Scans</Th>
+              <Th>
+                <span className="sr-only">Actions</span>
+              </Th>
+            </tr>
+          }
+        >
+          {docs.data.map((doc) => (
+            <DocumentRow key={doc.id} doc={doc} onEdit={() => setEditing(doc)} />
+          ))}
         </Table>
       )}
     </>

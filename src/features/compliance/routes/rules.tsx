@@ -29,11 +29,20 @@ function RuleHistory({ ruleKey, reviewer }: { ruleKey: string; reviewer: string 
   const history = useRuleHistory(ruleKey);
   const [editing, setEditing] = useState(false);
   if (history.isPending) return <Loading label="Loading the rule's versions…" />;
-  if (history.error) return <Notice tone="block" role="alert">{(history.error as Error).message}</Notice>;
+  if (history.error)
+    return (
+      <Notice tone="block" role="alert">
+        {(history.error as Error).message}
+      </Notice>
+    );
   const [current] = history.data.versions;
   if (!current) return null;
   return (
-    <Card title={`${ruleKey}: version ${current.rule.version}${current.retired ? " (retired)" : ""}`} actions={editing ? null : <Button onClick={() => setEditing(true)}>Edit</Button>} className="mb-6">
+    <Card
+      title={`${ruleKey}: version ${current.rule.version}${current.retired ? " (retired)" : ""}`}
+      actions={editing ? null : <Button onClick={() => setEditing(true)}>Edit</Button>}
+      className="mb-6"
+    >
       {editing ? (
         <RuleForm key={current.rule.version} current={current} reviewer={reviewer} onDone={() => setEditing(false)} />
       ) : (
@@ -41,14 +50,33 @@ function RuleHistory({ ruleKey, reviewer }: { ruleKey: string; reviewer: string 
           {history.data.versions.map((v) => (
             <li key={v.rule.version} className="rounded-card border border-rule bg-paper px-4 py-3 text-sm">
               <p className="font-semibold">
-                Version {v.rule.version}{v.retired ? " — retired" : ""} · reviewed {v.rule.reviewedOn} by {v.rule.reviewedBy}
-                <span className="font-normal text-ink-soft"> · saved {new Date(v.createdAt).toLocaleDateString()}{v.createdBy ? ` by ${v.createdBy.displayName}` : " with the seed library"}</span>
+                Version {v.rule.version}
+                {v.retired ? " — retired" : ""} · reviewed {v.rule.reviewedOn} by {v.rule.reviewedBy}
+                <span className="font-normal text-ink-soft">
+                  {" "}
+                  · saved {new Date(v.createdAt).toLocaleDateString()}
+                  {v.createdBy ? ` by ${v.createdBy.displayName}` : " with the seed library"}
+                </span>
               </p>
               <p className="mt-1">{v.rule.summary}</p>
               <p className="mt-1 text-ink-soft">
-                {v.rule.citation.url ? <a className="text-fern underline underline-offset-2" href={v.rule.citation.url} target="_blank" rel="noopener noreferrer">{v.rule.citation.text}</a> : v.rule.citation.text}
+                {v.rule.citation.url ? (
+                  <a
+                    className="text-fern underline underline-offset-2"
+                    href={v.rule.citation.url}
+                    target="_blank"
+                    rel="noopener noreferrer"
+                  >
+                    {v.rule.citation.text}
+                  </a>
+                ) : (
+                  v.rule.citation.text
+                )}
               </p>
-              <p className="mt-1 text-xs text-ink-soft">{inForce(v.rule)} · covers {v.rule.selector.taxa.join(", ")}{v.rule.selector.exceptTaxa?.length ? `, except ${v.rule.selector.exceptTaxa.join(", ")}` : ""}</p>
+              <p className="mt-1 text-xs text-ink-soft">
+                {inForce(v.rule)} · covers {v.rule.selector.taxa.join(", ")}
+                {v.rule.selector.exceptTaxa?.length ? `, except ${v.rule.selector.exceptTaxa.join(", ")}` : ""}
+              </p>
             </li>
           ))}
         </ol>
@@ -57,7 +85,15 @@ function RuleHistory({ ruleKey, reviewer }: { ruleKey: string; reviewer: string 
   );
 }
 
-function RuleRow({ summary, selected, onSelect }: { summary: RuleSummaryDto; selected: boolean; onSelect: () => void }) {
+function RuleRow({
+  summary,
+  selected,
+  onSelect,
+}: {
+  summary: RuleSummaryDto;
+  selected: boolean;
+  onSelect: () => void;
+}) {
   const { rule, retired } = summary.current;
   return (
     <tr className={selected ? "bg-fern-light/50" : undefined}>
@@ -68,14 +104,31 @@ function RuleRow({ summary, selected, onSelect }: { summary: RuleSummaryDto; sel
       </Td>
       <Td>
         <div className="flex flex-col items-start gap-1">
-          <Tag tone={rule.effect.kind === "prohibited" ? "block" : rule.effect.kind.endsWith("required") ? "caution" : "info"}>{EFFECT_LABELS[rule.effect.kind]}</Tag>
+          <Tag
+            tone={
+              rule.effect.kind === "prohibited" ? "block" : rule.effect.kind.endsWith("required") ? "caution" : "info"
+            }
+          >
+            {EFFECT_LABELS[rule.effect.kind]}
+          </Tag>
           {rule.demo ? <Tag tone="neutral">Demo rule</Tag> : null}
           {retired ? <Tag tone="neutral">Retired</Tag> : null}
         </div>
       </Td>
-      <Td>{rule.reviewedOn}<br /><span className="text-ink-soft">{rule.reviewedBy}</span></Td>
-      <Td>v{rule.version}{summary.versionCount > 1 ? ` of ${summary.versionCount}` : ""}</Td>
-      <Td className="text-right"><Button variant="secondary" onClick={onSelect} aria-pressed={selected}>Versions</Button></Td>
+      <Td>
+        {rule.reviewedOn}
+        <br />
+        <span className="text-ink-soft">{rule.reviewedBy}</span>
+      </Td>
+      <Td>
+        v{rule.version}
+        {summary.versionCount > 1 ? ` of ${summary.versionCount}` : ""}
+      </Td>
+      <Td className="text-right">
+        <Button variant="secondary" onClick={onSelect} aria-pressed={selected}>
+          Versions
+        </Button>
+      </Td>
     </tr>
   );
 }
@@ -99,29 +152,70 @@ export function RulesRoute() {
   return (
     <>
       <PageHeader title="Rule library" eyebrow="Administration">
-        Federal and state rules the compliance check applies, each with its source and last review. Demo rules are invented and say so.
+        Federal and state rules the compliance check applies, each with its source and last review. Demo rules are
+        invented and say so.
       </PageHeader>
       <form onSubmit={apply} className="mb-6 flex flex-wrap items-end gap-3" role="search">
         <div className="w-56">
-          <SelectField label="State" value={draft.jurisdiction} onChange={(e) => setDraft({ ...draft, jurisdiction: e.target.value })}
-            options={[{ value: "", label: "All" }, ...JURISDICTIONS.map((j) => ({ value: j, label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})` }))]} />
+          <SelectField
+            label="State"
+            value={draft.jurisdiction}
+            onChange={(e) => setDraft({ ...draft, jurisdiction: e.target.value })}
+            options={[
+              { value: "", label: "All" },
+              ...JURISDICTIONS.map((j) => ({
+                value: j,
+                label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})`,
+              })),
+            ]}
+          />
         </div>
         <div className="w-72">
-          <TextField label="Taxon (any rank)" placeholder="e.g. Python bivittatus or Testudines" value={draft.taxon} onChange={(e) => setDraft({ ...draft, taxon: e.target.value })} />
+          <TextField
+            label="Taxon (any rank)"
+            placeholder="e.g. Python bivittatus or Testudines"
+            value={draft.taxon}
+            onChange={(e) => setDraft({ ...draft, taxon: e.target.value })}
+          />
         </div>
-        <Button type="submit" variant="secondary">Filter</Button>
+        <Button type="submit" variant="secondary">
+          Filter
+        </Button>
       </form>
       {selected ? <RuleHistory key={selected} ruleKey={selected} reviewer={viewer.user.displayName} /> : null}
       {rules.isPending ? (
         <Loading label="Loading the rules…" />
       ) : rules.error ? (
-        <Notice tone="block" role="alert">{(rules.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(rules.error as Error).message}
+        </Notice>
       ) : rules.data.length === 0 ? (
-        <EmptyState title="No rule matches">Try another state, or a broader taxon such as the family or the order.</EmptyState>
+        <EmptyState title="No rule matches">
+          Try another state, or a broader taxon such as the family or the order.
+        </EmptyState>
       ) : (
-        <Table caption="Rules" head={<tr><Th>Where</Th><Th>Rule</Th><Th>Effect</Th><Th>Reviewed</Th><Th>Version</Th><Th><span className="sr-only">Actions</span></Th></tr>}>
+        <Table
+          caption="Rules"
+          head={
+            <tr>
+              <Th>Where</Th>
+              <Th>Rule</Th>
+              <Th>Effect</Th>
+              <Th>Reviewed</Th>
+              <Th>Version</Th>
+              <Th>
+                <span className="sr-only">Actions</span>
+              </Th>
+            </tr>
+          }
+        >
           {rules.data.map((summary) => (
-            <RuleRow key={summary.ruleKey} summary={summary} selected={selected === summary.ruleKey} onSelect={() => setSelected(selected === summary.ruleKey ? null : summary.ruleKey)} />
+            <RuleRow
+              key={summary.ruleKey}
+              summary={summary}
+              selected={selected === summary.ruleKey}
+              onSelect={() => setSelected(selected === summary.ruleKey ? null : summary.ruleKey)}
+            />
           ))}
         </Table>
       )}

@@ -14,7 +14,8 @@ export const recordHandoff = (transferId: string, input: HandoffInput, idempoten
 export function useRecordHandoff(transferId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: ({ input, idempotencyKey }: { input: HandoffInput; idempotencyKey: string }) => recordHandoff(transferId, input, idempotencyKey),
+    mutationFn: ({ input, idempotencyKey }: { input: HandoffInput; idempotencyKey: string }) =>
+      recordHandoff(transferId, input, idempotencyKey),
     onSuccess: (transfer) => storeTransfer(client, transfer),
   });
 }

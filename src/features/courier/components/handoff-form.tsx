@@ -16,7 +16,11 @@ import { useRecordHandoff } from "../api/record-handoff";
 import { handoffParties } from "./handoff-parties";
 
 type Parsed = z.output<typeof handoffInputSchema>;
-type Located = { state: "idle" } | { state: "locating" } | { state: "found"; accuracyM: number } | { state: "failed"; message: string };
+type Located =
+  | { state: "idle" }
+  | { state: "locating" }
+  | { state: "found"; accuracyM: number }
+  | { state: "failed"; message: string };
 
 const big = "text-lg";
 
@@ -26,7 +30,9 @@ function defaults(t: TransferDto, index: number): HandoffInput {
     handoffIndex: index,
     // Counted from zero on purpose: the number is what the person counted, not what was expected.
     boxesCounted: 0,
-    seals: [...t.containers].sort((a, b) => a.position - b.position).map((c) => ({ containerId: c.id, sealNumber: c.sealNumber ?? "", intact: false })),
+    seals: [...t.containers]
+      .sort((a, b) => a.position - b.position)
+      .map((c) => ({ containerId: c.id, sealNumber: c.sealNumber ?? "", intact: false })),
     boxTempF: null,
     place: { text: "", lat: null, lon: null, accuracyM: null },
     releasedByName: parties?.releasedBy ?? "",
@@ -37,11 +43,22 @@ function defaults(t: TransferDto, index: number): HandoffInput {
 }
 
 /** The handoff on a phone: count, seals, temperature, place, names, and one confirmation. */
-export function HandoffForm({ transfer: t, index, onRecorded }: { transfer: TransferDto; index: number; onRecorded: (message: string) => void }) {
+export function HandoffForm({
+  transfer: t,
+  index,
+  onRecorded,
+}: {
+  transfer: TransferDto;
+  index: number;
+  onRecorded: (message: string) => void;
+}) {
   const record = useRecordHandoff(t.id);
   const { key, settle } = useIdempotencyKey();
   const [located, setLocated] = useState<Located>({ state: "idle" });
-  const form = useForm<HandoffInput, unknown, Parsed>({ resolver: zodResolver(handoffInputSchema), defaultValues: defaults(t, index) });
+  const form = useForm<HandoffInput, unknown, Parsed>({
+    resolver: zodResolver(handoffInputSchema),
+    defaultValues: defaults(t, index),
+  });
   const { register, control, formState, setValue, watch } = form;
   const e = formState.errors;
   const boxes = [...t.containers].sort((a, b) => a.position - b.position);
@@ -60,7 +77,10 @@ export function HandoffForm({ transfer: t, index, onRecorded }: { transfer: Tran
       (error) =>
         setLocated({
           state: "failed",
-          message: error.code === error.PERMISSION_DENIED ? "Location is not allowed for this site. Type the place instead." : "No location fix. Type the place instead.",
+          message:
+            error.code === error.PERMISSION_DENIED
+              ? "Location is not allowed for this site. Type the place instead."
+              : "No location fix. Type the place instead.",
         }),
       { enableHighAccuracy: true, timeout: 15_000, maximumAge: 60_000 },
     );
@@ -79,14 +99,23 @@ export function HandoffForm({ transfer: t, index, onRecorded }: { transfer: Tran
   return (
     <form onSubmit={submit} noValidate className="grid gap-6">
       <h2 className="text-2xl font-semibold">
-        {handoffKindLabel[kind]} <span className="text-ink-soft">({index + 1} of {t.handoffsPlanned})</span>
+        {handoffKindLabel[kind]}{" "}
+        <span className="text-ink-soft">
+          ({index + 1} of {t.handoffsPlanned})
+        </span>
       </h2>
 
       <Controller
         control={control}
         name="boxesCounted"
         render={({ field }) => (
-          <CountStepper label="Boxes you counted" value={field.value} onChange={field.onChange} max={200} hint={`The transfer lists ${boxes.length} ${boxes.length === 1 ? "box" : "boxes"}.`} />
+          <CountStepper
+            label="Boxes you counted"
+            value={field.value}
+            onChange={field.onChange}
+            max={200}
+            hint={`The transfer lists ${boxes.length} ${boxes.length === 1 ? "box" : "boxes"}.`}
+          />
         )}
       />
       {counted !== boxes.length ? (
@@ -112,7 +141,13 @@ export function HandoffForm({ transfer: t, index, onRecorded }: { transfer: Tran
                 )}
               </span>
             </label>
-            {box.sealNumber ? <TextField label={`Seal number you see on ${box.label}`} autoComplete="off" {...register(`seals.${i}.sealNumber`)} /> : null}
+            {box.sealNumber ? (
+              <TextField
+                label={`Seal number you see on ${box.label}`}
+                autoComplete="off"
+                {...register(`seals.${i}.sealNumber`)}
+              />
+            ) : null}
           </div>
         ))}
       </fieldset>
@@ -121,20 +156,37 @@ export function HandoffForm({ transfer: t, index, onRecorded }: { transfer: Tran
         control={control}
         name="boxTempF"
         render={({ field, fieldState }) => (
-          <MeasureField kind="temperature" label="Temperature in or at the box" hint="Leave empty if you have no thermometer." value={field.value} onChange={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+          <MeasureField
+            kind="temperature"
+            label="Temperature in or at the box"
+            hint="Leave empty if you have no thermometer."
+            value={field.value}
+            onChange={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
         )}
       />
 
       <fieldset className="grid gap-3">
         <legend className={`mb-2 font-display font-semibold ${big}`}>Where</legend>
-        <TextField label="Place" placeholder="e.g. carrier hub, Memphis" error={e.place?.text?.message} {...register("place.text")} />
+        <TextField
+          label="Place"
+          placeholder="e.g. carrier hub, Memphis"
+          error={e.place?.text?.message}
+          {...register("place.text")}
+        />
         {typeof navigator !== "undefined" && "geolocation" in navigator ? (
           <div className="flex flex-wrap items-center gap-3">
             <Button type="button" variant="secondary" size="lg" onClick={locate} busy={located.state === "locating"}>
               Use my location
             </Button>
             <p role="status" className="text-ink-soft">
-              {located.state === "found" ? `Location recorded (within ${located.accuracyM} m).` : located.state === "failed" ? located.message : ""}
+              {located.state === "found"
+                ? `Location recorded (within ${located.accuracyM} m).`
+                : located.state === "failed"
+                  ? located.message
+                  : ""}
             </p>
           </div>
         ) : null}
@@ -148,8 +200,16 @@ export function HandoffForm({ transfer: t, index, onRecorded }: { transfer: Tran
       <TextAreaField label="Notes (optional)" error={e.notes?.message} {...register("notes")} />
 
       <label className="flex min-h-14 cursor-pointer items-start gap-4 rounded-card border-2 border-fern-ring bg-fern-light p-4">
-        <input type="checkbox" className="mt-1 h-8 w-8 shrink-0 accent-fern" aria-describedby={e.acknowledged ? "ack-error" : undefined} {...register("acknowledged")} />
-        <span className={big}>I have counted the boxes and checked the seals, and custody passes from the person releasing to the person receiving now.</span>
+        <input
+          type="checkbox"
+          className="mt-1 h-8 w-8 shrink-0 accent-fern"
+          aria-describedby={e.acknowledged ? "ack-error" : undefined}
+          {...register("acknowledged")}
+        />
+        <span className={big}>
+          I have counted the boxes and checked the seals, and custody passes from the person releasing to the person
+          receiving now.
+        </span>
       </label>
       {e.acknowledged ? (
         <p id="ack-error" role="alert" className="-mt-4 font-medium text-brick">

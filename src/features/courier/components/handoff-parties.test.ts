@@ -3,10 +3,26 @@ import type { LegDto, TransferDto } from "@shared/schemas/transfer";
 import { handoffParties } from "./handoff-parties";
 
 // Invented demo parties; the rule under test is outside the project.
-const org = (name: string) => ({ id: name, name, kind: "breeder" as const, phone: "555-0100", email: "x@example.org", address: { street: "1 Main St", city: "Town", state: "TN" as const, zip: "37201" } });
-const leg = (sequence: number, displayName: string): LegDto => ({ id: `leg-${sequence}`, sequence, courier: { id: displayName, displayName, organizationName: null, phone: null }, fromLabel: null, toLabel: null });
+const org = (name: string) => ({
+  id: name,
+  name,
+  kind: "breeder" as const,
+  phone: "555-0100",
+  email: "x@example.org",
+  address: { street: "1 Main St", city: "Town", state: "TN" as const, zip: "37201" },
+});
+const leg = (sequence: number, displayName: string): LegDto => ({
+  id: `leg-${sequence}`,
+  sequence,
+  courier: { id: displayName, displayName, organizationName: null, phone: null },
+  fromLabel: null,
+  toLabel: null,
+});
 const transfer = (legs: LegDto[]): Pick<TransferDto, "sender" | "receiver" | "legs"> => ({
-  sender: { organization: org("Cinder Ridge Herps"), contact: { id: "s", displayName: "Ruth Calder", email: "r@example.org" } },
+  sender: {
+    organization: org("Cinder Ridge Herps"),
+    contact: { id: "s", displayName: "Ruth Calder", email: "r@example.org" },
+  },
   receiver: { organization: org("Willow Marsh Nature Centre"), contact: null },
   legs,
 });

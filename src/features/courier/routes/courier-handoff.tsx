@@ -11,7 +11,8 @@ import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
 import { HandoffForm } from "../components/handoff-form";
 
-const phoneLink = "inline-flex min-h-12 items-center rounded-md border border-rule bg-paper-card px-4 text-lg font-semibold text-fern";
+const phoneLink =
+  "inline-flex min-h-12 items-center rounded-md border border-rule bg-paper-card px-4 text-lg font-semibold text-fern";
 
 /** The page a box label's QR code opens: the transfer at a glance, and the handoff to record. */
 export function CourierHandoffRoute() {
@@ -25,7 +26,9 @@ export function CourierHandoffRoute() {
     const missing = transfer.error instanceof ApiError && transfer.error.status === 404;
     return (
       <Notice tone="block" role="alert" title={missing ? "Not one of your legs" : "This transfer did not load"}>
-        {missing ? "Only the parties and assigned couriers see a transfer. Check that you are signed in as the assigned courier." : (transfer.error as Error).message}
+        {missing
+          ? "Only the parties and assigned couriers see a transfer. Check that you are signed in as the assigned courier."
+          : (transfer.error as Error).message}
       </Notice>
     );
   }
@@ -46,11 +49,16 @@ export function CourierHandoffRoute() {
           {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state}
         </p>
         <p className="text-ink-soft">
-          {t.containers.length} {t.containers.length === 1 ? "box" : "boxes"} · {animals} live {animals === 1 ? "animal" : "animals"} · leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+          {t.containers.length} {t.containers.length === 1 ? "box" : "boxes"} · {animals} live{" "}
+          {animals === 1 ? "animal" : "animals"} · leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
         </p>
       </header>
 
-      {recorded ? <Notice tone="ok" role="status" title={recorded}>It is in the custody trail; the sender and receiver can see it.</Notice> : null}
+      {recorded ? (
+        <Notice tone="ok" role="status" title={recorded}>
+          It is in the custody trail; the sender and receiver can see it.
+        </Notice>
+      ) : null}
 
       <TransportCautions />
       {t.handlingNotes ? (
@@ -62,8 +70,12 @@ export function CourierHandoffRoute() {
       <PaperworkLinks transferId={t.id} labels={false} />
 
       <section aria-label="Phone numbers" className="flex flex-wrap gap-2">
-        <a className={phoneLink} href={`tel:${t.sender.organization.phone}`}>Call the sender</a>
-        <a className={phoneLink} href={`tel:${t.receiver.organization.phone}`}>Call the receiver</a>
+        <a className={phoneLink} href={`tel:${t.sender.organization.phone}`}>
+          Call the sender
+        </a>
+        <a className={phoneLink} href={`tel:${t.receiver.organization.phone}`}>
+          Call the receiver
+        </a>
       </section>
 
       <section aria-label="Handoffs" className="grid gap-2">
@@ -74,13 +86,27 @@ export function CourierHandoffRoute() {
             const carrier = legs[i];
             const mine = carrier?.courier.id === viewer.user.id || legs[i - 1]?.courier.id === viewer.user.id;
             return (
-              <li key={i} className={`rounded-md border p-3 ${i === next ? "border-fern bg-fern-light" : "border-rule bg-paper-card"}`}>
+              <li
+                key={i}
+                className={`rounded-md border p-3 ${i === next ? "border-fern bg-fern-light" : "border-rule bg-paper-card"}`}
+              >
                 <p className="font-semibold">
-                  {i + 1}. {done ? handoffKindLabel[done.kind] : i === 0 ? handoffKindLabel.pickup : i === legs.length ? handoffKindLabel.delivery : handoffKindLabel.handoff}
+                  {i + 1}.{" "}
+                  {done
+                    ? handoffKindLabel[done.kind]
+                    : i === 0
+                      ? handoffKindLabel.pickup
+                      : i === legs.length
+                        ? handoffKindLabel.delivery
+                        : handoffKindLabel.handoff}
                   {mine ? <span className="font-normal text-ink-soft"> · yours</span> : null}
                 </p>
                 <p className="text-base text-ink-soft">
-                  {done ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatDateTime(done.at)}` : i === next ? "To record now" : "Not yet"}
+                  {done
+                    ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatDateTime(done.at)}`
+                    : i === next
+                      ? "To record now"
+                      : "Not yet"}
                 </p>
               </li>
             );

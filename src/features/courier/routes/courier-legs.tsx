@@ -23,7 +23,8 @@ function LegCard({ transfer: t }: { transfer: TransferSummaryDto }) {
         {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state}
       </p>
       <p className="text-ink-soft">
-        Leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)} · {t.animalCount} {t.animalCount === 1 ? "animal" : "animals"}
+        Leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)} · {t.animalCount}{" "}
+        {t.animalCount === 1 ? "animal" : "animals"}
       </p>
       <p className="text-sm text-ink-soft">
         {t.sender.name} to {t.receiver.name}
@@ -52,23 +53,46 @@ export function CourierLegsRoute() {
       {list.isPending ? (
         <Loading label="Loading your legs…" />
       ) : list.error ? (
-        <Notice tone="block" role="alert">{(list.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(list.error as Error).message}
+        </Notice>
       ) : rows.length === 0 ? (
         <EmptyState title="No legs assigned to you">When a sender assigns you a leg, it appears here.</EmptyState>
       ) : (
         <>
           <section aria-labelledby="legs-open" className="grid gap-3">
-            <h2 id="legs-open" className="text-xl font-semibold">To carry</h2>
-            {open.length ? <ul className="grid gap-3">{open.map((t) => <LegCard key={t.id} transfer={t} />)}</ul> : <p className="text-ink-soft">Nothing waiting.</p>}
+            <h2 id="legs-open" className="text-xl font-semibold">
+              To carry
+            </h2>
+            {open.length ? (
+              <ul className="grid gap-3">
+                {open.map((t) => (
+                  <LegCard key={t.id} transfer={t} />
+                ))}
+              </ul>
+            ) : (
+              <p className="text-ink-soft">Nothing waiting.</p>
+            )}
           </section>
           {done.length ? (
             <section aria-labelledby="legs-done" className="grid gap-3">
-              <h2 id="legs-done" className="text-xl font-semibold">Delivered or ended</h2>
-              <ul className="grid gap-3">{done.map((t) => <LegCard key={t.id} transfer={t} />)}</ul>
+              <h2 id="legs-done" className="text-xl font-semibold">
+                Delivered or ended
+              </h2>
+              <ul className="grid gap-3">
+                {done.map((t) => (
+                  <LegCard key={t.id} transfer={t} />
+                ))}
+              </ul>
             </section>
           ) : null}
           {list.hasNextPage ? (
-            <Button variant="secondary" size="lg" onClick={() => void list.fetchNextPage()} busy={list.isFetchingNextPage}>
+            <Button
+              variant="secondary"
+              size="lg"
+              onClick={() => void list.fetchNextPage()}
+              busy={list.isFetchingNextPage}
+            >
               Show more
             </Button>
           ) : null}

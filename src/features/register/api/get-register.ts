@@ -14,11 +14,15 @@ export const registerKeys = {
 export const registerQueryOptions = (filters: RegisterFilters) =>
   queryOptions({
     queryKey: registerKeys.list(filters),
-    queryFn: ({ signal }) => api<{ entries: RegisterEntryDto[] }>(`/api/register?${toQueryString(filters)}`, { signal }).then((r) => r.entries),
+    queryFn: ({ signal }) =>
+      api<{ entries: RegisterEntryDto[] }>(`/api/register?${toQueryString(filters)}`, { signal }).then(
+        (r) => r.entries,
+      ),
   });
 
 // The last rows stay on screen while a new filter loads.
-export const useRegister = (filters: RegisterFilters) => useQuery({ ...registerQueryOptions(filters), placeholderData: keepPreviousData });
+export const useRegister = (filters: RegisterFilters) =>
+  useQuery({ ...registerQueryOptions(filters), placeholderData: keepPreviousData });
 
 /** The same rows as CSV: a plain link, so the browser downloads it itself. */
 export const registerCsvHref = (filters: RegisterFilters) => {

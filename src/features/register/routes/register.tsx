@@ -41,7 +41,8 @@ export function RegisterRoute() {
   const [q, setQ] = useState(filters.q ?? "");
   const [taxon, setTaxon] = useState<TaxonBriefDto | null>(null);
 
-  const set = (key: (typeof KEYS)[number], value: string | undefined) => setSearch((current) => withParam(current, key, value), { replace: true });
+  const set = (key: (typeof KEYS)[number], value: string | undefined) =>
+    setSearch((current) => withParam(current, key, value), { replace: true });
 
   // The search box asks the server once typing pauses, not at every key.
   useEffect(() => {
@@ -56,15 +57,30 @@ export function RegisterRoute() {
         title="Collection register"
         eyebrow="Animals received"
         actions={
-          <a href={registerCsvHref(filters)} download className="inline-flex min-h-11 items-center rounded-md border border-rule bg-paper-card px-4 font-medium text-ink hover:bg-paper-deep">
+          <a
+            href={registerCsvHref(filters)}
+            download
+            className="inline-flex min-h-11 items-center rounded-md border border-rule bg-paper-card px-4 font-medium text-ink hover:bg-paper-deep"
+          >
             Download as CSV
           </a>
         }
       >
         Every animal checked in from a transfer, for the records your permits ask you to keep.
       </PageHeader>
-      <form role="search" aria-label="Filter the register" className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-5" onSubmit={(e) => e.preventDefault()}>
-        <TextField label="Search" type="search" value={q} onChange={(e) => setQ(e.target.value)} hint="Identifier, source or notes" />
+      <form
+        role="search"
+        aria-label="Filter the register"
+        className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-5"
+        onSubmit={(e) => e.preventDefault()}
+      >
+        <TextField
+          label="Search"
+          type="search"
+          value={q}
+          onChange={(e) => setQ(e.target.value)}
+          hint="Identifier, source or notes"
+        />
         <div>
           <TaxonCombobox
             label="Species"
@@ -76,21 +92,46 @@ export function RegisterRoute() {
             }}
           />
           {filters.taxonId && !taxon ? (
-            <button type="button" className="mt-1 min-h-11 text-sm font-medium text-fern underline" onClick={() => set("taxonId", undefined)}>
+            <button
+              type="button"
+              className="mt-1 min-h-11 text-sm font-medium text-fern underline"
+              onClick={() => set("taxonId", undefined)}
+            >
               Showing one species only: show all
             </button>
           ) : null}
         </div>
-        <SelectField label="Sex" options={[{ value: "", label: "Any" }, ...SEXES.map((s) => ({ value: s, label: sexLabel[s] }))]} value={filters.sex ?? ""} onChange={(e) => set("sex", e.target.value)} />
-        <TextField label="Acquired on or after" type="date" value={filters.from ?? ""} onChange={(e) => set("from", e.target.value)} />
-        <TextField label="Acquired on or before" type="date" value={filters.to ?? ""} onChange={(e) => set("to", e.target.value)} />
+        <SelectField
+          label="Sex"
+          options={[{ value: "", label: "Any" }, ...SEXES.map((s) => ({ value: s, label: sexLabel[s] }))]}
+          value={filters.sex ?? ""}
+          onChange={(e) => set("sex", e.target.value)}
+        />
+        <TextField
+          label="Acquired on or after"
+          type="date"
+          value={filters.from ?? ""}
+          onChange={(e) => set("from", e.target.value)}
+        />
+        <TextField
+          label="Acquired on or before"
+          type="date"
+          value={filters.to ?? ""}
+          onChange={(e) => set("to", e.target.value)}
+        />
       </form>
       {register.isPending ? (
         <Loading label="Loading the register…" />
       ) : register.error ? (
-        <Notice tone="block" role="alert">{(register.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(register.error as Error).message}
+        </Notice>
       ) : register.data.length === 0 ? (
-        <EmptyState title="Nothing in the register yet">{Object.keys(filters).length ? "No entry matches these filters." : "Animals appear here when you sign a check-in."}</EmptyState>
+        <EmptyState title="Nothing in the register yet">
+          {Object.keys(filters).length
+            ? "No entry matches these filters."
+            : "Animals appear here when you sign a check-in."}
+        </EmptyState>
       ) : (
         <Table
           caption="Collection register"
@@ -110,14 +151,22 @@ export function RegisterRoute() {
         >
           {register.data.map((r) => (
             <tr key={r.id}>
-              <Td><TaxonName taxon={r.taxon} /></Td>
+              <Td>
+                <TaxonName taxon={r.taxon} />
+              </Td>
               <Td>{sexLabel[r.sex]}</Td>
               <Td className="text-right tabular-nums">{r.count}</Td>
               <Td>{r.identifier ?? "—"}</Td>
               <Td className="whitespace-nowrap">{formatDate(r.dateAcquired)}</Td>
               <Td>{r.sourceOrganization}</Td>
-              <Td><Link className="text-fern underline" to={paths.transfers.detail.href(r.transferId)}>{r.transferNumber}</Link></Td>
-              <Td>{r.condition === "well" ? <Badge tone="ok">Well</Badge> : <Badge tone="caution">With a problem</Badge>}</Td>
+              <Td>
+                <Link className="text-fern underline" to={paths.transfers.detail.href(r.transferId)}>
+                  {r.transferNumber}
+                </Link>
+              </Td>
+              <Td>
+                {r.condition === "well" ? <Badge tone="ok">Well</Badge> : <Badge tone="caution">With a problem</Badge>}
+              </Td>
               <Td className="whitespace-pre-wrap">{r.notes ?? ""}</Td>
             </tr>
           ))}

@@ -4,6 +4,7 @@ import type { WhatIfInput } from "@shared/temperature/schemas";
 import { api } from "@/lib/api-client";
 
 /** The what-if: assesses a planned trip and stores nothing. */
-export const assessTrip = (input: WhatIfInput) => api<TemperatureReport>("/api/temperature/assess", { method: "POST", body: input });
+export const assessTrip = (input: WhatIfInput) =>
+  api<TemperatureReport>("/api/temperature/assess", { method: "POST", body: input });
 
 export const useAssessTrip = () => useMutation({ mutationFn: assessTrip });

@@ -8,7 +8,10 @@ import { temperatureKeys } from "./keys";
 type ProfilesDto = { profiles: TemperatureProfileDto[]; abilities: { edit: boolean } };
 
 export const profilesQueryOptions = () =>
-  queryOptions({ queryKey: temperatureKeys.profiles(), queryFn: ({ signal }) => api<ProfilesDto>("/api/temperature/profiles", { signal }) });
+  queryOptions({
+    queryKey: temperatureKeys.profiles(),
+    queryFn: ({ signal }) => api<ProfilesDto>("/api/temperature/profiles", { signal }),
+  });
 
 export const useProfiles = () => useQuery(profilesQueryOptions());
 
@@ -17,7 +20,10 @@ export function useUpdateProfile() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ group, data }: { group: ProfileGroup; data: ProfileData }) =>
-      api<{ profile: TemperatureProfileDto }>(`/api/temperature/profiles/${encodeURIComponent(group)}`, { method: "PUT", body: data }),
+      api<{ profile: TemperatureProfileDto }>(`/api/temperature/profiles/${encodeURIComponent(group)}`, {
+        method: "PUT",
+        body: data,
+      }),
     onSuccess: () => {
       void client.invalidateQueries({ queryKey: temperatureKeys.profiles() });
       void client.invalidateQueries({ predicate: (q) => q.queryKey.at(-1) === "temperature" });

@@ -6,7 +6,8 @@ import { temperatureKeys } from "./keys";
 export const transferTemperatureQueryOptions = (transferId: string) =>
   queryOptions({
     queryKey: temperatureKeys.transfer(transferId),
-    queryFn: ({ signal }) => api<TransferTemperatureDto>(`/api/transfers/${encodeURIComponent(transferId)}/temperature`, { signal }),
+    queryFn: ({ signal }) =>
+      api<TransferTemperatureDto>(`/api/transfers/${encodeURIComponent(transferId)}/temperature`, { signal }),
     // Forecasts change by the hour; the server caches them, so a minute's staleness costs nothing.
     staleTime: 60_000,
   });

@@ -10,11 +10,19 @@ import { useUnitSystem } from "@/lib/units-preference";
 
 type Tone = "ok" | "info" | "caution" | "block";
 /** An unknown forecast wears the colour of a block: it is never a kind of "ship". */
-export const VERDICT_TONE: Readonly<Record<Verdict, Tone>> = { ship: "ok", pack: "info", hold: "caution", do_not_ship: "block", forecast_unavailable: "block" };
+export const VERDICT_TONE: Readonly<Record<Verdict, Tone>> = {
+  ship: "ok",
+  pack: "info",
+  hold: "caution",
+  do_not_ship: "block",
+  forecast_unavailable: "block",
+};
 
 const PACK_HANDLING: Readonly<Record<PackKind, string>> = {
-  heat_40h: "Open it an hour before packing so it is warm, and fix it to the lid or a wall with paper between it and the containers.",
-  heat_72h: "Open it an hour before packing so it is warm, and fix it to the lid or a wall with paper between it and the containers.",
+  heat_40h:
+    "Open it an hour before packing so it is warm, and fix it to the lid or a wall with paper between it and the containers.",
+  heat_72h:
+    "Open it an hour before packing so it is warm, and fix it to the lid or a wall with paper between it and the containers.",
   cold: "Freeze it overnight, wrap it in paper, and keep it away from the containers.",
   none: "Pack the containers snugly so they cannot shift; no pack is needed.",
 };
@@ -22,7 +30,8 @@ const PACK_HANDLING: Readonly<Record<PackKind, string>> = {
 /** The verdict in a sentence, the packing to do, the temperatures, a safer day, the calendar and (for transfers) each box. */
 export function AssessmentDetails({ report, showBoxes = false }: { report: TemperatureReport; showBoxes?: boolean }) {
   const [system] = useUnitSystem();
-  const range = (r: { min: number; max: number } | null) => (r ? `${formatTemp(r.min, system)} to ${formatTemp(r.max, system)}` : "—");
+  const range = (r: { min: number; max: number } | null) =>
+    r ? `${formatTemp(r.min, system)} to ${formatTemp(r.max, system)}` : "—";
   const searched = report.verdict === "hold" || report.verdict === "do_not_ship";
   return (
     <div className="flex flex-col gap-3">
@@ -49,10 +58,13 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       </dl>
       {report.suggestedDeparture ? (
         <Notice tone="info" title="A safer departure">
-          Leaving {formatDateTime(report.suggestedDeparture)} looks better for every box and avoids weekends and federal holidays in transit.
+          Leaving {formatDateTime(report.suggestedDeparture)} looks better for every box and avoids weekends and federal
+          holidays in transit.
         </Notice>
       ) : searched ? (
-        <p className="text-sm text-ink-soft">No safer departure in the coming week: the forecast does not improve enough.</p>
+        <p className="text-sm text-ink-soft">
+          No safer departure in the coming week: the forecast does not improve enough.
+        </p>
       ) : null}
       {report.warnings.map((w) => (
         <Notice key={`${w.code}-${w.date}`} tone={w.severity === "warning" ? "caution" : "info"}>
@@ -61,7 +73,9 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       ))}
       {showBoxes && report.boxes.length > 0 ? <BoxVerdicts report={report} /> : null}
       <details className="text-sm">
-        <summary className="inline-flex min-h-11 cursor-pointer items-center text-fern">Where the numbers come from</summary>
+        <summary className="inline-flex min-h-11 cursor-pointer items-center text-fern">
+          Where the numbers come from
+        </summary>
         <ul className="list-disc space-y-1 pl-5 text-ink-soft">
           {report.sources.map((s) => (
             <li key={s.id}>{s.title}</li>
@@ -81,11 +95,21 @@ function BoxVerdicts({ report }: { report: TemperatureReport }) {
         <caption className="mb-1 text-left font-semibold">Box by box</caption>
         <thead>
           <tr className="border-b border-rule text-ink-soft">
-            <th scope="col" className="py-1 pr-3 font-semibold">Box</th>
-            <th scope="col" className="py-1 pr-3 font-semibold">Profile</th>
-            <th scope="col" className="py-1 pr-3 font-semibold">Verdict</th>
-            <th scope="col" className="py-1 pr-3 font-semibold">Inside (model)</th>
-            <th scope="col" className="py-1 font-semibold">Advice</th>
+            <th scope="col" className="py-1 pr-3 font-semibold">
+              Box
+            </th>
+            <th scope="col" className="py-1 pr-3 font-semibold">
+              Profile
+            </th>
+            <th scope="col" className="py-1 pr-3 font-semibold">
+              Verdict
+            </th>
+            <th scope="col" className="py-1 pr-3 font-semibold">
+              Inside (model)
+            </th>
+            <th scope="col" className="py-1 font-semibold">
+              Advice
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -93,8 +117,12 @@ function BoxVerdicts({ report }: { report: TemperatureReport }) {
             <tr key={b.containerId ?? b.label} className="border-b border-rule/60 align-top last:border-0">
               <td className="py-1 pr-3">{b.label}</td>
               <td className="py-1 pr-3">{b.profile.label}</td>
-              <td className="py-1 pr-3"><Badge tone={VERDICT_TONE[b.verdict]}>{VERDICT_WORDS[b.verdict]}</Badge></td>
-              <td className="py-1 pr-3">{b.insideF ? `${formatTemp(b.insideF.min, system)} to ${formatTemp(b.insideF.max, system)}` : "—"}</td>
+              <td className="py-1 pr-3">
+                <Badge tone={VERDICT_TONE[b.verdict]}>{VERDICT_WORDS[b.verdict]}</Badge>
+              </td>
+              <td className="py-1 pr-3">
+                {b.insideF ? `${formatTemp(b.insideF.min, system)} to ${formatTemp(b.insideF.max, system)}` : "—"}
+              </td>
               <td className="py-1">{b.advice.message}</td>
             </tr>
           ))}

@@ -15,6 +15,9 @@ export function chartRows(hours: TemperatureReport["hours"], system: UnitSystem)
 }
 
 /** The safe transit band in the chosen unit, for the shaded area. */
-export function safeBand(safeTransitF: { min: number; max: number }, system: UnitSystem): { low: number; high: number } {
+export function safeBand(
+  safeTransitF: { min: number; max: number },
+  system: UnitSystem,
+): { low: number; high: number } {
   return { low: tempInUnit(safeTransitF.min, system), high: tempInUnit(safeTransitF.max, system) };
 }

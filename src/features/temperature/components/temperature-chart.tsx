@@ -1,11 +1,28 @@
-import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import {
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceArea,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from "recharts";
 import type { TemperatureReport } from "@shared/temperature/report";
 import { tempUnit } from "@/lib/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { chartRows, safeBand, type ChartRow } from "./chart-rows";
 
 const hourFormat = new Intl.DateTimeFormat("en-US", { weekday: "short", hour: "numeric" });
-const tooltipFormat = new Intl.DateTimeFormat("en-US", { weekday: "short", month: "short", day: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" });
+const tooltipFormat = new Intl.DateTimeFormat("en-US", {
+  weekday: "short",
+  month: "short",
+  day: "numeric",
+  hour: "numeric",
+  minute: "2-digit",
+  timeZoneName: "short",
+});
 
 // The palette of tailwind.config.ts: slate for the weather, fern for the box, fern-light for the band.
 const COLOURS = { outside: "#3d5566", inside: "#2f5d3a", band: "#6f9a76" };
@@ -26,16 +43,47 @@ export function TemperatureChart({ report }: { report: TemperatureReport }) {
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 8, left: 0 }} accessibilityLayer={false}>
             <CartesianGrid stroke="#e6dcc6" strokeDasharray="3 3" />
-            <ReferenceArea y1={band.low} y2={band.high} fill={COLOURS.band} fillOpacity={0.18} ifOverflow="extendDomain" />
-            <XAxis dataKey="atMs" type="number" scale="time" domain={["dataMin", "dataMax"]} tickFormatter={(ms: number) => hourFormat.format(ms)} minTickGap={24} />
+            <ReferenceArea
+              y1={band.low}
+              y2={band.high}
+              fill={COLOURS.band}
+              fillOpacity={0.18}
+              ifOverflow="extendDomain"
+            />
+            <XAxis
+              dataKey="atMs"
+              type="number"
+              scale="time"
+              domain={["dataMin", "dataMax"]}
+              tickFormatter={(ms: number) => hourFormat.format(ms)}
+              minTickGap={24}
+            />
             <YAxis unit={unit} width={64} domain={["auto", "auto"]} />
             <Tooltip
               labelFormatter={(ms) => tooltipFormat.format(Number(ms))}
-              formatter={(value, name) => [`${String(value)} ${unit}`, name === "outside" ? "Outside" : "Inside the box"]}
+              formatter={(value, name) => [
+                `${String(value)} ${unit}`,
+                name === "outside" ? "Outside" : "Inside the box",
+              ]}
             />
             <Legend formatter={(name) => (name === "outside" ? "Outside (forecast)" : "Inside the box (model)")} />
-            <Line type="monotone" dataKey="outside" stroke={COLOURS.outside} strokeWidth={2} dot={false} isAnimationActive={false} />
-            <Line type="monotone" dataKey="inside" stroke={COLOURS.inside} strokeWidth={2} strokeDasharray="6 3" dot={false} isAnimationActive={false} />
+            <Line
+              type="monotone"
+              dataKey="outside"
+              stroke={COLOURS.outside}
+              strokeWidth={2}
+              dot={false}
+              isAnimationActive={false}
+            />
+            <Line
+              type="monotone"
+              dataKey="inside"
+              stroke={COLOURS.inside}
+              strokeWidth={2}
+              strokeDasharray="6 3"
+              dot={false}
+              isAnimationActive={false}
+            />
           </LineChart>
         </ResponsiveContainer>
       </div>
@@ -55,10 +103,18 @@ function HoursTable({ rows, unit }: { rows: ChartRow[]; unit: string }) {
         <table className="w-full text-left">
           <thead>
             <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 pr-3 font-semibold">Hour</th>
-              <th scope="col" className="py-1 pr-3 font-semibold">Where</th>
-              <th scope="col" className="py-1 pr-3 font-semibold">Outside ({unit})</th>
-              <th scope="col" className="py-1 font-semibold">Inside ({unit})</th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Hour
+              </th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Where
+              </th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Outside ({unit})
+              </th>
+              <th scope="col" className="py-1 font-semibold">
+                Inside ({unit})
+              </th>
             </tr>
           </thead>
           <tbody>

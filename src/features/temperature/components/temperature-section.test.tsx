@@ -11,7 +11,15 @@ import { buildTransitTimeline } from "@shared/temperature/timeline";
 import { TemperatureSection } from "./temperature-section";
 
 const TRANSFER_ID = "00000000-0000-4000-8000-0000000000bb";
-const box: BoxSpec = { wall: "eps", wallThicknessMm: 38, lengthMm: 400, widthMm: 300, heightMm: 300, contentsG: 2000, pack: "none" };
+const box: BoxSpec = {
+  wall: "eps",
+  wallThicknessMm: 38,
+  lengthMm: 400,
+  widthMm: 300,
+  heightMm: 300,
+  contentsG: 2000,
+  pack: "none",
+};
 const profile = DEFAULT_PROFILES.temperate_snake;
 
 /** The server's answer for a short hand delivery in Tennessee with the outside held at `tempF`, computed by the real assessment. */
@@ -23,13 +31,31 @@ function reportAt(tempF: number): TransferTemperatureDto {
     destination: { label: "Maryville, TN", lat: 35.688, lon: -84.077, timeZone: "America/New_York" },
     departAt,
   });
-  const result = assessTransit({ timeline, ambientByHour: ambientFromOverride(timeline, [{ at: departAt, tempF }]), box, profile, ambientSource: "override" });
+  const result = assessTransit({
+    timeline,
+    ambientByHour: ambientFromOverride(timeline, [{ at: departAt, tempF }]),
+    box,
+    profile,
+    ambientSource: "override",
+  });
   const summary = { group: profile.group, label: profile.label, safeTransitF: profile.safeTransitF };
   return {
     ...result,
     profile: summary,
     warnings: timeline.warnings,
-    boxes: [{ containerId: "c1", label: "Box A", plannedPack: "none", contentsG: 2000, profile: summary, verdict: result.verdict, advice: result.advice, insideF: result.insideF, hoursOutsideRange: result.hoursOutsideRange }],
+    boxes: [
+      {
+        containerId: "c1",
+        label: "Box A",
+        plannedPack: "none",
+        contentsG: 2000,
+        profile: summary,
+        verdict: result.verdict,
+        advice: result.advice,
+        insideF: result.insideF,
+        hoursOutsideRange: result.hoursOutsideRange,
+      },
+    ],
     transferVersion: 3,
     alert: null,
     checks: [],
@@ -37,14 +63,31 @@ function reportAt(tempF: number): TransferTemperatureDto {
 }
 
 function renderSection(report: TransferTemperatureDto, status: TransferStatus = "awaiting_receiver") {
-  vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify(report), { status: 200, headers: { "Content-Type": "application/json" } })));
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(
+      async () =>
+        new Response(JSON.stringify(report), { status: 200, headers: { "Content-Type": "application/json" } }),
+    ),
+  );
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  return render(<QueryClientProvider client={client}><TemperatureSection transferId={TRANSFER_ID} status={status} /></QueryClientProvider>);
+  return render(
+    <QueryClientProvider client={client}>
+      <TemperatureSection transferId={TRANSFER_ID} status={status} />
+    </QueryClientProvider>,
+  );
 }
 
 beforeEach(() => {
   // jsdom has no layout; the chart's container only needs the observer to exist
-  vi.stubGlobal("ResizeObserver", class { observe() {} unobserve() {} disconnect() {} });
+  vi.stubGlobal(
+    "ResizeObserver",
+    class {
+      observe() {}
+      unobserve() {}
+      disconnect() {}
+    },
+  );
   localStorage.clear();
 });
 afterEach(() => vi.unstubAllGlobals());

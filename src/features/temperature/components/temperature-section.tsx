@@ -18,8 +18,13 @@ export function TemperatureSection({ transferId, status }: { transferId: string;
   const headingId = useId();
   const temperature = useTransferTemperature(transferId);
   return (
-    <section aria-labelledby={headingId} className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5">
-      <h2 id={headingId} className="text-lg font-semibold">Temperature on the way</h2>
+    <section
+      aria-labelledby={headingId}
+      className="flex flex-col gap-4 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5"
+    >
+      <h2 id={headingId} className="text-lg font-semibold">
+        Temperature on the way
+      </h2>
       {temperature.isPending ? (
         <Loading label="Reading the forecast…" />
       ) : temperature.error ? (
@@ -40,16 +45,17 @@ function BlockNotice({ report, status }: { report: TransferTemperatureDto; statu
   if (status === "draft" || status === "awaiting_receiver") {
     return (
       <Notice tone="block" title="This blocks “cleared to travel”">
-        While the verdict is “{verdict}”, the receiver can only confirm the transfer by overriding the temperature check with a reason. The reason,
-        the verdict and who gave it are written into the custody log.
+        While the verdict is “{verdict}”, the receiver can only confirm the transfer by overriding the temperature check
+        with a reason. The reason, the verdict and who gave it are written into the custody log.
       </Notice>
     );
   }
   if (status === "ready") {
     return (
       <Notice tone="block" title={`Cleared to travel, but the check says “${verdict}”`}>
-        The transfer was cleared before this verdict or past it with a reason in the custody log. While the verdict is “{verdict}”, move the
-        departure, change the packing or the route, or keep the animals home; an edit sends the transfer back to the receiver to confirm.
+        The transfer was cleared before this verdict or past it with a reason in the custody log. While the verdict is “
+        {verdict}”, move the departure, change the packing or the route, or keep the animals home; an edit sends the
+        transfer back to the receiver to confirm.
       </Notice>
     );
   }
@@ -77,7 +83,10 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
               </li>
             ))}
           </ul>
-          <p className="text-ink-faint">Hatchway checks again 24 hours and 4 hours before departure and e-mails both parties when the advice changes.</p>
+          <p className="text-ink-faint">
+            Hatchway checks again 24 hours and 4 hours before departure and e-mails both parties when the advice
+            changes.
+          </p>
         </div>
       ) : null}
       <TemperatureCautions />

@@ -38,7 +38,11 @@ export function WeatherScenarioSwitch() {
           </Button>
         ))}
       </div>
-      {change.error ? <p role="alert" className="mt-2 text-brick">{change.error instanceof ApiError ? change.error.message : "Not switched."}</p> : null}
+      {change.error ? (
+        <p role="alert" className="mt-2 text-brick">
+          {change.error instanceof ApiError ? change.error.message : "Not switched."}
+        </p>
+      ) : null}
     </Notice>
   );
 }

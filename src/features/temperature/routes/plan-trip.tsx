@@ -1,5 +1,14 @@
 import { useState, type FormEvent } from "react";
-import { PACK_KINDS, PROFILE_GROUPS, TRANSPORT_MODES, WALL_MATERIALS, type PackKind, type ProfileGroup, type TransportMode, type WallMaterial } from "@shared/constants";
+import {
+  PACK_KINDS,
+  PROFILE_GROUPS,
+  TRANSPORT_MODES,
+  WALL_MATERIALS,
+  type PackKind,
+  type ProfileGroup,
+  type TransportMode,
+  type WallMaterial,
+} from "@shared/constants";
 import type { TaxonBriefDto } from "@shared/schemas/transfer";
 import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
 import { whatIfInputSchema, type WhatIfInput } from "@shared/temperature/schemas";
@@ -108,7 +117,8 @@ export function PlanTripRoute() {
   const assess = useAssessTrip();
   const profiles = useProfiles();
   const set = <K extends keyof Form>(key: K, value: Form[K]) => setForm((f) => ({ ...f, [key]: value }));
-  const labelOf = (g: ProfileGroup) => profiles.data?.profiles.find((p) => p.group === g)?.label ?? DEFAULT_PROFILES[g].label;
+  const labelOf = (g: ProfileGroup) =>
+    profiles.data?.profiles.find((p) => p.group === g)?.label ?? DEFAULT_PROFILES[g].label;
   const serverError = assess.error instanceof ApiError ? assess.error : null;
   const suggestions = (serverError?.body?.error as { suggestions?: string[] } | undefined)?.suggestions ?? [];
   const err = (key: string) => errors[key] ?? (serverError?.field === key ? serverError.message : undefined);
@@ -123,19 +133,52 @@ export function PlanTripRoute() {
   return (
     <>
       <PageHeader title="Plan a trip" eyebrow="Temperature">
-        Before you draft a transfer: how warm or cold the box would get on a given day, and what to pack. Nothing is saved.
+        Before you draft a transfer: how warm or cold the box would get on a given day, and what to pack. Nothing is
+        saved.
       </PageHeader>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
         <Card title="The trip">
           <form className="grid gap-4" onSubmit={submit} noValidate>
             <div className="grid gap-4 sm:grid-cols-2">
-              <TextField label="From (ZIP code)" inputMode="numeric" autoComplete="postal-code" value={form.originZip} onChange={(e) => set("originZip", e.target.value)} error={err("origin.zip")} />
-              <TextField label="To (ZIP code)" inputMode="numeric" value={form.destinationZip} onChange={(e) => set("destinationZip", e.target.value)} error={err("destination.zip")} />
-              <SelectField label="How" options={TRANSPORT_MODES.map((m) => ({ value: m, label: modeLabel[m] }))} value={form.mode} onChange={(e) => set("mode", e.target.value as TransportMode)} error={err("mode")} />
+              <TextField
+                label="From (ZIP code)"
+                inputMode="numeric"
+                autoComplete="postal-code"
+                value={form.originZip}
+                onChange={(e) => set("originZip", e.target.value)}
+                error={err("origin.zip")}
+              />
+              <TextField
+                label="To (ZIP code)"
+                inputMode="numeric"
+                value={form.destinationZip}
+                onChange={(e) => set("destinationZip", e.target.value)}
+                error={err("destination.zip")}
+              />
+              <SelectField
+                label="How"
+                options={TRANSPORT_MODES.map((m) => ({ value: m, label: modeLabel[m] }))}
+                value={form.mode}
+                onChange={(e) => set("mode", e.target.value as TransportMode)}
+                error={err("mode")}
+              />
               {form.mode === "overnight_air" ? (
-                <TextField label="Air hub (ZIP code, optional)" inputMode="numeric" value={form.hubZip} onChange={(e) => set("hubZip", e.target.value)} error={err("hub.zip")} hint="Leave empty to split the night between both ends." />
+                <TextField
+                  label="Air hub (ZIP code, optional)"
+                  inputMode="numeric"
+                  value={form.hubZip}
+                  onChange={(e) => set("hubZip", e.target.value)}
+                  error={err("hub.zip")}
+                  hint="Leave empty to split the night between both ends."
+                />
               ) : null}
-              <TextField label="Leaves" type="datetime-local" value={form.departLocal} onChange={(e) => set("departLocal", e.target.value)} error={err("departAt")} />
+              <TextField
+                label="Leaves"
+                type="datetime-local"
+                value={form.departLocal}
+                onChange={(e) => set("departLocal", e.target.value)}
+                error={err("departAt")}
+              />
             </div>
 
             <fieldset className="grid gap-3">
@@ -149,22 +192,77 @@ export function PlanTripRoute() {
                 ))}
               </div>
               {form.by === "species" ? (
-                <TaxonCombobox label="Species" value={form.taxon} onChange={(t) => set("taxon", t)} search={searchTaxa} error={err("scientificName") ?? err("profile")} />
+                <TaxonCombobox
+                  label="Species"
+                  value={form.taxon}
+                  onChange={(t) => set("taxon", t)}
+                  search={searchTaxa}
+                  error={err("scientificName") ?? err("profile")}
+                />
               ) : (
-                <SelectField label="Temperature profile" options={PROFILE_GROUPS.map((g) => ({ value: g, label: labelOf(g) }))} value={form.profile} onChange={(e) => set("profile", e.target.value as ProfileGroup)} error={err("profile")} />
+                <SelectField
+                  label="Temperature profile"
+                  options={PROFILE_GROUPS.map((g) => ({ value: g, label: labelOf(g) }))}
+                  value={form.profile}
+                  onChange={(e) => set("profile", e.target.value as ProfileGroup)}
+                  error={err("profile")}
+                />
               )}
-              {suggestions.length > 0 ? <p className="text-sm text-ink-soft">Did you mean: {suggestions.join(", ")}?</p> : null}
+              {suggestions.length > 0 ? (
+                <p className="text-sm text-ink-soft">Did you mean: {suggestions.join(", ")}?</p>
+              ) : null}
             </fieldset>
 
             <fieldset className="grid gap-4 sm:grid-cols-2">
               <legend className="text-sm font-semibold sm:col-span-2">The box (outside measurements)</legend>
-              <MeasureField kind="length" label="Length" value={form.lengthMm} onChange={(v) => set("lengthMm", v)} error={err("box.lengthMm")} />
-              <MeasureField kind="length" label="Width" value={form.widthMm} onChange={(v) => set("widthMm", v)} error={err("box.widthMm")} />
-              <MeasureField kind="length" label="Height" value={form.heightMm} onChange={(v) => set("heightMm", v)} error={err("box.heightMm")} />
-              <MeasureField kind="length" label="Wall thickness" value={form.wallThicknessMm} onChange={(v) => set("wallThicknessMm", v)} error={err("box.wallThicknessMm")} />
-              <SelectField label="Wall" options={WALL_MATERIALS.map((w) => ({ value: w, label: wallMaterialLabel[w] }))} value={form.wall} onChange={(e) => set("wall", e.target.value as WallMaterial)} />
-              <SelectField label="Pack you plan" options={PACK_KINDS.map((p) => ({ value: p, label: packLabel[p] }))} value={form.pack} onChange={(e) => set("pack", e.target.value as PackKind)} />
-              <TextField label="Contents (g)" inputMode="numeric" value={form.contentsG} onChange={(e) => set("contentsG", e.target.value)} error={err("box.contentsG")} hint="Animals, cups and damp substrate together." />
+              <MeasureField
+                kind="length"
+                label="Length"
+                value={form.lengthMm}
+                onChange={(v) => set("lengthMm", v)}
+                error={err("box.lengthMm")}
+              />
+              <MeasureField
+                kind="length"
+                label="Width"
+                value={form.widthMm}
+                onChange={(v) => set("widthMm", v)}
+                error={err("box.widthMm")}
+              />
+              <MeasureField
+                kind="length"
+                label="Height"
+                value={form.heightMm}
+                onChange={(v) => set("heightMm", v)}
+                error={err("box.heightMm")}
+              />
+              <MeasureField
+                kind="length"
+                label="Wall thickness"
+                value={form.wallThicknessMm}
+                onChange={(v) => set("wallThicknessMm", v)}
+                error={err("box.wallThicknessMm")}
+              />
+              <SelectField
+                label="Wall"
+                options={WALL_MATERIALS.map((w) => ({ value: w, label: wallMaterialLabel[w] }))}
+                value={form.wall}
+                onChange={(e) => set("wall", e.target.value as WallMaterial)}
+              />
+              <SelectField
+                label="Pack you plan"
+                options={PACK_KINDS.map((p) => ({ value: p, label: packLabel[p] }))}
+                value={form.pack}
+                onChange={(e) => set("pack", e.target.value as PackKind)}
+              />
+              <TextField
+                label="Contents (g)"
+                inputMode="numeric"
+                value={form.contentsG}
+                onChange={(e) => set("contentsG", e.target.value)}
+                error={err("box.contentsG")}
+                hint="Animals, cups and damp substrate together."
+              />
             </fieldset>
 
             <MeasureField
@@ -175,9 +273,15 @@ export function PlanTripRoute() {
               error={err("ambientOverrideF.0.tempF")}
               hint="Leave empty to use the forecast for the origin, the destination and the way between."
             />
-            {serverError && !serverError.field ? <Notice tone="block" role="alert">{serverError.message}</Notice> : null}
+            {serverError && !serverError.field ? (
+              <Notice tone="block" role="alert">
+                {serverError.message}
+              </Notice>
+            ) : null}
             <div>
-              <Button type="submit" busy={assess.isPending}>Check the trip</Button>
+              <Button type="submit" busy={assess.isPending}>
+                Check the trip
+              </Button>
             </div>
           </form>
         </Card>
@@ -193,8 +297,9 @@ export function PlanTripRoute() {
             </Card>
           ) : (
             <Notice tone="info" title="How it works">
-              Hatchway lays out the trip hour by hour, reads the forecast at each end and along the way, and models how the inside of the box
-              follows the outside with and without a heat or cold pack. The bands come from the shipping guideline for the species&rsquo; group.
+              Hatchway lays out the trip hour by hour, reads the forecast at each end and along the way, and models how
+              the inside of the box follows the outside with and without a heat or cold pack. The bands come from the
+              shipping guideline for the species&rsquo; group.
             </Notice>
           )}
           <TemperatureCautions />

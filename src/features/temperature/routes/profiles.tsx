@@ -22,7 +22,13 @@ const BAND_FIELDS: { key: Band; label: string; hint: string }[] = [
   { key: "doNotShipAbove", label: "Do not ship above", hint: "" },
 ];
 
-const dataOf = (p: TemperatureProfileDto): ProfileData => ({ label: p.label, animalClass: p.animalClass, safeTransitF: p.safeTransitF, bandsF: p.bandsF, source: p.source });
+const dataOf = (p: TemperatureProfileDto): ProfileData => ({
+  label: p.label,
+  animalClass: p.animalClass,
+  safeTransitF: p.safeTransitF,
+  bandsF: p.bandsF,
+  source: p.source,
+});
 
 /** The temperature profiles every verdict uses: guideline defaults, edited by administrators. */
 export function TemperatureProfilesRoute() {
@@ -30,13 +36,15 @@ export function TemperatureProfilesRoute() {
   return (
     <>
       <PageHeader title="Temperature profiles" eyebrow="Administration">
-        The safe range in transit and the guideline bands for each group of species. They are guidelines, not law; every change applies to the
-        next check of every transfer.
+        The safe range in transit and the guideline bands for each group of species. They are guidelines, not law; every
+        change applies to the next check of every transfer.
       </PageHeader>
       {profiles.isPending ? (
         <Loading />
       ) : profiles.error ? (
-        <Notice tone="block" role="alert">{(profiles.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(profiles.error as Error).message}
+        </Notice>
       ) : (
         <div className="grid gap-4 lg:grid-cols-2">
           {profiles.data.profiles.map((p) => (
@@ -58,7 +66,11 @@ function ProfileCard({ profile, canEdit }: { profile: TemperatureProfileDto; can
       actions={
         <span className="flex items-center gap-2">
           {profile.edited ? <Badge tone="info">Edited</Badge> : <Badge tone="neutral">Guideline default</Badge>}
-          {canEdit && !editing ? <Button variant="secondary" onClick={() => setEditing(true)}>Edit</Button> : null}
+          {canEdit && !editing ? (
+            <Button variant="secondary" onClick={() => setEditing(true)}>
+              Edit
+            </Button>
+          ) : null}
         </span>
       }
     >
@@ -67,9 +79,13 @@ function ProfileCard({ profile, canEdit }: { profile: TemperatureProfileDto; can
       ) : (
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
           <dt className="text-ink-soft">Safe in transit</dt>
-          <dd>{formatTemp(profile.safeTransitF.min, system)} to {formatTemp(profile.safeTransitF.max, system)}</dd>
+          <dd>
+            {formatTemp(profile.safeTransitF.min, system)} to {formatTemp(profile.safeTransitF.max, system)}
+          </dd>
           <dt className="text-ink-soft">Do not ship</dt>
-          <dd>below {formatTemp(b.doNotShipBelow, system)} or above {formatTemp(b.doNotShipAbove, system)}</dd>
+          <dd>
+            below {formatTemp(b.doNotShipBelow, system)} or above {formatTemp(b.doNotShipAbove, system)}
+          </dd>
           <dt className="text-ink-soft">Heat pack</dt>
           <dd>below {formatTemp(b.heatPackBelow, system)}</dd>
           <dt className="text-ink-soft">Cold pack</dt>
@@ -81,7 +97,9 @@ function ProfileCard({ profile, canEdit }: { profile: TemperatureProfileDto; can
           {profile.updatedBy && profile.updatedAt ? (
             <>
               <dt className="text-ink-soft">Last edited</dt>
-              <dd>{profile.updatedBy.displayName}, {formatDateTime(profile.updatedAt)}</dd>
+              <dd>
+                {profile.updatedBy.displayName}, {formatDateTime(profile.updatedAt)}
+              </dd>
             </>
           ) : null}
         </dl>
@@ -94,7 +112,8 @@ function ProfileForm({ profile, onDone }: { profile: TemperatureProfileDto; onDo
   const [data, setData] = useState<ProfileData>(() => dataOf(profile));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const update = useUpdateProfile();
-  const setBand = (key: Band, value: number | null) => setData((d) => ({ ...d, bandsF: { ...d.bandsF, [key]: value } }));
+  const setBand = (key: Band, value: number | null) =>
+    setData((d) => ({ ...d, bandsF: { ...d.bandsF, [key]: value } }));
   const save = (next: ProfileData) => update.mutate({ group: profile.group, data: next }, { onSuccess: onDone });
 
   function submit(event: FormEvent) {
@@ -110,19 +129,40 @@ function ProfileForm({ profile, onDone }: { profile: TemperatureProfileDto; onDo
     save(result.data);
   }
 
-  const err = (key: string) => errors[key] ?? (update.error instanceof ApiError && update.error.field === key ? update.error.message : undefined);
+  const err = (key: string) =>
+    errors[key] ?? (update.error instanceof ApiError && update.error.field === key ? update.error.message : undefined);
   return (
     <form className="grid gap-3" onSubmit={submit} noValidate>
-      <TextField label="Name" value={data.label} onChange={(e) => setData({ ...data, label: e.target.value })} error={err("label")} />
+      <TextField
+        label="Name"
+        value={data.label}
+        onChange={(e) => setData({ ...data, label: e.target.value })}
+        error={err("label")}
+      />
       <SelectField
         label="Guideline column"
-        options={[{ value: "reptile", label: "Reptiles" }, { value: "amphibian", label: "Amphibians" }]}
+        options={[
+          { value: "reptile", label: "Reptiles" },
+          { value: "amphibian", label: "Amphibians" },
+        ]}
         value={data.animalClass}
         onChange={(e) => setData({ ...data, animalClass: e.target.value as ProfileData["animalClass"] })}
       />
       <div className="grid gap-3 sm:grid-cols-2">
-        <MeasureField kind="temperature" label="Safe in transit from" value={data.safeTransitF.min} onChange={(v) => setData({ ...data, safeTransitF: { ...data.safeTransitF, min: v ?? Number.NaN } })} error={err("safeTransitF.min")} />
-        <MeasureField kind="temperature" label="Safe in transit up to" value={data.safeTransitF.max} onChange={(v) => setData({ ...data, safeTransitF: { ...data.safeTransitF, max: v ?? Number.NaN } })} error={err("safeTransitF.max")} />
+        <MeasureField
+          kind="temperature"
+          label="Safe in transit from"
+          value={data.safeTransitF.min}
+          onChange={(v) => setData({ ...data, safeTransitF: { ...data.safeTransitF, min: v ?? Number.NaN } })}
+          error={err("safeTransitF.min")}
+        />
+        <MeasureField
+          kind="temperature"
+          label="Safe in transit up to"
+          value={data.safeTransitF.max}
+          onChange={(v) => setData({ ...data, safeTransitF: { ...data.safeTransitF, max: v ?? Number.NaN } })}
+          error={err("safeTransitF.max")}
+        />
         {BAND_FIELDS.map((f) => (
           <MeasureField
             key={f.key}
@@ -135,13 +175,28 @@ function ProfileForm({ profile, onDone }: { profile: TemperatureProfileDto; onDo
           />
         ))}
       </div>
-      <TextAreaField label="Source" value={data.source} onChange={(e) => setData({ ...data, source: e.target.value })} error={err("source")} />
-      {update.error && !(update.error instanceof ApiError && update.error.field) ? <Notice tone="block" role="alert">{(update.error as Error).message}</Notice> : null}
+      <TextAreaField
+        label="Source"
+        value={data.source}
+        onChange={(e) => setData({ ...data, source: e.target.value })}
+        error={err("source")}
+      />
+      {update.error && !(update.error instanceof ApiError && update.error.field) ? (
+        <Notice tone="block" role="alert">
+          {(update.error as Error).message}
+        </Notice>
+      ) : null}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={update.isPending}>Save</Button>
-        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={update.isPending}>
+          Save
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
         {profile.edited ? (
-          <Button type="button" variant="ghost" onClick={() => save(profile.guidelineDefault)}>Back to the guideline default</Button>
+          <Button type="button" variant="ghost" onClick={() => save(profile.guidelineDefault)}>
+            Back to the guideline default
+          </Button>
         ) : null}
       </div>
     </form>

@@ -5,9 +5,14 @@ import { storeTransfer } from "@/lib/transfer-queries";
 
 /** Replaces the couriers and their legs, in order. */
 export const assignLegs = (id: string, input: LegsInput) =>
-  api<{ transfer: TransferDto }>(`/api/transfers/${encodeURIComponent(id)}/legs`, { method: "PUT", body: input }).then((r) => r.transfer);
+  api<{ transfer: TransferDto }>(`/api/transfers/${encodeURIComponent(id)}/legs`, { method: "PUT", body: input }).then(
+    (r) => r.transfer,
+  );
 
 export function useAssignLegs(id: string) {
   const client = useQueryClient();
-  return useMutation({ mutationFn: (input: LegsInput) => assignLegs(id, input), onSuccess: (transfer) => storeTransfer(client, transfer) });
+  return useMutation({
+    mutationFn: (input: LegsInput) => assignLegs(id, input),
+    onSuccess: (transfer) => storeTransfer(client, transfer),
+  });
 }

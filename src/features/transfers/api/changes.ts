@@ -6,7 +6,10 @@ import { transferKeys } from "@/lib/transfer-queries";
 export const changesQueryOptions = (id: string) =>
   queryOptions({
     queryKey: transferKeys.changes(id),
-    queryFn: ({ signal }) => api<{ changes: TransferChangeDto[] }>(`/api/transfers/${encodeURIComponent(id)}/changes`, { signal }).then((r) => r.changes),
+    queryFn: ({ signal }) =>
+      api<{ changes: TransferChangeDto[] }>(`/api/transfers/${encodeURIComponent(id)}/changes`, { signal }).then(
+        (r) => r.changes,
+      ),
   });
 
 export const useChanges = (id: string) => useQuery(changesQueryOptions(id));

@@ -10,7 +10,10 @@ export const directoryKeys = {
 export const directoryOrganizationsQueryOptions = () =>
   queryOptions({
     queryKey: directoryKeys.organizations,
-    queryFn: ({ signal }) => api<{ organizations: DirectoryOrganizationDto[] }>("/api/directory/organizations", { signal }).then((r) => r.organizations),
+    queryFn: ({ signal }) =>
+      api<{ organizations: DirectoryOrganizationDto[] }>("/api/directory/organizations", { signal }).then(
+        (r) => r.organizations,
+      ),
     staleTime: 5 * 60_000,
   });
 
@@ -19,7 +22,8 @@ export const useDirectoryOrganizations = () => useQuery(directoryOrganizationsQu
 export const directoryCouriersQueryOptions = () =>
   queryOptions({
     queryKey: directoryKeys.couriers,
-    queryFn: ({ signal }) => api<{ couriers: DirectoryCourierDto[] }>("/api/directory/couriers", { signal }).then((r) => r.couriers),
+    queryFn: ({ signal }) =>
+      api<{ couriers: DirectoryCourierDto[] }>("/api/directory/couriers", { signal }).then((r) => r.couriers),
     staleTime: 5 * 60_000,
   });
 

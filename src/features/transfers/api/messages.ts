@@ -6,7 +6,10 @@ import { transferKeys } from "@/lib/transfer-queries";
 export const messagesQueryOptions = (id: string) =>
   queryOptions({
     queryKey: transferKeys.messages(id),
-    queryFn: ({ signal }) => api<{ messages: MessageDto[] }>(`/api/transfers/${encodeURIComponent(id)}/messages`, { signal }).then((r) => r.messages),
+    queryFn: ({ signal }) =>
+      api<{ messages: MessageDto[] }>(`/api/transfers/${encodeURIComponent(id)}/messages`, { signal }).then(
+        (r) => r.messages,
+      ),
     // The other party may be writing: look again now and then while the page is open.
     refetchInterval: 30_000,
   });
@@ -16,7 +19,11 @@ export const useMessages = (id: string, enabled: boolean) => useQuery({ ...messa
 export function usePostMessage(id: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (body: string) => api<{ message: MessageDto }>(`/api/transfers/${encodeURIComponent(id)}/messages`, { method: "POST", body: { body } }),
+    mutationFn: (body: string) =>
+      api<{ message: MessageDto }>(`/api/transfers/${encodeURIComponent(id)}/messages`, {
+        method: "POST",
+        body: { body },
+      }),
     onSuccess: () => client.invalidateQueries({ queryKey: transferKeys.messages(id) }),
   });
 }

@@ -22,10 +22,22 @@ type Step = {
 const STEPS: Step[] = [
   { ability: "submit", to: "awaiting_receiver", label: "Send to the receiver", variant: "primary" },
   { ability: "confirm", to: "ready", label: "Confirm and clear to travel", variant: "primary" },
-  { ability: "sendBack", to: "draft", label: "Send back to the sender", variant: "secondary", reason: { label: "What needs to change?", confirm: "Send back" } },
+  {
+    ability: "sendBack",
+    to: "draft",
+    label: "Send back to the sender",
+    variant: "secondary",
+    reason: { label: "What needs to change?", confirm: "Send back" },
+  },
   { ability: "withdraw", to: "draft", label: "Take back to draft", variant: "secondary" },
   { ability: "close", to: "closed", label: "Close the record", variant: "secondary" },
-  { ability: "cancel", to: "cancelled", label: "Cancel the transfer", variant: "danger", reason: { label: "Why is it cancelled?", confirm: "Cancel the transfer" } },
+  {
+    ability: "cancel",
+    to: "cancelled",
+    label: "Cancel the transfer",
+    variant: "danger",
+    reason: { label: "Why is it cancelled?", confirm: "Cancel the transfer" },
+  },
 ];
 
 const linkButton = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 font-medium";
@@ -66,14 +78,23 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
 
   const links = [
     t.abilities.edit ? { to: paths.transfers.edit.href(t.id), label: "Edit the transfer" } : null,
-    t.abilities.handOff !== null ? { to: paths.courier.handoff.href(t.id), label: t.abilities.handOff === 0 ? "Record the pickup" : "Record a handoff" } : null,
+    t.abilities.handOff !== null
+      ? {
+          to: paths.courier.handoff.href(t.id),
+          label: t.abilities.handOff === 0 ? "Record the pickup" : "Record a handoff",
+        }
+      : null,
     t.abilities.checkIn ? { to: paths.transfers.checkIn.href(t.id), label: "Check the animals in" } : null,
     t.checkIn ? { to: paths.transfers.checkIn.href(t.id), label: "See what arrived" } : null,
   ].filter((l) => l !== null);
 
   if (steps.length === 0 && links.length === 0) return null;
   return (
-    <div className="grid gap-3 rounded-card border border-rule bg-paper-deep/60 p-3" role="region" aria-label="What you can do now">
+    <div
+      className="grid gap-3 rounded-card border border-rule bg-paper-deep/60 p-3"
+      role="region"
+      aria-label="What you can do now"
+    >
       {transition.error ? (
         <Notice tone="block" role="alert" title="That step was not taken">
           {transition.error instanceof ApiError ? transition.error.message : "Check your connection and try again."}
@@ -89,10 +110,15 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
           }}
         >
           <p className="text-sm">
-            You may still confirm, if you have checked the weather yourself and the animals are packed for it. Say why: your reason and the
-            temperature verdict go into the custody log for everyone on the transfer to see.
+            You may still confirm, if you have checked the weather yourself and the animals are packed for it. Say why:
+            your reason and the temperature verdict go into the custody log for everyone on the transfer to see.
           </p>
-          <TextAreaField label="Why it is safe to confirm anyway" value={overrideReason} maxLength={1000} onChange={(e) => setOverrideReason(e.target.value)} />
+          <TextAreaField
+            label="Why it is safe to confirm anyway"
+            value={overrideReason}
+            maxLength={1000}
+            onChange={(e) => setOverrideReason(e.target.value)}
+          />
           <div>
             <Button type="submit" variant="danger" disabled={!overrideReason.trim()} busy={transition.isPending}>
               Confirm anyway, with this reason
@@ -100,10 +126,18 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
           </div>
         </form>
       ) : null}
-      {packingOpen ? <Notice tone="caution">The packing below still has problems; the receiver is only asked once they are sorted out.</Notice> : null}
+      {packingOpen ? (
+        <Notice tone="caution">
+          The packing below still has problems; the receiver is only asked once they are sorted out.
+        </Notice>
+      ) : null}
       <div className="flex flex-wrap gap-2">
         {links.map((l) => (
-          <Link key={l.label} to={l.to} className={`${linkButton} border-fern-dark bg-fern text-paper-card hover:bg-fern-dark`}>
+          <Link
+            key={l.label}
+            to={l.to}
+            className={`${linkButton} border-fern-dark bg-fern text-paper-card hover:bg-fern-dark`}
+          >
             {l.label}
           </Link>
         ))}
@@ -134,9 +168,20 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
             else take(asking, reason.trim());
           }}
         >
-          <TextAreaField label={asking.reason.label} value={reason} maxLength={1000} onChange={(e) => setReason(e.target.value)} error={reasonError ?? undefined} autoFocus />
+          <TextAreaField
+            label={asking.reason.label}
+            value={reason}
+            maxLength={1000}
+            onChange={(e) => setReason(e.target.value)}
+            error={reasonError ?? undefined}
+            autoFocus
+          />
           <div className="flex gap-2">
-            <Button type="submit" variant={asking.variant === "danger" ? "danger" : "primary"} busy={transition.isPending}>
+            <Button
+              type="submit"
+              variant={asking.variant === "danger" ? "danger" : "primary"}
+              busy={transition.isPending}
+            >
               {asking.reason.confirm}
             </Button>
             <Button type="button" variant="ghost" onClick={() => setAsking(null)}>

@@ -5,7 +5,14 @@ import { paths } from "@/config/paths";
 import { formatDate } from "@/lib/datetime";
 import { formatDimensions, formatLength } from "@/lib/units";
 import { useUnitSystem } from "@/lib/units-preference";
-import { animalOriginLabel, identifierKindLabel, lengthKindLabel, packLabel, sexLabel, wallMaterialLabel } from "@/lib/transfer-labels";
+import {
+  animalOriginLabel,
+  identifierKindLabel,
+  lengthKindLabel,
+  packLabel,
+  sexLabel,
+  wallMaterialLabel,
+} from "@/lib/transfer-labels";
 import { Section } from "./section";
 
 function AnimalRow({ animal: a }: { animal: AnimalDto }) {
@@ -14,7 +21,9 @@ function AnimalRow({ animal: a }: { animal: AnimalDto }) {
     sexLabel[a.sex],
     animalOriginLabel[a.origin],
     a.identifier ? `${a.identifierKind ? identifierKindLabel[a.identifierKind] : "ID"} ${a.identifier}` : null,
-    a.lengthMm != null ? `${a.lengthKind ? lengthKindLabel[a.lengthKind].toLowerCase() : "size"} ${formatLength(a.lengthMm, system)}` : null,
+    a.lengthMm != null
+      ? `${a.lengthKind ? lengthKindLabel[a.lengthKind].toLowerCase() : "size"} ${formatLength(a.lengthMm, system)}`
+      : null,
     a.weightG != null ? `${a.weightG.toLocaleString("en-US")} g` : null,
     a.hatchDate ? `hatched ${formatDate(a.hatchDate)}` : null,
   ].filter(Boolean);
@@ -40,14 +49,25 @@ export function BoxesSection({ transfer: t }: { transfer: TransferDto }) {
     <Section
       id="boxes"
       title={`Boxes and animals (${total} ${total === 1 ? "animal" : "animals"} in ${boxes.length} ${boxes.length === 1 ? "box" : "boxes"})`}
-      actions={t.abilities.edit ? <Link to={paths.transfers.edit.href(t.id)} className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline">Change boxes or animals</Link> : null}
+      actions={
+        t.abilities.edit ? (
+          <Link
+            to={paths.transfers.edit.href(t.id)}
+            className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+          >
+            Change boxes or animals
+          </Link>
+        ) : null
+      }
     >
       <div className="grid gap-3 md:grid-cols-2">
         {boxes.map((box) => (
           <article key={box.id} className="rounded-md border border-rule p-3">
             <h3 className="font-semibold">{box.label}</h3>
             <p className="text-sm text-ink-soft">
-              {formatDimensions(box.lengthMm, box.widthMm, box.heightMm, system)} · {wallMaterialLabel[box.wallMaterial]}, walls {formatLength(box.wallThicknessMm, system)} · {packLabel[box.pack]}
+              {formatDimensions(box.lengthMm, box.widthMm, box.heightMm, system)} ·{" "}
+              {wallMaterialLabel[box.wallMaterial]}, walls {formatLength(box.wallThicknessMm, system)} ·{" "}
+              {packLabel[box.pack]}
               {box.sealNumber ? ` · seal ${box.sealNumber}` : " · no seal number"}
             </p>
             <ul className="divide-y divide-rule">

@@ -14,7 +14,9 @@ function Recorded({ handoff: h }: { handoff: HandoffDto }) {
   const [system] = useUnitSystem();
   const broken = h.seals.filter((s) => !s.intact).length;
   const short = h.boxesCounted !== h.boxesExpected;
-  const place = h.place.text ?? (h.place.lat != null && h.place.lon != null ? `${h.place.lat.toFixed(4)}, ${h.place.lon.toFixed(4)}` : null);
+  const place =
+    h.place.text ??
+    (h.place.lat != null && h.place.lon != null ? `${h.place.lat.toFixed(4)}, ${h.place.lon.toFixed(4)}` : null);
   return (
     <>
       <p className="text-sm">
@@ -22,7 +24,8 @@ function Recorded({ handoff: h }: { handoff: HandoffDto }) {
         <span className="sr-only">handed to</span> {h.receivedByName}
       </p>
       <p className="text-sm text-ink-soft">
-        {h.boxesCounted} of {h.boxesExpected} boxes · seals {broken === 0 ? "all intact" : `${broken} not intact`} · box at {formatTemp(h.boxTempF, system)}
+        {h.boxesCounted} of {h.boxesExpected} boxes · seals {broken === 0 ? "all intact" : `${broken} not intact`} · box
+        at {formatTemp(h.boxTempF, system)}
         {place ? ` · ${place}` : ""} · recorded by {h.recordedBy.displayName}
       </p>
       {short || broken > 0 ? (
@@ -47,8 +50,15 @@ export function CustodySection({ transfer: t }: { transfer: TransferDto }) {
       actions={
         t.abilities.readCustody ? (
           <span className="flex flex-wrap items-center gap-2">
-            {custody.data ? <Badge tone={custody.data.intact ? "ok" : "block"}>{custody.data.intact ? "Log intact" : `Log broken at entry ${custody.data.brokenAt ?? "?"}`}</Badge> : null}
-            <Link to={paths.transfers.custody.href(t.id)} className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline">
+            {custody.data ? (
+              <Badge tone={custody.data.intact ? "ok" : "block"}>
+                {custody.data.intact ? "Log intact" : `Log broken at entry ${custody.data.brokenAt ?? "?"}`}
+              </Badge>
+            ) : null}
+            <Link
+              to={paths.transfers.custody.href(t.id)}
+              className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+            >
               Full custody log
             </Link>
           </span>
@@ -64,13 +74,20 @@ export function CustodySection({ transfer: t }: { transfer: TransferDto }) {
             const kind = h?.kind ?? handoffKind(i, t.legs.length);
             return (
               <li key={i} className="relative">
-                <span aria-hidden className={`absolute -left-[1.72rem] top-1 h-3 w-3 rounded-full border-2 ${h ? "border-fern bg-fern" : "border-rule bg-paper-card"}`} />
+                <span
+                  aria-hidden
+                  className={`absolute -left-[1.72rem] top-1 h-3 w-3 rounded-full border-2 ${h ? "border-fern bg-fern" : "border-rule bg-paper-card"}`}
+                />
                 <p className="font-semibold">
-                  {i + 1}. {handoffKindLabel[kind]} {h ? null : <span className="font-normal text-ink-soft">— not yet recorded</span>}
+                  {i + 1}. {handoffKindLabel[kind]}{" "}
+                  {h ? null : <span className="font-normal text-ink-soft">— not yet recorded</span>}
                 </p>
                 {h ? <Recorded handoff={h} /> : null}
                 {!h && t.abilities.handOff === i ? (
-                  <Link to={paths.courier.handoff.href(t.id)} className="mt-1 inline-flex min-h-11 items-center rounded-md border border-fern-dark bg-fern px-4 font-medium text-paper-card">
+                  <Link
+                    to={paths.courier.handoff.href(t.id)}
+                    className="mt-1 inline-flex min-h-11 items-center rounded-md border border-fern-dark bg-fern px-4 font-medium text-paper-card"
+                  >
                     Record this handoff
                   </Link>
                 ) : null}

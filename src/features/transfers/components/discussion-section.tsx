@@ -19,16 +19,23 @@ export function DiscussionSection({ transfer: t }: { transfer: TransferDto }) {
       {messages.isPending ? (
         <Loading label="Loading messages…" />
       ) : messages.error ? (
-        <Notice tone="block" role="alert">{(messages.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(messages.error as Error).message}
+        </Notice>
       ) : messages.data.length === 0 ? (
-        <p className="text-ink-soft">No messages yet. Questions about the animals, packing or timing go here, where everyone on the transfer sees them.</p>
+        <p className="text-ink-soft">
+          No messages yet. Questions about the animals, packing or timing go here, where everyone on the transfer sees
+          them.
+        </p>
       ) : (
         <ol className="grid gap-3" aria-label="Messages">
           {messages.data.map((m) => (
             <li key={m.id} className="rounded-md border border-rule bg-paper p-3">
               <p className="text-sm">
                 <span className="font-semibold">{m.author.displayName}</span>
-                {m.author.organizationName ? <span className="text-ink-soft">, {m.author.organizationName}</span> : null}
+                {m.author.organizationName ? (
+                  <span className="text-ink-soft">, {m.author.organizationName}</span>
+                ) : null}
                 <span className="text-ink-soft"> · {formatDateTime(m.at)}</span>
               </p>
               <p className="mt-1 whitespace-pre-wrap">{m.body}</p>
@@ -43,9 +50,17 @@ export function DiscussionSection({ transfer: t }: { transfer: TransferDto }) {
           if (body.trim()) post.mutate(body, { onSuccess: () => setBody("") });
         }}
       >
-        <TextAreaField label="Write a message" value={body} maxLength={4000} onChange={(e) => setBody(e.target.value)} error={post.error instanceof ApiError ? post.error.message : undefined} />
+        <TextAreaField
+          label="Write a message"
+          value={body}
+          maxLength={4000}
+          onChange={(e) => setBody(e.target.value)}
+          error={post.error instanceof ApiError ? post.error.message : undefined}
+        />
         <div>
-          <Button type="submit" busy={post.isPending} disabled={!body.trim()}>Send message</Button>
+          <Button type="submit" busy={post.isPending} disabled={!body.trim()}>
+            Send message
+          </Button>
         </div>
       </form>
     </Section>

@@ -19,7 +19,9 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
       {changes.isPending ? (
         <Loading label="Loading the history…" />
       ) : changes.error ? (
-        <Notice tone="block" role="alert">{(changes.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(changes.error as Error).message}
+        </Notice>
       ) : changes.data.length === 0 ? (
         <p className="text-ink-soft">No edits since the transfer was created.</p>
       ) : (
@@ -28,11 +30,21 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
             <caption className="sr-only">Edits to this transfer</caption>
             <thead className="text-xs uppercase tracking-wide text-ink-soft">
               <tr>
-                <th scope="col" className="px-2 py-2">When</th>
-                <th scope="col" className="px-2 py-2">Who</th>
-                <th scope="col" className="px-2 py-2">What</th>
-                <th scope="col" className="px-2 py-2">Was</th>
-                <th scope="col" className="px-2 py-2">Now</th>
+                <th scope="col" className="px-2 py-2">
+                  When
+                </th>
+                <th scope="col" className="px-2 py-2">
+                  Who
+                </th>
+                <th scope="col" className="px-2 py-2">
+                  What
+                </th>
+                <th scope="col" className="px-2 py-2">
+                  Was
+                </th>
+                <th scope="col" className="px-2 py-2">
+                  Now
+                </th>
               </tr>
             </thead>
             <tbody className="divide-y divide-rule">
@@ -41,7 +53,9 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
                   <td className="whitespace-nowrap px-2 py-2 align-top">{formatDateTime(c.at)}</td>
                   <td className="px-2 py-2 align-top">{c.actor.displayName}</td>
                   <td className="px-2 py-2 align-top font-mono text-xs">{c.field}</td>
-                  <td className="break-all px-2 py-2 align-top text-ink-soft line-through decoration-brick/50">{shown(c.oldValue)}</td>
+                  <td className="break-all px-2 py-2 align-top text-ink-soft line-through decoration-brick/50">
+                    {shown(c.oldValue)}
+                  </td>
                   <td className="break-all px-2 py-2 align-top">{shown(c.newValue)}</td>
                 </tr>
               ))}

@@ -19,7 +19,9 @@ function LegsEditor({ transfer, onDone }: { transfer: TransferDto; onDone: () =>
     resolver: zodResolver(legsInputSchema),
     defaultValues: {
       legs: transfer.legs.length
-        ? [...transfer.legs].sort((a, b) => a.sequence - b.sequence).map((l) => ({ courierId: l.courier.id, fromLabel: l.fromLabel ?? "", toLabel: l.toLabel ?? "" }))
+        ? [...transfer.legs]
+            .sort((a, b) => a.sequence - b.sequence)
+            .map((l) => ({ courierId: l.courier.id, fromLabel: l.fromLabel ?? "", toLabel: l.toLabel ?? "" }))
         : [{ courierId: "", fromLabel: "", toLabel: "" }],
     },
   });
@@ -27,24 +29,65 @@ function LegsEditor({ transfer, onDone }: { transfer: TransferDto; onDone: () =>
   const e = form.formState.errors.legs;
 
   if (couriers.isPending) return <Loading label="Loading couriers…" />;
-  if (couriers.error) return <Notice tone="block" role="alert">{(couriers.error as Error).message}</Notice>;
-  const options = [{ value: "", label: "Choose a courier…" }, ...couriers.data.map((c) => ({ value: c.id, label: c.organizationName ? `${c.displayName} (${c.organizationName})` : c.displayName }))];
+  if (couriers.error)
+    return (
+      <Notice tone="block" role="alert">
+        {(couriers.error as Error).message}
+      </Notice>
+    );
+  const options = [
+    { value: "", label: "Choose a courier…" },
+    ...couriers.data.map((c) => ({
+      value: c.id,
+      label: c.organizationName ? `${c.displayName} (${c.organizationName})` : c.displayName,
+    })),
+  ];
 
   return (
-    <form noValidate className="grid gap-3" onSubmit={form.handleSubmit((values) => assign.mutate(values, { onSuccess: onDone }))}>
-      {assign.error ? <Notice tone="block" role="alert">{assign.error instanceof ApiError ? assign.error.message : "Not saved."}</Notice> : null}
-      {e?.root?.message || e?.message ? <Notice tone="block" role="alert">{e.root?.message ?? e.message}</Notice> : null}
+    <form
+      noValidate
+      className="grid gap-3"
+      onSubmit={form.handleSubmit((values) => assign.mutate(values, { onSuccess: onDone }))}
+    >
+      {assign.error ? (
+        <Notice tone="block" role="alert">
+          {assign.error instanceof ApiError ? assign.error.message : "Not saved."}
+        </Notice>
+      ) : null}
+      {e?.root?.message || e?.message ? (
+        <Notice tone="block" role="alert">
+          {e.root?.message ?? e.message}
+        </Notice>
+      ) : null}
       <ol className="grid gap-3">
         {legs.fields.map((field, i) => (
           <li key={field.fieldKey}>
             <fieldset className="grid gap-3 rounded-md border border-rule p-3 sm:grid-cols-3">
               <legend className="px-1 font-semibold">Leg {i + 1}</legend>
-              <SelectField label="Courier" options={options} error={e?.[i]?.courierId ? "Choose a courier" : undefined} {...form.register(`legs.${i}.courierId`)} />
-              <TextField label="From (optional)" placeholder={i === 0 ? "The sender" : "Where they take over"} {...form.register(`legs.${i}.fromLabel`)} />
-              <TextField label="To (optional)" placeholder={i === legs.fields.length - 1 ? "The receiver" : "Where they hand over"} {...form.register(`legs.${i}.toLabel`)} />
+              <SelectField
+                label="Courier"
+                options={options}
+                error={e?.[i]?.courierId ? "Choose a courier" : undefined}
+                {...form.register(`legs.${i}.courierId`)}
+              />
+              <TextField
+                label="From (optional)"
+                placeholder={i === 0 ? "The sender" : "Where they take over"}
+                {...form.register(`legs.${i}.fromLabel`)}
+              />
+              <TextField
+                label="To (optional)"
+                placeholder={i === legs.fields.length - 1 ? "The receiver" : "Where they hand over"}
+                {...form.register(`legs.${i}.toLabel`)}
+              />
               {legs.fields.length > 1 ? (
                 <div className="sm:col-span-3">
-                  <Button type="button" variant="ghost" onClick={() => legs.remove(i)} aria-label={`Remove leg ${i + 1}`}>
+                  <Button
+                    type="button"
+                    variant="ghost"
+                    onClick={() => legs.remove(i)}
+                    aria-label={`Remove leg ${i + 1}`}
+                  >
                     Remove
                   </Button>
                 </div>
@@ -54,11 +97,20 @@ function LegsEditor({ transfer, onDone }: { transfer: TransferDto; onDone: () =>
         ))}
       </ol>
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant="secondary" onClick={() => legs.append({ courierId: "", fromLabel: "", toLabel: "" })} disabled={legs.fields.length >= 10}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() => legs.append({ courierId: "", fromLabel: "", toLabel: "" })}
+          disabled={legs.fields.length >= 10}
+        >
           Add a leg
         </Button>
-        <Button type="submit" busy={assign.isPending}>Save couriers</Button>
-        <Button type="button" variant="ghost" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={assign.isPending}>
+          Save couriers
+        </Button>
+        <Button type="button" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );
@@ -72,7 +124,13 @@ export function LegsSection({ transfer: t }: { transfer: TransferDto }) {
     <Section
       id="legs"
       title="Couriers and legs"
-      actions={t.abilities.assignCouriers && !editing ? <Button variant="secondary" onClick={() => setEditing(true)}>{legs.length ? "Change couriers" : "Assign couriers"}</Button> : null}
+      actions={
+        t.abilities.assignCouriers && !editing ? (
+          <Button variant="secondary" onClick={() => setEditing(true)}>
+            {legs.length ? "Change couriers" : "Assign couriers"}
+          </Button>
+        ) : null
+      }
     >
       {editing ? (
         <LegsEditor transfer={t} onDone={() => setEditing(false)} />
@@ -83,8 +141,10 @@ export function LegsSection({ transfer: t }: { transfer: TransferDto }) {
           {legs.map((leg, i) => (
             <li key={leg.id} className="rounded-md border border-rule p-3">
               <p className="font-semibold">
-                Leg {i + 1}: {leg.fromLabel ?? (i === 0 ? t.sender.organization.name : "handover")} <span aria-hidden>→</span>
-                <span className="sr-only">to</span> {leg.toLabel ?? (i === legs.length - 1 ? t.receiver.organization.name : "handover")}
+                Leg {i + 1}: {leg.fromLabel ?? (i === 0 ? t.sender.organization.name : "handover")}{" "}
+                <span aria-hidden>→</span>
+                <span className="sr-only">to</span>{" "}
+                {leg.toLabel ?? (i === legs.length - 1 ? t.receiver.organization.name : "handover")}
               </p>
               <p className="text-sm">
                 {leg.courier.displayName}
@@ -92,7 +152,9 @@ export function LegsSection({ transfer: t }: { transfer: TransferDto }) {
                 {leg.courier.phone ? (
                   <>
                     {" · "}
-                    <a className="text-fern underline" href={`tel:${leg.courier.phone}`}>{leg.courier.phone}</a>
+                    <a className="text-fern underline" href={`tel:${leg.courier.phone}`}>
+                      {leg.courier.phone}
+                    </a>
                   </>
                 ) : null}
               </p>

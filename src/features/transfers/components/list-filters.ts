@@ -20,7 +20,10 @@ export function filtersFromSearch(search: URLSearchParams): TransferListFilters 
 }
 
 /** The address-bar search after changing some filters; an empty value removes its parameter. */
-export function withFilters(search: URLSearchParams, changes: Partial<Record<FilterKey, string | undefined>>): URLSearchParams {
+export function withFilters(
+  search: URLSearchParams,
+  changes: Partial<Record<FilterKey, string | undefined>>,
+): URLSearchParams {
   const next = new URLSearchParams(search);
   for (const [key, value] of Object.entries(changes)) {
     if (value) next.set(key, value);

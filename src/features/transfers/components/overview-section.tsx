@@ -3,16 +3,28 @@ import { formatDateTime } from "@/lib/datetime";
 import { modeLabel, purposeLabel } from "@/lib/transfer-labels";
 import { Section } from "./section";
 
-function Party({ role, organization, contact }: { role: string; organization: OrgBriefDto; contact: PersonDto | null }) {
+function Party({
+  role,
+  organization,
+  contact,
+}: {
+  role: string;
+  organization: OrgBriefDto;
+  contact: PersonDto | null;
+}) {
   return (
     <div className="rounded-md border border-rule p-3">
       <p className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{role}</p>
       <p className="font-semibold">{organization.name}</p>
       {contact ? <p>{contact.displayName}</p> : null}
       <p className="text-sm">
-        <a className="text-fern underline" href={`tel:${organization.phone}`}>{organization.phone}</a>
+        <a className="text-fern underline" href={`tel:${organization.phone}`}>
+          {organization.phone}
+        </a>
         {" · "}
-        <a className="text-fern underline" href={`mailto:${contact?.email ?? organization.email}`}>{contact?.email ?? organization.email}</a>
+        <a className="text-fern underline" href={`mailto:${contact?.email ?? organization.email}`}>
+          {contact?.email ?? organization.email}
+        </a>
       </p>
     </div>
   );
@@ -42,7 +54,9 @@ export function OverviewSection({ transfer: t }: { transfer: TransferDto }) {
         <dt className="font-semibold">Purpose</dt>
         <dd>
           {purposeLabel[t.purpose]}
-          {t.sale ? `; a sale${t.salePriceUsd != null ? ` for $${t.salePriceUsd.toLocaleString("en-US")}` : ""}` : "; not a sale"}
+          {t.sale
+            ? `; a sale${t.salePriceUsd != null ? ` for $${t.salePriceUsd.toLocaleString("en-US")}` : ""}`
+            : "; not a sale"}
         </dd>
         {t.handlingNotes ? (
           <>

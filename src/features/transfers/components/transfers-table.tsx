@@ -7,7 +7,12 @@ import { formatDateTime } from "@/lib/datetime";
 import { viewerRoleLabel } from "@/lib/transfer-labels";
 
 export type SortKey = "number" | "status" | "departure" | "updated";
-const sortWords: Record<SortKey, string> = { number: "number", status: "state", departure: "departure", updated: "last change" };
+const sortWords: Record<SortKey, string> = {
+  number: "number",
+  status: "state",
+  departure: "departure",
+  updated: "last change",
+};
 
 const columns: ColumnDef<TransferSummaryDto>[] = [
   {
@@ -16,14 +21,22 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
     header: "Number",
     cell: ({ row }) => (
       <div className="flex flex-col">
-        <Link to={paths.transfers.detail.href(row.original.id)} className="font-semibold text-fern underline-offset-2 hover:underline">
+        <Link
+          to={paths.transfers.detail.href(row.original.id)}
+          className="font-semibold text-fern underline-offset-2 hover:underline"
+        >
           {row.original.number}
         </Link>
         <span className="text-xs text-ink-soft">{viewerRoleLabel[row.original.viewerRole]}</span>
       </div>
     ),
   },
-  { id: "status", accessorKey: "status", header: "State", cell: ({ row }) => <StatusBadge status={row.original.status} /> },
+  {
+    id: "status",
+    accessorKey: "status",
+    header: "State",
+    cell: ({ row }) => <StatusBadge status={row.original.status} />,
+  },
   {
     id: "parties",
     header: "Sender → receiver",
@@ -49,14 +62,24 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
       );
     },
   },
-  { id: "departure", accessorKey: "plannedDepartureAt", header: "Departs", cell: ({ row }) => formatDateTime(row.original.plannedDepartureAt, row.original.origin.timeZone) },
+  {
+    id: "departure",
+    accessorKey: "plannedDepartureAt",
+    header: "Departs",
+    cell: ({ row }) => formatDateTime(row.original.plannedDepartureAt, row.original.origin.timeZone),
+  },
   {
     id: "animals",
     header: "Animals",
     enableSorting: false,
     cell: ({ row }) => `${row.original.animalCount} in ${row.original.speciesCount} species`,
   },
-  { id: "updated", accessorKey: "updatedAt", header: "Last change", cell: ({ row }) => formatDateTime(row.original.updatedAt) },
+  {
+    id: "updated",
+    accessorKey: "updatedAt",
+    header: "Last change",
+    cell: ({ row }) => formatDateTime(row.original.updatedAt),
+  },
 ];
 
 type Props = {
@@ -88,7 +111,9 @@ export function TransfersTable({ transfers, sort, dir, onSort }: Props) {
   return (
     <div className="overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
-        <caption className="sr-only">Transfers, sorted by {sortWords[sort]} ({dir === "asc" ? "ascending" : "descending"})</caption>
+        <caption className="sr-only">
+          Transfers, sorted by {sortWords[sort]} ({dir === "asc" ? "ascending" : "descending"})
+        </caption>
         <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
@@ -109,7 +134,9 @@ export function TransfersTable({ transfers, sort, dir, onSort }: Props) {
                         className="inline-flex min-h-11 items-center gap-1 uppercase tracking-wide hover:text-ink"
                       >
                         {label}
-                        <span aria-hidden className="text-ink-faint">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                        <span aria-hidden className="text-ink-faint">
+                          {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}
+                        </span>
                       </button>
                     ) : (
                       label

@@ -29,7 +29,10 @@ function Entry({ entry: e, broken }: { entry: CustodyEntryDto; broken: boolean }
   return (
     <li className={`rounded-md border p-3 ${broken ? "border-brick-line bg-brick-bg" : "border-rule bg-paper-card"}`}>
       <p className="font-semibold">
-        {e.seq}. {kindText(e.kind)} <span className="font-normal text-ink-soft">· {formatDateTime(e.at)} · {e.actor.displayName}</span>
+        {e.seq}. {kindText(e.kind)}{" "}
+        <span className="font-normal text-ink-soft">
+          · {formatDateTime(e.at)} · {e.actor.displayName}
+        </span>
       </p>
       <Payload payload={e.payload} />
       <p className="mt-1 break-all font-mono text-xs text-ink-soft">
@@ -50,18 +53,29 @@ export function TransferCustodyRoute() {
       <PageHeader
         title={`Custody log${number ? ` for ${number}` : ""}`}
         eyebrow="Append-only record"
-        actions={<Link to={paths.transfers.detail.href(transferId)} className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline">Back to the transfer</Link>}
+        actions={
+          <Link
+            to={paths.transfers.detail.href(transferId)}
+            className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+          >
+            Back to the transfer
+          </Link>
+        }
       >
         Each entry carries the hash of the one before it, so a changed or missing entry shows.
       </PageHeader>
       {custody.isPending ? (
         <Loading label="Loading the custody log…" />
       ) : custody.error ? (
-        <Notice tone="block" role="alert">{(custody.error as Error).message}</Notice>
+        <Notice tone="block" role="alert">
+          {(custody.error as Error).message}
+        </Notice>
       ) : (
         <div className="grid gap-4">
           {custody.data.intact ? (
-            <Notice tone="ok" title="The log is intact">All {custody.data.entries.length} entries chain together; none was changed or removed.</Notice>
+            <Notice tone="ok" title="The log is intact">
+              All {custody.data.entries.length} entries chain together; none was changed or removed.
+            </Notice>
           ) : (
             <Notice tone="block" role="alert" title={`The log is broken at entry ${custody.data.brokenAt ?? "?"}`}>
               {custody.data.reason ?? "An entry does not match the one before it."} Tell your administrator.

@@ -46,7 +46,10 @@ function Contents({ transfer: t, withChecks }: { transfer: TransferDto; withChec
       <ul className="flex flex-wrap gap-x-4 gap-y-1">
         {items.map(([id, label]) => (
           <li key={id}>
-            <a href={`#${id}`} className="inline-flex min-h-11 items-center text-fern underline-offset-2 hover:underline">
+            <a
+              href={`#${id}`}
+              className="inline-flex min-h-11 items-center text-fern underline-offset-2 hover:underline"
+            >
               {label}
             </a>
           </li>
@@ -72,11 +75,24 @@ export function TransferDetailRoute({ checks }: Props) {
   const t = transfer.data;
   return (
     <div className="grid gap-5">
-      <PageHeader title={`Transfer ${t.number}`} eyebrow={viewerRoleLabel[t.viewerRole]} actions={<StatusBadge status={t.status} />}>
-        {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state} · leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+      <PageHeader
+        title={`Transfer ${t.number}`}
+        eyebrow={viewerRoleLabel[t.viewerRole]}
+        actions={<StatusBadge status={t.status} />}
+      >
+        {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state} · leaves{" "}
+        {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
       </PageHeader>
-      {t.status === "cancelled" && t.cancelledReason ? <Notice tone="block" title="Cancelled">{t.cancelledReason}</Notice> : null}
-      {t.reconfirmationReason && t.status === "awaiting_receiver" ? <Notice tone="caution" title="Changed after confirmation">{t.reconfirmationReason}</Notice> : null}
+      {t.status === "cancelled" && t.cancelledReason ? (
+        <Notice tone="block" title="Cancelled">
+          {t.cancelledReason}
+        </Notice>
+      ) : null}
+      {t.reconfirmationReason && t.status === "awaiting_receiver" ? (
+        <Notice tone="caution" title="Changed after confirmation">
+          {t.reconfirmationReason}
+        </Notice>
+      ) : null}
       <ActionsBar transfer={t} />
       <PaperworkLinks transferId={t.id} />
       <TransportCautions />

@@ -15,7 +15,12 @@ function EditForm({ transfer }: { transfer: TransferDto }) {
   const update = useUpdateTransfer(transfer.id);
   const navigate = useNavigate();
   if (directory.isPending) return <Loading label="Loading the organisations…" />;
-  if (directory.error) return <Notice tone="block" role="alert">{(directory.error as Error).message}</Notice>;
+  if (directory.error)
+    return (
+      <Notice tone="block" role="alert">
+        {(directory.error as Error).message}
+      </Notice>
+    );
   return (
     <TransferForm
       mode="edit"
@@ -32,7 +37,11 @@ function EditForm({ transfer }: { transfer: TransferDto }) {
           await update.mutateAsync({ version: transfer.version, ...patch });
         } catch (err) {
           if (err instanceof ApiError && err.status === 409) {
-            throw new ApiError(409, err.code, "Someone saved this transfer after you opened it. Open it again to see their changes, then redo yours.");
+            throw new ApiError(
+              409,
+              err.code,
+              "Someone saved this transfer after you opened it. Open it again to see their changes, then redo yours.",
+            );
           }
           throw err;
         }
@@ -47,18 +56,39 @@ export function TransferEditRoute() {
   const { transferId = "" } = useParams();
   const transfer = useTransfer(transferId);
   if (transfer.isPending) return <Loading label="Loading the transfer…" />;
-  if (transfer.error) return <Notice tone="block" role="alert" title="This transfer did not load">{(transfer.error as Error).message}</Notice>;
+  if (transfer.error)
+    return (
+      <Notice tone="block" role="alert" title="This transfer did not load">
+        {(transfer.error as Error).message}
+      </Notice>
+    );
   const t = transfer.data;
   return (
     <>
-      <PageHeader title={`Edit ${t.number}`} eyebrow="Transfer" actions={<Link to={paths.transfers.detail.href(t.id)} className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline">Back to the transfer</Link>} />
+      <PageHeader
+        title={`Edit ${t.number}`}
+        eyebrow="Transfer"
+        actions={
+          <Link
+            to={paths.transfers.detail.href(t.id)}
+            className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+          >
+            Back to the transfer
+          </Link>
+        }
+      />
       {!t.abilities.edit ? (
-        <Notice tone="info" title="This transfer cannot be changed now">Only the sender edits a transfer, and only until the animals leave.</Notice>
+        <Notice tone="info" title="This transfer cannot be changed now">
+          Only the sender edits a transfer, and only until the animals leave.
+        </Notice>
       ) : (
         <>
           {t.status === "ready" ? (
             <div className="mb-4">
-              <Notice tone="caution">The receiver has confirmed this transfer. A change to the animals, boxes, route or dates sends it back to them to confirm again.</Notice>
+              <Notice tone="caution">
+                The receiver has confirmed this transfer. A change to the animals, boxes, route or dates sends it back
+                to them to confirm again.
+              </Notice>
             </div>
           ) : null}
           {/* The key remounts the form when a newer version arrives, so it never edits stale values. */}

@@ -17,10 +17,19 @@ export function TransferNewRoute() {
   const ownOrganizationId = viewer.user.organization?.id ?? null;
 
   if (!viewer.abilities.draftTransfers) {
-    return <Notice tone="info" title="Only keeper organisations draft transfers">Ask the sending organisation to start the transfer and add you to it.</Notice>;
+    return (
+      <Notice tone="info" title="Only keeper organisations draft transfers">
+        Ask the sending organisation to start the transfer and add you to it.
+      </Notice>
+    );
   }
   if (directory.isPending) return <Loading label="Loading the organisations…" />;
-  if (directory.error) return <Notice tone="block" role="alert" title="The organisations did not load">{(directory.error as Error).message}</Notice>;
+  if (directory.error)
+    return (
+      <Notice tone="block" role="alert" title="The organisations did not load">
+        {(directory.error as Error).message}
+      </Notice>
+    );
 
   const own = directory.data.find((o) => o.id === ownOrganizationId);
   return (
@@ -30,7 +39,9 @@ export function TransferNewRoute() {
       </PageHeader>
       <TransferForm
         mode="create"
-        defaultValues={blankTransfer(own ? { street: own.street, city: own.city, state: own.state, zip: own.zip } : null)}
+        defaultValues={blankTransfer(
+          own ? { street: own.street, city: own.city, state: own.state, zip: own.zip } : null,
+        )}
         initialTaxa={{}}
         organizations={directory.data}
         senderOrganizationId={ownOrganizationId}

@@ -18,7 +18,10 @@ const roleOptions = [
   { value: "receiving", label: "I receive" },
   { value: "carrying", label: "I carry" },
 ];
-const statusOptions = [{ value: "", label: "Any state" }, ...TRANSFER_STATUSES.map((s) => ({ value: s, label: statusLabel[s] }))];
+const statusOptions = [
+  { value: "", label: "Any state" },
+  ...TRANSFER_STATUSES.map((s) => ({ value: s, label: statusLabel[s] })),
+];
 
 /** The home page of members and admins: every transfer they can see, newest plans first. */
 export function TransfersListRoute() {
@@ -26,13 +29,17 @@ export function TransfersListRoute() {
   const [search, setSearch] = useSearchParams();
   const filters = filtersFromSearch(search);
   const list = useTransfers(filters);
-  const update = (changes: Parameters<typeof withFilters>[1]) => setSearch(withFilters(search, changes), { replace: true });
+  const update = (changes: Parameters<typeof withFilters>[1]) =>
+    setSearch(withFilters(search, changes), { replace: true });
 
   // The search box asks the server once typing pauses, not at every key.
   const [q, setQ] = useState(filters.q ?? "");
   useEffect(() => {
     if (q === (search.get("q") ?? "")) return;
-    const timer = setTimeout(() => setSearch((current) => withFilters(current, { q: q.trim() }), { replace: true }), 300);
+    const timer = setTimeout(
+      () => setSearch((current) => withFilters(current, { q: q.trim() }), { replace: true }),
+      300,
+    );
     return () => clearTimeout(timer);
   }, [q, search, setSearch]);
 
@@ -46,7 +53,10 @@ export function TransfersListRoute() {
         eyebrow={viewer.user.organization?.name ?? "All organisations"}
         actions={
           viewer.abilities.draftTransfers ? (
-            <Link to={paths.transfers.new} className="inline-flex min-h-11 items-center rounded-md border border-fern-dark bg-fern px-4 font-medium text-paper-card hover:bg-fern-dark">
+            <Link
+              to={paths.transfers.new}
+              className="inline-flex min-h-11 items-center rounded-md border border-fern-dark bg-fern px-4 font-medium text-paper-card hover:bg-fern-dark"
+            >
               New transfer
             </Link>
           ) : null
@@ -55,21 +65,58 @@ export function TransfersListRoute() {
         Every move you send, receive or carry, with where it stands.
       </PageHeader>
 
-      <form role="search" aria-label="Filter transfers" className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-5" onSubmit={(e) => e.preventDefault()}>
-        <TextField label="Search" type="search" value={q} onChange={(e) => setQ(e.target.value)} hint="Number, organisation or species" />
-        <SelectField label="State" options={statusOptions} value={filters.status ?? ""} onChange={(e) => update({ status: e.target.value })} />
-        <SelectField label="My part" options={roleOptions} value={filters.role ?? ""} onChange={(e) => update({ role: e.target.value })} />
-        <TextField label="Departs on or after" type="date" value={filters.departFrom ?? ""} onChange={(e) => update({ departFrom: e.target.value })} />
-        <TextField label="Departs on or before" type="date" value={filters.departTo ?? ""} onChange={(e) => update({ departTo: e.target.value })} />
+      <form
+        role="search"
+        aria-label="Filter transfers"
+        className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-5"
+        onSubmit={(e) => e.preventDefault()}
+      >
+        <TextField
+          label="Search"
+          type="search"
+          value={q}
+          onChange={(e) => setQ(e.target.value)}
+          hint="Number, organisation or species"
+        />
+        <SelectField
+          label="State"
+          options={statusOptions}
+          value={filters.status ?? ""}
+          onChange={(e) => update({ status: e.target.value })}
+        />
+        <SelectField
+          label="My part"
+          options={roleOptions}
+          value={filters.role ?? ""}
+          onChange={(e) => update({ role: e.target.value })}
+        />
+        <TextField
+          label="Departs on or after"
+          type="date"
+          value={filters.departFrom ?? ""}
+          onChange={(e) => update({ departFrom: e.target.value })}
+        />
+        <TextField
+          label="Departs on or before"
+          type="date"
+          value={filters.departTo ?? ""}
+          onChange={(e) => update({ departTo: e.target.value })}
+        />
       </form>
 
       {list.isPending ? (
         <Loading label="Loading transfers…" />
       ) : list.error ? (
-        <Notice tone="block" role="alert" title="The list did not load">{(list.error as Error).message}</Notice>
+        <Notice tone="block" role="alert" title="The list did not load">
+          {(list.error as Error).message}
+        </Notice>
       ) : rows.length === 0 ? (
         <EmptyState title={filtered ? "No transfer matches these filters" : "No transfers yet"}>
-          {filtered ? "Clear a filter or two to see more." : viewer.abilities.draftTransfers ? "Start one with “New transfer”." : "Transfers you take part in appear here."}
+          {filtered
+            ? "Clear a filter or two to see more."
+            : viewer.abilities.draftTransfers
+              ? "Start one with “New transfer”."
+              : "Transfers you take part in appear here."}
         </EmptyState>
       ) : (
         <>

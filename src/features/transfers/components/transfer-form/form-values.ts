@@ -75,7 +75,12 @@ export function blankTransfer(senderAddress: Address | null): TransferInput {
   };
 }
 
-const addressOf = (p: { street: string; city: string; state: Address["state"]; zip: string }): Address => ({ street: p.street, city: p.city, state: p.state, zip: p.zip });
+const addressOf = (p: { street: string; city: string; state: Address["state"]; zip: string }): Address => ({
+  street: p.street,
+  city: p.city,
+  state: p.state,
+  zip: p.zip,
+});
 
 /** A saved transfer as the form's values, in the saved order of boxes and lines. */
 export function transferToInput(t: TransferDto): TransferInput {

@@ -14,16 +14,29 @@ import { duplicateAnimal, nextAnimal } from "./form-values";
 const orNull = (v: unknown) => (v === "" || v == null ? null : v);
 const numberOrNull = (v: unknown) => (v === "" || v == null ? null : Number(v));
 
-type TaxaProps = { taxa: Record<string, TaxonBriefDto>; rememberTaxon: (t: TaxonBriefDto) => void; search: TaxonSearch };
+type TaxaProps = {
+  taxa: Record<string, TaxonBriefDto>;
+  rememberTaxon: (t: TaxonBriefDto) => void;
+  search: TaxonSearch;
+};
 
-function AnimalLine({ index, onDuplicate, onRemove, taxa, rememberTaxon, search }: TaxaProps & { index: number; onDuplicate: () => void; onRemove: () => void }) {
+function AnimalLine({
+  index,
+  onDuplicate,
+  onRemove,
+  taxa,
+  rememberTaxon,
+  search,
+}: TaxaProps & { index: number; onDuplicate: () => void; onRemove: () => void }) {
   const { control, register, formState, getValues } = useFormContext<TransferInput>();
   const boxes = useWatch({ control, name: "containers" });
   const e = formState.errors.animals?.[index];
   const detailErrors = Boolean(e?.identifier || e?.lengthMm || e?.weightG || e?.hatchDate || e?.notes);
   const [more, setMore] = useState(() => {
     const a = getValues(`animals.${index}`);
-    return Boolean(a.identifier || a.identifierKind || a.lengthMm || a.lengthKind || a.weightG || a.hatchDate || a.notes);
+    return Boolean(
+      a.identifier || a.identifierKind || a.lengthMm || a.lengthKind || a.weightG || a.hatchDate || a.notes,
+    );
   });
   const showMore = more || detailErrors;
 
@@ -49,12 +62,28 @@ function AnimalLine({ index, onDuplicate, onRemove, taxa, rememberTaxon, search 
           )}
         />
       </div>
-      <TextField label="How many" type="number" inputMode="numeric" min={1} step={1} error={e?.count?.message} {...register(`animals.${index}.count`, { valueAsNumber: true })} />
-      <SelectField label="Sex" options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))} error={e?.sex?.message} {...register(`animals.${index}.sex`)} />
+      <TextField
+        label="How many"
+        type="number"
+        inputMode="numeric"
+        min={1}
+        step={1}
+        error={e?.count?.message}
+        {...register(`animals.${index}.count`, { valueAsNumber: true })}
+      />
+      <SelectField
+        label="Sex"
+        options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))}
+        error={e?.sex?.message}
+        {...register(`animals.${index}.sex`)}
+      />
       <div className="sm:col-span-2">
         <SelectField
           label="Origin"
-          options={[{ value: "", label: "Choose…" }, ...ANIMAL_ORIGINS.map((o) => ({ value: o, label: animalOriginLabel[o] }))]}
+          options={[
+            { value: "", label: "Choose…" },
+            ...ANIMAL_ORIGINS.map((o) => ({ value: o, label: animalOriginLabel[o] })),
+          ]}
           error={e?.origin?.message}
           {...register(`animals.${index}.origin`)}
         />
@@ -62,7 +91,10 @@ function AnimalLine({ index, onDuplicate, onRemove, taxa, rememberTaxon, search 
       <div className="sm:col-span-2">
         <SelectField
           label="Travels in"
-          options={[{ value: "", label: "Not packed yet" }, ...boxes.map((b) => ({ value: b.key, label: b.label || "Unnamed box" }))]}
+          options={[
+            { value: "", label: "Not packed yet" },
+            ...boxes.map((b) => ({ value: b.key, label: b.label || "Unnamed box" })),
+          ]}
           error={e?.containerKey?.message}
           {...register(`animals.${index}.containerKey`, { setValueAs: orNull })}
         />
@@ -70,29 +102,66 @@ function AnimalLine({ index, onDuplicate, onRemove, taxa, rememberTaxon, search 
       {showMore ? (
         <>
           <div className="sm:col-span-2">
-            <TextField label="Identifier (optional)" error={e?.identifier?.message} {...register(`animals.${index}.identifier`)} />
+            <TextField
+              label="Identifier (optional)"
+              error={e?.identifier?.message}
+              {...register(`animals.${index}.identifier`)}
+            />
           </div>
           <SelectField
             label="Kind of identifier"
-            options={[{ value: "", label: "None" }, ...IDENTIFIER_KINDS.map((k) => ({ value: k, label: identifierKindLabel[k] }))]}
+            options={[
+              { value: "", label: "None" },
+              ...IDENTIFIER_KINDS.map((k) => ({ value: k, label: identifierKindLabel[k] })),
+            ]}
             {...register(`animals.${index}.identifierKind`, { setValueAs: orNull })}
           />
           <Controller
             control={control}
             name={`animals.${index}.lengthMm`}
             render={({ field, fieldState }) => (
-              <MeasureField kind="length" label="Size" name={field.name} ref={field.ref} value={field.value} onChange={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+              <MeasureField
+                kind="length"
+                label="Size"
+                name={field.name}
+                ref={field.ref}
+                value={field.value}
+                onChange={field.onChange}
+                onBlur={field.onBlur}
+                error={fieldState.error?.message}
+              />
             )}
           />
           <SelectField
             label="Measured as"
-            options={[{ value: "", label: "Not measured" }, ...LENGTH_KINDS.map((k) => ({ value: k, label: lengthKindLabel[k] }))]}
+            options={[
+              { value: "", label: "Not measured" },
+              ...LENGTH_KINDS.map((k) => ({ value: k, label: lengthKindLabel[k] })),
+            ]}
             {...register(`animals.${index}.lengthKind`, { setValueAs: orNull })}
           />
-          <TextField label="Weight (g)" type="number" inputMode="decimal" min={0} step="any" error={e?.weightG?.message} {...register(`animals.${index}.weightG`, { setValueAs: numberOrNull })} />
-          <TextField label="Hatch or birth date" type="date" error={e?.hatchDate?.message} {...register(`animals.${index}.hatchDate`, { setValueAs: orNull })} />
+          <TextField
+            label="Weight (g)"
+            type="number"
+            inputMode="decimal"
+            min={0}
+            step="any"
+            error={e?.weightG?.message}
+            {...register(`animals.${index}.weightG`, { setValueAs: numberOrNull })}
+          />
+          <TextField
+            label="Hatch or birth date"
+            type="date"
+            error={e?.hatchDate?.message}
+            {...register(`animals.${index}.hatchDate`, { setValueAs: orNull })}
+          />
           <div className="sm:col-span-5">
-            <TextAreaField label="Notes on this line" className="min-h-16" error={e?.notes?.message} {...register(`animals.${index}.notes`)} />
+            <TextAreaField
+              label="Notes on this line"
+              className="min-h-16"
+              error={e?.notes?.message}
+              {...register(`animals.${index}.notes`)}
+            />
           </div>
         </>
       ) : null}
@@ -120,7 +189,11 @@ export function AnimalsStep(props: TaxaProps) {
   const rootError = formState.errors.animals?.root?.message ?? formState.errors.animals?.message;
   return (
     <div className="grid gap-4">
-      {rootError ? <Notice tone="block" role="alert">{rootError}</Notice> : null}
+      {rootError ? (
+        <Notice tone="block" role="alert">
+          {rootError}
+        </Notice>
+      ) : null}
       {lines.fields.map((field, index) => (
         <AnimalLine
           key={field.fieldKey}
@@ -131,7 +204,11 @@ export function AnimalsStep(props: TaxaProps) {
         />
       ))}
       <div>
-        <Button type="button" variant="secondary" onClick={() => lines.append(nextAnimal(getValues("animals").at(-1), getValues("containers")[0]?.key ?? null))}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() => lines.append(nextAnimal(getValues("animals").at(-1), getValues("containers")[0]?.key ?? null))}
+        >
           Add another line
         </Button>
       </div>

@@ -34,20 +34,35 @@ export function BoxesStep() {
   return (
     <div className="grid gap-4">
       <Notice tone="info">
-        Every animal travels in its own container inside an insulated box; different species never share a box. Heat packs are
-        taped to the box wall, never against an animal's container.
+        Every animal travels in its own container inside an insulated box; different species never share a box. Heat
+        packs are taped to the box wall, never against an animal's container.
       </Notice>
-      {errors?.root?.message || errors?.message ? <Notice tone="block" role="alert">{errors.root?.message ?? errors.message}</Notice> : null}
+      {errors?.root?.message || errors?.message ? (
+        <Notice tone="block" role="alert">
+          {errors.root?.message ?? errors.message}
+        </Notice>
+      ) : null}
       {boxes.fields.map((field, index) => {
         const e = errors?.[index];
         return (
-          <fieldset key={field.fieldKey} className="grid gap-3 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:grid-cols-4">
+          <fieldset
+            key={field.fieldKey}
+            className="grid gap-3 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:grid-cols-4"
+          >
             <legend className="px-1 font-display font-semibold">Box {index + 1}</legend>
             <div className="sm:col-span-2">
-              <TextField label="Label on the box" error={e?.label?.message} {...register(`containers.${index}.label`)} />
+              <TextField
+                label="Label on the box"
+                error={e?.label?.message}
+                {...register(`containers.${index}.label`)}
+              />
             </div>
             <div className="sm:col-span-2">
-              <TextField label="Seal number (optional)" error={e?.sealNumber?.message} {...register(`containers.${index}.sealNumber`)} />
+              <TextField
+                label="Seal number (optional)"
+                error={e?.sealNumber?.message}
+                {...register(`containers.${index}.sealNumber`)}
+              />
             </div>
             {dimensions.map((d) => (
               <Controller
@@ -55,22 +70,52 @@ export function BoxesStep() {
                 control={control}
                 name={`containers.${index}.${d.name}`}
                 render={({ field: f, fieldState }) => (
-                  <MeasureField kind="length" label={d.label} name={f.name} ref={f.ref} value={f.value} onChange={f.onChange} onBlur={f.onBlur} error={fieldState.error?.message} />
+                  <MeasureField
+                    kind="length"
+                    label={d.label}
+                    name={f.name}
+                    ref={f.ref}
+                    value={f.value}
+                    onChange={f.onChange}
+                    onBlur={f.onBlur}
+                    error={fieldState.error?.message}
+                  />
                 )}
               />
             ))}
             <div className="sm:col-span-2">
-              <SelectField label="Walls" options={WALL_MATERIALS.map((m) => ({ value: m, label: wallMaterialLabel[m] }))} error={e?.wallMaterial?.message} {...register(`containers.${index}.wallMaterial`)} />
+              <SelectField
+                label="Walls"
+                options={WALL_MATERIALS.map((m) => ({ value: m, label: wallMaterialLabel[m] }))}
+                error={e?.wallMaterial?.message}
+                {...register(`containers.${index}.wallMaterial`)}
+              />
             </div>
             <div className="sm:col-span-2">
-              <SelectField label="Pack" options={PACK_KINDS.map((p) => ({ value: p, label: packLabel[p] }))} error={e?.pack?.message} {...register(`containers.${index}.pack`)} />
+              <SelectField
+                label="Pack"
+                options={PACK_KINDS.map((p) => ({ value: p, label: packLabel[p] }))}
+                error={e?.pack?.message}
+                {...register(`containers.${index}.pack`)}
+              />
             </div>
             {e?.key?.message ? <p className="text-sm text-brick sm:col-span-4">{e.key.message}</p> : null}
             <div className="flex flex-wrap gap-2 sm:col-span-4">
-              <Button type="button" variant="secondary" onClick={() => boxes.insert(index + 1, duplicateBox(getValues(`containers.${index}`), boxes.fields.length + 1))}>
+              <Button
+                type="button"
+                variant="secondary"
+                onClick={() =>
+                  boxes.insert(index + 1, duplicateBox(getValues(`containers.${index}`), boxes.fields.length + 1))
+                }
+              >
                 Duplicate box
               </Button>
-              <Button type="button" variant="ghost" onClick={() => remove(index)} aria-label={`Remove box ${index + 1}`}>
+              <Button
+                type="button"
+                variant="ghost"
+                onClick={() => remove(index)}
+                aria-label={`Remove box ${index + 1}`}
+              >
                 Remove
               </Button>
             </div>
@@ -78,7 +123,11 @@ export function BoxesStep() {
         );
       })}
       <div>
-        <Button type="button" variant="secondary" onClick={() => boxes.append(nextBox(getValues("containers").at(-1), boxes.fields.length + 1))}>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() => boxes.append(nextBox(getValues("containers").at(-1), boxes.fields.length + 1))}
+        >
           Add another box
         </Button>
       </div>

@@ -11,20 +11,37 @@ import { animalOriginLabel, modeLabel, packLabel, purposeLabel, sexLabel } from 
 const when = (iso: string) => (iso && !Number.isNaN(Date.parse(iso)) ? formatDateTime(iso) : "not set");
 
 /** Step 4: everything on one page, with the packing problems the server will also find. */
-export function ReviewStep({ organizations, taxa }: { organizations: DirectoryOrganizationDto[]; taxa: Record<string, TaxonBriefDto> }) {
+export function ReviewStep({
+  organizations,
+  taxa,
+}: {
+  organizations: DirectoryOrganizationDto[];
+  taxa: Record<string, TaxonBriefDto>;
+}) {
   const { control } = useFormContext<TransferInput>();
   const v = useWatch({ control }) as TransferInput;
   const [system] = useUnitSystem();
   const receiver = organizations.find((o) => o.id === v.receiverOrganizationId);
   const findings = packingFindings(
     v.containers.map((c) => ({ id: c.key, label: c.label })),
-    v.animals.map((a, i) => ({ id: String(i), containerId: a.containerKey, taxonId: a.taxonId, scientificName: taxa[a.taxonId]?.scientificName ?? "an unnamed species" })),
+    v.animals.map((a, i) => ({
+      id: String(i),
+      containerId: a.containerKey,
+      taxonId: a.taxonId,
+      scientificName: taxa[a.taxonId]?.scientificName ?? "an unnamed species",
+    })),
   );
   const unpacked = v.animals.filter((a) => a.containerKey === null);
 
   const line = (a: TransferInput["animals"][number], i: number) => (
     <li key={i}>
-      {a.count} × {taxa[a.taxonId] ? <TaxonName taxon={taxa[a.taxonId]!} /> : <span className="text-brick">species not chosen</span>}, {sexLabel[a.sex].toLowerCase()}
+      {a.count} ×{" "}
+      {taxa[a.taxonId] ? (
+        <TaxonName taxon={taxa[a.taxonId]!} />
+      ) : (
+        <span className="text-brick">species not chosen</span>
+      )}
+      , {sexLabel[a.sex].toLowerCase()}
       {a.origin ? `, ${animalOriginLabel[a.origin].toLowerCase()}` : ""}
       {a.identifier ? ` (${a.identifier})` : ""}
     </li>
@@ -36,12 +53,19 @@ export function ReviewStep({ organizations, taxa }: { organizations: DirectoryOr
         <dt className="font-semibold">Receiver</dt>
         <dd>{receiver?.name ?? "not chosen"}</dd>
         <dt className="font-semibold">From</dt>
-        <dd>{[v.origin.street, v.origin.city, v.origin.state, v.origin.zip].filter(Boolean).join(", ") || "not set"}</dd>
+        <dd>
+          {[v.origin.street, v.origin.city, v.origin.state, v.origin.zip].filter(Boolean).join(", ") || "not set"}
+        </dd>
         <dt className="font-semibold">To</dt>
-        <dd>{[v.destination.street, v.destination.city, v.destination.state, v.destination.zip].filter(Boolean).join(", ") || "not set"}</dd>
+        <dd>
+          {[v.destination.street, v.destination.city, v.destination.state, v.destination.zip]
+            .filter(Boolean)
+            .join(", ") || "not set"}
+        </dd>
         <dt className="font-semibold">Travel</dt>
         <dd>
-          {v.mode ? modeLabel[v.mode] : "mode not chosen"}; leaves {when(v.plannedDepartureAt)}, arrives {when(v.expectedArrivalAt)}
+          {v.mode ? modeLabel[v.mode] : "mode not chosen"}; leaves {when(v.plannedDepartureAt)}, arrives{" "}
+          {when(v.expectedArrivalAt)}
         </dd>
         <dt className="font-semibold">Purpose</dt>
         <dd>
@@ -57,17 +81,23 @@ export function ReviewStep({ organizations, taxa }: { organizations: DirectoryOr
             <p className="font-semibold">
               {c.label || "Unnamed box"}{" "}
               <span className="font-normal text-ink-soft">
-                {Number.isFinite(c.lengthMm) && Number.isFinite(c.widthMm) && Number.isFinite(c.heightMm) ? formatDimensions(c.lengthMm, c.widthMm, c.heightMm, system) : "size not set"} ·{" "}
-                {packLabel[c.pack]}
+                {Number.isFinite(c.lengthMm) && Number.isFinite(c.widthMm) && Number.isFinite(c.heightMm)
+                  ? formatDimensions(c.lengthMm, c.widthMm, c.heightMm, system)
+                  : "size not set"}{" "}
+                · {packLabel[c.pack]}
               </span>
             </p>
-            <ul className="mt-1 list-disc pl-5">{v.animals.map((a, i) => (a.containerKey === c.key ? line(a, i) : null))}</ul>
+            <ul className="mt-1 list-disc pl-5">
+              {v.animals.map((a, i) => (a.containerKey === c.key ? line(a, i) : null))}
+            </ul>
           </div>
         ))}
         {unpacked.length > 0 ? (
           <div className="rounded-card border border-dashed border-rule p-3">
             <p className="font-semibold">Not in a box yet</p>
-            <ul className="mt-1 list-disc pl-5">{v.animals.map((a, i) => (a.containerKey === null ? line(a, i) : null))}</ul>
+            <ul className="mt-1 list-disc pl-5">
+              {v.animals.map((a, i) => (a.containerKey === null ? line(a, i) : null))}
+            </ul>
           </div>
         ) : null}
       </div>

@@ -16,7 +16,12 @@ function AddressFields({ which, legend }: { which: "origin" | "destination"; leg
     <fieldset className="grid gap-3 rounded-card border border-rule p-4 sm:grid-cols-6">
       <legend className="px-1 font-display font-semibold">{legend}</legend>
       <div className="sm:col-span-6">
-        <TextField label="Street" autoComplete="street-address" error={e?.street?.message} {...register(`${which}.street`)} />
+        <TextField
+          label="Street"
+          autoComplete="street-address"
+          error={e?.street?.message}
+          {...register(`${which}.street`)}
+        />
       </div>
       <div className="sm:col-span-3">
         <TextField label="City" error={e?.city?.message} {...register(`${which}.city`)} />
@@ -55,7 +60,13 @@ function InstantField({ name, label }: { name: "plannedDepartureAt" | "expectedA
 }
 
 /** Step 1: who receives, where from and to, how and when, and why. */
-export function RouteStep({ organizations, senderOrganizationId }: { organizations: DirectoryOrganizationDto[]; senderOrganizationId: string | null }) {
+export function RouteStep({
+  organizations,
+  senderOrganizationId,
+}: {
+  organizations: DirectoryOrganizationDto[];
+  senderOrganizationId: string | null;
+}) {
   const { register, formState, setValue, getFieldState, control } = useFormContext<TransferInput>();
   const e = formState.errors;
   const receiverId = useWatch({ control, name: "receiverOrganizationId" });
@@ -76,14 +87,21 @@ export function RouteStep({ organizations, senderOrganizationId }: { organizatio
               setValue("receiverContactId", null);
               // Most animals go to the receiver's own address; keep what the sender typed, though.
               if (next && !getFieldState("destination", formState).isDirty) {
-                setValue("destination", { street: next.street, city: next.city, state: next.state, zip: next.zip }, { shouldValidate: formState.isSubmitted });
+                setValue(
+                  "destination",
+                  { street: next.street, city: next.city, state: next.state, zip: next.zip },
+                  { shouldValidate: formState.isSubmitted },
+                );
               }
             },
           })}
         />
         <SelectField
           label="Contact there"
-          options={[{ value: "", label: "Anyone at the organisation" }, ...(receiver?.contacts ?? []).map((c) => ({ value: c.id, label: c.displayName }))]}
+          options={[
+            { value: "", label: "Anyone at the organisation" },
+            ...(receiver?.contacts ?? []).map((c) => ({ value: c.id, label: c.displayName })),
+          ]}
           error={e.receiverContactId?.message}
           {...register("receiverContactId", { setValueAs: (v: string | null) => (v ? v : null) })}
         />
@@ -91,12 +109,22 @@ export function RouteStep({ organizations, senderOrganizationId }: { organizatio
       <AddressFields which="origin" legend="Leaves from" />
       <AddressFields which="destination" legend="Goes to" />
       <div className="grid gap-3 sm:grid-cols-3">
-        <SelectField label="How it travels" options={[choose, ...TRANSPORT_MODES.map((m) => ({ value: m, label: modeLabel[m] }))]} error={e.mode?.message} {...register("mode")} />
+        <SelectField
+          label="How it travels"
+          options={[choose, ...TRANSPORT_MODES.map((m) => ({ value: m, label: modeLabel[m] }))]}
+          error={e.mode?.message}
+          {...register("mode")}
+        />
         <InstantField name="plannedDepartureAt" label="Planned departure" />
         <InstantField name="expectedArrivalAt" label="Expected arrival" />
       </div>
       <div className="grid gap-3 sm:grid-cols-3">
-        <SelectField label="Purpose" options={[choose, ...PURPOSES.map((p) => ({ value: p, label: purposeLabel[p] }))]} error={e.purpose?.message} {...register("purpose")} />
+        <SelectField
+          label="Purpose"
+          options={[choose, ...PURPOSES.map((p) => ({ value: p, label: purposeLabel[p] }))]}
+          error={e.purpose?.message}
+          {...register("purpose")}
+        />
         <label className="flex min-h-11 items-center gap-3 self-end rounded-md border border-rule bg-paper-card px-3 py-2">
           <input type="checkbox" className="h-5 w-5 accent-fern" {...register("sale")} />
           <span className="font-semibold">This is a sale</span>
@@ -113,8 +141,18 @@ export function RouteStep({ organizations, senderOrganizationId }: { organizatio
           />
         ) : null}
       </div>
-      <TextAreaField label="Handling notes" hint="Printed on the manifest and shown to everyone on the transfer." error={e.handlingNotes?.message} {...register("handlingNotes")} />
-      <TextAreaField label="Private notes" hint="Only your organisation sees these." error={e.privateNotes?.message} {...register("privateNotes")} />
+      <TextAreaField
+        label="Handling notes"
+        hint="Printed on the manifest and shown to everyone on the transfer."
+        error={e.handlingNotes?.message}
+        {...register("handlingNotes")}
+      />
+      <TextAreaField
+        label="Private notes"
+        hint="Only your organisation sees these."
+        error={e.privateNotes?.message}
+        {...register("privateNotes")}
+      />
     </div>
   );
 }

@@ -1,12 +1,26 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { fireEvent, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { transferInputSchema, type DirectoryOrganizationDto, type TaxonSearchHitDto, type TransferInputParsed } from "@shared/schemas/transfer";
+import {
+  transferInputSchema,
+  type DirectoryOrganizationDto,
+  type TaxonSearchHitDto,
+  type TransferInputParsed,
+} from "@shared/schemas/transfer";
 import { blankTransfer } from "./form-values";
 import { TransferForm } from "./transfer-form";
 
 // Invented demo organisations (the demo scenario's names); the species is real (The Reptile Database [published]).
-const sender: DirectoryOrganizationDto = { id: "00000000-0000-4000-8000-0000000000a1", name: "Cinder Ridge Herps", kind: "breeder", street: "12 Ash Lane", city: "Nashville", state: "TN", zip: "37201", contacts: [] };
+const sender: DirectoryOrganizationDto = {
+  id: "00000000-0000-4000-8000-0000000000a1",
+  name: "Cinder Ridge Herps",
+  kind: "breeder",
+  street: "12 Ash Lane",
+  city: "Nashville",
+  state: "TN",
+  zip: "37201",
+  contacts: [],
+};
 const receiver: DirectoryOrganizationDto = {
   id: "00000000-0000-4000-8000-0000000000a2",
   name: "Willow Marsh Nature Centre",
@@ -104,7 +118,12 @@ describe("TransferForm", () => {
     const box = saved.containers[0]!;
     expect([box.lengthMm, box.widthMm, box.heightMm, box.wallThicknessMm]).toEqual([304.8, 203.2, 152.4, 25.4]);
     expect(saved.animals).toHaveLength(1);
-    expect(saved.animals[0]).toMatchObject({ taxonId: boxTurtle.id, count: 2, origin: "captive_bred", containerKey: box.key });
+    expect(saved.animals[0]).toMatchObject({
+      taxonId: boxTurtle.id,
+      count: 2,
+      origin: "captive_bred",
+      containerKey: box.key,
+    });
     // RFC 3339 [published]: the instant carries its offset.
     expect(saved.plannedDepartureAt).toMatch(/^2030-03-12T08:00:00[+-]\d{2}:\d{2}$/);
   });
@@ -118,7 +137,12 @@ describe("TransferForm", () => {
     fireEvent.change(screen.getByLabelText("Planned departure"), { target: { value: "2030-03-12T08:00" } });
     fireEvent.change(screen.getByLabelText("Expected arrival"), { target: { value: "2030-03-12T18:00" } });
     await next("Boxes");
-    for (const [label, value] of [["Length (in)", "10"], ["Width (in)", "10"], ["Height (in)", "10"], ["Wall thickness (in)", "1"]]) {
+    for (const [label, value] of [
+      ["Length (in)", "10"],
+      ["Width (in)", "10"],
+      ["Height (in)", "10"],
+      ["Wall thickness (in)", "1"],
+    ]) {
       await userEvent.type(screen.getByLabelText(label!), value!);
     }
     await next("Animals");

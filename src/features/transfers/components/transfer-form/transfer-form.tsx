@@ -1,7 +1,14 @@
 import { useRef, useState } from "react";
 import { FormProvider, useForm, type FieldErrors, type FieldPath, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { createTransferSchema, transferInputSchema, type DirectoryOrganizationDto, type TaxonBriefDto, type TransferInput, type TransferInputParsed } from "@shared/schemas/transfer";
+import {
+  createTransferSchema,
+  transferInputSchema,
+  type DirectoryOrganizationDto,
+  type TaxonBriefDto,
+  type TransferInput,
+  type TransferInputParsed,
+} from "@shared/schemas/transfer";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
@@ -12,7 +19,23 @@ import { ReviewStep } from "./step-review";
 import { RouteStep } from "./step-route";
 
 const STEPS = [
-  { title: "Route and parties", fields: ["receiverOrganizationId", "receiverContactId", "origin", "destination", "mode", "plannedDepartureAt", "expectedArrivalAt", "purpose", "sale", "salePriceUsd", "handlingNotes", "privateNotes"] },
+  {
+    title: "Route and parties",
+    fields: [
+      "receiverOrganizationId",
+      "receiverContactId",
+      "origin",
+      "destination",
+      "mode",
+      "plannedDepartureAt",
+      "expectedArrivalAt",
+      "purpose",
+      "sale",
+      "salePriceUsd",
+      "handlingNotes",
+      "privateNotes",
+    ],
+  },
   { title: "Boxes", fields: ["containers"] },
   { title: "Animals", fields: ["animals"] },
   { title: "Check and save", fields: [] },
@@ -20,7 +43,9 @@ const STEPS = [
 
 /** The step that holds a field ("animals.2.count" is on the animals step); the last one if none. */
 function stepOf(fieldPaths: string[]): number {
-  const index = STEPS.findIndex((s) => s.fields.some((f: string) => fieldPaths.some((p) => p === f || p.startsWith(`${f}.`))));
+  const index = STEPS.findIndex((s) =>
+    s.fields.some((f: string) => fieldPaths.some((p) => p === f || p.startsWith(`${f}.`))),
+  );
   return index === -1 ? STEPS.length - 1 : index;
 }
 
@@ -41,7 +66,16 @@ type Props = {
  * The transfer in four steps — route and parties, boxes, animals, check — validated with the
  * same schema the server uses. A new transfer may not leave in the past; an edit may keep its date.
  */
-export function TransferForm({ mode, defaultValues, initialTaxa, organizations, senderOrganizationId, onSave, submitLabel, search = searchTaxa }: Props) {
+export function TransferForm({
+  mode,
+  defaultValues,
+  initialTaxa,
+  organizations,
+  senderOrganizationId,
+  onSave,
+  submitLabel,
+  search = searchTaxa,
+}: Props) {
   const resolver: Resolver<TransferInput, unknown, TransferInputParsed> = (values, context, options) =>
     zodResolver(mode === "create" ? createTransferSchema(new Date()) : transferInputSchema)(values, context, options);
   const form = useForm<TransferInput, unknown, TransferInputParsed>({ resolver, defaultValues, mode: "onTouched" });
@@ -58,7 +92,8 @@ export function TransferForm({ mode, defaultValues, initialTaxa, organizations, 
 
   async function forward() {
     const current = STEPS[step];
-    if (current && (current.fields.length === 0 || (await form.trigger([...current.fields], { shouldFocus: true })))) go(step + 1);
+    if (current && (current.fields.length === 0 || (await form.trigger([...current.fields], { shouldFocus: true }))))
+      go(step + 1);
   }
 
   const submit = form.handleSubmit(
