@@ -13,6 +13,8 @@ import { announceRuntime } from "./lib/runtime";
 
 const PORT = Number(process.env.PORT ?? 3000);
 const PG_PORT = Number(process.env.HATCHWAY_PG_PORT ?? 54328);
+/** The fakes listen on four ports from here (SMTP, its inbox, weather, S3). */
+const FAKES_PORT = Number(process.env.HATCHWAY_FAKES_PORT ?? 4100);
 
 function step(message: string) {
   process.stdout.write(`[start] ${message}\n`);
@@ -56,7 +58,7 @@ async function main() {
 
     fakes = await startAllFakes({
       dataDir: path.join(PROJECT_ROOT, ".data"),
-      ports: { smtp: 4100, smtpHttp: 4101, weather: 4102, s3: 4103 },
+      ports: { smtp: FAKES_PORT, smtpHttp: FAKES_PORT + 1, weather: FAKES_PORT + 2, s3: FAKES_PORT + 3 },
     });
     step(
       `local fakes up: SMTP ${fakes.smtp.smtpUrl}, caught mail ${fakes.smtp.inboxUrl}, S3 ${fakes.s3.endpoint}, weather ${fakes.weather.url}`,
