@@ -73,9 +73,9 @@ async function main() {
   announceRuntime("bench");
   let detailId = "";
   const server = await startBenchServer({
-    beforeStart: async (databaseUrl) => {
+    beforeStart: async (databaseUrl, baseUrl) => {
       process.stdout.write("[bench] seeding a 50-animal transfer and 100,000 list rows…\n");
-      ({ detailId } = await seedBenchData(databaseUrl));
+      ({ detailId } = await seedBenchData(databaseUrl, baseUrl));
     },
   });
   try {

@@ -43,7 +43,7 @@ async function recheckTransfer(ctx: AppContext, transferId: string, mark: DueMar
     const previous = await latestCheck(em, transfer.id);
     const report = await assessTransferTemperature({
       em,
-      source: { weatherUrl: ctx.env.WEATHER_URL, db: ctx.pool },
+      source: ctx.forecastSource,
       transfer,
       nowMs: now.getTime(),
     });
@@ -55,8 +55,8 @@ async function recheckTransfer(ctx: AppContext, transferId: string, mark: DueMar
       previousAdvice: previous.result.advice.message,
       advice: report.advice.message,
     };
-    await notifyParty(em, transfer, "sender", "temperature_changed", null, words);
-    await notifyParty(em, transfer, "receiver", "temperature_changed", null, words);
+    await notifyParty(em, ctx.links, transfer, "sender", "temperature_changed", null, words);
+    await notifyParty(em, ctx.links, transfer, "receiver", "temperature_changed", null, words);
     return true;
   });
 }
