@@ -37,7 +37,7 @@ export function createApp(input: AppContext | AppBase): Express {
   app.use(securityHeaders());
 
   const api = express.Router();
-  if (ctx.env.BENCH_ROUTES) api.use(queryCounter());
+  if (ctx.env.BENCH_ROUTES) api.use(queryCounter(ctx));
   api.use(noStore);
   api.use("/health", healthRouter(ctx));
   if (ctx.env.BENCH_ROUTES) {
