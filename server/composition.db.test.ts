@@ -6,8 +6,8 @@ import { READY_GATE_ORDER } from "./composition";
 import type { ReadyGate } from "./services/transfers/transition";
 
 // Two apps in one process, built one after the other with different public URLs, gates and
-// storage. Before the composition root, the second build overwrote the first one's link base and
-// gate source, and its routers added their gates to the same list (server/services/*/hooks.ts).
+// storage. Before the composition root, building the second app overwrote the first one's link
+// base and weather source, and both used one process-wide list of gates filled by the routers.
 const URL_A = "http://hatchway-a.example.test";
 const URL_B = "https://hatchway-b.example.test/app";
 

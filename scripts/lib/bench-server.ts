@@ -13,7 +13,7 @@ export async function startBenchServer(
   await dropDatabase(cluster, db);
   await ensureDatabase(cluster, db);
   const databaseUrl = cluster.url(db);
-  const port = options.port ?? 3901;
+  const port = options.port ?? Number(process.env.PORT ?? 3901);
   const baseUrl = `http://127.0.0.1:${port}`;
   await prepareDatabase(databaseUrl, { seed: true, publicUrl: baseUrl });
   await options.beforeStart?.(databaseUrl, baseUrl);
