@@ -93,9 +93,11 @@ describe("two apps built in one process", () => {
       expect(a.ctx[part]).not.toBe(b.ctx[part]);
     expect(a.ctx.adapters.mailer).not.toBe(b.ctx.adapters.mailer);
     expect(a.ctx.adapters.weather).not.toBe(b.ctx.adapters.weather);
-    // Building an app twice over the same context parts changes nothing in a finished one.
     expect(Object.isFrozen(a.ctx)).toBe(true);
     expect(Object.isFrozen(a.ctx.readyGates)).toBe(true);
+    // What the two contexts do hold in common (the compliance gate, the task definitions) cannot be changed.
+    for (const shared of [...a.ctx.readyGates, ...a.ctx.scheduledTasks, a.ctx.links, a.ctx.adapters])
+      expect(Object.isFrozen(shared)).toBe(true);
   });
 
   it("app A, built first, still runs its own gates in order and links to its own URL", async () => {

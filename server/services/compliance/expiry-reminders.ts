@@ -62,8 +62,8 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
 
 export const EXPIRY_REMINDER_TASK = "compliance.document-expiry-reminders";
 
-export const expiryReminderTask: ScheduledTask = {
+export const expiryReminderTask: ScheduledTask = Object.freeze({
   name: EXPIRY_REMINDER_TASK,
   everyMs: 60 * 60 * 1000,
-  run: (ctx) => sendExpiryReminders(ctx).then(() => undefined),
-};
+  run: (ctx: AppContext) => sendExpiryReminders(ctx).then(() => undefined),
+});

@@ -50,7 +50,7 @@ function blockedMessage(result: EvaluateResponse): string {
  * transfer with the documents on file and records the evaluation. A blocked or documents-needed
  * verdict stops the step unless an admin overrode this very version of the transfer.
  */
-export const complianceGate: ReadyGate = {
+export const complianceGate: ReadyGate = Object.freeze({
   name: "compliance",
   async check({ em, transfer }) {
     const { result } = await evaluateTransfer(em, transfer);
@@ -59,4 +59,4 @@ export const complianceGate: ReadyGate = {
     }
     recordEvaluation(em, transfer, result);
   },
-};
+});

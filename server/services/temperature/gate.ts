@@ -14,7 +14,7 @@ import { assessTransferTemperature } from "./transfer-temperature";
  * forecast and blocks (never a silent "safe"). The temperature check is a planning aid, not law.
  */
 export function createTemperatureGate(source: WeatherSource | null): ReadyGate {
-  return {
+  return Object.freeze({
     name: "temperature",
     async check({ em, actor, transfer, input }) {
       const now = new Date();
@@ -39,5 +39,5 @@ export function createTemperatureGate(source: WeatherSource | null): ReadyGate {
         reason: input.reason,
       });
     },
-  };
+  });
 }

@@ -75,16 +75,16 @@ export async function recheckTransfers(ctx: AppContext): Promise<void> {
   if (changed) ctx.kickOutbox();
 }
 
-export const TEMPERATURE_RECHECK_TASK: ScheduledTask = {
+export const TEMPERATURE_RECHECK_TASK: ScheduledTask = Object.freeze({
   name: "temperature-recheck",
   everyMs: 10 * 60_000,
   run: recheckTransfers,
-};
+});
 
-export const FORECAST_PRUNE_TASK: ScheduledTask = {
+export const FORECAST_PRUNE_TASK: ScheduledTask = Object.freeze({
   name: "forecast-cache-prune",
   everyMs: 60 * 60_000,
-  run: async (ctx) => {
+  run: async (ctx: AppContext) => {
     await pruneForecastCache(ctx.pool, Date.now());
   },
-};
+});
