@@ -101,4 +101,21 @@ export default tseslint.config(
       ],
     },
   },
+  {
+    // Assemble once (D15): a module keeps no state that an app could set or fill. Settings,
+    // adapters, gates and tasks are built in server/composition.ts and travel in the app context.
+    files: ["server/**/*.{ts,mjs}"],
+    ignores: ["server/**/*.test.ts", "server/adapters/weather-client.worker.mjs"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        {
+          selector:
+            "Program > VariableDeclaration[kind='let'], Program > ExportNamedDeclaration > VariableDeclaration[kind='let']",
+          message:
+            "No module-level mutable state in server/: build it in server/composition.ts and pass it in the app context (D15). A value computed once and the same for every app goes through computedOnce.",
+        },
+      ],
+    },
+  },
 );

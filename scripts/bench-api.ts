@@ -1,17 +1,22 @@
 /**
  * `npm run bench:api`: the real server process on its own database, loaded with autocannon
- * (50 connections, 10 s per route). Prints requests/s, p99, the ratio to the bare
- * `SELECT 1` route (the ceiling the API is measured against) and SQL statements per request.
+ * (50 connections). Each route is measured in alternating rounds with the bare `SELECT 1` route
+ * (A B A B …, 5 rounds of 3 s each by default) and the median of the per-round ratios is printed
+ * with the median requests/s and p99 of both, and SQL statements per request. Pairing each run
+ * with a bare run made just before it keeps the machine's slow moments off the ratio.
  */
 import autocannon from "autocannon";
 import { benchSignIn, startBenchServer } from "./lib/bench-server";
 import { seedBenchData } from "./lib/bench-data";
 import { announceRuntime } from "./lib/runtime";
+import { median, summariseRounds, type RoundsSummary, type RunFigures } from "./lib/alternating-rounds";
 
-const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 10);
+/** Rounds per route (each a bare run then a route run) and seconds per run. */
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 5);
+const ROUND_S = Number(process.env.BENCH_ROUND_S ?? 3);
+const CONNECTIONS = 50;
 
-type Route = { name: string; path: string; cookie?: boolean; target?: (r: Result, bare: Result) => string };
-type Result = { rps: number; p99Ms: number; errors: number; queries: string };
+type Route = { name: string; path: string; cookie?: boolean; target?: (r: RoundsSummary) => string };
 
 /** SQL statements per request, as the server counts them (the most seen in a few quiet requests). */
 async function queriesPerRequest(url: string, cookie: string | undefined): Promise<string> {
@@ -25,16 +30,25 @@ async function queriesPerRequest(url: string, cookie: string | undefined): Promi
   return String(most);
 }
 
-async function load(url: string, cookie?: string): Promise<Result> {
-  // Counted on a quiet server: under load, pooled connections pass between requests.
-  const queries = await queriesPerRequest(url, cookie);
+async function run(url: string, cookie: string | undefined, durationS: number): Promise<RunFigures> {
   const result = await autocannon({
     url,
-    connections: 50,
-    duration: DURATION_S,
+    connections: CONNECTIONS,
+    duration: durationS,
     headers: cookie ? { Cookie: cookie } : {},
   });
-  return { rps: result.requests.average, p99Ms: result.latency.p99, errors: result.non2xx + result.errors, queries };
+  return { rps: result.requests.average, p99Ms: result.latency.p99, errors: result.non2xx + result.errors };
+}
+
+/** A B A B …: a bare run, then the route, ROUNDS times; each route run is compared with the bare run before it. */
+async function alternate(bareUrl: string, url: string, cookie: string | undefined): Promise<RoundsSummary> {
+  const pairs: { baseline: RunFigures; route: RunFigures }[] = [];
+  for (let round = 0; round < ROUNDS; round++) {
+    const baseline = await run(bareUrl, undefined, ROUND_S);
+    const route = await run(url, cookie, ROUND_S);
+    pairs.push({ baseline, route });
+  }
+  return summariseRounds(pairs);
 }
 
 /** Taxa search answer time: one request at a time (no queueing), typed names, misspellings and synonyms. */
@@ -73,73 +87,99 @@ async function main() {
   announceRuntime("bench");
   let detailId = "";
   const server = await startBenchServer({
-    beforeStart: async (databaseUrl) => {
+    beforeStart: async (databaseUrl, baseUrl) => {
       process.stdout.write("[bench] seeding a 50-animal transfer and 100,000 list rows…\n");
-      ({ detailId } = await seedBenchData(databaseUrl));
+      ({ detailId } = await seedBenchData(databaseUrl, baseUrl));
     },
   });
   try {
     const cookie = await benchSignIn(server.baseUrl, "sender@demo.hatchway.test");
-    const pct = (a: number, b: number) => `${((a / b) * 100).toFixed(0)} %`;
+    const pct = (ratio: number) => `${(ratio * 100).toFixed(0)} %`;
+    const bare: Route = { name: "bare SELECT 1", path: "/api/__bench/select1" };
     const routes: Route[] = [
-      { name: "bare SELECT 1", path: "/api/__bench/select1" },
       { name: "GET /api/health", path: "/api/health" },
       {
         name: "GET /api/auth/me (signed in)",
         path: "/api/auth/me",
         cookie: true,
-        target: (r, b) => `≥ 50 % of bare: ${r.rps / b.rps >= 0.5 ? "met" : "MISSED"} (${pct(r.rps, b.rps)})`,
+        target: (r) => `≥ 50 % of bare: ${r.ratio >= 0.5 ? "met" : "MISSED"} (${pct(r.ratio)})`,
       },
       {
-        name: "GET /api/transfers/:id (50 animals, 10 custody)",
+        name: "GET /api/transfers/:id (50 animals, 11 custody)",
         path: `/api/transfers/${detailId}`,
         cookie: true,
-        target: (r, b) => `≥ 25 % of bare: ${r.rps / b.rps >= 0.25 ? "met" : "MISSED"} (${pct(r.rps, b.rps)})`,
+        target: (r) => `≥ 25 % of bare: ${r.ratio >= 0.25 ? "met" : "MISSED"} (${pct(r.ratio)})`,
       },
       {
         name: "GET /api/transfers (page 1 of 100,001)",
         path: "/api/transfers?limit=50",
         cookie: true,
-        target: (r, b) =>
-          `p99 ≤ 4 × bare p99: ${r.p99Ms <= 4 * b.p99Ms ? "met" : "MISSED"} (${(r.p99Ms / b.p99Ms).toFixed(1)} ×)`,
+        target: (r) => `p99 ≤ 4 × bare p99: ${r.p99Ratio <= 4 ? "met" : "MISSED"} (${r.p99Ratio.toFixed(1)} ×)`,
       },
     ];
     // Warm-up: JIT, pool connections, PostgreSQL caches.
-    for (const r of routes)
-      await autocannon({
-        url: server.baseUrl + r.path,
-        connections: 20,
-        duration: 2,
-        headers: r.cookie ? { Cookie: cookie } : {},
-      });
-    const results: Result[] = [];
-    for (const r of routes) results.push(await load(server.baseUrl + r.path, r.cookie ? cookie : undefined));
-    const bare = results[0]!;
+    for (const r of [bare, ...routes]) await run(server.baseUrl + r.path, r.cookie ? cookie : undefined, 2);
+    // Counted on a quiet server: under load, pooled connections pass between requests.
+    const queries = new Map<Route, string>();
+    for (const r of [bare, ...routes])
+      queries.set(r, await queriesPerRequest(server.baseUrl + r.path, r.cookie ? cookie : undefined));
+
+    const bareUrl = server.baseUrl + bare.path;
+    const results = new Map<Route, RoundsSummary>();
+    for (const r of routes) {
+      process.stdout.write(`[bench] ${r.name}: ${ROUNDS} rounds of bare ${ROUND_S} s, route ${ROUND_S} s …\n`);
+      results.set(r, await alternate(bareUrl, server.baseUrl + r.path, r.cookie ? cookie : undefined));
+    }
+
     console.log(
-      `\nautocannon, 50 connections, ${DURATION_S} s per route; server, PostgreSQL and load generator share this machine\n`,
+      `\nautocannon, ${CONNECTIONS} connections; each route in ${ROUNDS} alternating rounds with the bare route ` +
+        `(A B A B …, ${ROUND_S} s per run); medians over the rounds; server, PostgreSQL and load generator share this machine\n`,
     );
     console.log(
       "route".padEnd(50) +
         "req/s".padStart(8) +
         "p99 ms".padStart(8) +
+        "bare/s".padStart(8) +
+        "bare p99".padStart(9) +
         "ratio".padStart(7) +
+        "  (min–max)".padEnd(14) +
+        "p99 ×".padStart(7) +
         "SQL/req".padStart(9) +
         "errors".padStart(8) +
         "  target",
     );
-    routes.forEach((r, i) => {
-      const x = results[i]!;
+    const allBare = [...results.values()];
+    console.log(
+      bare.name.padEnd(50) +
+        Math.round(median(allBare.map((x) => x.baselineRps)))
+          .toString()
+          .padStart(8) +
+        median(allBare.map((x) => x.baselineP99Ms))
+          .toFixed(0)
+          .padStart(8) +
+        "".padStart(8 + 9) +
+        "100 %".padStart(7) +
+        "".padEnd(14) +
+        "1.0".padStart(7) +
+        queries.get(bare)!.padStart(9),
+    );
+    for (const r of routes) {
+      const x = results.get(r)!;
       console.log(
         r.name.padEnd(50) +
           x.rps.toFixed(0).padStart(8) +
           x.p99Ms.toFixed(0).padStart(8) +
-          pct(x.rps, bare.rps).padStart(7) +
-          x.queries.padStart(9) +
+          x.baselineRps.toFixed(0).padStart(8) +
+          x.baselineP99Ms.toFixed(0).padStart(9) +
+          pct(x.ratio).padStart(7) +
+          `  (${(x.ratioMin * 100).toFixed(0)}–${(x.ratioMax * 100).toFixed(0)} %)`.padEnd(14) +
+          x.p99Ratio.toFixed(1).padStart(7) +
+          queries.get(r)!.padStart(9) +
           String(x.errors).padStart(8) +
           "  " +
-          (r.target?.(x, bare) ?? ""),
+          (r.target?.(x) ?? ""),
       );
-    });
+    }
     const taxa = await taxaSearchTimes(server.baseUrl, cookie);
     console.log(
       `\nGET /api/taxa?q=… (${taxa.n} sequential searches, typos and synonyms included): median ${taxa.medianMs.toFixed(1)} ms, p95 ${taxa.p95Ms.toFixed(1)} ms` +

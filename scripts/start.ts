@@ -12,6 +12,8 @@ import { startAllFakes, type Fakes } from "../fakes/index";
 import { announceRuntime } from "./lib/runtime";
 
 const PORT = Number(process.env.PORT ?? 3000);
+/** Where the app is reached, and so where the demo's e-mails link to. */
+const PUBLIC_URL = `http://127.0.0.1:${PORT}`;
 const PG_PORT = Number(process.env.HATCHWAY_PG_PORT ?? 54328);
 /** The fakes listen on four ports from here (SMTP, its inbox, weather, S3). */
 const FAKES_PORT = Number(process.env.HATCHWAY_FAKES_PORT ?? 4100);
@@ -46,7 +48,7 @@ async function main() {
     cluster = await startCluster("dev", PG_PORT);
     await ensureDatabase(cluster, "hatchway");
     const databaseUrl = cluster.url("hatchway");
-    const { seeded } = await prepareDatabase(databaseUrl, { seed: true });
+    const { seeded } = await prepareDatabase(databaseUrl, { seed: true, publicUrl: PUBLIC_URL });
     step(seeded ? "database migrated and demo scenario seeded" : "database migrated (existing data kept)");
 
     step("building the client…");
@@ -70,7 +72,7 @@ async function main() {
       NODE_ENV: "development",
       HOST: "127.0.0.1",
       PORT: String(PORT),
-      PUBLIC_URL: `http://127.0.0.1:${PORT}`,
+      PUBLIC_URL,
       DATABASE_URL: databaseUrl,
       SESSION_SECRET: localSecret("session"),
       CLIENT_DIST: path.join(PROJECT_ROOT, "dist"),

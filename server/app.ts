@@ -2,7 +2,8 @@ import path from "node:path";
 import { existsSync } from "node:fs";
 import express, { type Express } from "express";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import type { AppContext } from "./context";
+import type { AppBase, AppContext } from "./context";
+import { composeApp, isComposed } from "./composition";
 import { correlationId, errorHandler, notFoundApi } from "./http/errors";
 import { csrfProtection, noStore, rejectNul, requireJsonBody, securityHeaders } from "./http/security";
 import { configurePassport, sessionMiddleware } from "./auth/session";
@@ -11,7 +12,6 @@ import { authRouter } from "./routes/auth/auth.router";
 import { usersRouter } from "./routes/users/users.router";
 import { organizationsRouter } from "./routes/organizations/organizations.router";
 import { caughtMailRouter } from "./routes/mail/mail.router";
-import { configureLinks } from "./mail/links";
 import { queryCounter } from "./http/query-count";
 import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
@@ -21,18 +21,23 @@ import { complianceRouter } from "./routes/compliance/compliance.router";
 import { temperatureRouter } from "./routes/temperature/temperature.router";
 import { isScanUpload, SCAN_UPLOAD_TYPES } from "./routes/documents/scan-upload";
 
-/** Builds the Express app (no listen): the API under /api and the built client for everything else. */
-export function createApp(ctx: AppContext): Express {
+/**
+ * Builds the Express app (no listen): the API under /api and the built client for everything else.
+ * Give it a context from `composeApp` (server/composition.ts), or the bare environment and database
+ * clients and it composes one; either way the routers only read what the context holds.
+ */
+export function createApp(input: AppContext | AppBase): Express {
+  const ctx = isComposed(input) ? input : composeApp(input);
   const app = express();
   app.disable("x-powered-by");
-  configureLinks(ctx.env.PUBLIC_URL);
+  app.locals.ctx = ctx;
   if (ctx.env.SECURE_COOKIES) app.set("trust proxy", 1);
 
   app.use(correlationId);
   app.use(securityHeaders());
 
   const api = express.Router();
-  if (ctx.env.BENCH_ROUTES) api.use(queryCounter());
+  if (ctx.env.BENCH_ROUTES) api.use(queryCounter(ctx));
   api.use(noStore);
   api.use("/health", healthRouter(ctx));
   if (ctx.env.BENCH_ROUTES) {

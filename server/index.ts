@@ -2,8 +2,7 @@ import pg from "pg";
 import { parseEnv } from "./env";
 import { initORM } from "./db/orm";
 import { createApp } from "./app";
-import { createMailer } from "./adapters/mailer";
-import { startOutboxWorker } from "./services/outbox";
+import { composeApp } from "./composition";
 import { startScheduler } from "./services/scheduler";
 
 /** Listens; the process stays up when the database or the mail server goes away and comes back. */
@@ -12,10 +11,10 @@ async function main() {
   const orm = await initORM(env.DATABASE_URL);
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5 });
   pool.on("error", (err) => console.error("[pg] idle client error", err.message));
-  const mailer = createMailer(env.SMTP_URL, env.MAIL_FROM);
-  const outbox = env.WORKERS ? startOutboxWorker(orm, mailer) : null;
-  const ctx = { env, orm, pool, kickOutbox: () => outbox?.kick() };
+  // The composition root builds everything once; this process then serves it and runs its workers.
+  const ctx = composeApp({ env, orm, pool });
   const app = createApp(ctx);
+  if (env.WORKERS) ctx.outbox.start();
   const scheduler = env.WORKERS ? startScheduler(ctx) : null;
   const server = app.listen(env.PORT, env.HOST, () => {
     console.log(`Hatchway is serving http://${env.HOST}:${env.PORT} (Node.js ${process.version})`);
@@ -28,8 +27,8 @@ async function main() {
     await Promise.race([closed, new Promise((r) => setTimeout(r, 5_000))]);
     server.closeAllConnections();
     scheduler?.stop();
-    await outbox?.stop();
-    mailer.close();
+    await ctx.outbox.stop();
+    ctx.adapters.mailer.close();
     await pool.end().catch(() => undefined);
     await orm.close().catch(() => undefined);
     process.exit(0);

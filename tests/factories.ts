@@ -19,6 +19,10 @@ import { transitionTransfer } from "../server/services/transfers/transition";
 import { assignLegs } from "../server/services/transfers/legs";
 import { recordHandoff } from "../server/services/transfers/handoff";
 import { checkInTransfer } from "../server/services/transfers/check-in";
+import type { AppContext } from "../server/context";
+import { createReadyGates } from "../server/composition";
+import { createLinks } from "../server/mail/links";
+import { TEST_PUBLIC_URL } from "./support/constants";
 
 let counter = 0;
 const next = () => `${Date.now().toString(36)}${(++counter).toString(36)}`;
@@ -160,6 +164,19 @@ export const FIXTURE_OVERRIDE = "Test fixture: the temperature check is not unde
 
 export type TransferCast = { transfer: Transfer; sender: User; receiver: User; couriers: User[] };
 
+/** What a fixture's steps use from an app: its gates and where its e-mails link to. */
+export type FixtureWiring = Pick<AppContext, "links" | "readyGates">;
+
+/**
+ * The wiring of a fixture built without naming an app: the product's gates in their order, with
+ * no weather service (so the temperature gate says "forecast unavailable" and the fixture
+ * overrides it with FIXTURE_OVERRIDE), and links to the test apps' public URL.
+ */
+export const FIXTURE_WIRING: FixtureWiring = Object.freeze({
+  links: createLinks(TEST_PUBLIC_URL),
+  readyGates: createReadyGates(null),
+});
+
 /**
  * A transfer between two fresh organisations, moved through the real services up to
  * `status`. Couriers are assigned once it is cleared (one leg unless `legs` says more).
@@ -174,8 +191,11 @@ export async function buildTransfer(
     couriers?: User[];
     animals?: AnimalSpec[];
     mode?: TransferInputParsed["mode"];
+    /** The app whose gates and links the steps use; FIXTURE_WIRING when not named. */
+    app?: FixtureWiring;
   } = {},
 ): Promise<TransferCast> {
+  const { links, readyGates: gates } = options.app ?? FIXTURE_WIRING;
   const sender = options.sender ?? (await buildUser(em, { role: "member" }));
   const receiver =
     options.receiver ??
@@ -208,6 +228,8 @@ export async function buildTransfer(
       actor: s,
       transferId: transfer.id,
       input: { to: "cancelled", reason: "Test cancellation" },
+      gates,
+      links,
     });
   }
   if (reach("awaiting_receiver"))
@@ -216,6 +238,8 @@ export async function buildTransfer(
       actor: s,
       transferId: transfer.id,
       input: { to: "awaiting_receiver" },
+      gates,
+      links,
     });
   if (reach("ready")) {
     // Tests run without a weather service: the temperature gate answers "forecast unavailable"
@@ -225,6 +249,8 @@ export async function buildTransfer(
       actor: r,
       transferId: transfer.id,
       input: { to: "ready", override: true, reason: FIXTURE_OVERRIDE },
+      gates,
+      links,
     });
     transfer = await assignLegs({
       em: em.fork(),
@@ -250,6 +276,7 @@ export async function buildTransfer(
       actor: await actorOf(em, couriers[0]!),
       transferId: transfer.id,
       input: handoff(0) as never,
+      links,
     });
   if (reach("delivered")) {
     for (let i = 1; i < couriers.length; i++)
@@ -258,12 +285,14 @@ export async function buildTransfer(
         actor: await actorOf(em, couriers[i]!),
         transferId: transfer.id,
         input: handoff(i) as never,
+        links,
       });
     transfer = await recordHandoff({
       em: em.fork(),
       actor: r,
       transferId: transfer.id,
       input: handoff(couriers.length) as never,
+      links,
     });
   }
   if (reach("checked_in")) {
@@ -284,9 +313,17 @@ export async function buildTransfer(
         signedName: "Receiver",
         acknowledged: true,
       } as never,
+      links,
     });
   }
   if (reach("closed"))
-    transfer = await transitionTransfer({ em: em.fork(), actor: r, transferId: transfer.id, input: { to: "closed" } });
+    transfer = await transitionTransfer({
+      em: em.fork(),
+      actor: r,
+      transferId: transfer.id,
+      input: { to: "closed" },
+      gates,
+      links,
+    });
   return { transfer, sender, receiver, couriers };
 }

@@ -1,6 +1,8 @@
 /**
- * Bench data: a transfer with 50 animals in 10 boxes and 10 custody entries, walked through
- * the real services, and 100,000 more transfers for the sender inserted in bulk.
+ * Bench data: a transfer with 50 animals in 10 boxes and 11 custody entries, walked through
+ * the real services, and 100,000 more transfers for the sender inserted in bulk. The detail
+ * transfer passes "ready to ship" through gatesForLoadedData, so its custody log says the
+ * compliance and temperature checks were not run; the bulk rows never reach a gate at all.
  */
 import { initORM } from "../../server/db/orm";
 import { UserSchema } from "../../server/db/entities/user.entity";
@@ -13,9 +15,17 @@ import { transitionTransfer } from "../../server/services/transfers/transition";
 import { assignLegs } from "../../server/services/transfers/legs";
 import { recordHandoff } from "../../server/services/transfers/handoff";
 import { ContainerSchema } from "../../server/db/entities/transfer.entity";
+import { gatesForLoadedData } from "../../server/composition";
+import { createLinks } from "../../server/mail/links";
 
-export async function seedBenchData(databaseUrl: string, bulkTransfers = 100_000): Promise<{ detailId: string }> {
+export async function seedBenchData(
+  databaseUrl: string,
+  publicUrl: string,
+  bulkTransfers = 100_000,
+): Promise<{ detailId: string }> {
   const orm = await initORM(databaseUrl, { poolMax: 4 });
+  const links = createLinks(publicUrl);
+  const gates = gatesForLoadedData("bench");
   try {
     const em = orm.em.fork();
     const sender = await em.findOneOrFail(
@@ -45,13 +55,15 @@ export async function seedBenchData(databaseUrl: string, bulkTransfers = 100_000
     const s = await actorOf(em, sender);
     const r = await actorOf(em, receiver);
     const t = await createTransfer({ em: em.fork(), actor: s, input });
-    await transitionTransfer({ em: em.fork(), actor: s, transferId: t.id, input: { to: "awaiting_receiver" } });
     await transitionTransfer({
       em: em.fork(),
-      actor: r,
+      actor: s,
       transferId: t.id,
-      input: { to: "ready", override: true, reason: "Benchmark data" },
+      input: { to: "awaiting_receiver" },
+      gates,
+      links,
     });
+    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "ready" }, gates, links });
     await assignLegs({
       em: em.fork(),
       actor: s,
@@ -81,10 +93,12 @@ export async function seedBenchData(databaseUrl: string, bulkTransfers = 100_000
           notes: null,
           acknowledged: true,
         } as never,
+        links,
       });
     }
     const entries = await em.fork().count(CustodyEntrySchema, { transfer: t.id });
-    if (entries !== 10) throw new Error(`bench detail transfer has ${entries} custody entries, expected 10`);
+    // Ten from the steps above and one saying the checks were not run.
+    if (entries !== 11) throw new Error(`bench detail transfer has ${entries} custody entries, expected 11`);
 
     const receiverOrg = await em.findOneOrFail(OrganizationSchema, { id: receiver.organization!.id });
     const conn = em.getConnection();

@@ -2,12 +2,17 @@ import { initORM, migrate } from "../../server/db/orm";
 import { UserSchema } from "../../server/db/entities/user.entity";
 import { DemoSeeder } from "../../server/db/seeders/DemoSeeder";
 import { seedReferenceData } from "../../server/db/seeders/reference.seeder";
+import { createLinks } from "../../server/mail/links";
 
 /**
  * Applies the committed migrations, loads the reference data (species catalogue and the
  * like) when missing, and seeds the demo scenario when asked and the database has no users.
+ * `publicUrl` is the address of the app that will serve it: the demo's e-mails link there.
  */
-export async function prepareDatabase(databaseUrl: string, options: { seed: boolean }): Promise<{ seeded: boolean }> {
+export async function prepareDatabase(
+  databaseUrl: string,
+  options: { seed: false } | { seed: true; publicUrl: string },
+): Promise<{ seeded: boolean }> {
   const orm = await initORM(databaseUrl, { poolMax: 2 });
   try {
     await migrate(orm);
@@ -15,7 +20,9 @@ export async function prepareDatabase(databaseUrl: string, options: { seed: bool
     if (!options.seed) return { seeded: false };
     const users = await orm.em.fork().count(UserSchema, {});
     if (users > 0) return { seeded: false };
-    await orm.getSeeder().seed(DemoSeeder);
+    const em = orm.em.fork();
+    await new DemoSeeder(createLinks(options.publicUrl)).run(em);
+    await em.flush();
     return { seeded: true };
   } finally {
     await orm.close();

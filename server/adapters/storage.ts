@@ -22,19 +22,8 @@ export type Storage = {
 
 type StorageEnv = Pick<Env, "S3_ENDPOINT" | "S3_REGION" | "S3_BUCKET" | "S3_ACCESS_KEY_ID" | "S3_SECRET_ACCESS_KEY">;
 
-const clients = new WeakMap<StorageEnv, Storage>();
-
-/** The storage of this app's environment; one S3 client per environment object. */
-export function storageFor(env: StorageEnv): Storage {
-  let storage = clients.get(env);
-  if (!storage) {
-    storage = createStorage(env);
-    clients.set(env, storage);
-  }
-  return storage;
-}
-
-function createStorage(env: StorageEnv): Storage {
+/** The storage adapter of one app, built by the composition root from its environment. */
+export function createStorage(env: StorageEnv): Storage {
   const client = new S3Client({
     endpoint: env.S3_ENDPOINT,
     region: env.S3_REGION,

@@ -54,6 +54,17 @@ type WorkerMessage =
 
 type Plan = { url: string; params: Record<string, string>; points: readonly LatLon[]; fromS: number; hours: number };
 
+/** The weather service of one app: its base URL is fixed when the composition root builds it. */
+export type WeatherService = {
+  readonly baseUrl: string;
+  hourlyForecastsF(request: Omit<ForecastRequest, "baseUrl">): Promise<ForecastResult>;
+};
+
+/** The weather adapter for a base URL (Open-Meteo, or the fake in fakes/open-meteo). */
+export function createWeatherService(baseUrl: string): WeatherService {
+  return { baseUrl, hourlyForecastsF: (request) => fetchHourlyForecastsF({ ...request, baseUrl }) };
+}
+
 /**
  * Hourly outside temperatures (°F) at each point, in the order asked, or why there are none.
  * Throws RangeError for a request that could never be right (no points, too many, bad hours).

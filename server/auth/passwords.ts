@@ -1,4 +1,5 @@
 import { hash, verify } from "@node-rs/argon2";
+import { computedOnce } from "../computed-once";
 
 /** argon2id with the OWASP-recommended floor: m = 19456 KiB, t = 2, p = 1. */
 // `Algorithm` is a const enum that does not exist at run time; 2 is its Argon2id member.
@@ -9,7 +10,8 @@ export function hashPassword(password: string): Promise<string> {
   return hash(password, OPTIONS);
 }
 
-let dummyHash: Promise<string> | null = null;
+/** Hashed on the first failed look-up, then reused: a constant, the same for every app. */
+const dummyHash = computedOnce(() => hashPassword("hatchway-timing-equaliser"));
 
 /**
  * Verifies a password. With no stored hash (unknown e-mail, invitation pending) it still
@@ -17,8 +19,7 @@ let dummyHash: Promise<string> | null = null;
  */
 export async function verifyPassword(storedHash: string | null | undefined, password: string): Promise<boolean> {
   if (!storedHash) {
-    dummyHash ??= hashPassword("hatchway-timing-equaliser");
-    await verify(await dummyHash, password).catch(() => false);
+    await verify(await dummyHash(), password).catch(() => false);
     return false;
   }
   try {

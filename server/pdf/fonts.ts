@@ -2,6 +2,7 @@ import { readFile } from "node:fs/promises";
 import { createRequire } from "node:module";
 import fontkit from "@pdf-lib/fontkit";
 import type { PDFDocument, PDFFont } from "pdf-lib";
+import { computedOnce } from "../computed-once";
 
 export interface PdfFonts {
   regular: PDFFont;
@@ -17,16 +18,12 @@ const FONT_FILES = {
   bold: "@expo-google-fonts/roboto-slab/700Bold/RobotoSlab_700Bold.ttf",
 } as const;
 
-let fontBytes: Promise<{ regular: Uint8Array; bold: Uint8Array }> | null = null;
-
 /** Reads the two Roboto Slab TrueType files once per process (woff2 would crash fontkit). */
-export function loadFontBytes(): Promise<{ regular: Uint8Array; bold: Uint8Array }> {
-  fontBytes ??= Promise.all([
-    readFile(require.resolve(FONT_FILES.regular)),
-    readFile(require.resolve(FONT_FILES.bold)),
-  ]).then(([regular, bold]) => ({ regular, bold }));
-  return fontBytes;
-}
+export const loadFontBytes: () => Promise<{ regular: Uint8Array; bold: Uint8Array }> = computedOnce(() =>
+  Promise.all([readFile(require.resolve(FONT_FILES.regular)), readFile(require.resolve(FONT_FILES.bold))]).then(
+    ([regular, bold]) => ({ regular, bold }),
+  ),
+);
 
 type Fontkit = Parameters<PDFDocument["registerFontkit"]>[0];
 type ParsedFont = ReturnType<Fontkit["create"]>;

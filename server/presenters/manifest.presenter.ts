@@ -2,10 +2,15 @@ import type { UsState } from "@shared/constants";
 import type { ManifestInput } from "../pdf/manifest-input";
 import type { TransferView } from "../services/transfers/read-view";
 import type { ManifestExtras } from "../services/transfers/manifest-extras";
-import { appLink } from "../mail/links";
+import type { AppLinks } from "../mail/links";
 
 /** The manifest and labels' input from a transfer's view: every box with its animals, in packing order. */
-export function presentManifestInput(v: TransferView, extras: Required<ManifestExtras>, now: Date): ManifestInput {
+export function presentManifestInput(
+  v: TransferView,
+  extras: Required<ManifestExtras>,
+  links: AppLinks,
+  now: Date,
+): ManifestInput {
   const t = v.t;
   const originTz = t.origin_time_zone ?? "America/New_York";
   const destinationTz = t.destination_time_zone ?? originTz;
@@ -83,7 +88,7 @@ export function presentManifestInput(v: TransferView, extras: Required<ManifestE
           phone: l.org_phone!,
         })),
     ],
-    handoffUrl: appLink(`/legs/${t.id}`),
+    handoffUrl: links.to(`/legs/${t.id}`),
     generatedAt: now.toISOString(),
     generatedTz: originTz,
   };

@@ -4,6 +4,7 @@ import type {
   ContainerDto,
   HandoffDto,
   LegDto,
+  LoadedWithoutChecksDto,
   OrgBriefDto,
   PersonDto,
   PlaceDto,
@@ -217,8 +218,20 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     confirmedAt: t.confirmed_at ? iso(t.confirmed_at) : null,
     cancelledReason: t.cancelled_reason,
     reconfirmationReason: t.reconfirmation_reason,
+    loadedWithoutChecks: presentChecksSkipped(v.checksSkipped),
     abilities,
     createdAt: iso(t.created_at),
     updatedAt: iso(t.updated_at),
+  };
+}
+
+/** The skipped-checks custody entry as the API shows it; anything malformed reads as "not checked" all the same. */
+function presentChecksSkipped(entry: TransferView["checksSkipped"]): LoadedWithoutChecksDto | null {
+  if (!entry) return null;
+  const { loadedAs, checksNotRun } = entry.payload;
+  return {
+    loadedAs: loadedAs === "bench" ? "bench" : "demo",
+    checksNotRun: Array.isArray(checksNotRun) ? checksNotRun.map(String) : [],
+    at: iso(entry.at),
   };
 }

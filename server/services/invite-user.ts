@@ -9,6 +9,7 @@ import { PasswordTokenSchema } from "../db/entities/password-token.entity";
 import { conflict, badRequest } from "../http/errors";
 import { enqueueMail } from "./outbox";
 import { invitationMail } from "../mail/templates";
+import type { AppLinks } from "../mail/links";
 
 const INVITATION_HOURS = 72;
 
@@ -17,12 +18,12 @@ export async function inviteUser({
   em,
   actor,
   input,
-  publicUrl,
+  links,
 }: {
   em: EntityManager;
   actor: Actor;
   input: UserInviteInput;
-  publicUrl: string;
+  links: AppLinks;
 }) {
   const key = emailKey(input.email);
   if (await em.count(UserSchema, { emailKey: key }))
@@ -54,7 +55,7 @@ export async function inviteUser({
       to: input.email,
       name: input.displayName,
       invitedBy: actor.displayName,
-      link: `${publicUrl}/welcome?token=${token}`,
+      link: links.to(`/welcome?token=${token}`),
       hours: INVITATION_HOURS,
     }),
   );

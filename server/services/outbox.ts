@@ -79,15 +79,25 @@ export async function deliverDueMail(orm: Orm, mailer: Mailer, batch = 20): Prom
   return { sent, failed };
 }
 
+/** The outbox worker of one app: built by the composition root, started only where WORKERS is on. */
+export type OutboxWorker = {
+  /** Begins delivering every few seconds. */
+  start(): void;
+  /** Delivers now (after a request queued mail); does nothing until the worker is started. */
+  kick(): void;
+  /** Stops the timer and waits for a round in flight. */
+  stop(): Promise<void>;
+};
+
 /** Runs `deliverDueMail` every few seconds and when kicked; never throws out of the loop. */
-export function startOutboxWorker(orm: Orm, mailer: Mailer, intervalMs = 2_000) {
+export function createOutboxWorker(orm: Orm, mailer: Mailer, intervalMs = 2_000): OutboxWorker {
   let timer: NodeJS.Timeout | null = null;
   let running = false;
   let stopped = false;
   let again = false;
 
   const tick = async () => {
-    if (stopped) return;
+    if (stopped || !timer) return;
     if (running) {
       again = true;
       return;
@@ -104,9 +114,12 @@ export function startOutboxWorker(orm: Orm, mailer: Mailer, intervalMs = 2_000) 
       running = false;
     }
   };
-  timer = setInterval(tick, intervalMs);
-  timer.unref();
   return {
+    start() {
+      if (timer || stopped) return;
+      timer = setInterval(tick, intervalMs);
+      timer.unref();
+    },
     kick: () => void tick(),
     async stop() {
       stopped = true;

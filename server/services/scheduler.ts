@@ -1,21 +1,17 @@
 import type { AppContext } from "../context";
 
-/** Work that runs on a timer in every server process, but on one of them at a time. */
+/**
+ * Work that runs on a timer in every server process, but on one of them at a time. The
+ * composition root lists an app's tasks in `ctx.scheduledTasks`; nothing registers itself.
+ */
 export type ScheduledTask = { name: string; everyMs: number; run: (ctx: AppContext) => Promise<void> };
-
-const tasks = new Map<string, ScheduledTask>();
-
-/** Feature modules register their periodic work here (re-checks, expiry reminders). */
-export function registerTask(task: ScheduledTask): void {
-  tasks.set(task.name, task);
-}
 
 /**
  * Runs a task once, under a PostgreSQL advisory lock named after it, so that several
  * servers never run the same task at the same time. Returns false when another holds it.
  */
 export async function runTask(ctx: AppContext, name: string): Promise<boolean> {
-  const task = tasks.get(name);
+  const task = ctx.scheduledTasks.find((candidate) => candidate.name === name);
   if (!task) throw new Error(`no scheduled task named ${name}`);
   const client = await ctx.pool.connect();
   try {
@@ -34,9 +30,9 @@ export async function runTask(ctx: AppContext, name: string): Promise<boolean> {
   }
 }
 
-/** Starts every registered task on its interval; a failing run is logged and tried next time. */
+/** Starts each of the app's tasks on its interval; a failing run is logged and tried next time. */
 export function startScheduler(ctx: AppContext) {
-  const timers = [...tasks.values()].map((task) => {
+  const timers = ctx.scheduledTasks.map((task) => {
     let running = false;
     const timer = setInterval(async () => {
       if (running) return;

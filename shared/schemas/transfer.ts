@@ -419,6 +419,15 @@ export type TransferAbilitiesDto = {
   readPrivateNotes: boolean;
 };
 
+/** Demo or benchmark data written past the ready-to-ship gates: what was not checked, and when. */
+export type LoadedWithoutChecksDto = {
+  loadedAs: "demo" | "bench";
+  /** The checks that did not run, by name: "compliance", "temperature". */
+  checksNotRun: string[];
+  /** When the transfer was cleared without them (ISO 8601). */
+  at: string;
+};
+
 export type TransferDto = {
   id: string;
   number: string;
@@ -451,6 +460,11 @@ export type TransferDto = {
   cancelledReason: string | null;
   /** Set when an edit after confirmation sent the transfer back to the receiver. */
   reconfirmationReason: string | null;
+  /**
+   * Set when the transfer was loaded as demo or benchmark data and cleared to ship without the
+   * compliance and temperature checks (the custody log holds the same entry); null otherwise.
+   */
+  loadedWithoutChecks: LoadedWithoutChecksDto | null;
   abilities: TransferAbilitiesDto;
   createdAt: string;
   updatedAt: string;

@@ -6,7 +6,9 @@ import { parseEnv, type Env } from "../../server/env";
 import { initORM, type Orm } from "../../server/db/orm";
 import { createApp } from "../../server/app";
 import type { AppContext } from "../../server/context";
+import { composeApp, type CompositionOptions } from "../../server/composition";
 import { DEMO_PASSWORD } from "../factories";
+import { TEST_PUBLIC_URL } from "./constants";
 
 export type TestApp = { app: Express; ctx: AppContext; orm: Orm; env: Env; close(): Promise<void> };
 
@@ -16,7 +18,7 @@ export function testEnv(overrides: Record<string, string> = {}): Env {
   return parseEnv({
     NODE_ENV: "test",
     DATABASE_URL: url,
-    PUBLIC_URL: "http://127.0.0.1:3999",
+    PUBLIC_URL: TEST_PUBLIC_URL,
     SESSION_SECRET: "test-secret-test-secret-test-secret-0123456789",
     SMTP_URL: "smtp://127.0.0.1:9",
     S3_ENDPOINT: "http://127.0.0.1:9",
@@ -29,11 +31,18 @@ export function testEnv(overrides: Record<string, string> = {}): Env {
   });
 }
 
-export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {
+/**
+ * The real app, assembled by the real composition root. `options` replaces adapters or gates
+ * for one test; each call builds its own context, so apps in one file share nothing.
+ */
+export async function createTestApp(
+  overrides: Record<string, string> = {},
+  options: CompositionOptions = {},
+): Promise<TestApp> {
   const env = testEnv(overrides);
   const orm = await initORM(env.DATABASE_URL, { poolMax: 5 });
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 3 });
-  const ctx: AppContext = { env, orm, pool, kickOutbox: () => undefined };
+  const ctx = composeApp({ env, orm, pool }, options);
   const app = createApp(ctx);
   return {
     app,
@@ -41,6 +50,8 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
     orm,
     env,
     async close() {
+      await ctx.outbox.stop();
+      ctx.adapters.mailer.close();
       await pool.end();
       await orm.close();
     },

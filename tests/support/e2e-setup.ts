@@ -36,7 +36,9 @@ export default async function setup(project: TestProject) {
   await dropDatabase(cluster, db);
   await ensureDatabase(cluster, db);
   const databaseUrl = cluster.url(db);
-  await prepareDatabase(databaseUrl, { seed: true });
+  const port = await freePort();
+  const baseUrl = `http://127.0.0.1:${port}`;
+  await prepareDatabase(databaseUrl, { seed: true, publicUrl: baseUrl });
 
   const dist = path.join(OUTPUT_DIR, "dist-e2e");
   const build = spawnSync(
@@ -48,8 +50,6 @@ export default async function setup(project: TestProject) {
 
   mkdirSync(path.join(OUTPUT_DIR, "e2e-data"), { recursive: true });
   const fakes = await startAllFakes({ dataDir: path.join(OUTPUT_DIR, "e2e-data") });
-  const port = await freePort();
-  const baseUrl = `http://127.0.0.1:${port}`;
   const server: ChildProcess = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
     cwd: PROJECT_ROOT,
     env: {

@@ -3,13 +3,23 @@ import { Seeder } from "@mikro-orm/seeder";
 import { buildOrganization, buildUser } from "../../../tests/factories";
 import { seedDemoTransfers } from "./demo-transfers";
 import { seedDemoDocuments } from "./demo-documents";
+import type { AppLinks } from "../../mail/links";
 
 /**
  * The demo scenario. Every organisation, person, address, phone number and permit number
- * here is invented for the demo; the species are real taxa.
+ * here is invented for the demo; the species are real taxa. `links` is where the demo's e-mails
+ * point (the PUBLIC_URL of the app that will serve it). Its transfers pass "ready to ship" through
+ * gatesForLoadedData (server/composition.ts), which records in each custody log that the compliance
+ * and temperature checks were not run.
  */
 export class DemoSeeder extends Seeder {
+  constructor(private readonly links: AppLinks) {
+    super();
+  }
+
   async run(em: EntityManager): Promise<void> {
+    // MikroORM's CLI builds seeders without arguments; the demo needs to know its public URL.
+    if (!this.links) throw new Error("The demo seeder needs the public URL: run it through prepareDatabase.");
     const breeder = await buildOrganization(em, {
       name: "Cinder Ridge Reptile Breeders",
       kind: "breeder",
@@ -89,6 +99,6 @@ export class DemoSeeder extends Seeder {
       organization: couriers,
     });
     await seedDemoDocuments(em, { breeder, centre, rescue });
-    await seedDemoTransfers(em, { sender, receiver, other, courier, relay });
+    await seedDemoTransfers(em, { sender, receiver, other, courier, relay }, this.links);
   }
 }

@@ -14,6 +14,9 @@ import { transitionTransfer } from "../../services/transfers/transition";
 import { assignLegs } from "../../services/transfers/legs";
 import { recordHandoff } from "../../services/transfers/handoff";
 import { checkInTransfer } from "../../services/transfers/check-in";
+import type { ReadyGate } from "../../services/transfers/transition";
+import type { AppLinks } from "../../mail/links";
+import { gatesForLoadedData } from "../../composition";
 
 type Cast = { sender: User; receiver: User; couriers: User[] };
 type Box = {
@@ -56,7 +59,10 @@ async function actor(em: EntityManager, user: User): Promise<Actor> {
   return actorFromUser(user);
 }
 
-async function runPlan(em: EntityManager, plan: Plan) {
+/** What the demo's steps use in place of an app: where e-mails link to, and the gates it skips (and says so). */
+type Wiring = { links: AppLinks; gates: readonly ReadyGate[] };
+
+async function runPlan(em: EntityManager, { links, gates }: Wiring, plan: Plan) {
   const s = await actor(em, plan.cast.sender);
   const r = await actor(em, plan.cast.receiver);
   const taxa = new Map(
@@ -120,19 +126,36 @@ async function runPlan(em: EntityManager, plan: Plan) {
   const order = ["draft", "awaiting_receiver", "ready", "in_transit", "delivered", "checked_in", "closed"];
   const reach = (st: string) => order.indexOf(plan.until) >= order.indexOf(st);
   if (plan.until === "cancelled") {
-    await transitionTransfer({ em: em.fork(), actor: s, transferId: t.id, input: { to: "awaiting_receiver" } });
+    await transitionTransfer({
+      em: em.fork(),
+      actor: s,
+      transferId: t.id,
+      input: { to: "awaiting_receiver" },
+      gates,
+      links,
+    });
     await transitionTransfer({
       em: em.fork(),
       actor: s,
       transferId: t.id,
       input: { to: "cancelled", reason: "The receiving pond is being rebuilt; we will send in spring instead." },
+      gates,
+      links,
     });
     return t;
   }
   if (reach("awaiting_receiver"))
-    await transitionTransfer({ em: em.fork(), actor: s, transferId: t.id, input: { to: "awaiting_receiver" } });
+    await transitionTransfer({
+      em: em.fork(),
+      actor: s,
+      transferId: t.id,
+      input: { to: "awaiting_receiver" },
+      gates,
+      links,
+    });
   if (reach("ready")) {
-    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "ready" } });
+    // Past the gates, and the custody log says so (gatesForLoadedData): the demo is not a record of checks.
+    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "ready" }, gates, links });
     await assignLegs({
       em: em.fork(),
       actor: s,
@@ -182,6 +205,7 @@ async function runPlan(em: EntityManager, plan: Plan) {
         notes: null,
         acknowledged: true,
       },
+      links,
     });
   }
   if (reach("checked_in")) {
@@ -211,9 +235,11 @@ async function runPlan(em: EntityManager, plan: Plan) {
         signedName: plan.cast.receiver.displayName,
         acknowledged: true,
       },
+      links,
     });
   }
-  if (reach("closed")) await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "closed" } });
+  if (reach("closed"))
+    await transitionTransfer({ em: em.fork(), actor: r, transferId: t.id, input: { to: "closed" }, gates, links });
   return t;
 }
 
@@ -224,12 +250,14 @@ const COLUMBUS: Address = { street: "7 Pinfold Court", city: "Columbus", state: 
 export async function seedDemoTransfers(
   em: EntityManager,
   people: { sender: User; receiver: User; other: User; courier: User; relay: User },
+  links: AppLinks,
 ) {
+  const wiring: Wiring = { links, gates: gatesForLoadedData("demo") };
   const main: Cast = { sender: people.sender, receiver: people.receiver, couriers: [people.courier] };
   const relayed: Cast = { ...main, couriers: [people.courier, people.relay] };
   const fromRescue: Cast = { sender: people.other, receiver: people.receiver, couriers: [people.courier] };
 
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: main,
     from: KNOXVILLE,
     to: EUGENE,
@@ -254,7 +282,7 @@ export async function seedDemoTransfers(
     ],
     handling: "Hatchlings in individual deli cups with damp paper towel. Keep the box level and out of direct sun.",
   });
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: main,
     from: KNOXVILLE,
     to: EUGENE,
@@ -288,7 +316,7 @@ export async function seedDemoTransfers(
     ],
     handling: "Turtle in a ventilated tub with damp moss. Salamanders must stay cool: under 70 °F.",
   });
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: main,
     from: KNOXVILLE,
     to: EUGENE,
@@ -300,7 +328,7 @@ export async function seedDemoTransfers(
     animals: [{ taxon: "Pogona vitticeps", count: 4, sex: "unknown", box: "A", lengthMm: 140, weightG: 85 }],
     handling: "Juveniles in separate ventilated cups. Heat pack taped to the lid, never touching a cup.",
   });
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: relayed,
     from: KNOXVILLE,
     to: EUGENE,
@@ -326,7 +354,7 @@ export async function seedDemoTransfers(
     ],
     handling: "Frogs need 68–78 °F. Do not leave the van parked in the sun; keep boxes off the floor over the exhaust.",
   });
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: main,
     from: KNOXVILLE,
     to: EUGENE,
@@ -355,7 +383,7 @@ export async function seedDemoTransfers(
       "Ambystoma mexicanum": { well: 3, missing: 1, note: "Only three bags in the insert." },
     },
   });
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: fromRescue,
     from: COLUMBUS,
     to: EUGENE,
@@ -378,7 +406,7 @@ export async function seedDemoTransfers(
     ],
     handling: "Shell repair is stable; pad the tub with towels.",
   });
-  await runPlan(em, {
+  await runPlan(em, wiring, {
     cast: fromRescue,
     from: COLUMBUS,
     to: EUGENE,

@@ -5,7 +5,6 @@ import { HttpError } from "../../http/errors";
 import { requireUser } from "../../http/guards";
 import { parse } from "../../http/validate";
 import { evaluateWhatIf } from "../../services/compliance/evaluation";
-import { registerComplianceHooks } from "../../services/compliance/hooks";
 import { documentsRouter } from "../documents/documents.router";
 import { searchTaxa } from "../taxa/taxa.router";
 import { rulesRouter } from "./rules.router";
@@ -16,10 +15,9 @@ const SUGGESTIONS_MAX = 5;
 /**
  * Everything compliance under /api: the what-if and the rule library (/compliance), permits and
  * certificates with their scans (/documents), and a transfer's verdict, override and documents
- * (/transfers/:id/…). Building it also registers the "ready to ship" gate and the expiry task.
+ * (/transfers/:id/…). The gate and the expiry task are the composition root's (server/composition.ts).
  */
 export function complianceRouter(ctx: AppContext): Router {
-  registerComplianceHooks();
   const router = Router();
   router.use("/compliance", whatIfRouter(ctx));
   router.use("/documents", documentsRouter(ctx));

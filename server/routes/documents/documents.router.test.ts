@@ -7,7 +7,7 @@ import { ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
 import { startS3Fake, type S3Fake } from "../../../fakes/s3/s3-fake";
 import { createTestApp, signIn, type Client, type TestApp } from "../../../tests/support/app";
 import { actorOf, buildOrganization, buildTransfer, buildUser, type TransferCast } from "../../../tests/factories";
-import { storageFor, type Storage } from "../../adapters/storage";
+import type { Storage } from "../../adapters/storage";
 import { uploadScan } from "../../services/compliance/documents";
 import { assignLegs } from "../../services/transfers/legs";
 
@@ -212,7 +212,7 @@ describe("scans in S3", () => {
     const actor = await actorOf(em(), user);
     const doc = await (await signIn(t.app, user.email)).post("/api/documents", permitBody());
     const calls: string[] = [];
-    const real = storageFor(t.env);
+    const real = t.ctx.adapters.storage;
     const recording: Storage = {
       putObject: async (key, body, type) => (calls.push(`put ${key}`), real.putObject(key, body, type)),
       getObjectStream: (key) => real.getObjectStream(key),

@@ -2,7 +2,6 @@ import { pipeline } from "node:stream/promises";
 import { Router, type Request } from "express";
 import { idSchema } from "@shared/schemas/common";
 import { documentInputSchema, documentListQuerySchema } from "@shared/schemas/compliance";
-import { storageFor } from "../../adapters/storage";
 import type { AppContext } from "../../context";
 import { DocumentScanSchema, PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { forbidden, notFound } from "../../http/errors";
@@ -72,7 +71,7 @@ export function documentsRouter(ctx: AppContext): Router {
     const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
     const scan = await uploadScan({
       em: req.em,
-      storage: storageFor(ctx.env),
+      storage: ctx.adapters.storage,
       actor: currentUser(req),
       documentId: idParam(req),
       body,
@@ -88,7 +87,7 @@ export function documentsRouter(ctx: AppContext): Router {
       throw forbidden("Couriers see the document list for the manifest, not the scans.");
     const scan = await req.em.findOne(DocumentScanSchema, { id: idParam(req, "scanId"), document: doc.id });
     if (!scan) throw notFound("That scan");
-    const object = await storageFor(ctx.env).getObjectStream(scan.storageKey);
+    const object = await ctx.adapters.storage.getObjectStream(scan.storageKey);
     res.attachment(scan.originalName);
     res.set({
       "Content-Type": scan.contentType,

@@ -10,31 +10,12 @@ import { currentUser, requirePolicy, requireUser } from "../../http/guards";
 import { parse } from "../../http/validate";
 import { canEditTemperatureProfiles, canPlanTrips, canSwitchWeatherScenario } from "../../policies/temperature.policy";
 import { presentProfile, presentTransferTemperature } from "../../presenters/temperature.presenter";
-import { registerTask } from "../../services/scheduler";
 import { latestAlert, recentChecks } from "../../services/temperature/checks";
-import type { WeatherSource } from "../../services/temperature/forecasts";
-import { configureTemperatureGate, temperatureGate } from "../../services/temperature/gate";
 import { loadProfileRows, loadProfiles, saveProfile } from "../../services/temperature/profiles";
-import { FORECAST_PRUNE_TASK, TEMPERATURE_RECHECK_TASK } from "../../services/temperature/recheck";
 import { assessTransferTemperature } from "../../services/temperature/transfer-temperature";
 import { assessWhatIf, findTaxonByName } from "../../services/temperature/what-if";
 import { loadTransferForActor } from "../../services/transfers/load";
-import { registerReadyGate } from "../../services/transfers/transition";
-import { registerManifestExtras } from "../../services/transfers/manifest-extras";
-import { manifestTemperature } from "../../services/temperature/manifest-temperature";
 import { searchTaxa } from "../taxa/taxa.router";
-
-let hooksRegistered = false;
-
-/** The ready-to-ship gate and the periodic work, once per process, in the order the app mounts its routers. */
-function registerTemperatureHooks(): void {
-  if (hooksRegistered) return;
-  hooksRegistered = true;
-  registerReadyGate(temperatureGate);
-  registerManifestExtras(manifestTemperature);
-  registerTask(TEMPERATURE_RECHECK_TASK);
-  registerTask(FORECAST_PRUNE_TASK);
-}
 
 const groupParam = z.enum(PROFILE_GROUPS, { message: "Name a temperature profile group" });
 const scenarioSchema = z.strictObject({
@@ -64,12 +45,10 @@ function weatherFakeUrl(ctx: AppContext): string {
 /**
  * Temperature safety: a transfer's verdict, the what-if, the profiles admins keep, and (demo
  * only) the weather fake's scenario. Mounted at the API root; every route names its full path.
- * Building it also wires the ready-to-ship gate and the re-check before departure.
+ * The ready-to-ship gate and the re-check before departure are the composition root's.
  */
 export function temperatureRouter(ctx: AppContext): Router {
-  const source: WeatherSource = { weatherUrl: ctx.env.WEATHER_URL, db: ctx.pool };
-  configureTemperatureGate(source);
-  registerTemperatureHooks();
+  const source = ctx.forecastSource;
   const router = Router();
 
   router.get("/transfers/:id/temperature", requireUser, async (req: Request, res) => {

@@ -76,7 +76,7 @@ export function transfersRouter(): Router {
     if (!transferAbilities(actor, role, facts).edit)
       throw forbidden("Only the sender can edit this transfer, and only before the animals leave.");
     const input = parse(transferPatchSchema, req.body);
-    await updateTransfer({ em: req.em.fork(), actor, transferId: id, input });
+    await updateTransfer({ em: req.em.fork(), actor, transferId: id, input, links: req.ctx.links });
     req.ctx.kickOutbox();
     res.json({ transfer: await presentForActor(req, id) });
   });
@@ -89,6 +89,8 @@ export function transfersRouter(): Router {
       actor: currentUser(req),
       transferId: id,
       input: { to: input.to, reason: input.reason ?? null, override: input.override },
+      gates: req.ctx.readyGates,
+      links: req.ctx.links,
     });
     req.ctx.kickOutbox();
     res.json({ transfer: await presentForActor(req, id) });
@@ -107,7 +109,13 @@ export function transfersRouter(): Router {
     await loadTransferForActor(req.em.fork(), id, currentUser(req));
     const input = parse(handoffInputSchema, req.body);
     await idempotent(req, res, `handoff:${id}`, async () => {
-      await recordHandoff({ em: req.em.fork(), actor: currentUser(req), transferId: id, input });
+      await recordHandoff({
+        em: req.em.fork(),
+        actor: currentUser(req),
+        transferId: id,
+        input,
+        links: req.ctx.links,
+      });
       req.ctx.kickOutbox();
       return { status: 201, body: { transfer: await presentForActor(req, id) } };
     });
@@ -118,7 +126,13 @@ export function transfersRouter(): Router {
     await loadTransferForActor(req.em.fork(), id, currentUser(req));
     const input = parse(checkInInputSchema, req.body);
     await idempotent(req, res, `check-in:${id}`, async () => {
-      await checkInTransfer({ em: req.em.fork(), actor: currentUser(req), transferId: id, input });
+      await checkInTransfer({
+        em: req.em.fork(),
+        actor: currentUser(req),
+        transferId: id,
+        input,
+        links: req.ctx.links,
+      });
       req.ctx.kickOutbox();
       return { status: 201, body: { transfer: await presentForActor(req, id) } };
     });
@@ -134,7 +148,9 @@ export function transfersRouter(): Router {
       const actor = currentUser(req);
       const view = await readTransferView(req.ctx.pool, id);
       if (!view || !viewerRoleFor(actor, factsOfView(view))) throw notFound("That transfer");
-      const bytes = await render(presentManifestInput(view, await manifestExtras(req.ctx, id), new Date()));
+      const bytes = await render(
+        presentManifestInput(view, await manifestExtras(req.ctx, id), req.ctx.links, new Date()),
+      );
       const name = `${view.t.number}-${what}.pdf`;
       res.setHeader("Content-Type", "application/pdf");
       res.setHeader(

@@ -24,7 +24,7 @@ export function usersRouter(ctx: AppContext): Router {
 
   router.post("/", async (req, res) => {
     const input = parse(userInviteSchema, req.body);
-    const user = await inviteUser({ em: req.em, actor: currentUser(req), input, publicUrl: ctx.env.PUBLIC_URL });
+    const user = await inviteUser({ em: req.em, actor: currentUser(req), input, links: ctx.links });
     ctx.kickOutbox();
     await req.em.populate(user, ["organization"]);
     res.status(201).json({ user: presentUserForAdmin(user, true) });

@@ -6,7 +6,6 @@ import type { AppContext } from "../../context";
 import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
-import { appLink } from "../../mail/links";
 import { documentExpiryMail } from "../../mail/templates";
 import { enqueueMail } from "../outbox";
 import type { ScheduledTask } from "../scheduler";
@@ -48,7 +47,7 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
             number: doc.number,
             validTo: doc.validTo as string,
             daysLeft: daysLeft ?? 0,
-            link: appLink("/permits"),
+            link: ctx.links.to("/permits"),
           }),
         );
       }
@@ -63,8 +62,8 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
 
 export const EXPIRY_REMINDER_TASK = "compliance.document-expiry-reminders";
 
-export const expiryReminderTask: ScheduledTask = {
+export const expiryReminderTask: ScheduledTask = Object.freeze({
   name: EXPIRY_REMINDER_TASK,
   everyMs: 60 * 60 * 1000,
-  run: (ctx) => sendExpiryReminders(ctx).then(() => undefined),
-};
+  run: (ctx: AppContext) => sendExpiryReminders(ctx).then(() => undefined),
+});

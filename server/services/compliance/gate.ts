@@ -50,10 +50,13 @@ function blockedMessage(result: EvaluateResponse): string {
  * transfer with the documents on file and records the evaluation. A blocked or documents-needed
  * verdict stops the step unless an admin overrode this very version of the transfer.
  */
-export const complianceGate: ReadyGate = async ({ em, transfer }) => {
-  const { result } = await evaluateTransfer(em, transfer);
-  if (result.verdict !== "clear" && !(await currentOverride(em, transfer))) {
-    throw conflict(blockedMessage(result), { compliance: result });
-  }
-  recordEvaluation(em, transfer, result);
-};
+export const complianceGate: ReadyGate = Object.freeze({
+  name: "compliance",
+  async check({ em, transfer }) {
+    const { result } = await evaluateTransfer(em, transfer);
+    if (result.verdict !== "clear" && !(await currentOverride(em, transfer))) {
+      throw conflict(blockedMessage(result), { compliance: result });
+    }
+    recordEvaluation(em, transfer, result);
+  },
+});

@@ -9,12 +9,12 @@ import type { LatLon } from "@shared/temperature/geo";
 import { FORECAST_HORIZON_DAYS, FORECAST_POINTS_MAX } from "@shared/temperature/limits";
 import type { TransitTimeline } from "@shared/temperature/timeline";
 import { MS_PER_DAY, MS_PER_HOUR } from "@shared/temperature/zoned-time";
-import { fetchHourlyForecastsF, type WeatherUnavailableReason } from "../../adapters/weather";
+import type { WeatherService, WeatherUnavailableReason } from "../../adapters/weather";
 
 export type Queryable = Pick<pg.Pool, "query">;
 
-/** Where forecasts come from: the weather service's base URL and the database holding the cache. */
-export type WeatherSource = { weatherUrl: string; db: Queryable };
+/** Where forecasts come from: the weather adapter and the database holding the cache. */
+export type WeatherSource = { service: WeatherService; db: Queryable };
 
 /** A cached hour counts as current for this long after it was fetched. */
 export const FORECAST_FRESH_MS = 3 * MS_PER_HOUR;
@@ -67,8 +67,7 @@ export async function forecastIndexFor(
   const missing = keys.filter((k) => (series.get(keyText(k))?.size ?? 0) < hoursWanted);
   for (let i = 0; i < missing.length; i += FORECAST_POINTS_MAX) {
     const chunk = missing.slice(i, i + FORECAST_POINTS_MAX);
-    const result = await fetchHourlyForecastsF({
-      baseUrl: source.weatherUrl,
+    const result = await source.service.hourlyForecastsF({
       points: chunk.map(positionOf),
       fromHour: new Date(fromMs).toISOString(),
       toHour: new Date(toMs).toISOString(),

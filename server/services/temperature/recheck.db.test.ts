@@ -4,7 +4,6 @@ import { createTestApp, type TestApp } from "../../../tests/support/app";
 import { actorOf, buildTransfer, type TransferCast } from "../../../tests/factories";
 import { startOpenMeteoFake, type OpenMeteoFake } from "../../../fakes/open-meteo/server";
 import { startSmtpFake, type SmtpFake } from "../../../fakes/smtp/smtp-fake";
-import { createMailer } from "../../adapters/mailer";
 import { deliverDueMail } from "../outbox";
 import { runTask } from "../scheduler";
 import { transitionTransfer } from "../transfers/transition";
@@ -35,6 +34,8 @@ beforeAll(async () => {
     actor: await actorOf(em(), cast.receiver),
     transferId: cast.transfer.id,
     input: { to: "ready" },
+    gates: t.ctx.readyGates,
+    links: t.ctx.links,
   });
   await t.ctx.pool.query("UPDATE transfer SET planned_departure_at = $1 WHERE id = ANY($2::uuid[])", [
     DEPARTURE,
@@ -100,15 +101,13 @@ describe("the re-check 24 h and 4 h before departure", () => {
 
     const recipients = (await queuedMail()).map((m) => m.to_address).sort();
     expect(recipients).toEqual([cast.sender.email, cast.receiver.email].sort());
-    const mailer = createMailer(smtp.smtpUrl, "Hatchway <no-reply@hatchway.test>");
-    await deliverDueMail(t.orm, mailer);
-    mailer.close();
+    await deliverDueMail(t.orm, t.ctx.adapters.mailer);
     const subject = `Transfer ${cast.transfer.number}: the temperature advice changed`;
     const toReceiver = await smtp.waitFor((m) => m.subject === subject && m.to.includes(cast.receiver.email));
     await smtp.waitFor((m) => m.subject === subject && m.to.includes(cast.sender.email));
     expect(toReceiver.text).toContain("4 hours before departure");
     expect(toReceiver.text).toContain(`Before: ${adviceMessage("add_cold_pack", "cold")}`);
     expect(toReceiver.text).toContain(`Now: ${adviceMessage("postpone", null)}`);
-    expect(toReceiver.text).toContain(`/transfers/${cast.transfer.id}`);
+    expect(toReceiver.text).toContain(`${t.env.PUBLIC_URL}/transfers/${cast.transfer.id}`);
   });
 });

@@ -43,7 +43,7 @@ async function recheckTransfer(ctx: AppContext, transferId: string, mark: DueMar
     const previous = await latestCheck(em, transfer.id);
     const report = await assessTransferTemperature({
       em,
-      source: { weatherUrl: ctx.env.WEATHER_URL, db: ctx.pool },
+      source: ctx.forecastSource,
       transfer,
       nowMs: now.getTime(),
     });
@@ -55,8 +55,8 @@ async function recheckTransfer(ctx: AppContext, transferId: string, mark: DueMar
       previousAdvice: previous.result.advice.message,
       advice: report.advice.message,
     };
-    await notifyParty(em, transfer, "sender", "temperature_changed", null, words);
-    await notifyParty(em, transfer, "receiver", "temperature_changed", null, words);
+    await notifyParty(em, ctx.links, transfer, "sender", "temperature_changed", null, words);
+    await notifyParty(em, ctx.links, transfer, "receiver", "temperature_changed", null, words);
     return true;
   });
 }
@@ -75,16 +75,16 @@ export async function recheckTransfers(ctx: AppContext): Promise<void> {
   if (changed) ctx.kickOutbox();
 }
 
-export const TEMPERATURE_RECHECK_TASK: ScheduledTask = {
+export const TEMPERATURE_RECHECK_TASK: ScheduledTask = Object.freeze({
   name: "temperature-recheck",
   everyMs: 10 * 60_000,
   run: recheckTransfers,
-};
+});
 
-export const FORECAST_PRUNE_TASK: ScheduledTask = {
+export const FORECAST_PRUNE_TASK: ScheduledTask = Object.freeze({
   name: "forecast-cache-prune",
   everyMs: 60 * 60_000,
-  run: async (ctx) => {
+  run: async (ctx: AppContext) => {
     await pruneForecastCache(ctx.pool, Date.now());
   },
-};
+});

@@ -19,6 +19,7 @@ import { transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
+import type { AppLinks } from "../../mail/links";
 
 type CheckInParsed = z.output<typeof checkInInputSchema>;
 
@@ -43,10 +44,13 @@ export async function checkInTransfer({
   actor,
   transferId,
   input,
+  links,
 }: {
   em: EntityManager;
   actor: Actor;
   transferId: string;
+  /** Where the e-mails this step queues link to (the app's public URL). */
+  links: AppLinks;
   input: CheckInParsed;
 }) {
   return em.transactional(async (tx) => {
@@ -171,7 +175,7 @@ export async function checkInTransfer({
     });
     t.status = "checked_in";
     t.version += 1;
-    await notifyParty(tx, t, "sender", "checked_in", actor, { summary });
+    await notifyParty(tx, links, t, "sender", "checked_in", actor, { summary });
     await tx.flush();
     return t;
   });

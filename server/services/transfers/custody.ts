@@ -6,7 +6,15 @@ import { CustodyEntrySchema } from "../../db/entities/custody-entry.entity";
 import { TransferSchema } from "../../db/entities/transfer.entity";
 
 export type CustodyKind =
-  "created" | "status_change" | "handoff" | "check_in" | "couriers_assigned" | "override" | "correction";
+  | "created"
+  | "status_change"
+  | "handoff"
+  | "check_in"
+  | "couriers_assigned"
+  | "override"
+  | "correction"
+  /** Demo or bench data cleared to ship without the gates (see gatesForLoadedData in server/composition.ts). */
+  | "checks_skipped";
 
 /**
  * Appends a sealed entry to a transfer's custody log. Call inside the transaction that makes

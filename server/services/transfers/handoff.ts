@@ -10,6 +10,7 @@ import { handoffAllowed } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
+import type { AppLinks } from "../../mail/links";
 
 type HandoffParsed = z.output<typeof handoffInputSchema>;
 
@@ -24,10 +25,13 @@ export async function recordHandoff({
   actor,
   transferId,
   input,
+  links,
 }: {
   em: EntityManager;
   actor: Actor;
   transferId: string;
+  /** Where the e-mails this step queues link to (the app's public URL). */
+  links: AppLinks;
   input: HandoffParsed;
 }) {
   try {
@@ -87,13 +91,13 @@ export async function recordHandoff({
       if (kind === "pickup") {
         t.status = "in_transit";
         await appendCustody(tx, t.id, actor, "status_change", { from, to: "in_transit", reason: "pickup recorded" });
-        await notifyParty(tx, t, "sender", "picked_up", actor, { summary });
-        await notifyParty(tx, t, "receiver", "picked_up", actor, { summary });
+        await notifyParty(tx, links, t, "sender", "picked_up", actor, { summary });
+        await notifyParty(tx, links, t, "receiver", "picked_up", actor, { summary });
       }
       if (kind === "delivery") {
         t.status = "delivered";
         await appendCustody(tx, t.id, actor, "status_change", { from, to: "delivered", reason: "delivery recorded" });
-        await notifyParty(tx, t, "sender", "delivered", actor, { summary });
+        await notifyParty(tx, links, t, "sender", "delivered", actor, { summary });
       }
       t.version += 1;
       await tx.flush();

@@ -5,7 +5,7 @@ import { OrganizationSchema } from "../../db/entities/organization.entity";
 import type { Transfer } from "../../db/entities/transfer.entity";
 import { enqueueMail } from "../outbox";
 import { transferMail, type TransferMailTopic } from "../../mail/templates";
-import { appLink } from "../../mail/links";
+import type { AppLinks } from "../../mail/links";
 
 /**
  * Queues an e-mail to one party of a transfer, in the caller's transaction: the named
@@ -13,6 +13,7 @@ import { appLink } from "../../mail/links";
  */
 export async function notifyParty(
   em: EntityManager,
+  links: AppLinks,
   t: Transfer,
   party: "sender" | "receiver",
   topic: TransferMailTopic,
@@ -35,7 +36,7 @@ export async function notifyParty(
         organization: org.name,
         number: t.number,
         actor: actor?.displayName ?? "Hatchway",
-        link: appLink(`/transfers/${t.id}`),
+        link: links.to(`/transfers/${t.id}`),
         ...extra,
       }),
     );

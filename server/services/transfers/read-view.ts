@@ -113,6 +113,8 @@ export type TransferView = {
     }[];
     extras: { count: number; sex: Sex; notes: string | null; taxon: TaxonRowView }[];
   } | null;
+  /** The custody entry of demo or bench data cleared without the gates (gatesForLoadedData), if any. */
+  checksSkipped: { at: string; payload: Record<string, unknown> } | null;
 };
 type OrgRow = {
   id: string;
@@ -212,7 +214,9 @@ SELECT json_build_object(
                 'items', coalesce((SELECT json_agg(to_jsonb(i.*) - 'check_in_id' - 'id') FROM check_in_item i WHERE i.check_in_id = ci.id), '[]'),
                 'extras', coalesce((SELECT json_agg(json_build_object('count', e.count, 'sex', e.sex, 'notes', e.notes, 'taxon', ${TAXON_JSON("x")}))
                                       FROM check_in_extra e JOIN taxon x ON x.id = e.taxon_id WHERE e.check_in_id = ci.id), '[]'))
-                FROM check_in ci JOIN app_user su ON su.id = ci.signed_by_id WHERE ci.transfer_id = t.id)
+                FROM check_in ci JOIN app_user su ON su.id = ci.signed_by_id WHERE ci.transfer_id = t.id),
+  'checksSkipped', (SELECT json_build_object('at', e.at, 'payload', e.payload) FROM custody_entry e
+                     WHERE e.transfer_id = t.id AND e.kind = 'checks_skipped' ORDER BY e.seq LIMIT 1)
 ) AS view
 FROM transfer t
 JOIN organization so ON so.id = t.sender_organization_id
@@ -222,7 +226,7 @@ WHERE t.id = $1`;
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
   const { rows } = await pool.query<{ view: TransferView }>({
-    name: "transfer-view-v1",
+    name: "transfer-view-v2",
     text: TRANSFER_VIEW_SQL,
     values: [id],
   });

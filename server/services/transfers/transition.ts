@@ -13,6 +13,7 @@ import { transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
+import type { AppLinks } from "../../mail/links";
 
 type Parsed = { to: TransferStatus; reason?: string | null; override?: boolean };
 
@@ -28,14 +29,16 @@ function abilityFor(from: TransferStatus, to: TransferStatus): keyof TransferAbi
 }
 
 /**
- * A gate that may stop a transfer from becoming ready to ship (compliance, temperature).
- * It throws a 409 explaining what blocks, or records an override in the custody log.
+ * A gate that may stop a transfer from becoming ready to ship (compliance, temperature). Its
+ * check runs inside the locked transition transaction and throws a 409 explaining what blocks,
+ * or records an override in the custody log. The composition root (server/composition.ts)
+ * builds each app's gates in their order; nothing registers itself.
  */
-export type ReadyGate = (args: { em: EntityManager; actor: Actor; transfer: Transfer; input: Parsed }) => Promise<void>;
-const readyGates: ReadyGate[] = [];
-export function registerReadyGate(gate: ReadyGate): void {
-  readyGates.push(gate);
-}
+export type ReadyGate = {
+  /** What the gate checks, as named in custody entries ("compliance", "temperature"). */
+  readonly name: string;
+  check(args: { em: EntityManager; actor: Actor; transfer: Transfer; input: Parsed }): Promise<void>;
+};
 
 async function checkCanSubmit(em: EntityManager, t: Transfer) {
   const [containers, animals] = await Promise.all([
@@ -62,11 +65,17 @@ export async function transitionTransfer({
   actor,
   transferId,
   input,
+  gates,
+  links,
 }: {
   em: EntityManager;
   actor: Actor;
   transferId: string;
   input: Parsed;
+  /** The app's ready-to-ship gates, run in this order when the step is to "ready". */
+  gates: readonly ReadyGate[];
+  /** Where the e-mails this step queues link to. */
+  links: AppLinks;
 }) {
   return em.transactional(async (tx) => {
     const { transfer: t, role, facts } = await loadTransferForActor(tx, transferId, actor, { lock: true });
@@ -92,7 +101,7 @@ export async function transitionTransfer({
     }
 
     if (to === "awaiting_receiver" && from === "draft") await checkCanSubmit(tx, t);
-    if (to === "ready") for (const gate of readyGates) await gate({ em: tx, actor, transfer: t, input });
+    if (to === "ready") for (const gate of gates) await gate.check({ em: tx, actor, transfer: t, input });
 
     t.status = to;
     t.version += 1;
@@ -104,12 +113,12 @@ export async function transitionTransfer({
     if (to === "cancelled") t.cancelledReason = input.reason ?? null;
     await appendCustody(tx, t.id, actor, "status_change", { from, to, reason: input.reason ?? null });
 
-    if (to === "awaiting_receiver") await notifyParty(tx, t, "receiver", "awaiting_confirmation", actor);
-    if (to === "ready") await notifyParty(tx, t, "sender", "confirmed", actor);
+    if (to === "awaiting_receiver") await notifyParty(tx, links, t, "receiver", "awaiting_confirmation", actor);
+    if (to === "ready") await notifyParty(tx, links, t, "sender", "confirmed", actor);
     if (to === "draft" && role === "receiver")
-      await notifyParty(tx, t, "sender", "sent_back", actor, { reason: input.reason ?? "" });
+      await notifyParty(tx, links, t, "sender", "sent_back", actor, { reason: input.reason ?? "" });
     if (to === "cancelled" && from !== "draft")
-      await notifyParty(tx, t, "receiver", "cancelled", actor, { reason: input.reason ?? "" });
+      await notifyParty(tx, links, t, "receiver", "cancelled", actor, { reason: input.reason ?? "" });
     await tx.flush();
     return t;
   });

@@ -23,6 +23,7 @@ import {
 import { badRequest, conflict, forbidden } from "../../http/errors";
 import { appendCustody } from "./custody";
 import { notifyParty } from "./notify";
+import type { AppLinks } from "../../mail/links";
 
 type Address = TransferInputParsed["origin"];
 type PatchParsed = z.output<typeof transferPatchSchema>;
@@ -268,10 +269,13 @@ export async function updateTransfer({
   actor,
   transferId,
   input,
+  links,
 }: {
   em: EntityManager;
   actor: Actor;
   transferId: string;
+  /** Where the e-mails this step queues link to (the app's public URL). */
+  links: AppLinks;
   input: PatchParsed;
 }) {
   return em.transactional(async (tx) => {
@@ -350,7 +354,7 @@ export async function updateTransfer({
       t.status = next;
       t.confirmedAt = null;
       t.confirmedBy = null;
-      await notifyParty(tx, t, "receiver", "reconfirm", actor);
+      await notifyParty(tx, links, t, "receiver", "reconfirm", actor);
     }
     await tx.flush();
     return t;
