@@ -137,7 +137,8 @@ describe("renderManifestPdf", () => {
     }
     expect(all).toContain("State import permit");
     expect(all).toContain("Certificate of Veterinary Inspection (CVI)");
-    expect(all).toContain("Jan 1, 2026 – Dec 31, 2026");
+    // Gregorian calendar [published]: 2026-01-01 and 2026-12-31 are Thursdays.
+    expect(all).toContain("Thu, Jan 1, 2026 – Thu, Dec 31, 2026");
   });
 
   it("carries the temperature range in °F and °C and the standard cautions", () => {

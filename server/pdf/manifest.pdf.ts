@@ -8,13 +8,9 @@ import {
   PURPOSE_LABELS,
   SEX_LABELS,
   WALL_LABELS,
-  formatDimensionsMm,
-  formatIsoDate,
-  formatLengthMm,
-  formatTempRangeF,
-  formatWeightG,
-  formatZonedTime,
 } from "./format";
+import { formatDateRange, formatInstant } from "@shared/dates";
+import { formatDimensionsBoth, formatLengthBoth, formatTempRangeBoth, formatWeightBoth } from "@shared/units";
 import { COLORS, PageFlow, drawNoteBox, drawTable, type Cell, type TableRow } from "./layout";
 import type { ManifestAnimal, ManifestBox, ManifestInput, PartyBlock } from "./manifest-input";
 import { drawQrCode } from "./qr";
@@ -106,8 +102,8 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
 
   const animals = input.boxes.reduce((n, b) => n + animalsInBox(b), 0);
   const facts: [string, string][] = [
-    ["Planned departure", formatZonedTime(input.plannedDeparture.at, input.plannedDeparture.tz)],
-    ["Expected arrival", formatZonedTime(input.expectedArrival.at, input.expectedArrival.tz)],
+    ["Planned departure", formatInstant(input.plannedDeparture.at, input.plannedDeparture.tz)],
+    ["Expected arrival", formatInstant(input.expectedArrival.at, input.expectedArrival.tz)],
     ["Boxes", String(input.boxes.length)],
     ["Animals", `${animals} (${speciesTotals(input.boxes).length} species)`],
   ];
@@ -223,9 +219,9 @@ const ANIMAL_COLUMNS = [
 const NOTES_INDENT_PT = 22;
 
 function boxDetails(box: ManifestBox): string {
-  const parts = [formatDimensionsMm(box.lengthMm, box.widthMm, box.heightMm)];
+  const parts = [formatDimensionsBoth(box.lengthMm, box.widthMm, box.heightMm)];
   if (box.insulation) {
-    parts.push(`${WALL_LABELS[box.insulation.material]}, ${formatLengthMm(box.insulation.wallThicknessMm)} walls`);
+    parts.push(`${WALL_LABELS[box.insulation.material]}, ${formatLengthBoth(box.insulation.wallThicknessMm)} walls`);
   }
   parts.push(PACK_LABELS[box.pack]);
   parts.push(box.sealNumber ? `Seal no. ${box.sealNumber}` : "No seal number");
@@ -236,8 +232,8 @@ function boxDetails(box: ManifestBox): string {
 
 function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
   const size = [
-    animal.lengthMm === null ? null : formatLengthMm(animal.lengthMm),
-    animal.weightG === null ? null : formatWeightG(animal.weightG),
+    animal.lengthMm === null ? null : formatLengthBoth(animal.lengthMm),
+    animal.weightG === null ? null : formatWeightBoth(animal.weightG),
   ]
     .filter((s): s is string => s !== null)
     .join("\n");
@@ -333,7 +329,7 @@ function drawTotals(flow: PageFlow, boxes: ManifestBox[]): void {
 }
 
 function validity(from: string, to: string | null): string {
-  return to ? `${formatIsoDate(from)} – ${formatIsoDate(to)}` : `from ${formatIsoDate(from)}`;
+  return formatDateRange(from, to);
 }
 
 function drawDocuments(flow: PageFlow, input: ManifestInput): void {
@@ -367,7 +363,7 @@ function drawTemperature(flow: PageFlow, input: ManifestInput): void {
   flow.heading("Temperature and packing", 40);
   const t = input.temperature;
   if (t?.safeRangeF) {
-    flow.paragraph(`Safe transit range: ${formatTempRangeF(t.safeRangeF.minF, t.safeRangeF.maxF)}`, {
+    flow.paragraph(`Safe transit range: ${formatTempRangeBoth(t.safeRangeF.minF, t.safeRangeF.maxF)}`, {
       bold: true,
       sizePt: 10,
     });
@@ -451,7 +447,7 @@ function drawCustody(flow: PageFlow): void {
 }
 
 function drawFooters(flow: PageFlow, input: ManifestInput): void {
-  const produced = `Produced ${formatZonedTime(input.generatedAt, input.generatedTz)} by Hatchway`;
+  const produced = `Produced ${formatInstant(input.generatedAt, input.generatedTz)} by Hatchway`;
   const total = flow.pages.length;
   flow.pages.forEach((page, i) => {
     page.drawLine({

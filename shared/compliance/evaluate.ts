@@ -1,4 +1,5 @@
 import type { AnimalOrigin, DocumentKind, Purpose, Sex, UsState } from "@shared/constants";
+import { formatDate } from "@shared/dates";
 import { FEDERAL, jurisdictionName, leavesContinentalUs, type Jurisdiction } from "./jurisdiction";
 import type { PermitRequirement, Rule, RuleConditions, RuleEffect, StateTransitPolicy } from "./rule";
 import type { EvaluateDocument, EvaluateResponse, Finding, Severity, Verdict } from "./schemas";
@@ -509,7 +510,9 @@ function windowFailure(doc: EvaluationDocument, shipDate: string): string | null
   const startsLater = doc.validFrom && shipDate < doc.validFrom;
   const endedBefore = doc.validTo && doc.validTo < shipDate;
   if (!startsLater && !endedBefore) return null;
-  return `${documentLabel(doc)} is valid from ${doc.validFrom ?? "an open date"} to ${doc.validTo ?? "an open date"}, which does not include the ship date ${shipDate}`;
+  const from = doc.validFrom ? formatDate(doc.validFrom) : "an open date";
+  const to = doc.validTo ? formatDate(doc.validTo) : "an open date";
+  return `${documentLabel(doc)} is valid from ${from} to ${to}, which does not include the ship date ${formatDate(shipDate)}`;
 }
 
 /** Whole calendar days from one ISO date to another (UTC, so no time zone or DST shifts it). */
@@ -524,7 +527,8 @@ function daysBetween(fromIso: string, toIso: string): number {
 function ageFailure(doc: EvaluationDocument, shipDate: string, withinDays: number): string | null {
   if (!doc.issuedOn) return `${documentLabel(doc)} has no issue date`;
   const ageDays = daysBetween(doc.issuedOn, shipDate);
-  if (ageDays < 0) return `${documentLabel(doc)} is dated ${doc.issuedOn}, after the ship date ${shipDate}`;
+  if (ageDays < 0)
+    return `${documentLabel(doc)} is dated ${formatDate(doc.issuedOn)}, after the ship date ${formatDate(shipDate)}`;
   return ageDays > withinDays
     ? `${documentLabel(doc)} was issued ${ageDays} days before the ship date; it may be at most ${withinDays} days old`
     : null;

@@ -1,8 +1,9 @@
+import { formatInstant } from "@shared/dates";
 import type { TemperatureReport } from "@shared/temperature/report";
+import { formatTempRangeBoth } from "@shared/units";
 import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
 import type { AppContext } from "../../context";
 import { TransferChangeSchema, TransferSchema } from "../../db/entities/transfer.entity";
-import { formatTempRangeF, formatZonedTime } from "../../pdf/format";
 import type { ManifestTemperature } from "../../pdf/manifest-input";
 import type { ManifestExtras } from "../transfers/manifest-extras";
 import { latestCheck } from "./checks";
@@ -26,7 +27,7 @@ function boxRangesOf(report: TemperatureReport): NonNullable<ManifestTemperature
 }
 
 const rangeText = (b: TemperatureReport["boxes"][number]) =>
-  formatTempRangeF(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
+  formatTempRangeBoth(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
 
 function packingNotesOf(report: TemperatureReport, withAdvice: boolean): string | null {
   const lines = report.boxes.map(
@@ -54,7 +55,7 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
   if (check && editedSince === 0) {
     const report = check.result as TemperatureReport;
     // In the origin's zone, like the departure on the same page.
-    const at = formatZonedTime(check.checkedAt.toISOString(), transfer.originTimeZone ?? "UTC");
+    const at = formatInstant(check.checkedAt, transfer.originTimeZone ?? "UTC");
     const when = `${at}, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
     return {
       temperature: {

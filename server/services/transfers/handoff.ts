@@ -3,6 +3,7 @@ import { UniqueConstraintViolationException } from "@mikro-orm/core";
 import type { z } from "zod";
 import type { handoffInputSchema } from "@shared/schemas/transfer";
 import { handoffKind } from "@shared/transfer/lifecycle";
+import { formatTempBoth } from "@shared/units";
 import type { Actor } from "../../auth/actor";
 import { ContainerSchema } from "../../db/entities/transfer.entity";
 import { badRequest, conflict, forbidden } from "../../http/errors";
@@ -83,7 +84,7 @@ export async function recordHandoff({
       await appendCustody(tx, t.id, actor, "handoff", payload);
 
       const from = t.status;
-      const summary = `${input.boxesCounted} of ${containers.length} boxes counted${payload.boxCountMatches ? "" : " (the count differs)"}${input.boxTempF === null ? "" : `, box at ${input.boxTempF} °F`}${input.place.text ? `, at ${input.place.text}` : ""}.`;
+      const summary = `${input.boxesCounted} of ${containers.length} boxes counted${payload.boxCountMatches ? "" : " (the count differs)"}${input.boxTempF === null ? "" : `, box at ${formatTempBoth(input.boxTempF)}`}${input.place.text ? `, at ${input.place.text}` : ""}.`;
       if (kind === "pickup") {
         t.status = "in_transit";
         await appendCustody(tx, t.id, actor, "status_change", { from, to: "in_transit", reason: "pickup recorded" });

@@ -1,6 +1,7 @@
 import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
 import { useCaughtMail } from "../api/caught-mail";
+import { formatInstant } from "@shared/dates";
 
 /** Demo only: what the local mail catcher received, and what is still waiting in the outbox. */
 export function CaughtMailRoute() {
@@ -34,7 +35,7 @@ export function CaughtMailRoute() {
                 <Card key={m.id}>
                   <p className="font-semibold">{m.subject}</p>
                   <p className="text-sm text-ink-soft">
-                    To {m.to.join(", ")} · {new Date(m.receivedAt).toLocaleString()}
+                    To {m.to.join(", ")} · {formatInstant(m.receivedAt)}
                   </p>
                   <pre className="mt-3 whitespace-pre-wrap break-words font-sans text-sm">{m.text}</pre>
                 </Card>

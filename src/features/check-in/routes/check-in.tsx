@@ -13,7 +13,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useIdempotencyKey } from "@/lib/idempotency";
 import { searchTaxa } from "@/lib/taxa-search";
 import { useTransfer } from "@/lib/transfer-queries";
@@ -157,7 +157,7 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
   return (
     <div className="grid gap-5">
       <Notice tone="ok" title="Checked in">
-        Signed by {c.signedName} on {formatDateTime(c.signedAt)}.{" "}
+        Signed by {c.signedName} on {formatInstant(c.signedAt)}.{" "}
         <Link to={paths.register} className="font-medium text-fern underline">
           Open the collection register
         </Link>

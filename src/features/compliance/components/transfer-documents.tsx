@@ -10,11 +10,12 @@ import { useDocuments } from "../api/documents";
 import { useAttachDocument, useDetachDocument, useTransferDocuments } from "../api/transfer-compliance";
 import { ExpiryBadge } from "./expiry-badge";
 import { ScanList } from "./scan-list";
+import { formatDateRange } from "@shared/dates";
 
 const issuer = (d: Pick<DocumentDto, "jurisdiction">) =>
   d.jurisdiction === "US" ? "federal" : jurisdictionName(d.jurisdiction);
 const validity = (d: Pick<DocumentDto, "validFrom" | "validTo">) =>
-  d.validFrom || d.validTo ? `valid ${d.validFrom ?? "…"} to ${d.validTo ?? "…"}` : "no validity dates";
+  d.validFrom || d.validTo ? `valid ${formatDateRange(d.validFrom, d.validTo)}` : "no validity dates";
 
 function UsedDocument({
   doc,

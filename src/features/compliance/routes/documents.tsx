@@ -11,6 +11,7 @@ import { useDocuments } from "../api/documents";
 import { DocumentForm } from "../components/document-form";
 import { ExpiryBadge } from "../components/expiry-badge";
 import { ScanList } from "../components/scan-list";
+import { formatDateRange } from "@shared/dates";
 
 function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) {
   const [showScans, setShowScans] = useState(false);
@@ -36,7 +37,7 @@ function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) 
           )}
         </Td>
         <Td>
-          {doc.validFrom ?? "…"} to {doc.validTo ?? "…"}
+          {formatDateRange(doc.validFrom, doc.validTo, "No validity dates")}
           <div className="mt-1">
             <ExpiryBadge expiry={doc.expiry} />
           </div>

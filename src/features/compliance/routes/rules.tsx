@@ -11,6 +11,7 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { useViewer } from "@/lib/viewer";
 import { useRuleHistory, useRules } from "../api/rules";
 import { RuleForm } from "../components/rule-form";
+import { formatDate, formatInstant } from "@shared/dates";
 
 const EFFECT_LABELS = {
   prohibited: "Prohibited",
@@ -21,7 +22,7 @@ const EFFECT_LABELS = {
 } as const;
 
 const inForce = (rule: Rule) =>
-  `In force ${rule.effectiveFrom ? `from ${rule.effectiveFrom}` : "since a date not recorded"}${rule.effectiveTo ? ` until ${rule.effectiveTo}` : ", still in force"}`;
+  `In force ${rule.effectiveFrom ? `from ${formatDate(rule.effectiveFrom)}` : "since a date not recorded"}${rule.effectiveTo ? ` until ${formatDate(rule.effectiveTo)}` : ", still in force"}`;
 
 const place = (j: Jurisdiction) => (j === "US" ? "Federal" : jurisdictionName(j));
 
@@ -51,10 +52,10 @@ function RuleHistory({ ruleKey, reviewer }: { ruleKey: string; reviewer: string 
             <li key={v.rule.version} className="rounded-card border border-rule bg-paper px-4 py-3 text-sm">
               <p className="font-semibold">
                 Version {v.rule.version}
-                {v.retired ? " — retired" : ""} · reviewed {v.rule.reviewedOn} by {v.rule.reviewedBy}
+                {v.retired ? " — retired" : ""} · reviewed {formatDate(v.rule.reviewedOn)} by {v.rule.reviewedBy}
                 <span className="font-normal text-ink-soft">
                   {" "}
-                  · saved {new Date(v.createdAt).toLocaleDateString()}
+                  · saved {formatInstant(v.createdAt)}
                   {v.createdBy ? ` by ${v.createdBy.displayName}` : " with the seed library"}
                 </span>
               </p>
@@ -116,7 +117,7 @@ function RuleRow({
         </div>
       </Td>
       <Td>
-        {rule.reviewedOn}
+        {formatDate(rule.reviewedOn)}
         <br />
         <span className="text-ink-soft">{rule.reviewedBy}</span>
       </Td>

@@ -5,7 +5,7 @@ import { TransportCautions } from "@/components/ui/cautions";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { handoffKindLabel } from "@/lib/transfer-labels";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
@@ -50,7 +50,7 @@ export function CourierHandoffRoute() {
         </p>
         <p className="text-ink-soft">
           {t.containers.length} {t.containers.length === 1 ? "box" : "boxes"} · {animals} live{" "}
-          {animals === 1 ? "animal" : "animals"} · leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+          {animals === 1 ? "animal" : "animals"} · leaves {formatInstant(t.plannedDepartureAt, t.origin.timeZone)}
         </p>
       </header>
 
@@ -103,7 +103,7 @@ export function CourierHandoffRoute() {
                 </p>
                 <p className="text-base text-ink-soft">
                   {done
-                    ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatDateTime(done.at)}`
+                    ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatInstant(done.at)}`
                     : i === next
                       ? "To record now"
                       : "Not yet"}

@@ -9,7 +9,7 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
-import { formatDate } from "@/lib/datetime";
+import { formatDate } from "@shared/dates";
 import { searchTaxa } from "@/lib/taxa-search";
 import { sexLabel } from "@/lib/transfer-labels";
 import { registerCsvHref, useRegister, type RegisterFilters } from "../api/get-register";

@@ -3,9 +3,9 @@ import type { Verdict } from "@shared/temperature/advice";
 import type { TemperatureReport } from "@shared/temperature/report";
 import { VERDICT_WORDS } from "@shared/temperature/words";
 import { Badge, Notice } from "@/components/ui/feedback";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { packLabel } from "@/lib/transfer-labels";
-import { formatTemp } from "@/lib/units";
+import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 
 type Tone = "ok" | "info" | "caution" | "block";
@@ -58,7 +58,7 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       </dl>
       {report.suggestedDeparture ? (
         <Notice tone="info" title="A safer departure">
-          Leaving {formatDateTime(report.suggestedDeparture)} looks better for every box and avoids weekends and federal
+          Leaving {formatInstant(report.suggestedDeparture)} looks better for every box and avoids weekends and federal
           holidays in transit.
         </Notice>
       ) : searched ? (

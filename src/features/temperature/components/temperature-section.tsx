@@ -3,7 +3,7 @@ import type { TransferStatus } from "@shared/constants";
 import { blocksShipping, type TransferTemperatureDto } from "@shared/temperature/report";
 import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
 import { Loading, Notice } from "@/components/ui/feedback";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useTransferTemperature } from "../api/transfer-temperature";
 import { AssessmentDetails } from "./assessment-details";
 import { TemperatureCautions } from "./temperature-cautions";
@@ -66,7 +66,7 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
   return (
     <>
       {report.alert ? (
-        <Notice tone="caution" role="alert" title={`The advice changed (${formatDateTime(report.alert.at)})`}>
+        <Notice tone="caution" role="alert" title={`The advice changed (${formatInstant(report.alert.at)})`}>
           Before: {report.alert.previous.message} Now: {report.alert.current.message} Both parties were e-mailed.
         </Notice>
       ) : null}
@@ -79,7 +79,7 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
           <ul className="list-disc pl-5 text-ink-soft">
             {report.checks.map((c) => (
               <li key={c.id}>
-                {formatDateTime(c.checkedAt)}, {CHECK_MARK_WORDS[c.mark]}: {VERDICT_WORDS[c.verdict].toLowerCase()}
+                {formatInstant(c.checkedAt)}, {CHECK_MARK_WORDS[c.mark]}: {VERDICT_WORDS[c.verdict].toLowerCase()}
               </li>
             ))}
           </ul>

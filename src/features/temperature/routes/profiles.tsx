@@ -7,8 +7,8 @@ import { Badge, Loading, Notice } from "@/components/ui/feedback";
 import { MeasureField } from "@/components/ui/measure-field";
 import { Card, PageHeader } from "@/components/ui/page";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
-import { formatTemp } from "@/lib/units";
+import { formatInstant } from "@shared/dates";
+import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { useProfiles, useUpdateProfile } from "../api/profiles";
 
@@ -98,7 +98,7 @@ function ProfileCard({ profile, canEdit }: { profile: TemperatureProfileDto; can
             <>
               <dt className="text-ink-soft">Last edited</dt>
               <dd>
-                {profile.updatedBy.displayName}, {formatDateTime(profile.updatedAt)}
+                {profile.updatedBy.displayName}, {formatInstant(profile.updatedAt)}
               </dd>
             </>
           ) : null}

@@ -2,8 +2,8 @@ import { Link } from "react-router";
 import type { AnimalDto, TransferDto } from "@shared/schemas/transfer";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
-import { formatDate } from "@/lib/datetime";
-import { formatDimensions, formatLength } from "@/lib/units";
+import { formatDate } from "@shared/dates";
+import { formatDimensions, formatLength } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import {
   animalOriginLabel,

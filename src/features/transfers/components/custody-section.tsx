@@ -3,9 +3,9 @@ import type { HandoffDto, TransferDto } from "@shared/schemas/transfer";
 import { handoffKind } from "@shared/transfer/lifecycle";
 import { Badge } from "@/components/ui/feedback";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { handoffKindLabel } from "@/lib/transfer-labels";
-import { formatTemp } from "@/lib/units";
+import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { useCustody } from "../api/custody";
 import { Section } from "./section";
@@ -20,7 +20,7 @@ function Recorded({ handoff: h }: { handoff: HandoffDto }) {
   return (
     <>
       <p className="text-sm">
-        {formatDateTime(h.at)} · {h.releasedByName} <span aria-hidden>→</span>
+        {formatInstant(h.at)} · {h.releasedByName} <span aria-hidden>→</span>
         <span className="sr-only">handed to</span> {h.receivedByName}
       </p>
       <p className="text-sm text-ink-soft">

@@ -1,6 +1,6 @@
 import type { TransferDto } from "@shared/schemas/transfer";
 import { Loading, Notice } from "@/components/ui/feedback";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useChanges } from "../api/changes";
 import { Section } from "./section";
 
@@ -50,7 +50,7 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
             <tbody className="divide-y divide-rule">
               {changes.data.map((c, i) => (
                 <tr key={`${c.at}-${c.field}-${i}`}>
-                  <td className="whitespace-nowrap px-2 py-2 align-top">{formatDateTime(c.at)}</td>
+                  <td className="whitespace-nowrap px-2 py-2 align-top">{formatInstant(c.at)}</td>
                   <td className="px-2 py-2 align-top">{c.actor.displayName}</td>
                   <td className="px-2 py-2 align-top font-mono text-xs">{c.field}</td>
                   <td className="break-all px-2 py-2 align-top text-ink-soft line-through decoration-brick/50">

@@ -1,5 +1,5 @@
 import type { OrgBriefDto, PersonDto, PlaceDto, TransferDto } from "@shared/schemas/transfer";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { modeLabel, purposeLabel } from "@/lib/transfer-labels";
 import { Section } from "./section";
 
@@ -48,9 +48,9 @@ export function OverviewSection({ transfer: t }: { transfer: TransferDto }) {
         <dt className="font-semibold">How</dt>
         <dd>{modeLabel[t.mode]}</dd>
         <dt className="font-semibold">Departure</dt>
-        <dd>{formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}</dd>
+        <dd>{formatInstant(t.plannedDepartureAt, t.origin.timeZone)}</dd>
         <dt className="font-semibold">Arrival</dt>
-        <dd>{formatDateTime(t.expectedArrivalAt, t.destination.timeZone)}</dd>
+        <dd>{formatInstant(t.expectedArrivalAt, t.destination.timeZone)}</dd>
         <dt className="font-semibold">Purpose</dt>
         <dd>
           {purposeLabel[t.purpose]}

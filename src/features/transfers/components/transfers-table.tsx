@@ -3,7 +3,7 @@ import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type Sortin
 import type { TransferSummaryDto } from "@shared/schemas/transfer";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { viewerRoleLabel } from "@/lib/transfer-labels";
 
 export type SortKey = "number" | "status" | "departure" | "updated";
@@ -66,7 +66,7 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
     id: "departure",
     accessorKey: "plannedDepartureAt",
     header: "Departs",
-    cell: ({ row }) => formatDateTime(row.original.plannedDepartureAt, row.original.origin.timeZone),
+    cell: ({ row }) => formatInstant(row.original.plannedDepartureAt, row.original.origin.timeZone),
   },
   {
     id: "animals",
@@ -78,7 +78,7 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
     id: "updated",
     accessorKey: "updatedAt",
     header: "Last change",
-    cell: ({ row }) => formatDateTime(row.original.updatedAt),
+    cell: ({ row }) => formatInstant(row.original.updatedAt),
   },
 ];
 

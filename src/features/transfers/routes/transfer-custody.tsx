@@ -3,7 +3,7 @@ import type { CustodyEntryDto } from "@shared/schemas/transfer";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useCustody } from "../api/custody";
 
@@ -31,7 +31,7 @@ function Entry({ entry: e, broken }: { entry: CustodyEntryDto; broken: boolean }
       <p className="font-semibold">
         {e.seq}. {kindText(e.kind)}{" "}
         <span className="font-normal text-ink-soft">
-          · {formatDateTime(e.at)} · {e.actor.displayName}
+          · {formatInstant(e.at)} · {e.actor.displayName}
         </span>
       </p>
       <Payload payload={e.payload} />

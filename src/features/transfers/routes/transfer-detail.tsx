@@ -7,7 +7,7 @@ import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { viewerRoleLabel } from "@/lib/transfer-labels";
 import { useTransfer } from "@/lib/transfer-queries";
 import { ActionsBar } from "../components/actions-bar";
@@ -81,7 +81,7 @@ export function TransferDetailRoute({ checks }: Props) {
         actions={<StatusBadge status={t.status} />}
       >
         {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state} · leaves{" "}
-        {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+        {formatInstant(t.plannedDepartureAt, t.origin.timeZone)}
       </PageHeader>
       {t.status === "cancelled" && t.cancelledReason ? (
         <Notice tone="block" title="Cancelled">

@@ -3,12 +3,12 @@ import type { DirectoryOrganizationDto, TaxonBriefDto, TransferInput } from "@sh
 import { packingFindings } from "@shared/transfer/packing";
 import { Notice } from "@/components/ui/feedback";
 import { TaxonName } from "@/components/ui/taxon-name";
-import { formatDateTime } from "@/lib/datetime";
-import { formatDimensions } from "@/lib/units";
+import { formatInstant } from "@shared/dates";
+import { formatDimensions } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { animalOriginLabel, modeLabel, packLabel, purposeLabel, sexLabel } from "@/lib/transfer-labels";
 
-const when = (iso: string) => (iso && !Number.isNaN(Date.parse(iso)) ? formatDateTime(iso) : "not set");
+const when = (iso: string) => (iso && !Number.isNaN(Date.parse(iso)) ? formatInstant(iso) : "not set");
 
 /** Step 4: everything on one page, with the packing problems the server will also find. */
 export function ReviewStep({
