@@ -162,22 +162,35 @@ export function formatDistance(distanceKm: number, system: UnitSystem): string {
 }
 
 /**
- * A stored measurement (mm, °F or g) in the unit the chosen system shows it in, as text:
- * what a limit in a validation message says ("7.9 in" for 200 mm in imperial). Temperatures
- * and lengths follow the system; weights stay in grams, the unit the fields take.
+ * A stored measurement (mm, °F or g) as a validation message says it in the chosen system: "7.9 in"
+ * for 200 mm in imperial, one decimal. Temperatures and lengths follow the system; weights stay in
+ * grams, the unit the fields take.
  */
 export function formatLimit(quantity: Quantity, stored: number, system: UnitSystem): string {
-  switch (quantity) {
-    case "length": {
-      // One decimal is what a person reads in a message; inputs keep two.
-      const value = system === "imperial" ? round1(mmToIn(stored)) : stored;
-      return `${numberText(value, 1, true)} ${lengthUnit(system)}`;
-    }
-    case "temperature":
-      return formatTemp(stored, system);
-    case "weight":
-      return `${numberText(stored, 1, true)} g`;
-  }
+  const shown = limitInUnit(quantity, stored, system);
+  const unit = quantity === "length" ? lengthUnit(system) : quantity === "temperature" ? tempUnit(system) : "g";
+  return `${numberText(shown, 1, true)} ${unit}`;
+}
+
+/** The number formatLimit shows, in the system's unit, to one decimal. */
+function limitInUnit(quantity: Quantity, stored: number, system: UnitSystem): number {
+  if (quantity === "length") return round1(system === "imperial" ? mmToIn(stored) : stored);
+  if (quantity === "temperature") return round1(system === "imperial" ? stored : fToC(stored));
+  return round1(stored);
+}
+
+/**
+ * The stored values a limit reads as in each system, with the limit itself: a form that says
+ * "at most 7.9 in" for 200 mm must accept 7.9 in (200.66 mm). Checks accept up to the widest.
+ */
+export function limitsAsShown(quantity: Quantity, stored: number): number[] {
+  const back = (system: UnitSystem): number => {
+    const shown = limitInUnit(quantity, stored, system);
+    if (quantity === "length") return system === "imperial" ? inToMm(shown) : shown;
+    if (quantity === "temperature") return system === "imperial" ? shown : cToF(shown);
+    return shown;
+  };
+  return [stored, ...UNIT_SYSTEMS.map(back)];
 }
 
 // ---------------------------------------------------------------- paper: both systems at once

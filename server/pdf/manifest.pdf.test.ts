@@ -98,7 +98,7 @@ describe("renderManifestPdf", () => {
     }
     // 400 × 300 × 250 mm is 15.7 × 11.8 × 9.8 in at 25.4 mm per inch [published]
     expect(all).toContain("400 × 300 × 250 mm (15.7 × 11.8 × 9.8 in)");
-    expect(all).toContain("Heat pack (40 h)");
+    expect(all).toContain("Heat pack, 40 hours");
   });
 
   it("prints the shipper and consignee name-and-address blocks in full", () => {

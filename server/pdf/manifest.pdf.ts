@@ -1,14 +1,14 @@
+import {
+  ANIMAL_ORIGIN_WORDS,
+  DOCUMENT_KIND_WORDS,
+  PACK_WORDS,
+  PURPOSE_WORDS,
+  SEX_WORDS,
+  TRANSPORT_MODE_WORDS,
+  WALL_MATERIAL_WORDS,
+} from "@shared/words";
 import { PDFDocument } from "pdf-lib";
 import { embedFonts, fitText, safeText, textWidthPt, wrapText } from "./fonts";
-import {
-  DOCUMENT_KIND_LABELS,
-  MODE_LABELS,
-  ORIGIN_LABELS,
-  PACK_LABELS,
-  PURPOSE_LABELS,
-  SEX_LABELS,
-  WALL_LABELS,
-} from "./format";
 import { formatDateRange, formatInstant } from "@shared/dates";
 import { formatDimensionsBoth, formatLengthBoth, formatTempRangeBoth, formatWeightBoth } from "@shared/units";
 import { COLORS, PageFlow, drawNoteBox, drawTable, type Cell, type TableRow } from "./layout";
@@ -96,7 +96,7 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
   flow.drawLine("HATCHWAY  ·  PACKING MANIFEST", flow.left, topY - 10, { bold: true, sizePt: 9, color: COLORS.green });
   const numberText = fitText(flow.fonts.bold, `Transfer ${input.transferNumber}`, 20, textW);
   page.drawText(numberText, { x: flow.left, y: topY - 34, size: 20, font: flow.fonts.bold, color: COLORS.ink });
-  flow.drawLine(`${MODE_LABELS[input.mode]}  ·  ${PURPOSE_LABELS[input.purpose]}`, flow.left, topY - 50, {
+  flow.drawLine(`${TRANSPORT_MODE_WORDS[input.mode]}  ·  ${PURPOSE_WORDS[input.purpose]}`, flow.left, topY - 50, {
     sizePt: 10,
   });
 
@@ -221,9 +221,11 @@ const NOTES_INDENT_PT = 22;
 function boxDetails(box: ManifestBox): string {
   const parts = [formatDimensionsBoth(box.lengthMm, box.widthMm, box.heightMm)];
   if (box.insulation) {
-    parts.push(`${WALL_LABELS[box.insulation.material]}, ${formatLengthBoth(box.insulation.wallThicknessMm)} walls`);
+    parts.push(
+      `${WALL_MATERIAL_WORDS[box.insulation.material]}, ${formatLengthBoth(box.insulation.wallThicknessMm)} walls`,
+    );
   }
-  parts.push(PACK_LABELS[box.pack]);
+  parts.push(PACK_WORDS[box.pack]);
   parts.push(box.sealNumber ? `Seal no. ${box.sealNumber}` : "No seal number");
   const n = animalsInBox(box);
   parts.push(`${n} ${n === 1 ? "animal" : "animals"}`);
@@ -246,9 +248,9 @@ function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
         String(lineNo),
         { text: animal.scientificName, bold: true, sub: animal.commonName },
         String(animal.count),
-        SEX_LABELS[animal.sex],
+        SEX_WORDS[animal.sex],
         animal.identifier ?? "—",
-        ORIGIN_LABELS[animal.origin],
+        ANIMAL_ORIGIN_WORDS[animal.origin],
         size || "—",
         venomous,
       ],
@@ -348,7 +350,7 @@ function drawDocuments(flow: PageFlow, input: ManifestInput): void {
     ],
     rows: input.documents.map((d) => ({
       cells: [
-        DOCUMENT_KIND_LABELS[d.kind],
+        DOCUMENT_KIND_WORDS[d.kind],
         { text: d.number, bold: true },
         d.issuer,
         d.holder,

@@ -1,5 +1,6 @@
 import type { AnimalOrigin, DocumentKind, Purpose, Sex, UsState } from "@shared/constants";
 import { formatDate } from "@shared/dates";
+import { DOCUMENT_KIND_IN_SENTENCE, HOLDER_SIDE_WORDS } from "../words/documents";
 import { FEDERAL, jurisdictionName, leavesContinentalUs, type Jurisdiction } from "./jurisdiction";
 import type { PermitRequirement, Rule, RuleConditions, RuleEffect, StateTransitPolicy } from "./rule";
 import type { EvaluateDocument, EvaluateResponse, Finding, Severity, Verdict } from "./schemas";
@@ -86,15 +87,6 @@ interface PreparedDocument {
 type Match = { satisfiedBy: NonNullable<Finding["satisfiedBy"]>; label: string } | { reason: string | null };
 
 const SEVERITY_ORDER: Record<Severity, number> = { blocks: 0, needs_document: 1, advisory: 2 };
-
-const KIND_LABELS: Record<DocumentKind, string> = {
-  state_import_permit: "import permit",
-  possession_permit: "possession permit or licence",
-  export_permit: "export permit",
-  federal_permit: "federal permit",
-  captive_bred_registration: "captive-bred wildlife registration",
-  cvi: "certificate of veterinary inspection (CVI) or health certificate",
-};
 
 /**
  * Evaluates every animal of a transfer against the rules in force on its ship date and the
@@ -385,10 +377,10 @@ function permitRequirement(
   context: FindingContext,
 ): { description: string; match: Match } {
   const { rule, animal } = context;
-  const kinds = requirement.documentKinds.map((kind) => KIND_LABELS[kind]).join(" or ");
+  const kinds = requirement.documentKinds.map((kind) => DOCUMENT_KIND_IN_SENTENCE[kind]).join(" or ");
   const issuer = rule.jurisdiction === FEDERAL ? "" : ` from ${jurisdictionName(rule.jurisdiction)}`;
   const species = requirement.namesSpecies ? ` naming ${animal.scientificName}` : "";
-  const holder = requirement.holder === "either" ? "" : `, held by the ${requirement.holder}`;
+  const holder = requirement.holder === "either" ? "" : `, held by ${HOLDER_SIDE_WORDS[requirement.holder]}`;
   return { description: `${withArticle(kinds)}${issuer}${species}${holder}`, match: matchPermit(requirement, context) };
 }
 
@@ -402,7 +394,7 @@ function certificateRequirement(
   const species = effect.namesSpecies ? `, naming ${context.animal.scientificName}` : "";
   const statements = effect.statements.length ? `, stating "${effect.statements.join('" and "')}"` : "";
   return {
-    description: `a ${KIND_LABELS.cvi}${signer} no more than ${effect.withinDays} days before the ship date${species}${statements}`,
+    description: `a ${DOCUMENT_KIND_IN_SENTENCE.cvi}${signer} no more than ${effect.withinDays} days before the ship date${species}${statements}`,
     match: matchCertificate(effect, context),
   };
 }
@@ -431,7 +423,7 @@ function normalizeStatement(statement: string): string {
 function documentLabel(doc: EvaluationDocument): string {
   const number = doc.number ? ` no. ${doc.number}` : "";
   const issuer = doc.jurisdiction === FEDERAL ? "" : ` from ${jurisdictionName(doc.jurisdiction)}`;
-  return `the ${doc.kind === "cvi" ? "certificate" : KIND_LABELS[doc.kind]}${number}${issuer}`;
+  return `the ${doc.kind === "cvi" ? "certificate" : DOCUMENT_KIND_IN_SENTENCE[doc.kind]}${number}${issuer}`;
 }
 
 function satisfied(doc: EvaluationDocument): Match {

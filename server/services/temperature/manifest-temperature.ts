@@ -1,7 +1,7 @@
+import { CHECK_MARK_WORDS, TEMPERATURE_VERDICT_WORDS } from "@shared/words";
 import { formatInstant } from "@shared/dates";
 import type { TemperatureReport } from "@shared/temperature/report";
 import { formatTempRangeBoth } from "@shared/units";
-import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
 import type { AppContext } from "../../context";
 import { TransferChangeSchema, TransferSchema } from "../../db/entities/transfer.entity";
 import type { ManifestTemperature } from "../../pdf/manifest-input";
@@ -60,7 +60,7 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
     return {
       temperature: {
         advice: [
-          `${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
+          `${TEMPERATURE_VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
           ...report.warnings.filter((w) => w.severity === "warning").map((w) => w.message),
         ].join("\n"),
         safeRangeF: safeRangeOf(report),

@@ -1,3 +1,4 @@
+import { OUTBOX_STATUS_WORDS } from "@shared/words";
 import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
 import { useCaughtMail } from "../api/caught-mail";
@@ -50,7 +51,7 @@ export function CaughtMailRoute() {
                   <span className="text-ink-soft">{o.to}</span>
                   <span className="flex items-center gap-2">
                     <Badge tone={o.status === "sent" ? "ok" : o.status === "dead" ? "block" : "caution"}>
-                      {o.status}
+                      {OUTBOX_STATUS_WORDS[o.status]}
                     </Badge>
                     {o.attempts > 0 ? <span className="text-ink-faint">{o.attempts} attempt(s)</span> : null}
                   </span>

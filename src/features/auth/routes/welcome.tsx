@@ -1,5 +1,5 @@
 import { useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import { Link, useSearchParams } from "react-router";
 import { z } from "zod";
 import { passwordSchema } from "@shared/schemas/common";
@@ -20,7 +20,7 @@ export function WelcomeRoute() {
   const token = params.get("token") ?? "";
   const setPassword = useSetPassword();
   const form = useForm<z.infer<typeof formSchema>>({
-    resolver: zodResolver(formSchema),
+    resolver: keeperResolver(formSchema),
     defaultValues: { password: "", confirm: "" },
   });
 

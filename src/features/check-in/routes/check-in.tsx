@@ -1,6 +1,7 @@
+import { SEX_WORDS } from "@shared/words";
 import { useState } from "react";
 import { Controller, FormProvider, useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import { Link, useParams } from "react-router";
 import type { z } from "zod";
 import { outcomeTotal } from "@shared/checkin/discrepancy";
@@ -18,7 +19,6 @@ import { useIdempotencyKey } from "@/lib/idempotency";
 import { searchTaxa } from "@/lib/taxa-search";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
-import { sexLabel } from "@/lib/transfer-labels";
 import { useCheckIn } from "../api/check-in";
 import { DiscrepancyTable } from "../components/discrepancy-table";
 import { ExtrasEditor } from "../components/extras-editor";
@@ -34,7 +34,7 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
   const [taxa, setTaxa] = useState<Record<string, TaxonBriefDto>>({});
   const [sumError, setSumError] = useState<string | null>(null);
   const form = useForm<CheckInInput, unknown, Parsed>({
-    resolver: zodResolver(checkInInputSchema),
+    resolver: keeperResolver(checkInInputSchema),
     defaultValues: {
       // Every count starts at zero: the receiver says what they found, line by line.
       items: animals.map((a) => ({
@@ -171,7 +171,7 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
           <ul className="list-disc pl-5">
             {c.extras.map((x, i) => (
               <li key={i}>
-                {x.count} × <TaxonName taxon={x.taxon} />, {sexLabel[x.sex].toLowerCase()}
+                {x.count} × <TaxonName taxon={x.taxon} />, {SEX_WORDS[x.sex].toLowerCase()}
                 {x.notes ? ` — ${x.notes}` : ""}
               </li>
             ))}

@@ -1,6 +1,6 @@
+import { DOCUMENT_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { jurisdictionName } from "@shared/compliance/jurisdiction";
-import { DOCUMENT_KIND_LABELS } from "@shared/compliance/labels";
 import type { DocumentDto } from "@shared/schemas/compliance";
 import { Button } from "@/components/ui/button";
 import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
@@ -20,7 +20,7 @@ function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) 
     <>
       <tr>
         <Td className="font-medium">
-          {DOCUMENT_KIND_LABELS[doc.kind]}
+          {DOCUMENT_KIND_WORDS[doc.kind]}
           <br />
           <span className="text-ink-soft">no. {doc.number}</span>
         </Td>
@@ -89,7 +89,7 @@ export function DocumentsRoute() {
           title={
             editing === "new"
               ? "New permit or certificate"
-              : `Edit ${DOCUMENT_KIND_LABELS[editing.kind].toLowerCase()} no. ${editing.number}`
+              : `Edit ${DOCUMENT_KIND_WORDS[editing.kind].toLowerCase()} no. ${editing.number}`
           }
           className="mb-6"
         >

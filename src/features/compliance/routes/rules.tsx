@@ -1,3 +1,4 @@
+import { RULE_EFFECT_WORDS } from "@shared/words";
 import { useState, type FormEvent } from "react";
 import { JURISDICTIONS, jurisdictionName, type Jurisdiction } from "@shared/compliance/jurisdiction";
 import type { Rule } from "@shared/compliance/rule";
@@ -12,14 +13,6 @@ import { useViewer } from "@/lib/viewer";
 import { useRuleHistory, useRules } from "../api/rules";
 import { RuleForm } from "../components/rule-form";
 import { formatDate, formatInstant } from "@shared/dates";
-
-const EFFECT_LABELS = {
-  prohibited: "Prohibited",
-  permit_required: "Permit required",
-  certificate_required: "Certificate required",
-  packing: "Packing and marking",
-  advisory: "Advice",
-} as const;
 
 const inForce = (rule: Rule) =>
   `In force ${rule.effectiveFrom ? `from ${formatDate(rule.effectiveFrom)}` : "since a date not recorded"}${rule.effectiveTo ? ` until ${formatDate(rule.effectiveTo)}` : ", still in force"}`;
@@ -110,7 +103,7 @@ function RuleRow({
               rule.effect.kind === "prohibited" ? "block" : rule.effect.kind.endsWith("required") ? "caution" : "info"
             }
           >
-            {EFFECT_LABELS[rule.effect.kind]}
+            {RULE_EFFECT_WORDS[rule.effect.kind]}
           </Tag>
           {rule.demo ? <Tag tone="neutral">Demo rule</Tag> : null}
           {retired ? <Tag tone="neutral">Retired</Tag> : null}

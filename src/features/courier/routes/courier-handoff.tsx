@@ -1,3 +1,4 @@
+import { HANDOFF_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
 import { useParams } from "react-router";
@@ -6,7 +7,6 @@ import { Loading, Notice } from "@/components/ui/feedback";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { ApiError } from "@/lib/api-client";
 import { formatInstant } from "@shared/dates";
-import { handoffKindLabel } from "@/lib/transfer-labels";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
 import { HandoffForm } from "../components/handoff-form";
@@ -93,12 +93,12 @@ export function CourierHandoffRoute() {
                 <p className="font-semibold">
                   {i + 1}.{" "}
                   {done
-                    ? handoffKindLabel[done.kind]
+                    ? HANDOFF_KIND_WORDS[done.kind]
                     : i === 0
-                      ? handoffKindLabel.pickup
+                      ? HANDOFF_KIND_WORDS.pickup
                       : i === legs.length
-                        ? handoffKindLabel.delivery
-                        : handoffKindLabel.handoff}
+                        ? HANDOFF_KIND_WORDS.delivery
+                        : HANDOFF_KIND_WORDS.handoff}
                   {mine ? <span className="font-normal text-ink-soft"> · yours</span> : null}
                 </p>
                 <p className="text-base text-ink-soft">

@@ -1,3 +1,4 @@
+import { VIEWER_ROLE_WORDS } from "@shared/words";
 import type { ReactNode } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
 import { useParams } from "react-router";
@@ -8,7 +9,6 @@ import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { ApiError } from "@/lib/api-client";
 import { formatInstant } from "@shared/dates";
-import { viewerRoleLabel } from "@/lib/transfer-labels";
 import { useTransfer } from "@/lib/transfer-queries";
 import { ActionsBar } from "../components/actions-bar";
 import { BoxesSection } from "../components/boxes-section";
@@ -77,7 +77,7 @@ export function TransferDetailRoute({ checks }: Props) {
     <div className="grid gap-5">
       <PageHeader
         title={`Transfer ${t.number}`}
-        eyebrow={viewerRoleLabel[t.viewerRole]}
+        eyebrow={VIEWER_ROLE_WORDS[t.viewerRole]}
         actions={<StatusBadge status={t.status} />}
       >
         {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state} · leaves{" "}

@@ -72,9 +72,9 @@ describe("TransferForm", () => {
   it("keeps the user on a step until its fields pass the shared schema", async () => {
     renderForm(vi.fn());
     await userEvent.click(screen.getByRole("button", { name: "Next: Boxes" }));
-    // Messages from shared/schemas/transfer.ts, the same the server answers with.
-    expect(await screen.findByText("Choose the purpose of the move")).toBeInTheDocument();
-    expect(screen.getByText("Choose how the animals travel")).toBeInTheDocument();
+    // Messages from the shared message map (shared/validation/messages.ts), the same the server answers with.
+    expect(await screen.findByText("Purpose: choose one from the list.")).toBeInTheDocument();
+    expect(screen.getByText("How it travels: choose one from the list.")).toBeInTheDocument();
     expect(screen.getByRole("heading", { name: /Step 1 of 4/ })).toBeInTheDocument();
   });
 
