@@ -480,7 +480,7 @@ function matchCertificate(effect: CertificateEffect, context: FindingContext): M
 function holderFailure(requirement: PermitRequirement, doc: EvaluationDocument): string | null {
   const { holder } = requirement;
   return holder !== "either" && doc.holderSide !== undefined && doc.holderSide !== holder
-    ? `${documentLabel(doc)} is held by the ${doc.holderSide}, not the ${holder}`
+    ? `${documentLabel(doc)} is held by ${HOLDER_SIDE_WORDS[doc.holderSide]}, not ${HOLDER_SIDE_WORDS[holder]}`
     : null;
 }
 

@@ -17,6 +17,15 @@ export const setPasswordSchema = z.strictObject({
 });
 export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
 
+/** The welcome form: a new password, typed twice (only the first goes to the server). */
+export const passwordChoiceSchema = z
+  .strictObject({ password: passwordSchema, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, {
+    path: ["confirm"],
+    params: { instruction: "the two passwords differ; type the same one again" },
+  });
+export type PasswordChoice = z.infer<typeof passwordChoiceSchema>;
+
 export const organizationInputSchema = z.strictObject({
   name: requiredText(200),
   kind: z.enum(ORGANIZATION_KINDS),

@@ -11,7 +11,7 @@ import { containerInputSchema, handoffInputSchema } from "../schemas/transfer";
 import { createTransferSchema } from "../schemas/transfer";
 import { measure, optionalText, requiredText, text, wholeNumber } from "../schemas/common";
 import { whatIfInputSchema } from "../temperature/schemas";
-import { fieldName } from "../words/fields";
+import { FIELD_WORDS, fieldName } from "../words/fields";
 import { describeIssues, errorMapFor, inUnits, issueSentence, quantityAt, sentence } from "./messages";
 
 /** Wording of validators that must never reach a person (issue 10, section 2). */
@@ -183,6 +183,8 @@ describe("every shared schema speaks to a keeper", () => {
         collect(inner, depth + 1);
     };
     for (const [, schema] of schemas) collect(schema);
+    const missing = [...keys].filter((key) => FIELD_WORDS[key] === undefined);
+    expect(missing, "keys without words in shared/words/fields.ts").toEqual([]);
     for (const key of keys) expect(fieldName([key]), key).not.toMatch(RAW_CODE);
   });
 });

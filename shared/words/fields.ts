@@ -17,6 +17,7 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   phone: "phone number",
   email: "e-mail address",
   password: "password",
+  confirm: "password typed again",
   token: "invitation link",
   displayName: "name",
   role: "role",
@@ -183,6 +184,25 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   doNotShipAbove: "do not ship above",
   source: "source",
   scenario: "weather scenario",
+  // answers the API gives (their schemas are walked too)
+  transitOnlyExempt: "exempt when only passing through",
+  ruleId: "rule",
+  ruleVersion: "rule version",
+  severity: "severity",
+  message: "message",
+  satisfiedBy: "document that satisfies it",
+  verdict: "verdict",
+  findings: "findings",
+  rulesUsed: "rules used",
+  advice: "advice",
+  code: "code",
+  ambientF: "outside temperature",
+  insideF: "inside temperature",
+  hoursOutsideRange: "hours outside the safe range",
+  hours: "hours",
+  suggestedDeparture: "suggested departure",
+  sources: "sources",
+  title: "title",
 };
 
 /** How a list's item is named: "Box 2", "Animal line 3". */

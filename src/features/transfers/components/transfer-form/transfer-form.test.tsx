@@ -158,4 +158,27 @@ describe("TransferForm", () => {
     expect(within(lines[1]!).getByLabelText("Identifier (optional)")).toHaveValue("");
     expect(within(lines[1]!).getByLabelText("Kind of identifier")).toHaveValue("microchip");
   });
+
+  it("says a limit in the units the field shows: 99 in of wall is over 7.9 in, not 200 mm", async () => {
+    renderForm(vi.fn());
+    await userEvent.selectOptions(screen.getByLabelText("Receiving organisation"), receiver.id);
+    await userEvent.selectOptions(screen.getByLabelText("How it travels"), "hand_delivery");
+    await userEvent.selectOptions(screen.getByLabelText("Purpose"), "breeding");
+    fireEvent.change(screen.getByLabelText("Planned departure"), { target: { value: "2030-03-12T08:00" } });
+    fireEvent.change(screen.getByLabelText("Expected arrival"), { target: { value: "2030-03-12T18:00" } });
+    await next("Boxes");
+    for (const [label, value] of [
+      ["Length (in)", "10"],
+      ["Width (in)", "10"],
+      ["Height (in)", "10"],
+      ["Wall thickness (in)", "99"],
+    ]) {
+      await userEvent.type(screen.getByLabelText(label!), value!);
+    }
+    await userEvent.click(screen.getByRole("button", { name: "Next: Animals" }));
+    // NIST SP 811 B.8 [published]: the limit of 200 mm is 7.874 in, shown to one decimal.
+    expect(await screen.findByText("Box 1 wall thickness: use at most 7.9 in.")).toBeInTheDocument();
+    expect(screen.queryByText(/200 mm/)).not.toBeInTheDocument();
+    expect(screen.getByRole("heading", { name: /Step 2 of 4/ })).toBeInTheDocument();
+  });
 });
