@@ -11,7 +11,7 @@ import type { AnimalDto, TransferDto } from "@shared/schemas/transfer";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
 import { formatDate } from "@shared/dates";
-import { formatDimensions, formatLength } from "@shared/units";
+import { formatDimensions, formatLength, formatWeight } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { Section } from "./section";
 
@@ -24,7 +24,7 @@ function AnimalRow({ animal: a }: { animal: AnimalDto }) {
     a.lengthMm != null
       ? `${a.lengthKind ? LENGTH_KIND_WORDS[a.lengthKind].toLowerCase() : "size"} ${formatLength(a.lengthMm, system)}`
       : null,
-    a.weightG != null ? `${a.weightG.toLocaleString("en-US")} g` : null,
+    a.weightG != null ? formatWeight(a.weightG, system) : null,
     a.hatchDate ? `hatched ${formatDate(a.hatchDate)}` : null,
   ].filter(Boolean);
   return (
