@@ -62,6 +62,25 @@ export default tseslint.config(
     },
   },
   {
+    // zod with our error map installed (shared/validation/zod.ts), so every message is a keeper's.
+    files: ["shared/**/*.ts"],
+    ignores: ["shared/**/*.test.ts", "shared/validation/zod.ts"],
+    rules: {
+      "@typescript-eslint/no-restricted-imports": [
+        "error",
+        {
+          paths: [
+            {
+              name: "zod",
+              allowTypeImports: true,
+              message: "Import z from shared/validation/zod, which installs the keeper's error messages.",
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ["src/**/*.{ts,tsx}"],
     plugins: { "react-hooks": reactHooks },
     rules: {

@@ -9,6 +9,7 @@
 import { createMailer } from "./adapters/mailer";
 import { createStorage } from "./adapters/storage";
 import { createWeatherService } from "./adapters/weather";
+import type { CustodyKind } from "@shared/constants";
 import type { Adapters, AppBase, AppContext } from "./context";
 import { createLinks } from "./mail/links";
 import { complianceGate } from "./services/compliance/gate";
@@ -84,7 +85,7 @@ export function composeApp(base: AppBase, options: CompositionOptions = {}): App
 export type LoadedDataKind = "demo" | "bench";
 
 /** The custody entry that marks a transfer cleared to ship without its checks. */
-export const CHECKS_SKIPPED_ENTRY = "checks_skipped";
+export const CHECKS_SKIPPED_ENTRY = "checks_skipped" satisfies CustodyKind;
 
 /**
  * The one way records are written past the ready-to-ship gates. Demo seeding and the benchmark

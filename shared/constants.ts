@@ -191,3 +191,83 @@ export type IdentifierKind = (typeof IDENTIFIER_KINDS)[number];
 /** What the receiver found when opening each container. */
 export const CHECK_IN_OUTCOMES = ["arrived_well", "arrived_problem", "dead_on_arrival", "missing"] as const;
 export type CheckInOutcome = (typeof CHECK_IN_OUTCOMES)[number];
+
+/** Who the caller is on a transfer's page. */
+export const VIEWER_ROLES = ["sender", "receiver", "courier", "admin"] as const;
+export type ViewerRole = (typeof VIEWER_ROLES)[number];
+
+/** The list's "mine" filter: transfers I send, receive or carry. */
+export const TRANSFER_LIST_ROLES = ["sending", "receiving", "carrying"] as const;
+export type TransferListRole = (typeof TRANSFER_LIST_ROLES)[number];
+
+/** What the transfer list can be sorted by. */
+export const TRANSFER_SORT_KEYS = ["departure", "number", "status", "updated"] as const;
+export type TransferSortKey = (typeof TRANSFER_SORT_KEYS)[number];
+
+/** Custody moments: 0 is the pickup from the sender, the last is the delivery to the receiver. */
+export const HANDOFF_KINDS = ["pickup", "handoff", "delivery"] as const;
+export type HandoffKind = (typeof HANDOFF_KINDS)[number];
+
+/** Kinds of entry in a transfer's append-only custody log. */
+export const CUSTODY_KINDS = [
+  "created",
+  "status_change",
+  "handoff",
+  "check_in",
+  "couriers_assigned",
+  "override",
+  "correction",
+  /** Demo or bench data cleared to ship without the gates (gatesForLoadedData in server/composition.ts). */
+  "checks_skipped",
+] as const;
+export type CustodyKind = (typeof CUSTODY_KINDS)[number];
+
+/** How an animal accepted into the register arrived. */
+export const REGISTER_CONDITIONS = ["well", "problem"] as const;
+export type RegisterCondition = (typeof REGISTER_CONDITIONS)[number];
+
+/** Problems with the packing the sender resolves before sending for confirmation. */
+export const PACKING_FINDING_CODES = [
+  "mixed_species",
+  "unpacked_animal",
+  "empty_box",
+  "no_animals",
+  "no_boxes",
+] as const;
+export type PackingFindingCode = (typeof PACKING_FINDING_CODES)[number];
+
+/** Where an e-mail in the outbox stands. */
+export const OUTBOX_STATUSES = ["pending", "sent", "dead"] as const;
+export type OutboxStatus = (typeof OUTBOX_STATUSES)[number];
+
+/** The column of the temperature guideline a profile follows. */
+export const ANIMAL_CLASSES = ["reptile", "amphibian"] as const;
+export type AnimalClass = (typeof ANIMAL_CLASSES)[number];
+
+/** When a stored temperature check was made. */
+export const CHECK_MARKS = ["24h", "4h", "manual", "gate"] as const;
+export type CheckMark = (typeof CHECK_MARKS)[number];
+
+/** Why a forecast could not be had: the weather service's faults, or a trip beyond its horizon. */
+export const FORECAST_UNAVAILABLE_REASONS = [
+  "timeout",
+  "network",
+  "redirect",
+  "upstream_error",
+  "invalid_response",
+  "beyond_horizon",
+] as const;
+export type ForecastUnavailableReason = (typeof FORECAST_UNAVAILABLE_REASONS)[number];
+
+/** What the demo's local weather stand-in can be told to answer. */
+export const WEATHER_SCENARIOS = [
+  "normal",
+  "heat_wave",
+  "cold_snap",
+  "outage",
+  "reset",
+  "garbage",
+  "slow",
+  "redirect",
+] as const;
+export type WeatherScenario = (typeof WEATHER_SCENARIOS)[number];

@@ -1,9 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { celsiusToFahrenheit, fakeTemperatureC } from "./climate";
+import { cToF } from "../../shared/units";
+import { fakeTemperatureC } from "./climate";
 
 const dayF = (lat: number, lon: number, dateUtc: string) =>
   Array.from({ length: 24 }, (_, h) =>
-    celsiusToFahrenheit(fakeTemperatureC(lat, lon, Date.parse(`${dateUtc}T00:00:00Z`) / 1000 + h * 3600)),
+    cToF(fakeTemperatureC(lat, lon, Date.parse(`${dateUtc}T00:00:00Z`) / 1000 + h * 3600)),
   );
 const mean = (values: number[]) => values.reduce((a, b) => a + b, 0) / values.length;
 

@@ -40,8 +40,3 @@ export function fakeTemperatureC(latDeg: number, lonDeg: number, unixS: number, 
     2.5 * Math.sin((2 * Math.PI * days) / 5.3 + phase) + 1.2 * Math.sin((2 * Math.PI * days) / 2.9 + 2 * phase);
   return meanC + season + daily + wobble + shiftC;
 }
-
-/** °C to °F. */
-export function celsiusToFahrenheit(tempC: number): number {
-  return (tempC * 9) / 5 + 32;
-}

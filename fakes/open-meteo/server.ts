@@ -11,20 +11,12 @@ import { pathToFileURL } from "node:url";
 import { parseArgs } from "node:util";
 import { Unit } from "@openmeteo/sdk/unit.js";
 import { Variable } from "@openmeteo/sdk/variable.js";
-import { SCENARIO_SHIFT_C, celsiusToFahrenheit, fakeTemperatureC } from "./climate";
+import { WEATHER_SCENARIOS, type WeatherScenario } from "../../shared/constants";
+import { cToF } from "../../shared/units";
+import { SCENARIO_SHIFT_C, fakeTemperatureC } from "./climate";
 import { encodeLocation, encodeResponse, type LocationResponse } from "./flatbuffers-response";
 
-export const WEATHER_SCENARIOS = [
-  "normal",
-  "heat_wave",
-  "cold_snap",
-  "outage",
-  "reset",
-  "garbage",
-  "slow",
-  "redirect",
-] as const;
-export type WeatherScenario = (typeof WEATHER_SCENARIOS)[number];
+export { WEATHER_SCENARIOS, type WeatherScenario };
 
 /** Kinds of bad answer the "garbage" scenario sends, each a 200 the client will try to read. */
 export const GARBAGE_KINDS = [
@@ -144,7 +136,7 @@ function forecastLocations(query: URLSearchParams, shiftC: number, spoil?: Garba
       if (spoil === "nan_values") return Number.NaN;
       if (spoil === "absurd_values") return 999;
       const tempC = fakeTemperatureC(gridLat, gridLon, startS + i * HOUR_S, shiftC);
-      return fahrenheit ? celsiusToFahrenheit(tempC) : tempC;
+      return fahrenheit ? cToF(tempC) : tempC;
     });
     const unit = fahrenheit !== (spoil === "wrong_unit") ? Unit.fahrenheit : Unit.celsius;
     return {

@@ -11,7 +11,8 @@ import { assessTransit, type DepartureSearch } from "@shared/temperature/assess"
 import type { BoxSpec } from "@shared/temperature/box-model";
 import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
 import { buildTransitTimeline, type TimelineRequest, type TransitTimeline } from "@shared/temperature/timeline";
-import { SCENARIO_SHIFT_C, celsiusToFahrenheit, fakeTemperatureC } from "../../fakes/open-meteo/climate";
+import { cToF } from "@shared/units";
+import { SCENARIO_SHIFT_C, fakeTemperatureC } from "../../fakes/open-meteo/climate";
 
 const WARMUP_RUNS = 20;
 const TIMED_RUNS = 200;
@@ -51,7 +52,7 @@ function givenForecasts(timeline: TransitTimeline, shiftC: number): PointForecas
       const atMs = Date.parse(fromHour) + h * 3_600_000;
       return {
         at: new Date(atMs).toISOString(),
-        tempF: celsiusToFahrenheit(fakeTemperatureC(w.lat, w.lon, atMs / 1000, shiftC)),
+        tempF: cToF(fakeTemperatureC(w.lat, w.lon, atMs / 1000, shiftC)),
       };
     }),
   }));

@@ -4,7 +4,8 @@ import { assessTransit } from "@shared/temperature/assess";
 import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
 import { buildTransitTimeline } from "@shared/temperature/timeline";
 import { GARBAGE_KINDS, startOpenMeteoFake, type OpenMeteoFake } from "../../fakes/open-meteo/server";
-import { celsiusToFahrenheit, fakeTemperatureC } from "../../fakes/open-meteo/climate";
+import { cToF } from "@shared/units";
+import { fakeTemperatureC } from "../../fakes/open-meteo/climate";
 import { WEATHER_TIMEOUT_MS, fetchHourlyForecastsF, type ForecastRequest } from "./weather";
 
 let fake: OpenMeteoFake;
@@ -41,7 +42,7 @@ describe("fetchHourlyForecastsF against the fake", () => {
     expect(nashville!.hours[0]!.at).toBe("2026-07-15T00:00:00.000Z");
     expect(nashville!.hours[23]!.at).toBe("2026-07-15T23:00:00.000Z");
     // the fake's value at its grid cell (36.10, −86.65), as float32 on the wire
-    const expectedF = celsiusToFahrenheit(fakeTemperatureC(36.1, -86.65, Date.parse("2026-07-15T20:00:00Z") / 1000));
+    const expectedF = cToF(fakeTemperatureC(36.1, -86.65, Date.parse("2026-07-15T20:00:00Z") / 1000));
     expect(nashville!.hours[20]!.tempF).toBeCloseTo(expectedF, 1);
     // NOAA normals, Nashville July: low 70.8 °F, high 89.5 °F [memory]; the fake wobbles around them
     for (const { tempF } of nashville!.hours) expect(tempF).toBeGreaterThan(55);

@@ -1,6 +1,8 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
 import { NotFoundError, DriverException, ConnectionException } from "@mikro-orm/core";
 import { randomUUID } from "node:crypto";
+import { DEFAULT_UNIT_SYSTEM, UNIT_SYSTEMS, type UnitSystem } from "@shared/units";
+import { sentence } from "@shared/validation/messages";
 
 /** An error with a status and a message meant for the person using the app. */
 export class HttpError extends Error {
@@ -10,6 +12,8 @@ export class HttpError extends Error {
     message: string,
     public readonly details?: Record<string, unknown>,
     public readonly headers?: Record<string, string>,
+    /** The message in another unit system, where it names a measurement (see validate.ts). */
+    public readonly messageIn?: (units: UnitSystem) => string,
   ) {
     super(message);
   }
@@ -17,11 +21,28 @@ export class HttpError extends Error {
 
 export const badRequest = (message: string, details?: Record<string, unknown>) =>
   new HttpError(400, "bad_request", message, details);
+/**
+ * A 400 about one field, in the words the forms use: invalidField(["animals", 2, "taxonId"],
+ * "this species is not in the catalogue") says "Animal line 3 species: this species is not in the
+ * catalogue." and names the field `animals.2.taxonId` for the form.
+ */
+export const invalidField = (
+  path: readonly (string | number)[],
+  instruction: string,
+  details?: Record<string, unknown>,
+  code = "bad_request",
+) => new HttpError(400, code, sentence(path, instruction), { field: path.join(".") || "body", ...details });
 export const forbidden = (message = "You do not have access to this.") => new HttpError(403, "forbidden", message);
 export const notFound = (what = "That record") => new HttpError(404, "not_found", `${what} was not found.`);
 export const conflict = (message: string, details?: Record<string, unknown>) =>
   new HttpError(409, "conflict", message, details);
 export const unavailable = (message: string) => new HttpError(503, "unavailable", message);
+
+/** The unit system a request asks for in the `Hatchway-Units` header; °F and inches when it names none. */
+export function unitsOf(req: { get(name: string): string | undefined }): UnitSystem {
+  const asked = req.get("Hatchway-Units")?.trim().toLowerCase();
+  return UNIT_SYSTEMS.find((system) => system === asked) ?? DEFAULT_UNIT_SYSTEM;
+}
 
 /** Every response carries a correlation id; a person reporting a problem can quote it. */
 export const correlationId: RequestHandler = (req, res, next) => {
@@ -48,7 +69,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
 
   if (err instanceof HttpError) {
     status = err.status;
-    body = { code: err.code, message: err.message, ...(err.details ?? {}) };
+    body = { code: err.code, message: err.messageIn?.(unitsOf(req)) ?? err.message, ...(err.details ?? {}) };
     for (const [k, v] of Object.entries(err.headers ?? {})) res.setHeader(k, v);
   } else if (err instanceof NotFoundError) {
     status = 404;

@@ -2,6 +2,8 @@ import { randomBytes, timingSafeEqual } from "node:crypto";
 import type { RequestHandler } from "express";
 import helmet from "helmet";
 import { HttpError } from "./errors";
+import { NO_CONTROL_CHARACTERS } from "@shared/schemas/common";
+import { sentence } from "@shared/validation/messages";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -55,10 +57,20 @@ export const rejectNul: RequestHandler = (req, _res, next) => {
   const found = findNul(req.body, "");
   if (found !== null)
     return next(
-      new HttpError(400, "invalid", `${found || "body"} must not contain NUL characters`, { field: found || "body" }),
+      new HttpError(400, "invalid", nulMessage(found), {
+        field: found || "body",
+      }),
     );
   next();
 };
+
+/** "Box 1 label: remove the invisible control characters." — or about a key, without echoing it. */
+function nulMessage(found: string): string {
+  const parts = found ? found.split(".").map((part) => (/^\d+$/.test(part) ? Number(part) : part)) : [];
+  const badKey = parts.findIndex((part) => typeof part === "string" && part.includes("\u0000"));
+  if (badKey >= 0) return sentence(parts.slice(0, badKey), `${NO_CONTROL_CHARACTERS} from the name of a field`);
+  return sentence(parts, NO_CONTROL_CHARACTERS);
+}
 
 function findNul(value: unknown, path: string, depth = 0): string | null {
   if (depth > 64) return path;

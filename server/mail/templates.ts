@@ -1,3 +1,4 @@
+import { formatDate } from "@shared/dates";
 import type { MailDraft } from "../services/outbox";
 
 /** Plain-text mail: it reads the same in every client and cannot carry active content. */
@@ -114,14 +115,15 @@ export function documentExpiryMail(p: {
   daysLeft: number;
   link: string;
 }): MailDraft {
+  const lastDay = formatDate(p.validTo);
   const when =
     p.daysLeft === 0
       ? "today is its last valid day"
-      : `its last valid day is ${p.validTo}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}`;
+      : `its last valid day is ${lastDay}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}`;
   return {
     to: p.to,
     topic: "document.expiring",
-    subject: `${p.kind} ${p.number} expires on ${p.validTo}`,
+    subject: `${p.kind} ${p.number} expires on ${lastDay}`,
     text: [
       `Hello ${p.name},`,
       "",

@@ -1,6 +1,6 @@
 import { PDFDocument, type Color, type PDFPage } from "pdf-lib";
 import { embedFonts, fitSize, fitText, safeText, textWidthPt, wrapText, type PdfFonts } from "./fonts";
-import { tempRangeParts } from "./format";
+import { tempRangeParts } from "@shared/units";
 import { COLORS } from "./layout";
 import type { ManifestBox, ManifestInput, PartyBlock } from "./manifest-input";
 import { drawQrCode } from "./qr";

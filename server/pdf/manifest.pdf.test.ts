@@ -98,7 +98,7 @@ describe("renderManifestPdf", () => {
     }
     // 400 × 300 × 250 mm is 15.7 × 11.8 × 9.8 in at 25.4 mm per inch [published]
     expect(all).toContain("400 × 300 × 250 mm (15.7 × 11.8 × 9.8 in)");
-    expect(all).toContain("Heat pack (40 h)");
+    expect(all).toContain("Heat pack, 40 hours");
   });
 
   it("prints the shipper and consignee name-and-address blocks in full", () => {
@@ -137,7 +137,8 @@ describe("renderManifestPdf", () => {
     }
     expect(all).toContain("State import permit");
     expect(all).toContain("Certificate of Veterinary Inspection (CVI)");
-    expect(all).toContain("Jan 1, 2026 – Dec 31, 2026");
+    // Gregorian calendar [published]: 2026-01-01 and 2026-12-31 are Thursdays.
+    expect(all).toContain("Thu, Jan 1, 2026 – Thu, Dec 31, 2026");
   });
 
   it("carries the temperature range in °F and °C and the standard cautions", () => {

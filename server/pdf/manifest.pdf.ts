@@ -1,20 +1,16 @@
+import {
+  ANIMAL_ORIGIN_WORDS,
+  DOCUMENT_KIND_WORDS,
+  PACK_WORDS,
+  PURPOSE_WORDS,
+  SEX_WORDS,
+  TRANSPORT_MODE_WORDS,
+  WALL_MATERIAL_WORDS,
+} from "@shared/words";
 import { PDFDocument } from "pdf-lib";
 import { embedFonts, fitText, safeText, textWidthPt, wrapText } from "./fonts";
-import {
-  DOCUMENT_KIND_LABELS,
-  MODE_LABELS,
-  ORIGIN_LABELS,
-  PACK_LABELS,
-  PURPOSE_LABELS,
-  SEX_LABELS,
-  WALL_LABELS,
-  formatDimensionsMm,
-  formatIsoDate,
-  formatLengthMm,
-  formatTempRangeF,
-  formatWeightG,
-  formatZonedTime,
-} from "./format";
+import { formatDateRange, formatInstant } from "@shared/dates";
+import { formatDimensionsBoth, formatLengthBoth, formatTempRangeBoth, formatWeightBoth } from "@shared/units";
 import { COLORS, PageFlow, drawNoteBox, drawTable, type Cell, type TableRow } from "./layout";
 import type { ManifestAnimal, ManifestBox, ManifestInput, PartyBlock } from "./manifest-input";
 import { drawQrCode } from "./qr";
@@ -100,14 +96,14 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
   flow.drawLine("HATCHWAY  ·  PACKING MANIFEST", flow.left, topY - 10, { bold: true, sizePt: 9, color: COLORS.green });
   const numberText = fitText(flow.fonts.bold, `Transfer ${input.transferNumber}`, 20, textW);
   page.drawText(numberText, { x: flow.left, y: topY - 34, size: 20, font: flow.fonts.bold, color: COLORS.ink });
-  flow.drawLine(`${MODE_LABELS[input.mode]}  ·  ${PURPOSE_LABELS[input.purpose]}`, flow.left, topY - 50, {
+  flow.drawLine(`${TRANSPORT_MODE_WORDS[input.mode]}  ·  ${PURPOSE_WORDS[input.purpose]}`, flow.left, topY - 50, {
     sizePt: 10,
   });
 
   const animals = input.boxes.reduce((n, b) => n + animalsInBox(b), 0);
   const facts: [string, string][] = [
-    ["Planned departure", formatZonedTime(input.plannedDeparture.at, input.plannedDeparture.tz)],
-    ["Expected arrival", formatZonedTime(input.expectedArrival.at, input.expectedArrival.tz)],
+    ["Planned departure", formatInstant(input.plannedDeparture.at, input.plannedDeparture.tz)],
+    ["Expected arrival", formatInstant(input.expectedArrival.at, input.expectedArrival.tz)],
     ["Boxes", String(input.boxes.length)],
     ["Animals", `${animals} (${speciesTotals(input.boxes).length} species)`],
   ];
@@ -223,11 +219,13 @@ const ANIMAL_COLUMNS = [
 const NOTES_INDENT_PT = 22;
 
 function boxDetails(box: ManifestBox): string {
-  const parts = [formatDimensionsMm(box.lengthMm, box.widthMm, box.heightMm)];
+  const parts = [formatDimensionsBoth(box.lengthMm, box.widthMm, box.heightMm)];
   if (box.insulation) {
-    parts.push(`${WALL_LABELS[box.insulation.material]}, ${formatLengthMm(box.insulation.wallThicknessMm)} walls`);
+    parts.push(
+      `${WALL_MATERIAL_WORDS[box.insulation.material]}, ${formatLengthBoth(box.insulation.wallThicknessMm)} walls`,
+    );
   }
-  parts.push(PACK_LABELS[box.pack]);
+  parts.push(PACK_WORDS[box.pack]);
   parts.push(box.sealNumber ? `Seal no. ${box.sealNumber}` : "No seal number");
   const n = animalsInBox(box);
   parts.push(`${n} ${n === 1 ? "animal" : "animals"}`);
@@ -236,8 +234,8 @@ function boxDetails(box: ManifestBox): string {
 
 function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
   const size = [
-    animal.lengthMm === null ? null : formatLengthMm(animal.lengthMm),
-    animal.weightG === null ? null : formatWeightG(animal.weightG),
+    animal.lengthMm === null ? null : formatLengthBoth(animal.lengthMm),
+    animal.weightG === null ? null : formatWeightBoth(animal.weightG),
   ]
     .filter((s): s is string => s !== null)
     .join("\n");
@@ -250,9 +248,9 @@ function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
         String(lineNo),
         { text: animal.scientificName, bold: true, sub: animal.commonName },
         String(animal.count),
-        SEX_LABELS[animal.sex],
+        SEX_WORDS[animal.sex],
         animal.identifier ?? "—",
-        ORIGIN_LABELS[animal.origin],
+        ANIMAL_ORIGIN_WORDS[animal.origin],
         size || "—",
         venomous,
       ],
@@ -333,7 +331,7 @@ function drawTotals(flow: PageFlow, boxes: ManifestBox[]): void {
 }
 
 function validity(from: string, to: string | null): string {
-  return to ? `${formatIsoDate(from)} – ${formatIsoDate(to)}` : `from ${formatIsoDate(from)}`;
+  return formatDateRange(from, to);
 }
 
 function drawDocuments(flow: PageFlow, input: ManifestInput): void {
@@ -352,7 +350,7 @@ function drawDocuments(flow: PageFlow, input: ManifestInput): void {
     ],
     rows: input.documents.map((d) => ({
       cells: [
-        DOCUMENT_KIND_LABELS[d.kind],
+        DOCUMENT_KIND_WORDS[d.kind],
         { text: d.number, bold: true },
         d.issuer,
         d.holder,
@@ -367,7 +365,7 @@ function drawTemperature(flow: PageFlow, input: ManifestInput): void {
   flow.heading("Temperature and packing", 40);
   const t = input.temperature;
   if (t?.safeRangeF) {
-    flow.paragraph(`Safe transit range: ${formatTempRangeF(t.safeRangeF.minF, t.safeRangeF.maxF)}`, {
+    flow.paragraph(`Safe transit range: ${formatTempRangeBoth(t.safeRangeF.minF, t.safeRangeF.maxF)}`, {
       bold: true,
       sizePt: 10,
     });
@@ -451,7 +449,7 @@ function drawCustody(flow: PageFlow): void {
 }
 
 function drawFooters(flow: PageFlow, input: ManifestInput): void {
-  const produced = `Produced ${formatZonedTime(input.generatedAt, input.generatedTz)} by Hatchway`;
+  const produced = `Produced ${formatInstant(input.generatedAt, input.generatedTz)} by Hatchway`;
   const total = flow.pages.length;
   flow.pages.forEach((page, i) => {
     page.drawLine({

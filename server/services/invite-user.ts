@@ -6,7 +6,7 @@ import { UserSchema } from "../db/entities/user.entity";
 import type { Actor } from "../auth/actor";
 import { OrganizationSchema } from "../db/entities/organization.entity";
 import { PasswordTokenSchema } from "../db/entities/password-token.entity";
-import { conflict, badRequest } from "../http/errors";
+import { conflict, invalidField } from "../http/errors";
 import { enqueueMail } from "./outbox";
 import { invitationMail } from "../mail/templates";
 import type { AppLinks } from "../mail/links";
@@ -29,10 +29,10 @@ export async function inviteUser({
   if (await em.count(UserSchema, { emailKey: key }))
     throw conflict("An account with this e-mail already exists.", { field: "email" });
   if (input.role === "member" && !input.organizationId)
-    throw badRequest("organizationId: a member needs an organisation", { field: "organizationId" });
+    throw invalidField(["organizationId"], "a keeper organisation member needs an organisation");
   const organization = input.organizationId ? await em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
   if (input.organizationId && !organization)
-    throw badRequest("organizationId: no such organisation", { field: "organizationId" });
+    throw invalidField(["organizationId"], "choose an organisation from the list");
 
   const user = em.create(UserSchema, {
     email: input.email,

@@ -1,4 +1,6 @@
 import type { AnimalOrigin, DocumentKind, Purpose, Sex, UsState } from "@shared/constants";
+import { formatDate } from "@shared/dates";
+import { DOCUMENT_KIND_IN_SENTENCE, HOLDER_SIDE_WORDS } from "../words/documents";
 import { FEDERAL, jurisdictionName, leavesContinentalUs, type Jurisdiction } from "./jurisdiction";
 import type { PermitRequirement, Rule, RuleConditions, RuleEffect, StateTransitPolicy } from "./rule";
 import type { EvaluateDocument, EvaluateResponse, Finding, Severity, Verdict } from "./schemas";
@@ -85,15 +87,6 @@ interface PreparedDocument {
 type Match = { satisfiedBy: NonNullable<Finding["satisfiedBy"]>; label: string } | { reason: string | null };
 
 const SEVERITY_ORDER: Record<Severity, number> = { blocks: 0, needs_document: 1, advisory: 2 };
-
-const KIND_LABELS: Record<DocumentKind, string> = {
-  state_import_permit: "import permit",
-  possession_permit: "possession permit or licence",
-  export_permit: "export permit",
-  federal_permit: "federal permit",
-  captive_bred_registration: "captive-bred wildlife registration",
-  cvi: "certificate of veterinary inspection (CVI) or health certificate",
-};
 
 /**
  * Evaluates every animal of a transfer against the rules in force on its ship date and the
@@ -384,10 +377,10 @@ function permitRequirement(
   context: FindingContext,
 ): { description: string; match: Match } {
   const { rule, animal } = context;
-  const kinds = requirement.documentKinds.map((kind) => KIND_LABELS[kind]).join(" or ");
+  const kinds = requirement.documentKinds.map((kind) => DOCUMENT_KIND_IN_SENTENCE[kind]).join(" or ");
   const issuer = rule.jurisdiction === FEDERAL ? "" : ` from ${jurisdictionName(rule.jurisdiction)}`;
   const species = requirement.namesSpecies ? ` naming ${animal.scientificName}` : "";
-  const holder = requirement.holder === "either" ? "" : `, held by the ${requirement.holder}`;
+  const holder = requirement.holder === "either" ? "" : `, held by ${HOLDER_SIDE_WORDS[requirement.holder]}`;
   return { description: `${withArticle(kinds)}${issuer}${species}${holder}`, match: matchPermit(requirement, context) };
 }
 
@@ -401,7 +394,7 @@ function certificateRequirement(
   const species = effect.namesSpecies ? `, naming ${context.animal.scientificName}` : "";
   const statements = effect.statements.length ? `, stating "${effect.statements.join('" and "')}"` : "";
   return {
-    description: `a ${KIND_LABELS.cvi}${signer} no more than ${effect.withinDays} days before the ship date${species}${statements}`,
+    description: `a ${DOCUMENT_KIND_IN_SENTENCE.cvi}${signer} no more than ${effect.withinDays} days before the ship date${species}${statements}`,
     match: matchCertificate(effect, context),
   };
 }
@@ -430,7 +423,7 @@ function normalizeStatement(statement: string): string {
 function documentLabel(doc: EvaluationDocument): string {
   const number = doc.number ? ` no. ${doc.number}` : "";
   const issuer = doc.jurisdiction === FEDERAL ? "" : ` from ${jurisdictionName(doc.jurisdiction)}`;
-  return `the ${doc.kind === "cvi" ? "certificate" : KIND_LABELS[doc.kind]}${number}${issuer}`;
+  return `the ${doc.kind === "cvi" ? "certificate" : DOCUMENT_KIND_IN_SENTENCE[doc.kind]}${number}${issuer}`;
 }
 
 function satisfied(doc: EvaluationDocument): Match {
@@ -487,7 +480,7 @@ function matchCertificate(effect: CertificateEffect, context: FindingContext): M
 function holderFailure(requirement: PermitRequirement, doc: EvaluationDocument): string | null {
   const { holder } = requirement;
   return holder !== "either" && doc.holderSide !== undefined && doc.holderSide !== holder
-    ? `${documentLabel(doc)} is held by the ${doc.holderSide}, not the ${holder}`
+    ? `${documentLabel(doc)} is held by ${HOLDER_SIDE_WORDS[doc.holderSide]}, not ${HOLDER_SIDE_WORDS[holder]}`
     : null;
 }
 
@@ -509,7 +502,9 @@ function windowFailure(doc: EvaluationDocument, shipDate: string): string | null
   const startsLater = doc.validFrom && shipDate < doc.validFrom;
   const endedBefore = doc.validTo && doc.validTo < shipDate;
   if (!startsLater && !endedBefore) return null;
-  return `${documentLabel(doc)} is valid from ${doc.validFrom ?? "an open date"} to ${doc.validTo ?? "an open date"}, which does not include the ship date ${shipDate}`;
+  const from = doc.validFrom ? formatDate(doc.validFrom) : "an open date";
+  const to = doc.validTo ? formatDate(doc.validTo) : "an open date";
+  return `${documentLabel(doc)} is valid from ${from} to ${to}, which does not include the ship date ${formatDate(shipDate)}`;
 }
 
 /** Whole calendar days from one ISO date to another (UTC, so no time zone or DST shifts it). */
@@ -524,7 +519,8 @@ function daysBetween(fromIso: string, toIso: string): number {
 function ageFailure(doc: EvaluationDocument, shipDate: string, withinDays: number): string | null {
   if (!doc.issuedOn) return `${documentLabel(doc)} has no issue date`;
   const ageDays = daysBetween(doc.issuedOn, shipDate);
-  if (ageDays < 0) return `${documentLabel(doc)} is dated ${doc.issuedOn}, after the ship date ${shipDate}`;
+  if (ageDays < 0)
+    return `${documentLabel(doc)} is dated ${formatDate(doc.issuedOn)}, after the ship date ${formatDate(shipDate)}`;
   return ageDays > withinDays
     ? `${documentLabel(doc)} was issued ${ageDays} days before the ship date; it may be at most ${withinDays} days old`
     : null;

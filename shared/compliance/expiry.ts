@@ -1,7 +1,8 @@
 /** A document whose last valid day is this many days away, or fewer, is shown as expiring and reminded about. */
 export const EXPIRY_WARNING_DAYS = 30;
 
-export type ExpiryStatus = "open" | "valid" | "expiring" | "expired";
+export const EXPIRY_STATUSES = ["open", "valid", "expiring", "expired"] as const;
+export type ExpiryStatus = (typeof EXPIRY_STATUSES)[number];
 
 /** Whole calendar days from one ISO date (YYYY-MM-DD) to another, counted in UTC so no clock change shifts it. */
 export function daysFromTo(fromIso: string, toIso: string): number {

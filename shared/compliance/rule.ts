@@ -1,5 +1,6 @@
-import { z } from "zod";
 import { ANIMAL_ORIGINS, DOCUMENT_KINDS, LIMITS, PURPOSES, SEXES, US_STATES } from "@shared/constants";
+import { NO_CONTROL_CHARACTERS } from "../schemas/common";
+import { z } from "../validation/zod";
 import { FEDERAL, JURISDICTIONS } from "./jurisdiction";
 import { taxonSelectorSchema } from "./taxon";
 
@@ -33,7 +34,7 @@ const text = (max: number) =>
     .trim()
     .min(1)
     .max(max)
-    .refine((value) => !value.includes("\u0000"), "must not contain NUL");
+    .refine((value) => !value.includes("\u0000"), { params: { instruction: NO_CONTROL_CHARACTERS } });
 
 export const citationSchema = z.strictObject({
   text: text(LIMITS.textMax),
@@ -96,7 +97,7 @@ export type RuleEffect = z.infer<typeof ruleEffectSchema>;
 
 export const ruleSchema = z
   .strictObject({
-    id: z.string().regex(/^[a-z0-9][a-z0-9.-]{0,99}$/, "lower-case letters, digits, dots and dashes"),
+    id: z.string().regex(/^[a-z0-9][a-z0-9.-]{0,99}$/),
     /** Editing a rule makes a new version under the same id. */
     version: z.int().min(1),
     jurisdiction: z.enum(JURISDICTIONS),
@@ -122,7 +123,7 @@ export const ruleSchema = z
         code: "custom",
         input: rule.citation.text,
         path: ["citation", "text"],
-        message: `a demo rule's citation must say "${DEMO_RULE_NOTICE}"`,
+        params: { instruction: `a demo rule's citation must say “${DEMO_RULE_NOTICE}”` },
       });
     }
     if (rule.effectiveFrom && rule.effectiveTo && rule.effectiveTo < rule.effectiveFrom) {
@@ -130,7 +131,7 @@ export const ruleSchema = z
         code: "custom",
         input: rule.effectiveTo,
         path: ["effectiveTo"],
-        message: "must not be before effectiveFrom",
+        params: { instruction: "make it no earlier than the first day in force" },
       });
     }
     if (rule.jurisdiction === FEDERAL && ["import", "export", "transit"].includes(rule.governs)) {
@@ -138,7 +139,10 @@ export const ruleSchema = z
         code: "custom",
         input: rule.governs,
         path: ["governs"],
-        message: "a federal rule governs interstate, movement or possession",
+        params: {
+          instruction:
+            "a federal rule governs crossing a state line, any move, or keeping; not a state's import, export or transit",
+        },
       });
     }
   });

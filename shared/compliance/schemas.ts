@@ -1,6 +1,7 @@
-import { z } from "zod";
 import { ANIMAL_ORIGINS, DOCUMENT_KINDS, LIMITS, PURPOSES, SEXES, US_STATES } from "@shared/constants";
 import { JURISDICTIONS } from "./jurisdiction";
+import { z } from "../validation/zod";
+import { NO_CONTROL_CHARACTERS } from "../schemas/common";
 import { citationSchema, HOLDER_SIDES } from "./rule";
 
 const text = (max: number) =>
@@ -9,7 +10,7 @@ const text = (max: number) =>
     .trim()
     .min(1)
     .max(max)
-    .refine((value) => !value.includes("\u0000"), "must not contain NUL");
+    .refine((value) => !value.includes("\u0000"), { params: { instruction: NO_CONTROL_CHARACTERS } });
 const name = text(LIMITS.nameMax);
 const isoDate = z.iso.date();
 
@@ -23,7 +24,10 @@ export const COMPLIANCE_LIMITS = {
 
 const validityWindow = (doc: { validFrom?: string | null; validTo?: string | null }) =>
   !doc.validFrom || !doc.validTo || doc.validFrom <= doc.validTo;
-const windowMessage = { message: "validTo must not be before validFrom", path: ["validTo"] };
+const windowMessage = {
+  params: { instruction: "make it no earlier than the first valid day" },
+  path: ["validTo"],
+};
 
 export const evaluateAnimalSchema = z.strictObject({
   scientificName: name,
@@ -132,11 +136,11 @@ export const documentRecordSchema = z
   })
   .refine(validityWindow, windowMessage)
   .refine((doc) => doc.kind !== "cvi" || (doc.issuedOn !== null && doc.veterinarianName !== null), {
-    message: "a certificate needs its issue date and veterinarian",
+    params: { instruction: "a certificate needs the date it was issued and the veterinarian's name" },
     path: ["issuedOn"],
   })
   .refine((doc) => !doc.inspectionDate || !doc.issuedOn || doc.inspectionDate <= doc.issuedOn, {
-    message: "the inspection cannot come after the certificate was issued",
+    params: { instruction: "the inspection cannot come after the certificate was issued" },
     path: ["inspectionDate"],
   });
 export type DocumentRecord = z.infer<typeof documentRecordSchema>;

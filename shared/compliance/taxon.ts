@@ -1,5 +1,6 @@
-import { z } from "zod";
 import { LIMITS } from "@shared/constants";
+import { NO_CONTROL_CHARACTERS } from "../schemas/common";
+import { z } from "../validation/zod";
 
 /**
  * Ranks a lineage may carry. Wider than TAXON_RANKS because some rules name a rank between
@@ -27,7 +28,7 @@ const taxonNameSchema = z
   .trim()
   .min(1)
   .max(LIMITS.nameMax)
-  .refine((name) => !name.includes("\u0000"), "must not contain NUL");
+  .refine((name) => !name.includes("\u0000"), { params: { instruction: NO_CONTROL_CHARACTERS } });
 
 /** The taxon the server resolves from a scientific name before calling the evaluation. */
 export const resolvedTaxonSchema = z.strictObject({

@@ -1,22 +1,34 @@
-import { z } from "zod";
 import { ORGANIZATION_KINDS, USER_ROLES } from "../constants";
+import { instruction } from "../validation/messages";
+import { z } from "../validation/zod";
 import { addressSchema, emailSchema, idSchema, passwordSchema, phoneSchema, requiredText, text } from "./common";
 
 export const loginSchema = z.strictObject({
   email: text(254),
-  password: z.string().max(1024, { message: "Too long" }),
+  password: z.string().max(1024),
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
 export const setPasswordSchema = z.strictObject({
-  token: text(200).pipe(z.string().min(20, { message: "This link is not valid" })),
+  token: text(200).pipe(
+    z.string().min(20, { error: instruction("this link is not whole; open the link from the e-mail again") }),
+  ),
   password: passwordSchema,
 });
 export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
 
+/** The welcome form: a new password, typed twice (only the first goes to the server). */
+export const passwordChoiceSchema = z
+  .strictObject({ password: passwordSchema, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, {
+    path: ["confirm"],
+    params: { instruction: "the two passwords differ; type the same one again" },
+  });
+export type PasswordChoice = z.infer<typeof passwordChoiceSchema>;
+
 export const organizationInputSchema = z.strictObject({
   name: requiredText(200),
-  kind: z.enum(ORGANIZATION_KINDS, { message: "Choose one of the organisation kinds" }),
+  kind: z.enum(ORGANIZATION_KINDS),
   address: addressSchema,
   phone: phoneSchema,
   email: emailSchema,
@@ -29,14 +41,14 @@ export type OrganizationPatch = z.infer<typeof organizationPatchSchema>;
 export const userInviteSchema = z.strictObject({
   email: emailSchema,
   displayName: requiredText(120),
-  role: z.enum(USER_ROLES, { message: "Choose admin, member or courier" }),
+  role: z.enum(USER_ROLES),
   organizationId: idSchema.nullable(),
 });
 export type UserInviteInput = z.infer<typeof userInviteSchema>;
 
 export const userPatchSchema = z.strictObject({
   displayName: requiredText(120).optional(),
-  role: z.enum(USER_ROLES, { message: "Choose admin, member or courier" }).optional(),
+  role: z.enum(USER_ROLES).optional(),
   organizationId: idSchema.nullable().optional(),
   disabled: z.boolean().optional(),
 });

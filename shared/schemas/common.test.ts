@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { type z } from "zod";
-import { addressSchema, describeIssues, emailKey, emailSchema, passwordSchema, requiredText } from "./common";
+import { describeIssues } from "../validation/messages";
+import { addressSchema, emailKey, emailSchema, passwordSchema, requiredText } from "./common";
 import { organizationInputSchema } from "./auth";
 
 describe("emailKey", () => {
@@ -62,7 +63,7 @@ describe("describeIssues", () => {
     expect(bad.success).toBe(false);
     expect(describeIssues((bad as { error: z.ZodError }).error)).toEqual({
       field: "address.zip",
-      message: "address.zip: expected a string",
+      message: "ZIP code: enter a 5-digit ZIP code, such as 97401.",
     });
     const extra = organizationInputSchema.safeParse({
       name: "X",
@@ -72,6 +73,9 @@ describe("describeIssues", () => {
       email: "a@b.co",
       owner: "me",
     });
-    expect(describeIssues((extra as { error: z.ZodError }).error).field).toBe("owner");
+    expect(describeIssues((extra as { error: z.ZodError }).error)).toEqual({
+      field: "owner",
+      message: "Remove “owner”: it is not a field here.",
+    });
   });
 });

@@ -1,20 +1,23 @@
-import { z } from "zod";
 import { LIMITS, US_STATES } from "../constants";
+import { limitsAsShown, type Quantity } from "../units";
+import { z } from "../validation/zod";
 
 const NUL = "\u0000";
+/** What a keeper is told about an invisible NUL character pasted into a field. */
+export const NO_CONTROL_CHARACTERS = "remove the invisible control characters";
 
 /** A trimmed text field that refuses NUL characters and caps its length. */
 export function text(max: number = LIMITS.nameMax) {
   return z
     .string()
-    .refine((s) => !s.includes(NUL), { message: "Remove the NUL characters" })
+    .refine((s) => !s.includes(NUL), { params: { instruction: NO_CONTROL_CHARACTERS } })
     .transform((s) => s.trim())
-    .pipe(z.string().max(max, { message: `Use at most ${max} characters` }));
+    .pipe(z.string().max(max));
 }
 
 /** A required text field: at least one visible character after trimming. */
 export function requiredText(max: number = LIMITS.nameMax) {
-  return text(max).pipe(z.string().min(1, { message: "Fill this in" }));
+  return text(max).pipe(z.string().min(1));
 }
 
 /** Optional free text: an empty string becomes null so the database keeps one "empty" value. */
@@ -35,25 +38,18 @@ export function emailKey(email: string): string {
 
 export const emailSchema = text(LIMITS.emailMax)
   .transform((s) => s.normalize("NFC"))
-  .pipe(z.email({ message: "Enter an e-mail address" }));
+  .pipe(z.email());
 
 export const passwordSchema = z
   .string()
-  .refine((s) => !s.includes(NUL), { message: "Remove the NUL characters" })
-  .pipe(
-    z
-      .string()
-      .min(LIMITS.passwordMin, { message: `Use at least ${LIMITS.passwordMin} characters` })
-      .max(LIMITS.passwordMax, { message: `Use at most ${LIMITS.passwordMax} characters` }),
-  );
+  .refine((s) => !s.includes(NUL), { params: { instruction: NO_CONTROL_CHARACTERS } })
+  .pipe(z.string().min(LIMITS.passwordMin).max(LIMITS.passwordMax));
 
-export const usStateSchema = z.enum(US_STATES, { message: "Choose a USPS state code such as OR or TN" });
+export const usStateSchema = z.enum(US_STATES);
 
-export const zipSchema = z.string().regex(/^\d{5}(-\d{4})?$/, { message: "Enter a 5-digit ZIP code" });
+export const zipSchema = z.string().regex(/^\d{5}(-\d{4})?$/);
 
-export const phoneSchema = text(40).pipe(
-  z.string().regex(/^[0-9+()\-. ext]{7,40}$/i, { message: "Enter a phone number" }),
-);
+export const phoneSchema = text(40).pipe(z.string().regex(/^[0-9+()\-. ext]{7,40}$/i));
 
 export const addressSchema = z.strictObject({
   street: requiredText(200),
@@ -63,29 +59,35 @@ export const addressSchema = z.strictObject({
 });
 export type Address = z.infer<typeof addressSchema>;
 
-export const idSchema = z.uuid({ message: "Choose a valid record" });
+export const idSchema = z.uuid();
 
-/** Turns zod issues into the one-line message our 400 bodies carry, naming the field. */
-export function describeIssues(error: z.ZodError): { field: string; message: string } {
-  const issue = error.issues[0];
-  if (!issue) return { field: "body", message: "The request is not valid." };
-  const field = issue.path.length ? issue.path.join(".") : "body";
-  if (issue.code === "unrecognized_keys") {
-    const keys = issue.keys.join(", ");
-    const where = issue.path.length ? ` in ${field}` : "";
-    return {
-      field: issue.keys[0] ?? field,
-      message: `Unknown field${issue.keys.length > 1 ? "s" : ""}${where}: ${keys}.`,
-    };
-  }
-  if (issue.code === "invalid_type") {
-    // zod does not keep the input on the issue; its default message names what it received.
-    if (/received undefined/.test(issue.message)) return { field, message: `${field}: fill this in` };
-    return { field, message: `${field}: expected ${article(issue.expected)}` };
-  }
-  return { field, message: `${field}: ${issue.message}` };
+/** A whole number within [min, max]; 1.5, -1, 1e309 and "3" are all refused. */
+export function wholeNumber(min: number, max: number) {
+  return z.int().min(min).max(max);
 }
 
-function article(expected: string): string {
-  return /^[aeiou]/.test(expected) ? `an ${expected}` : `a ${expected}`;
+/**
+ * A measurement in its stored unit (mm, °F or g, named by the field: `lengthMm`, `tempF`,
+ * `weightG`), within [min, max] or above `above`. The message gives the limit in the person's
+ * units, rounded to one decimal; the check accepts the limit as any system shows it, so a form
+ * that says "at most 7.9 in" for 200 mm takes 7.9 in.
+ */
+export function measure(quantity: Quantity, bounds: { above?: number; min?: number; max: number }) {
+  const highest = Math.max(...limitsAsShown(quantity, bounds.max));
+  const lowest = bounds.min === undefined ? undefined : Math.min(...limitsAsShown(quantity, bounds.min));
+  return z.number().check((ctx) => {
+    const value = ctx.value;
+    if (bounds.above !== undefined && !(value > bounds.above)) {
+      ctx.issues.push({ code: "too_small", origin: "number", minimum: bounds.above, inclusive: false, input: value });
+    } else if (lowest !== undefined && value < lowest - 1e-9) {
+      ctx.issues.push({ code: "too_small", origin: "number", minimum: bounds.min!, inclusive: true, input: value });
+    } else if (value > highest + 1e-9) {
+      ctx.issues.push({ code: "too_big", origin: "number", maximum: bounds.max, inclusive: true, input: value });
+    }
+  });
 }
+
+/** An instant with an explicit offset, e.g. 2027-03-09T16:00:00-05:00. */
+export const instantSchema = z.iso.datetime({ offset: true });
+/** A calendar date, e.g. 2026-07-14. */
+export const dateSchema = z.iso.date();

@@ -1,10 +1,10 @@
-import { z } from "zod";
 import type { DocumentKind } from "@shared/constants";
 import { JURISDICTIONS, type Jurisdiction } from "@shared/compliance/jurisdiction";
 import type { ExpiryStatus } from "@shared/compliance/expiry";
 import { ruleSchema, type HolderSide, type Rule } from "@shared/compliance/rule";
 import { documentRecordSchema, type DocumentRecord, type EvaluateResponse } from "@shared/compliance/schemas";
 import type { ScanContentType } from "@shared/compliance/scan-type";
+import { z } from "../validation/zod";
 import { idSchema, optionalText, requiredText, text } from "./common";
 
 // ---------------------------------------------------------------- rule library
@@ -18,7 +18,7 @@ export const ruleVersionInputSchema = z.strictObject({ rule: ruleSchema, retired
 export type RuleVersionInput = z.infer<typeof ruleVersionInputSchema>;
 
 export const ruleListQuerySchema = z.strictObject({
-  jurisdiction: z.enum(JURISDICTIONS, { message: "Use US or a USPS state code such as HI" }).optional(),
+  jurisdiction: z.enum(JURISDICTIONS).optional(),
   taxon: text(200).optional(),
 });
 export type RuleListQuery = z.infer<typeof ruleListQuerySchema>;

@@ -2,7 +2,6 @@
  * The transfer record's inputs (validated the same way by the form and the server) and
  * the shapes the API answers with.
  */
-import { z } from "zod";
 import {
   ANIMAL_ORIGINS,
   IDENTIFIER_KINDS,
@@ -27,32 +26,29 @@ import {
   type TransportMode,
   type UsState,
   type WallMaterial,
+  TRANSFER_LIST_ROLES,
+  TRANSFER_SORT_KEYS,
+  type CustodyKind,
+  type HandoffKind,
+  type PackingFindingCode,
+  type RegisterCondition,
+  type ViewerRole,
 } from "../constants";
-import { addressSchema, idSchema, optionalText, requiredText, text } from "./common";
+import { instruction } from "../validation/messages";
+import { z } from "../validation/zod";
+import {
+  addressSchema,
+  dateSchema,
+  idSchema,
+  instantSchema,
+  measure,
+  optionalText,
+  requiredText,
+  text,
+  wholeNumber,
+} from "./common";
 
-/** A whole number within [min, max]; 1.5, -1, 1e309 and "3" are all refused. */
-export function wholeNumber(min: number, max: number, what = "number") {
-  return z
-    .number({ message: `Enter a ${what}` })
-    .refine(Number.isFinite, { message: `Enter a finite ${what}` })
-    .refine(Number.isInteger, { message: "Use a whole number" })
-    .refine((n) => n >= min, { message: `Use at least ${min}` })
-    .refine((n) => n <= max, { message: `Use at most ${max.toLocaleString("en-US")}` });
-}
-
-/** A positive measurement below a sane maximum (sizes in mm, weights in g). */
-export function positiveMeasure(max: number, unit: string) {
-  return z
-    .number({ message: `Enter a number of ${unit}` })
-    .refine(Number.isFinite, { message: "Enter a finite number" })
-    .refine((n) => n > 0, { message: `Must be more than 0 ${unit}` })
-    .refine((n) => n <= max, { message: `Must be at most ${max.toLocaleString("en-US")} ${unit}` });
-}
-
-/** An instant with an explicit offset, e.g. 2027-03-09T16:00:00-05:00. */
-export const instantSchema = z.iso.datetime({ offset: true, message: "Enter a date and time with its offset" });
-/** A calendar date, e.g. 2026-07-14. */
-export const dateSchema = z.iso.date({ message: "Enter a date as YYYY-MM-DD" });
+export { dateSchema, instantSchema, wholeNumber };
 
 export const containerInputSchema = z.strictObject({
   /** Present for a box that already exists; absent for a new one. */
@@ -60,12 +56,12 @@ export const containerInputSchema = z.strictObject({
   /** The form's own key for the box, so animals can name their box before it has an id. */
   key: requiredText(64),
   label: requiredText(80),
-  lengthMm: positiveMeasure(LIMITS.boxDimensionMmMax, "mm"),
-  widthMm: positiveMeasure(LIMITS.boxDimensionMmMax, "mm"),
-  heightMm: positiveMeasure(LIMITS.boxDimensionMmMax, "mm"),
-  wallMaterial: z.enum(WALL_MATERIALS, { message: "Choose expanded polystyrene or corrugated board" }),
-  wallThicknessMm: positiveMeasure(LIMITS.wallThicknessMmMax, "mm"),
-  pack: z.enum(PACK_KINDS, { message: "Choose a pack" }),
+  lengthMm: measure("length", { above: 0, max: LIMITS.boxDimensionMmMax }),
+  widthMm: measure("length", { above: 0, max: LIMITS.boxDimensionMmMax }),
+  heightMm: measure("length", { above: 0, max: LIMITS.boxDimensionMmMax }),
+  wallMaterial: z.enum(WALL_MATERIALS),
+  wallThicknessMm: measure("length", { above: 0, max: LIMITS.wallThicknessMmMax }),
+  pack: z.enum(PACK_KINDS),
   sealNumber: optionalText(60),
 });
 export type ContainerInput = z.input<typeof containerInputSchema>;
@@ -73,14 +69,14 @@ export type ContainerInput = z.input<typeof containerInputSchema>;
 export const animalInputSchema = z.strictObject({
   id: idSchema.optional(),
   taxonId: idSchema,
-  count: wholeNumber(1, LIMITS.animalCountMax, "count"),
-  sex: z.enum(SEXES, { message: "Choose male, female or unknown" }),
+  count: wholeNumber(1, LIMITS.animalCountMax),
+  sex: z.enum(SEXES),
   identifier: optionalText(120),
   identifierKind: z.enum(IDENTIFIER_KINDS).nullable().optional(),
-  origin: z.enum(ANIMAL_ORIGINS, { message: "Choose where the animal came from" }),
-  lengthMm: positiveMeasure(LIMITS.lengthMmMax, "mm").nullable().optional(),
+  origin: z.enum(ANIMAL_ORIGINS),
+  lengthMm: measure("length", { above: 0, max: LIMITS.lengthMmMax }).nullable().optional(),
   lengthKind: z.enum(LENGTH_KINDS).nullable().optional(),
-  weightG: positiveMeasure(LIMITS.weightGMax, "g").nullable().optional(),
+  weightG: measure("weight", { above: 0, max: LIMITS.weightGMax }).nullable().optional(),
   hatchDate: dateSchema.nullable().optional(),
   notes: optionalText(2000),
   /** The `key` of the box it travels in; null until it is packed. */
@@ -93,26 +89,17 @@ const transferFields = {
   receiverContactId: idSchema.nullable(),
   origin: addressSchema,
   destination: addressSchema,
-  mode: z.enum(TRANSPORT_MODES, { message: "Choose how the animals travel" }),
+  mode: z.enum(TRANSPORT_MODES),
   plannedDepartureAt: instantSchema,
   expectedArrivalAt: instantSchema,
-  purpose: z.enum(PURPOSES, { message: "Choose the purpose of the move" }),
-  sale: z.boolean({ message: "Say whether this is a sale" }),
-  salePriceUsd: z
-    .number()
-    .refine(Number.isFinite)
-    .refine((n) => n >= 0 && n <= 10_000_000, { message: "Enter a price from 0" })
-    .nullable()
-    .optional(),
+  purpose: z.enum(PURPOSES),
+  sale: z.boolean(),
+  salePriceUsd: z.number().min(0).max(10_000_000).nullable().optional(),
   handlingNotes: optionalText(LIMITS.textMax),
   /** The sender's own notes: never shown to the receiver or the courier. */
   privateNotes: optionalText(LIMITS.textMax),
-  containers: z
-    .array(containerInputSchema)
-    .max(LIMITS.containersPerTransferMax, { message: `Use at most ${LIMITS.containersPerTransferMax} boxes` }),
-  animals: z
-    .array(animalInputSchema)
-    .max(LIMITS.animalsPerTransferMax, { message: `Use at most ${LIMITS.animalsPerTransferMax} animal lines` }),
+  containers: z.array(containerInputSchema).max(LIMITS.containersPerTransferMax),
+  animals: z.array(animalInputSchema).max(LIMITS.animalsPerTransferMax),
 };
 
 type Shape = {
@@ -129,13 +116,21 @@ function crossChecks(value: Shape, ctx: z.RefinementCtx) {
     value.expectedArrivalAt &&
     Date.parse(value.expectedArrivalAt) <= Date.parse(value.plannedDepartureAt)
   ) {
-    ctx.addIssue({ code: "custom", path: ["expectedArrivalAt"], message: "Arrival must be after departure" });
+    ctx.addIssue({
+      code: "custom",
+      path: ["expectedArrivalAt"],
+      params: { instruction: "make it later than the planned departure" },
+    });
   }
   if (value.containers) {
     const keys = new Set<string>();
     value.containers.forEach((c, i) => {
       if (keys.has(c.key))
-        ctx.addIssue({ code: "custom", path: ["containers", i, "key"], message: "Two boxes share this key" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["containers", i, "key"],
+          params: { instruction: "another box has the same reference; give each box its own" },
+        });
       keys.add(c.key);
     });
     value.animals?.forEach((a, i) => {
@@ -143,7 +138,7 @@ function crossChecks(value: Shape, ctx: z.RefinementCtx) {
         ctx.addIssue({
           code: "custom",
           path: ["animals", i, "containerKey"],
-          message: "Choose one of this transfer's boxes",
+          params: { instruction: "choose one of this transfer's boxes" },
         });
       }
     });
@@ -161,7 +156,7 @@ export function createTransferSchema(now: Date) {
       ctx.addIssue({
         code: "custom",
         path: ["plannedDepartureAt"],
-        message: "A new transfer cannot depart in the past",
+        params: { instruction: "a new transfer cannot leave in the past; choose a later time" },
       });
     }
   });
@@ -172,14 +167,14 @@ export function createTransferSchema(now: Date) {
  * so two people never silently overwrite each other). Lists, when given, replace the old ones.
  */
 export const transferPatchSchema = z
-  .strictObject({ version: wholeNumber(1, Number.MAX_SAFE_INTEGER, "version"), ...transferFields })
+  .strictObject({ version: wholeNumber(1, Number.MAX_SAFE_INTEGER), ...transferFields })
   .partial()
   .required({ version: true })
   .superRefine(crossChecks);
 export type TransferPatch = z.input<typeof transferPatchSchema>;
 
 export const transitionSchema = z.strictObject({
-  to: z.enum(TRANSFER_STATUSES, { message: "Name a state of the transfer" }),
+  to: z.enum(TRANSFER_STATUSES),
   reason: optionalText(1000),
   /** Set with a reason to ship despite a compliance or temperature block (logged). */
   override: z.boolean().optional(),
@@ -189,8 +184,8 @@ export type TransitionInput = z.input<typeof transitionSchema>;
 export const legsInputSchema = z.strictObject({
   legs: z
     .array(z.strictObject({ courierId: idSchema, fromLabel: optionalText(120), toLabel: optionalText(120) }))
-    .min(1, { message: "Assign at least one courier" })
-    .max(10, { message: "Use at most 10 legs" }),
+    .min(1, { error: instruction("assign at least one courier") })
+    .max(10),
 });
 export type LegsInput = z.input<typeof legsInputSchema>;
 
@@ -199,16 +194,12 @@ export const messageInputSchema = z.strictObject({ body: requiredText(4000) });
 /** What the person taking custody checks and records at a pickup or handoff. */
 export const handoffInputSchema = z.strictObject({
   /** 0 is the pickup from the sender; the last index is the delivery to the receiver. */
-  handoffIndex: wholeNumber(0, 20, "handoff number"),
-  boxesCounted: wholeNumber(0, LIMITS.containersPerTransferMax, "box count"),
+  handoffIndex: wholeNumber(0, 20),
+  boxesCounted: wholeNumber(0, LIMITS.containersPerTransferMax),
   seals: z
     .array(z.strictObject({ containerId: idSchema, sealNumber: optionalText(60), intact: z.boolean() }))
     .max(LIMITS.containersPerTransferMax),
-  boxTempF: z
-    .number()
-    .refine(Number.isFinite, { message: "Enter a temperature" })
-    .refine((t) => t >= -40 && t <= 160, { message: "Enter a temperature between -40 and 160 °F" })
-    .nullable(),
+  boxTempF: measure("temperature", { min: -40, max: 160 }).nullable(),
   place: z.strictObject({
     text: optionalText(200),
     lat: z.number().min(-90).max(90).nullable().optional(),
@@ -218,19 +209,19 @@ export const handoffInputSchema = z.strictObject({
   releasedByName: requiredText(120),
   receivedByName: requiredText(120),
   notes: optionalText(2000),
-  acknowledged: z.literal(true, { message: "Confirm that you have checked the boxes and taken custody" }),
+  acknowledged: z.literal(true, { message: "Confirm that you have checked the boxes and taken custody." }),
 });
 export type HandoffInput = z.input<typeof handoffInputSchema>;
 
 /** A count per outcome for one animal line; they must add up to the line's count. */
 export const checkInItemSchema = z.strictObject({
   animalId: idSchema,
-  arrivedWell: wholeNumber(0, LIMITS.animalCountMax, "count"),
-  arrivedProblem: wholeNumber(0, LIMITS.animalCountMax, "count"),
-  deadOnArrival: wholeNumber(0, LIMITS.animalCountMax, "count"),
-  missing: wholeNumber(0, LIMITS.animalCountMax, "count"),
+  arrivedWell: wholeNumber(0, LIMITS.animalCountMax),
+  arrivedProblem: wholeNumber(0, LIMITS.animalCountMax),
+  deadOnArrival: wholeNumber(0, LIMITS.animalCountMax),
+  missing: wholeNumber(0, LIMITS.animalCountMax),
   problem: optionalText(1000),
-  weightG: positiveMeasure(LIMITS.weightGMax, "g").nullable().optional(),
+  weightG: measure("weight", { above: 0, max: LIMITS.weightGMax }).nullable().optional(),
   notes: optionalText(2000),
 });
 export type CheckInItemInput = z.input<typeof checkInItemSchema>;
@@ -242,7 +233,7 @@ export const checkInInputSchema = z.strictObject({
     .array(
       z.strictObject({
         taxonId: idSchema,
-        count: wholeNumber(1, LIMITS.animalCountMax, "count"),
+        count: wholeNumber(1, LIMITS.animalCountMax),
         sex: z.enum(SEXES),
         notes: optionalText(1000),
       }),
@@ -250,17 +241,17 @@ export const checkInInputSchema = z.strictObject({
     .max(100),
   notes: optionalText(LIMITS.textMax),
   signedName: requiredText(120),
-  acknowledged: z.literal(true, { message: "Confirm that every container was opened and checked" }),
+  acknowledged: z.literal(true, { message: "Confirm that every container was opened and checked." }),
 });
 export type CheckInInput = z.input<typeof checkInInputSchema>;
 
 export const transferListQuerySchema = z.strictObject({
   status: z.enum(TRANSFER_STATUSES).optional(),
-  role: z.enum(["sending", "receiving", "carrying"]).optional(),
+  role: z.enum(TRANSFER_LIST_ROLES).optional(),
   departFrom: dateSchema.optional(),
   departTo: dateSchema.optional(),
   q: text(100).optional(),
-  sort: z.enum(["departure", "number", "status", "updated"]).default("departure"),
+  sort: z.enum(TRANSFER_SORT_KEYS).default("departure"),
   dir: z.enum(["asc", "desc"]).default("desc"),
   cursor: text(400).optional(),
   limit: z.coerce.number<string | number>().int().min(1).max(100).default(50),
@@ -346,7 +337,7 @@ export type LegDto = {
 
 export type HandoffDto = {
   handoffIndex: number;
-  kind: "pickup" | "handoff" | "delivery";
+  kind: HandoffKind;
   at: string;
   recordedBy: { id: string; displayName: string };
   releasedByName: string;
@@ -361,7 +352,7 @@ export type HandoffDto = {
 
 /** A problem with the packing the sender must resolve before sending for confirmation. */
 export type PackingFindingDto = {
-  code: "mixed_species" | "unpacked_animal" | "empty_box" | "no_animals" | "no_boxes";
+  code: PackingFindingCode;
   containerId: string | null;
   animalIds: string[];
   message: string;
@@ -399,7 +390,7 @@ export type CheckInDto = {
   allAccountedFor: boolean;
 };
 
-export type ViewerRole = "sender" | "receiver" | "courier" | "admin";
+export type { ViewerRole } from "../constants";
 
 /** What the caller may do now; the server decides, the client only shows. */
 export type TransferAbilitiesDto = {
@@ -492,7 +483,7 @@ export type TransferListDto = { transfers: TransferSummaryDto[]; nextCursor: str
 
 export type CustodyEntryDto = {
   seq: number;
-  kind: string;
+  kind: CustodyKind;
   at: string;
   actor: { id: string | null; displayName: string };
   payload: Record<string, unknown>;
@@ -536,7 +527,7 @@ export type RegisterEntryDto = {
   sourceOrganization: string;
   transferNumber: string;
   transferId: string;
-  condition: "well" | "problem";
+  condition: RegisterCondition;
   notes: string | null;
 };
 

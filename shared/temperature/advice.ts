@@ -1,4 +1,5 @@
 import type { PackKind } from "../constants";
+import { PACK_IN_SENTENCE } from "../words/packing";
 import type { AdviceBandsF } from "./profiles";
 
 /** What the guideline says for one ambient temperature. */
@@ -65,16 +66,9 @@ export function verdictOf(code: AdviceCode): Verdict {
   return VERDICT_OF[code];
 }
 
-const PACK_NAMES: Readonly<Record<PackKind, string>> = {
-  none: "no pack",
-  heat_40h: "a heat pack rated 40 h",
-  heat_72h: "a heat pack rated 72 h",
-  cold: "a cold pack",
-};
-
 /** One sentence for people: the advice and, where it matters, the pack. */
 export function adviceMessage(code: AdviceCode, pack: PackKind | null): string {
-  const packName = pack ? PACK_NAMES[pack] : "";
+  const packName = pack ? PACK_IN_SENTENCE[pack] : "";
   switch (code) {
     case "ship_as_planned":
       return `Ship as planned (${packName}): the box is expected to stay in the safe range.`;

@@ -14,7 +14,7 @@ import { SAFER_DEPARTURE_SEARCH_DAYS } from "./limits";
 import { GUIDELINE_SOURCE, type TemperatureProfile } from "./profiles";
 import type { TransitAssessment } from "./schemas";
 import { hasCalendarWarning, sameLocalTimeLater, type TransitTimeline } from "./timeline";
-import { cToF, fToC, round1 } from "./units";
+import { cToF, fToC, round1 } from "../units";
 
 /** Packing-room temperature when the sender gives none, °F [practice]. */
 export const DEFAULT_PACKED_AT_F = 72;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { EARTH_MEAN_RADIUS_KM, haversineKm, interpolateGreatCircle, kmToMiles, milesToKm } from "./geo";
+import { EARTH_MEAN_RADIUS_KM, haversineKm, interpolateGreatCircle } from "./geo";
 
 const nashville = { lat: 36.12, lon: -86.67 };
 const losAngeles = { lat: 33.94, lon: -118.4 };
@@ -49,13 +49,5 @@ describe("interpolateGreatCircle", () => {
   it("returns the end points at fractions 0 and 1", () => {
     expect(interpolateGreatCircle(nashville, losAngeles, 0).lat).toBeCloseTo(nashville.lat, 9);
     expect(interpolateGreatCircle(nashville, losAngeles, 1).lon).toBeCloseTo(losAngeles.lon, 9);
-  });
-});
-
-describe("miles", () => {
-  it("uses the international mile", () => {
-    // international yard and pound agreement 1959: 1 mi = 1.609344 km exactly [published]
-    expect(milesToKm(1)).toBe(1.609344);
-    expect(kmToMiles(1609.344)).toBeCloseTo(1000, 9);
   });
 });

@@ -4,9 +4,6 @@ export type LatLon = { lat: number; lon: number };
 /** Mean Earth radius R1 = (2a + b) / 3 from WGS84 (IUGG; Moritz 1980), in km. */
 export const EARTH_MEAN_RADIUS_KM = 6371.0088;
 
-/** The international mile is exactly 1.609344 km. */
-export const KM_PER_MILE = 1.609344;
-
 const toRad = (deg: number) => (deg * Math.PI) / 180;
 const toDeg = (rad: number) => (rad * 180) / Math.PI;
 
@@ -38,14 +35,4 @@ export function interpolateGreatCircle(from: LatLon, to: LatLon, fraction: numbe
   const y = a * Math.cos(lat1) * Math.sin(lon1) + b * Math.cos(lat2) * Math.sin(lon2);
   const z = a * Math.sin(lat1) + b * Math.sin(lat2);
   return { lat: toDeg(Math.atan2(z, Math.hypot(x, y))), lon: toDeg(Math.atan2(y, x)) };
-}
-
-/** Kilometres to international miles. */
-export function kmToMiles(distanceKm: number): number {
-  return distanceKm / KM_PER_MILE;
-}
-
-/** International miles to kilometres. */
-export function milesToKm(distanceMi: number): number {
-  return distanceMi * KM_PER_MILE;
 }

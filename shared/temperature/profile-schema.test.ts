@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { describeIssues } from "../schemas/common";
+import { describeIssues } from "../validation/messages";
 import { classifyAmbientF } from "./advice";
 import { profileDataOf, profileDataSchema, profileFromData } from "./profile-schema";
 import { DEFAULT_PROFILES } from "./profiles";

@@ -1,9 +1,10 @@
-import { z } from "zod";
-import { LIMITS, type ProfileGroup } from "../constants";
+import { ANIMAL_CLASSES, LIMITS, type ProfileGroup } from "../constants";
+import { measure } from "../schemas/common";
+import { z } from "../validation/zod";
 import { PLAUSIBLE_AMBIENT_F } from "./limits";
 import type { TemperatureProfile } from "./profiles";
 
-const tempFSchema = z.number().min(PLAUSIBLE_AMBIENT_F.min).max(PLAUSIBLE_AMBIENT_F.max);
+const tempFSchema = measure("temperature", { min: PLAUSIBLE_AMBIENT_F.min, max: PLAUSIBLE_AMBIENT_F.max });
 
 /**
  * A temperature profile as admins edit it and as the database keeps it (the group is the key,
@@ -13,7 +14,7 @@ const tempFSchema = z.number().min(PLAUSIBLE_AMBIENT_F.min).max(PLAUSIBLE_AMBIEN
 export const profileDataSchema = z
   .strictObject({
     label: z.string().trim().min(1).max(LIMITS.nameMax),
-    animalClass: z.enum(["reptile", "amphibian"]),
+    animalClass: z.enum(ANIMAL_CLASSES),
     safeTransitF: z.strictObject({ min: tempFSchema, max: tempFSchema }),
     bandsF: z.strictObject({
       doNotShipBelow: tempFSchema,
@@ -27,19 +28,23 @@ export const profileDataSchema = z
   .superRefine((profile, ctx) => {
     const { safeTransitF: safe, bandsF: b } = profile;
     if (!(safe.min < safe.max))
-      ctx.addIssue({ code: "custom", path: ["safeTransitF", "max"], message: "must be above the safe range's min" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["safeTransitF", "max"],
+        params: { instruction: "make it higher than the lowest safe temperature" },
+      });
     const rules: [keyof typeof b, boolean, string][] = [
-      ["heatPackBelow", b.heatPackBelow > b.doNotShipBelow, "must be above doNotShipBelow"],
+      ["heatPackBelow", b.heatPackBelow > b.doNotShipBelow, "make it higher than “do not ship below”"],
       [
         "coldPackFrom",
         b.coldPackFrom === null || (b.coldPackFrom >= b.heatPackBelow && b.coldPackFrom < b.holdFrom),
-        "must lie from heatPackBelow up to (not including) holdFrom",
+        "make it at least “heat pack below” and lower than “hold from”",
       ],
-      ["holdFrom", b.holdFrom >= b.heatPackBelow, "must not be below heatPackBelow"],
-      ["doNotShipAbove", b.doNotShipAbove >= b.holdFrom, "must not be below holdFrom"],
+      ["holdFrom", b.holdFrom >= b.heatPackBelow, "make it no lower than “heat pack below”"],
+      ["doNotShipAbove", b.doNotShipAbove >= b.holdFrom, "make it no lower than “hold from”"],
     ];
-    for (const [key, ordered, message] of rules) {
-      if (!ordered) ctx.addIssue({ code: "custom", path: ["bandsF", key], message });
+    for (const [key, ordered, instruction] of rules) {
+      if (!ordered) ctx.addIssue({ code: "custom", path: ["bandsF", key], params: { instruction } });
     }
   });
 

@@ -18,7 +18,8 @@ export type AdviceBandsF = {
   doNotShipAbove: number;
 };
 
-export type AnimalClass = "reptile" | "amphibian";
+export type { AnimalClass } from "../constants";
+import type { AnimalClass } from "../constants";
 
 /** A species group's temperature profile: data, editable by admins, never law. */
 export type TemperatureProfile = {

@@ -45,7 +45,8 @@ export type TemperatureReport = TransitAssessment & {
   boxes: BoxTemperature[];
 };
 
-export type CheckMark = "24h" | "4h" | "manual" | "gate";
+export type { CheckMark } from "../constants";
+import type { CheckMark } from "../constants";
 
 export type TemperatureCheckDto = {
   id: string;

@@ -1,27 +1,31 @@
-import { z } from "zod";
 import { LIMITS, PACK_KINDS, PROFILE_GROUPS, TRANSPORT_MODES, WALL_MATERIALS } from "../constants";
 import { ADVICE_CODES, VERDICTS } from "./advice";
+import { instantSchema, measure } from "../schemas/common";
+import { instruction } from "../validation/messages";
+import { z } from "../validation/zod";
 import { AMBIENT_OVERRIDE_MAX, CONTENTS_G_MIN, PLAUSIBLE_AMBIENT_F } from "./limits";
 
 /** A five-digit US ZIP code or a position in decimal degrees. */
-export const placeInputSchema = z.union([
-  z.strictObject({ zip: z.string().regex(/^\d{5}$/, "a five-digit ZIP code") }),
-  z.strictObject({ lat: z.number().min(-90).max(90), lon: z.number().min(-180).max(180) }),
-]);
+export const placeInputSchema = z.union(
+  [
+    z.strictObject({ zip: z.string().regex(/^\d{5}$/) }),
+    z.strictObject({ lat: z.number().min(-90).max(90), lon: z.number().min(-180).max(180) }),
+  ],
+  { error: instruction("give a 5-digit ZIP code, or a latitude and longitude") },
+);
 
-const instantSchema = z.iso.datetime({ offset: true });
-const ambientTempFSchema = z.number().min(PLAUSIBLE_AMBIENT_F.min).max(PLAUSIBLE_AMBIENT_F.max);
+const ambientTempFSchema = measure("temperature", { min: PLAUSIBLE_AMBIENT_F.min, max: PLAUSIBLE_AMBIENT_F.max });
 
 /** The box as the sender describes it; dimensions are outside measurements in mm. */
 export const boxInputSchema = z
   .strictObject({
     wall: z.enum(WALL_MATERIALS),
-    wallThicknessMm: z.number().positive().max(LIMITS.wallThicknessMmMax),
-    lengthMm: z.number().positive().max(LIMITS.boxDimensionMmMax),
-    widthMm: z.number().positive().max(LIMITS.boxDimensionMmMax),
-    heightMm: z.number().positive().max(LIMITS.boxDimensionMmMax),
+    wallThicknessMm: measure("length", { above: 0, max: LIMITS.wallThicknessMmMax }),
+    lengthMm: measure("length", { above: 0, max: LIMITS.boxDimensionMmMax }),
+    widthMm: measure("length", { above: 0, max: LIMITS.boxDimensionMmMax }),
+    heightMm: measure("length", { above: 0, max: LIMITS.boxDimensionMmMax }),
     /** Animals, substrate and cups as water-equivalent grams. */
-    contentsG: z.number().min(CONTENTS_G_MIN).max(LIMITS.weightGMax),
+    contentsG: measure("weight", { min: CONTENTS_G_MIN, max: LIMITS.weightGMax }),
     pack: z.enum(PACK_KINDS),
   })
   .superRefine((box, ctx) => {
@@ -29,7 +33,9 @@ export const boxInputSchema = z
       ctx.addIssue({
         code: "custom",
         path: ["wallThicknessMm"],
-        message: "each dimension must exceed twice the wall thickness",
+        params: {
+          instruction: "the walls take up the whole box; each side must be more than twice the wall thickness",
+        },
       });
     }
   });
@@ -54,14 +60,18 @@ export const whatIfInputSchema = z
       .trim()
       .min(3)
       .max(LIMITS.nameMax)
-      .regex(/^[A-Z][a-z]+( [a-z][a-z-]*){0,2}$/, "a genus, species and optional subspecies")
+      .regex(/^[A-Z][a-z]+( [a-z][a-z-]*){0,2}$/)
       .optional(),
     box: boxInputSchema,
     ambientOverrideF: ambientOverrideSchema.optional(),
   })
   .superRefine((input, ctx) => {
     if ((input.profile === undefined) === (input.scientificName === undefined)) {
-      ctx.addIssue({ code: "custom", path: ["profile"], message: "give either profile or scientificName" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["profile"],
+        params: { instruction: "give either a species or a temperature profile, not both" },
+      });
     }
   });
 

@@ -233,7 +233,9 @@ describe("planned arrival against the modelled trip", () => {
     // Planned 3 June 00:30 PDT, modelled 10:30 PDT (PDT = UTC−7, 15 U.S.C. 260a) [published, secondary]
     const w = plannedArrivalWarning(tuesday, delivery - 10 * h);
     expect(w).toMatchObject({ code: "arrives_after_planned", severity: "warning", date: "2026-06-03" });
-    expect(w?.message).toContain("Wed, Jun 3, 10:30 PDT, 10 h after the planned arrival (Wed, Jun 3, 00:30 PDT)");
+    expect(w?.message).toContain(
+      "Wed, Jun 3, 2026, 10:30 PDT, 10 h after the planned arrival (Wed, Jun 3, 2026, 00:30 PDT)",
+    );
   });
 
   it("explains a road trip by the driver's hours", () => {

@@ -1,4 +1,6 @@
 import type { TransportMode } from "../constants";
+import { formatInstant } from "../dates";
+import { formatDistance } from "../units";
 import { haversineKm, interpolateGreatCircle } from "./geo";
 import { federalHolidayOn } from "./holidays";
 import type { TransitPlace } from "./places";
@@ -264,7 +266,8 @@ function drivingWaypoints(
     if (i === 0) return origin;
     if (i === segments) return destination;
     const { lat, lon } = interpolateGreatCircle(origin, destination, i / segments);
-    const label = `en route, ${Math.round((roadKm * i) / segments)} km from ${origin.label}`;
+    const km = (roadKm * i) / segments;
+    const label = `en route, ${formatDistance(km, "imperial")} (${formatDistance(km, "metric")}) from ${origin.label}`;
     return { label, lat, lon, timeZone: timeZoneAt(lat, lon) };
   });
 }
@@ -457,16 +460,7 @@ const MODE_REASON: Readonly<Record<TransportMode, string>> = {
 };
 
 function clockText(utcMs: number, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-US", {
-    timeZone,
-    weekday: "short",
-    month: "short",
-    day: "numeric",
-    hour: "2-digit",
-    minute: "2-digit",
-    hourCycle: "h23",
-    timeZoneName: "short",
-  }).format(utcMs);
+  return formatInstant(utcMs, timeZone);
 }
 
 /**

@@ -1,4 +1,4 @@
-import type { TransferStatus } from "../constants";
+import type { HandoffKind, TransferStatus } from "../constants";
 
 /**
  * The steps a transfer may take. Handoffs and the check-in move it through in_transit,
@@ -63,7 +63,7 @@ export function handoffsPlanned(legCount: number): number {
   return legCount === 0 ? 0 : legCount + 1;
 }
 
-export function handoffKind(index: number, legCount: number): "pickup" | "handoff" | "delivery" {
+export function handoffKind(index: number, legCount: number): HandoffKind {
   if (index === 0) return "pickup";
   return index === legCount ? "delivery" : "handoff";
 }

@@ -1,9 +1,9 @@
+import { USER_ROLE_WORDS } from "@shared/words";
 import { NavLink, Navigate, Outlet, useLocation, useNavigate } from "react-router";
 import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { UnitsSwitch } from "@/components/ui/units-switch";
 import { paths } from "@/config/paths";
-import { roleLabel } from "@/lib/labels";
 import type { Viewer } from "@/lib/viewer";
 import { useSession, useSignOut, type Session } from "@/features/auth/api/session";
 
@@ -93,7 +93,7 @@ export function AppLayout() {
               <p className="font-semibold" data-testid="signed-in-as">
                 {s.user.displayName}
               </p>
-              <p className="text-ink-soft">{s.user.organization?.name ?? roleLabel[s.user.role]}</p>
+              <p className="text-ink-soft">{s.user.organization?.name ?? USER_ROLE_WORDS[s.user.role]}</p>
             </div>
             <Button
               variant="secondary"

@@ -2,6 +2,8 @@
  * The one way the client talks to the API: same-origin JSON, the CSRF token on every
  * state-changing request, and errors turned into ApiError with the server's message.
  */
+import { readUnitSystem } from "./units-preference";
+
 export class ApiError extends Error {
   constructor(
     public readonly status: number,
@@ -38,7 +40,12 @@ type Options = {
 
 export async function api<T>(path: string, options: Options = {}, retried = false): Promise<T> {
   const method = options.method ?? "GET";
-  const headers: Record<string, string> = { Accept: "application/json", ...options.headers };
+  // The server words a measurement's limit in the units the person reads, like the form does.
+  const headers: Record<string, string> = {
+    Accept: "application/json",
+    "Hatchway-Units": readUnitSystem(),
+    ...options.headers,
+  };
   if (method !== "GET") headers["X-CSRF-Token"] = await csrf();
   if (options.body !== undefined) headers["Content-Type"] = "application/json";
   let response: Response;

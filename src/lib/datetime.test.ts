@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { instantSchema } from "@shared/schemas/transfer";
-import { formatDate, formatDateTime, instantToLocalInput, localInputToInstant } from "./datetime";
+import { instantToLocalInput, localInputToInstant } from "./datetime";
 
 // Node re-reads TZ when it is assigned, so the browser's zone can be pinned for these checks.
 beforeAll(() => {
@@ -9,8 +9,6 @@ beforeAll(() => {
 afterAll(() => {
   vi.unstubAllEnvs();
 });
-
-const spaced = (s: string) => s.replace(/\u202f/g, " ");
 
 describe("datetime-local to an instant with its offset", () => {
   it("uses the offset in force on that date", () => {
@@ -32,21 +30,5 @@ describe("datetime-local to an instant with its offset", () => {
     // WHATWG HTML "valid normalized local date and time string" [published]: YYYY-MM-DDTHH:MM.
     expect(localInputToInstant("")).toBe("");
     expect(localInputToInstant("9 March")).toBe("");
-  });
-});
-
-describe("formatting", () => {
-  it("shows the time at a place in that place's zone", () => {
-    // IANA tz database [published]: Chicago is UTC−6 (CST) before 2027-03-14; 2027-03-09 is a Tuesday.
-    expect(spaced(formatDateTime("2027-03-09T21:00:00Z", "America/Chicago"))).toBe("Tue, Mar 9, 2027, 3:00 PM CST");
-    expect(spaced(formatDateTime("2027-07-14T16:00:00Z", "America/Los_Angeles"))).toBe(
-      "Wed, Jul 14, 2027, 9:00 AM PDT",
-    );
-  });
-
-  it("never shifts a calendar date", () => {
-    // [practice] a hatch date or acquisition date is a day, not an instant.
-    expect(formatDate("2026-07-14")).toBe("Jul 14, 2026");
-    expect(formatDate("2026-01-01")).toBe("Jan 1, 2026");
   });
 });

@@ -28,31 +28,3 @@ export function instantToLocalInput(iso: string | null | undefined): string {
 function localInputOf(date: Date): string {
   return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}T${pad(date.getHours())}:${pad(date.getMinutes())}`;
 }
-
-/**
- * An instant for people: "Tue, Mar 9, 2027, 4:00 PM EST". Given a time zone (e.g. the
- * origin's), the time is the local time there, with its abbreviation.
- */
-export function formatDateTime(iso: string, timeZone?: string | null): string {
-  const date = new Date(iso);
-  if (Number.isNaN(date.getTime())) return iso;
-  return new Intl.DateTimeFormat("en-US", {
-    weekday: "short",
-    month: "short",
-    day: "numeric",
-    year: "numeric",
-    hour: "numeric",
-    minute: "2-digit",
-    timeZoneName: "short",
-    ...(timeZone ? { timeZone } : {}),
-  }).format(date);
-}
-
-/** A calendar date ("2026-07-14") for people: "Jul 14, 2026", never shifted by a zone. */
-export function formatDate(isoDate: string): string {
-  const date = new Date(`${isoDate.slice(0, 10)}T12:00:00Z`);
-  if (Number.isNaN(date.getTime())) return isoDate;
-  return new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(
-    date,
-  );
-}

@@ -1,5 +1,5 @@
 import { useSyncExternalStore } from "react";
-import type { UnitSystem } from "./units";
+import type { UnitSystem } from "@shared/units";
 
 const STORAGE_KEY = "hatchway.units";
 const listeners = new Set<() => void>();

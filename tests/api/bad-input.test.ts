@@ -2,6 +2,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import { createTestApp, signIn, type Client, type TestApp } from "../support/app";
+import { whatIfInputSchema } from "@shared/temperature/schemas";
+import { describeIssues, errorMapFor } from "@shared/validation/messages";
 import { buildUser } from "../factories";
 
 let t: TestApp;
@@ -66,7 +68,44 @@ describe("bad input", () => {
     const res = await admin.post("/api/organizations", { ...org, address: { ...org.address, zip: 97301 } });
     expect(res.status).toBe(400);
     expect(res.body.error.field).toBe("address.zip");
-    expect(res.body.error.message).toMatch(/address\.zip/);
+    // Named in words, with what to do (shared/validation/messages.ts).
+    expect(res.body.error.message).toBe("ZIP code: enter a 5-digit ZIP code, such as 97401.");
+  });
+
+  it("answers the sentence the form shows, in the units the person reads", async () => {
+    // The wall of 99 in that a keeper typed: 99 in = 2514.6 mm (NIST SP 811 B.8) [published]; the limit
+    // is 200 mm, which a form in inches shows as 7.9 in.
+    const trip = {
+      origin: { zip: "37902" },
+      destination: { zip: "97401" },
+      departAt: "2030-03-12T08:00:00-05:00",
+      mode: "overnight_air",
+      profile: "temperate_snake",
+      box: {
+        wall: "eps",
+        wallThicknessMm: 2514.6,
+        lengthMm: 400,
+        widthMm: 300,
+        heightMm: 250,
+        contentsG: 500,
+        pack: "none",
+      },
+    };
+    const form = (units: "imperial" | "metric") => {
+      const parsed = whatIfInputSchema.safeParse(trip, { error: errorMapFor(units) });
+      return parsed.success ? null : describeIssues(parsed.error, units);
+    };
+    for (const units of ["imperial", "metric"] as const) {
+      const res = await admin.post("/api/temperature/assess", trip).set("Hatchway-Units", units);
+      expect(res.status).toBe(400);
+      expect(res.body.error).toEqual({ code: "invalid", field: "box.wallThicknessMm", message: form(units)!.message });
+    }
+    const inches = await admin.post("/api/temperature/assess", trip).set("Hatchway-Units", "imperial");
+    expect(inches.body.error.message).toBe("Box wall thickness: use at most 7.9 in.");
+    const millimetres = await admin.post("/api/temperature/assess", trip).set("Hatchway-Units", "metric");
+    expect(millimetres.body.error.message).toBe("Box wall thickness: use at most 200 mm.");
+    // No header: °F and inches, what a person sees before choosing.
+    expect((await admin.post("/api/temperature/assess", trip)).body.error.message).toBe(inches.body.error.message);
   });
 
   it("an operator object never reaches a query", async () => {

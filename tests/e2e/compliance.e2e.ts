@@ -22,7 +22,7 @@ describe("compliance screens", () => {
     await signInAs(page, "sender@demo.hatchway.test");
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Permits" }).click();
     await page.getByRole("button", { name: "Add a document" }).click();
-    await page.getByLabel("Kind").selectOption({ label: "CVI or health certificate" });
+    await page.getByLabel("Kind").selectOption({ label: "Certificate of Veterinary Inspection (CVI)" });
     await page.getByLabel("Issued by").selectOption("TN");
     await page.getByLabel("Number").fill("DEMO-CVI-E2E-0001");
     await page.getByLabel("Valid to (last valid day)").fill(day(20));

@@ -81,7 +81,8 @@ describe("signing in", () => {
       .toBe(1);
     await page.getByRole("button", { name: "Add organisation" }).click();
     await page.getByRole("button", { name: "Add organisation" }).click();
-    await expect.poll(() => page.getByText("Fill this in").count()).toBeGreaterThan(0);
+    // The shared message map names the field (shared/validation/messages.ts).
+    await expect.poll(() => page.getByText("Name: fill this in.", { exact: true }).count()).toBeGreaterThan(0);
     await screenshot(page, "admin-organisation-form-errors");
     await context.close();
   });

@@ -1,7 +1,8 @@
 import { defineEntity, p, type InferEntity } from "@mikro-orm/core";
+import { OUTBOX_STATUSES } from "@shared/constants";
 import { createdAtProperty, idProperty } from "./base";
 
-export const OUTBOX_STATUSES = ["pending", "sent", "dead"] as const;
+export { OUTBOX_STATUSES };
 
 /**
  * An e-mail waiting to be sent. It is written in the same transaction as the change that

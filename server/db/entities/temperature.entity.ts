@@ -7,7 +7,9 @@ import { idProperty } from "./base";
 import { TransferSchema } from "./transfer.entity";
 import { UserSchema } from "./user.entity";
 
-export const CHECK_MARKS = ["24h", "4h", "manual", "gate"] as const;
+import { CHECK_MARKS } from "@shared/constants";
+
+export { CHECK_MARKS };
 
 /**
  * One hour of forecast at one position, cached. Positions are rounded to 0.01° and kept ×100

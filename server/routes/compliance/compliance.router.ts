@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { evaluateRequestSchema } from "@shared/compliance/schemas";
 import type { AppContext } from "../../context";
-import { HttpError } from "../../http/errors";
+import { invalidField } from "../../http/errors";
 import { requireUser } from "../../http/guards";
 import { parse } from "../../http/validate";
 import { evaluateWhatIf } from "../../services/compliance/evaluation";
@@ -38,11 +38,12 @@ function whatIfRouter(ctx: AppContext): Router {
       const hits = name.length >= 2 ? await searchTaxa(ctx, name.slice(0, 100), SUGGESTIONS_MAX) : [];
       const suggestions = hits.map((hit) => ({ scientificName: hit.scientificName, commonName: hit.commonName }));
       const hint = suggestions.length ? ` Did you mean ${suggestions.map((s) => s.scientificName).join(", ")}?` : "";
-      const field = `animals.${outcome.index}.scientificName`;
-      throw new HttpError(400, "unknown_species", `${field}: “${name}” is not in the species list.${hint}`, {
-        field,
-        suggestions,
-      });
+      throw invalidField(
+        ["animals", outcome.index, "scientificName"],
+        `“${name}” is not in the species list.${hint}`,
+        { suggestions },
+        "unknown_species",
+      );
     }
     res.json(outcome.result);
   });

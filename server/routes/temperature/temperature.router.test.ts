@@ -3,7 +3,8 @@ import { transitAssessmentSchema } from "@shared/temperature/schemas";
 import { createTestApp, anonymousClient, signIn, type Client, type TestApp } from "../../../tests/support/app";
 import { buildTransfer, buildUser } from "../../../tests/factories";
 import { startOpenMeteoFake, type OpenMeteoFake } from "../../../fakes/open-meteo/server";
-import { SCENARIO_SHIFT_C, celsiusToFahrenheit, fakeTemperatureC } from "../../../fakes/open-meteo/climate";
+import { cToF } from "@shared/units";
+import { SCENARIO_SHIFT_C, fakeTemperatureC } from "../../../fakes/open-meteo/climate";
 
 let t: TestApp;
 let fake: OpenMeteoFake;
@@ -181,9 +182,7 @@ describe("POST /api/temperature/assess with forecasts from the Open-Meteo fake",
     // the fake's value at its 0.05° grid cell for the cached position (21.31, −157.86)
     const hour = body.hours[3];
     expect(hour.place).toBe("21.310, -157.860");
-    const expectedF = celsiusToFahrenheit(
-      fakeTemperatureC(21.3, -157.85, Date.parse(hour.at) / 1000, SCENARIO_SHIFT_C.heat_wave),
-    );
+    const expectedF = cToF(fakeTemperatureC(21.3, -157.85, Date.parse(hour.at) / 1000, SCENARIO_SHIFT_C.heat_wave));
     expect(hour.ambientF).toBeCloseTo(expectedF, 0);
     expect(body.sources.map((s: { id: string }) => s.id)).toContain("forecast");
   });

@@ -5,7 +5,7 @@ import { idSchema } from "@shared/schemas/common";
 import { profileDataSchema } from "@shared/temperature/profile-schema";
 import { whatIfInputSchema } from "@shared/temperature/schemas";
 import type { AppContext } from "../../context";
-import { badRequest, HttpError, unavailable } from "../../http/errors";
+import { HttpError, invalidField, unavailable } from "../../http/errors";
 import { currentUser, requirePolicy, requireUser } from "../../http/guards";
 import { parse } from "../../http/validate";
 import { canEditTemperatureProfiles, canPlanTrips, canSwitchWeatherScenario } from "../../policies/temperature.policy";
@@ -66,10 +66,7 @@ export function temperatureRouter(ctx: AppContext): Router {
       const taxon = input.scientificName ? await findTaxonByName(req.em, input.scientificName) : null;
       if (input.scientificName && !taxon) {
         const suggestions = (await searchTaxa(ctx, input.scientificName, 5)).map((t) => t.scientificName);
-        throw badRequest(`scientificName: ${input.scientificName} is not in the species list`, {
-          field: "scientificName",
-          suggestions,
-        });
+        throw invalidField(["scientificName"], `“${input.scientificName}” is not in the species list`, { suggestions });
       }
       res.json(await assessWhatIf({ em: req.em, source, input, taxon, nowMs: Date.now() }));
     },
@@ -112,9 +109,10 @@ export function temperatureRouter(ctx: AppContext): Router {
     });
     const body = (await response.json().catch(() => ({}))) as { scenario?: string; reason?: string };
     if (!response.ok)
-      throw badRequest(`scenario: ${body.reason ?? `the weather fake refused it (${response.status})`}`, {
-        field: "scenario",
-      });
+      throw invalidField(
+        ["scenario"],
+        "the demo weather stand-in did not take this scenario; choose one from the list",
+      );
     // What the cache holds came from the old scenario; the demo should show the new one at once.
     await ctx.pool.query("DELETE FROM forecast_hour");
     res.json({ scenario: body.scenario ?? scenario });

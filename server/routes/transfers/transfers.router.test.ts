@@ -285,7 +285,10 @@ describe("life cycle through the API", () => {
     const res = await s.patch(`/api/transfers/${cast.transfer.id}`, { version: before.version, animals, containers });
     expect(res.status).toBe(200);
     expect(res.body.transfer.status).toBe("awaiting_receiver");
-    expect(res.body.transfer.reconfirmationReason).toMatch(/animals/);
+    // Named in words (shared/words/fields.ts), never by the field's key.
+    expect(res.body.transfer.reconfirmationReason).toMatch(
+      /^Changed after confirmation: (.+, )?animal lines(, .+)?\.$/,
+    );
     const stale = await s.patch(`/api/transfers/${cast.transfer.id}`, { version: before.version, handlingNotes: "x" });
     expect(stale.status).toBe(409);
     const changes = (await s.get(`/api/transfers/${cast.transfer.id}/changes`)).body.changes;

@@ -6,7 +6,7 @@ import type { AppContext } from "../../context";
 import { UserSchema } from "../../db/entities/user.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { PasswordTokenSchema } from "../../db/entities/password-token.entity";
-import { badRequest, notFound } from "../../http/errors";
+import { badRequest, invalidField, notFound } from "../../http/errors";
 import { currentUser, requirePolicy } from "../../http/guards";
 import { parse } from "../../http/validate";
 import { canManageUsers } from "../../policies/user.policy";
@@ -43,15 +43,14 @@ export function usersRouter(ctx: AppContext): Router {
     }
     if (input.organizationId !== undefined) {
       const org = input.organizationId ? await req.em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
-      if (input.organizationId && !org)
-        throw badRequest("organizationId: no such organisation", { field: "organizationId" });
+      if (input.organizationId && !org) throw invalidField(["organizationId"], "choose an organisation from the list");
       user.organization = org ? ref(org) : null;
     }
     if (input.displayName !== undefined) user.displayName = input.displayName;
     if (input.role !== undefined) user.role = input.role;
     if (input.disabled !== undefined) user.disabled = input.disabled;
     if (user.role === "member" && !user.organization)
-      throw badRequest("A member needs an organisation.", { field: "organizationId" });
+      throw invalidField(["organizationId"], "a keeper organisation member needs an organisation");
     await req.em.flush();
     const pending = await req.em.count(PasswordTokenSchema, { user, usedAt: null });
     res.json({ user: presentUserForAdmin(user, !user.passwordHash && pending > 0) });

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { formatDate } from "@shared/dates";
 import { addDays } from "@shared/temperature/zoned-time";
 import { createTestApp, signIn, type TestApp } from "../../../tests/support/app";
 import { buildOrganization, buildUser } from "../../../tests/factories";
@@ -54,8 +55,10 @@ describe("expiry reminders (scheduled task)", () => {
     for (const member of [first, second]) {
       const mails = await mailTo(member.email);
       expect(mails.map((m) => m.subject)).toEqual([
-        `Possession permit or licence DEMO-TN-30 expires on ${addDays(today, 30)}`,
+        `Possession permit or licence DEMO-TN-30 expires on ${formatDate(addDays(today, 30))}`,
       ]);
+      // One date format for people (shared/dates): weekday, month, day, year; never the ISO form.
+      expect(mails[0]!.subject).toMatch(/expires on (Mon|Tue|Wed|Thu|Fri|Sat|Sun), [A-Z][a-z]{2} \d{1,2}, \d{4}$/);
       expect(mails[0]!.text_body).toContain("in 30 days");
       expect(mails[0]!.text_body).toContain("/permits");
     }
@@ -68,8 +71,8 @@ describe("expiry reminders (scheduled task)", () => {
     await client.patch(`/api/documents/${soon.body.document.id}`, { validTo: addDays(today, 5) });
     await runTask(t.ctx, EXPIRY_REMINDER_TASK);
     expect((await mailTo(first.email)).map((m) => m.subject)).toEqual([
-      `Possession permit or licence DEMO-TN-30 expires on ${addDays(today, 30)}`,
-      `Possession permit or licence DEMO-TN-30 expires on ${addDays(today, 5)}`,
+      `Possession permit or licence DEMO-TN-30 expires on ${formatDate(addDays(today, 30))}`,
+      `Possession permit or licence DEMO-TN-30 expires on ${formatDate(addDays(today, 5))}`,
     ]);
   });
 });

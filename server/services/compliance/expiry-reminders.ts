@@ -1,7 +1,7 @@
+import { DOCUMENT_KIND_WORDS } from "@shared/words";
 import { LockMode } from "@mikro-orm/core";
 import { addDays } from "@shared/temperature/zoned-time";
 import { EXPIRY_WARNING_DAYS, expiryOf, todayUtc } from "@shared/compliance/expiry";
-import { DOCUMENT_KIND_LABELS } from "@shared/compliance/labels";
 import type { AppContext } from "../../context";
 import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
@@ -43,7 +43,7 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
             to: member.email,
             name: member.displayName,
             organization: org.name,
-            kind: DOCUMENT_KIND_LABELS[doc.kind],
+            kind: DOCUMENT_KIND_WORDS[doc.kind],
             number: doc.number,
             validTo: doc.validTo as string,
             daysLeft: daysLeft ?? 0,

@@ -6,7 +6,7 @@ import type { RuleListQuery, RuleVersionInput } from "@shared/schemas/compliance
 import type { Actor } from "../../auth/actor";
 import { ComplianceRuleSchema, type ComplianceRule } from "../../db/entities/compliance.entity";
 import { UserSchema } from "../../db/entities/user.entity";
-import { badRequest, conflict, notFound } from "../../http/errors";
+import { conflict, invalidField, notFound } from "../../http/errors";
 import { findTaxaByName } from "./taxa";
 
 /** Every stored version, grouped by rule and oldest first. */
@@ -134,7 +134,7 @@ export async function appendRuleVersion({
   input: RuleVersionInput;
 }) {
   if (input.rule.id !== ruleKey)
-    throw badRequest("rule.id: a rule keeps its id; create a new rule instead", { field: "rule.id" });
+    throw invalidField(["rule", "id"], "a rule keeps its reference; create a new rule instead");
   const newest = await em.findOne(ComplianceRuleSchema, { ruleKey }, { orderBy: { version: "desc" } });
   if (!newest) throw notFound("That rule");
   if (input.rule.version !== newest.version + 1) {
@@ -148,8 +148,7 @@ export async function appendRuleVersion({
 
 /** Adds a rule to the library as its version 1. */
 export async function createRule({ em, actor, input }: { em: EntityManager; actor: Actor; input: RuleVersionInput }) {
-  if (input.rule.version !== 1)
-    throw badRequest("rule.version: a new rule starts at version 1", { field: "rule.version" });
+  if (input.rule.version !== 1) throw invalidField(["rule", "version"], "a new rule starts at version 1");
   if (await em.count(ComplianceRuleSchema, { ruleKey: input.rule.id }))
     throw conflict(`A rule with the id ${input.rule.id} exists already.`);
   return flushVersion(em, insertVersion(em, actor, input));

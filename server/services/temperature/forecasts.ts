@@ -9,7 +9,9 @@ import type { LatLon } from "@shared/temperature/geo";
 import { FORECAST_HORIZON_DAYS, FORECAST_POINTS_MAX } from "@shared/temperature/limits";
 import type { TransitTimeline } from "@shared/temperature/timeline";
 import { MS_PER_DAY, MS_PER_HOUR } from "@shared/temperature/zoned-time";
-import type { WeatherService, WeatherUnavailableReason } from "../../adapters/weather";
+import type { WeatherService } from "../../adapters/weather";
+import type { ForecastUnavailableReason } from "@shared/constants";
+import { forecastUnavailableWords } from "@shared/words";
 
 export type Queryable = Pick<pg.Pool, "query">;
 
@@ -22,7 +24,8 @@ export const FORECAST_FRESH_MS = 3 * MS_PER_HOUR;
 /** Cached hours older than this are of no use to anyone and are pruned. */
 export const FORECAST_KEEP_MS = MS_PER_DAY;
 
-export type ForecastUnavailableReason = WeatherUnavailableReason | "beyond_horizon";
+/** The weather service's faults and a trip beyond its horizon (words in shared/words). */
+export type { ForecastUnavailableReason };
 
 export type ForecastOutcome =
   | { ok: true; index: ForecastIndex; fetchedPoints: number }
@@ -141,13 +144,5 @@ export async function pruneForecastCache(db: Queryable, nowMs: number): Promise<
 
 /** Plain words for why there is no forecast, for the assessment's `sources`. */
 export function unavailableText(reason: ForecastUnavailableReason, detail: string): string {
-  const why: Record<ForecastUnavailableReason, string> = {
-    timeout: "the weather service did not answer in time",
-    network: "the weather service could not be reached",
-    redirect: "the weather service redirected the request, which is not followed",
-    upstream_error: `the weather service answered with an error (${detail})`,
-    invalid_response: `the weather service's answer failed the checks (${detail})`,
-    beyond_horizon: `the trip ends more than ${FORECAST_HORIZON_DAYS} days ahead, beyond the forecast; check again closer to departure`,
-  };
-  return `Forecast unavailable: ${why[reason]}. The check cannot say the box is safe.`;
+  return `Forecast unavailable: ${forecastUnavailableWords(reason, detail, FORECAST_HORIZON_DAYS)}. The check cannot say the box is safe.`;
 }

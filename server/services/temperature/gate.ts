@@ -1,6 +1,6 @@
+import { TEMPERATURE_VERDICT_WORDS } from "@shared/words";
 import { blocksShipping } from "@shared/temperature/report";
-import { VERDICT_WORDS } from "@shared/temperature/words";
-import { badRequest, conflict } from "../../http/errors";
+import { conflict, invalidField } from "../../http/errors";
 import { appendCustody } from "../transfers/custody";
 import type { ReadyGate } from "../transfers/transition";
 import { recordCheck } from "./checks";
@@ -23,14 +23,14 @@ export function createTemperatureGate(source: WeatherSource | null): ReadyGate {
       if (!blocksShipping(report.verdict)) return;
       if (input.override !== true) {
         throw conflict(
-          `Temperature check: ${VERDICT_WORDS[report.verdict].toLowerCase()}. ${report.advice.message} To clear the transfer anyway, confirm with an override and a reason; it goes into the custody log.`,
+          `Temperature check: ${TEMPERATURE_VERDICT_WORDS[report.verdict].toLowerCase()}. ${report.advice.message} To clear the transfer anyway, confirm with an override and a reason; it goes into the custody log.`,
           { temperature: report },
         );
       }
       if (!input.reason)
-        throw badRequest(
-          "reason: say why the animals should travel despite the temperature check; it goes into the custody log",
-          { field: "reason" },
+        throw invalidField(
+          ["reason"],
+          "say why the animals should travel despite the temperature check; it goes into the custody log",
         );
       await appendCustody(em, transfer.id, actor, "override", {
         gate: "temperature",

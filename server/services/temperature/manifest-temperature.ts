@@ -1,8 +1,9 @@
+import { CHECK_MARK_WORDS, TEMPERATURE_VERDICT_WORDS } from "@shared/words";
+import { formatInstant } from "@shared/dates";
 import type { TemperatureReport } from "@shared/temperature/report";
-import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
+import { formatTempRangeBoth } from "@shared/units";
 import type { AppContext } from "../../context";
 import { TransferChangeSchema, TransferSchema } from "../../db/entities/transfer.entity";
-import { formatTempRangeF, formatZonedTime } from "../../pdf/format";
 import type { ManifestTemperature } from "../../pdf/manifest-input";
 import type { ManifestExtras } from "../transfers/manifest-extras";
 import { latestCheck } from "./checks";
@@ -26,7 +27,7 @@ function boxRangesOf(report: TemperatureReport): NonNullable<ManifestTemperature
 }
 
 const rangeText = (b: TemperatureReport["boxes"][number]) =>
-  formatTempRangeF(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
+  formatTempRangeBoth(b.profile.safeTransitF.min, b.profile.safeTransitF.max);
 
 function packingNotesOf(report: TemperatureReport, withAdvice: boolean): string | null {
   const lines = report.boxes.map(
@@ -54,12 +55,12 @@ export async function manifestTemperature(ctx: AppContext, transferId: string): 
   if (check && editedSince === 0) {
     const report = check.result as TemperatureReport;
     // In the origin's zone, like the departure on the same page.
-    const at = formatZonedTime(check.checkedAt.toISOString(), transfer.originTimeZone ?? "UTC");
+    const at = formatInstant(check.checkedAt, transfer.originTimeZone ?? "UTC");
     const when = `${at}, ${CHECK_MARK_WORDS[check.mark as keyof typeof CHECK_MARK_WORDS] ?? "on record"}`;
     return {
       temperature: {
         advice: [
-          `${VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
+          `${TEMPERATURE_VERDICT_WORDS[report.verdict]} (forecast checked ${when}). ${report.advice.message}`,
           ...report.warnings.filter((w) => w.severity === "warning").map((w) => w.message),
         ].join("\n"),
         safeRangeF: safeRangeOf(report),

@@ -1,6 +1,6 @@
+import { CHECK_MARK_WORDS } from "@shared/words";
 import { LockMode } from "@mikro-orm/core";
 import type { CheckMark } from "@shared/temperature/report";
-import { CHECK_MARK_WORDS } from "@shared/temperature/words";
 import type { AppContext } from "../../context";
 import { TemperatureCheckSchema } from "../../db/entities/temperature.entity";
 import { TransferSchema } from "../../db/entities/transfer.entity";

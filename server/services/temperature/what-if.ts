@@ -4,7 +4,7 @@ import { resolvePlace, type TransitPlace } from "@shared/temperature/places";
 import type { TemperatureProfile } from "@shared/temperature/profiles";
 import type { TemperatureReport } from "@shared/temperature/report";
 import type { PlaceInputParsed, WhatIfInput } from "@shared/temperature/schemas";
-import { badRequest } from "../../http/errors";
+import { invalidField } from "../../http/errors";
 import { assessBoxes, type AmbientPlan } from "./assess-boxes";
 import type { WeatherSource } from "./forecasts";
 import { loadProfiles } from "./profiles";
@@ -25,10 +25,7 @@ export async function findTaxonByName(em: EntityManager, name: string): Promise<
 
 function placeOrFail(input: PlaceInputParsed, field: string): TransitPlace {
   const place = resolvePlace(input);
-  if (!place)
-    throw badRequest(`${field}.zip: no US ZIP code ${"zip" in input ? input.zip : ""} is known`, {
-      field: `${field}.zip`,
-    });
+  if (!place) throw invalidField([field, "zip"], "this is not a US ZIP code we know; check it or give another nearby");
   return place;
 }
 
@@ -82,7 +79,12 @@ export async function assessWhatIf({
       profile,
     );
   } catch (err) {
-    if (err instanceof RangeError) throw badRequest(`mode: ${err.message}`, { field: "mode" });
+    // The model refuses a trip it cannot lay out (longer than it covers); its own words are for developers.
+    if (err instanceof RangeError)
+      throw invalidField(
+        ["mode"],
+        "this trip cannot be modelled this way; check the places, the date and how the animals travel",
+      );
     throw err;
   }
 }

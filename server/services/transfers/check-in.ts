@@ -14,7 +14,7 @@ import {
 import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
-import { badRequest, conflict, forbidden } from "../../http/errors";
+import { conflict, forbidden, invalidField } from "../../http/errors";
 import { transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
@@ -69,30 +69,26 @@ export async function checkInTransfer({
     const seen = new Set<string>();
     input.items.forEach((item, i) => {
       const animal = byId.get(item.animalId);
-      if (!animal)
-        throw badRequest(`items.${i}.animalId: not an animal of this transfer`, { field: `items.${i}.animalId` });
-      if (seen.has(item.animalId))
-        throw badRequest(`items.${i}.animalId: this animal line is listed twice`, { field: `items.${i}.animalId` });
+      if (!animal) throw invalidField(["items", i, "animalId"], "this is not an animal line of this transfer");
+      if (seen.has(item.animalId)) throw invalidField(["items", i, "animalId"], "this animal line is listed twice");
       seen.add(item.animalId);
       if (outcomeTotal(item) !== animal.count) {
-        throw badRequest(
-          `items.${i}: the outcomes add up to ${outcomeTotal(item)}, but the manifest lists ${animal.count}`,
-          { field: `items.${i}` },
+        throw invalidField(
+          ["items", i],
+          `the outcomes add up to ${outcomeTotal(item)}, but the manifest lists ${animal.count}`,
         );
       }
     });
     const unlisted = animals.findIndex((a) => !seen.has(a.id));
     if (unlisted >= 0)
-      throw badRequest(`items: give an outcome for every animal line (line ${unlisted + 1} is missing)`, {
-        field: "items",
-      });
+      throw invalidField(["items"], `give an outcome for every animal line (line ${unlisted + 1} is missing)`);
     const extraTaxa = input.extras.length
       ? await tx.find(TaxonSchema, { id: { $in: input.extras.map((e) => e.taxonId) } })
       : [];
     const taxonById = new Map(extraTaxa.map((x) => [x.id, x]));
     input.extras.forEach((e, i) => {
       if (!taxonById.has(e.taxonId))
-        throw badRequest(`extras.${i}.taxonId: no such species in the catalogue`, { field: `extras.${i}.taxonId` });
+        throw invalidField(["extras", i, "taxonId"], "this species is not in the catalogue");
     });
 
     const signedAt = new Date();

@@ -1,20 +1,12 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { GENESIS_HASH, seal, verifyChain, type SealedEntry } from "@shared/custody/hash-chain";
+import type { CustodyKind } from "@shared/constants";
 import type { CustodyLogDto } from "@shared/schemas/transfer";
 import type { Actor } from "../../auth/actor";
 import { CustodyEntrySchema } from "../../db/entities/custody-entry.entity";
 import { TransferSchema } from "../../db/entities/transfer.entity";
 
-export type CustodyKind =
-  | "created"
-  | "status_change"
-  | "handoff"
-  | "check_in"
-  | "couriers_assigned"
-  | "override"
-  | "correction"
-  /** Demo or bench data cleared to ship without the gates (see gatesForLoadedData in server/composition.ts). */
-  | "checks_skipped";
+export type { CustodyKind } from "@shared/constants";
 
 /**
  * Appends a sealed entry to a transfer's custody log. Call inside the transaction that makes
@@ -74,7 +66,7 @@ export async function readCustodyLog(em: EntityManager, transferId: string): Pro
   return {
     entries: sealed.map((e) => ({
       seq: e.seq,
-      kind: e.kind,
+      kind: e.kind as CustodyKind,
       at: e.at,
       actor: { id: e.actorId, displayName: e.actorName },
       payload: e.payload as Record<string, unknown>,

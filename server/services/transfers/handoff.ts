@@ -3,9 +3,12 @@ import { UniqueConstraintViolationException } from "@mikro-orm/core";
 import type { z } from "zod";
 import type { handoffInputSchema } from "@shared/schemas/transfer";
 import { handoffKind } from "@shared/transfer/lifecycle";
+import type { TransferStatus } from "@shared/constants";
+import { formatTempBoth } from "@shared/units";
+import { TRANSFER_STATUS_WORDS } from "@shared/words";
 import type { Actor } from "../../auth/actor";
 import { ContainerSchema } from "../../db/entities/transfer.entity";
-import { badRequest, conflict, forbidden } from "../../http/errors";
+import { conflict, forbidden, invalidField } from "../../http/errors";
 import { handoffAllowed } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
@@ -42,7 +45,9 @@ export async function recordHandoff({
       if (allowed === null) {
         if (facts.legCourierIds.length === 0) throw conflict("No courier is assigned yet.");
         if (!["ready", "in_transit"].includes(t.status))
-          throw conflict(`A handoff cannot be recorded while the transfer is ${t.status.replace("_", " ")}.`);
+          throw conflict(
+            `A handoff cannot be recorded while the transfer is “${TRANSFER_STATUS_WORDS[t.status as TransferStatus]}”.`,
+          );
         throw forbidden("This handoff is for another courier or the receiver to record.");
       }
       if (input.handoffIndex !== allowed) throw conflict(`The next handoff to record is number ${allowed + 1}.`);
@@ -51,7 +56,7 @@ export async function recordHandoff({
       const known = new Map(containers.map((c) => [c.id, c]));
       input.seals.forEach((s, i) => {
         if (!known.has(s.containerId))
-          throw badRequest(`seals.${i}.containerId: not a box of this transfer`, { field: `seals.${i}.containerId` });
+          throw invalidField(["seals", i, "containerId"], "this box is not one of this transfer's");
       });
       const kind = handoffKind(input.handoffIndex, legs.length);
       const seals = input.seals.map((s) => {
@@ -87,7 +92,7 @@ export async function recordHandoff({
       await appendCustody(tx, t.id, actor, "handoff", payload);
 
       const from = t.status;
-      const summary = `${input.boxesCounted} of ${containers.length} boxes counted${payload.boxCountMatches ? "" : " (the count differs)"}${input.boxTempF === null ? "" : `, box at ${input.boxTempF} °F`}${input.place.text ? `, at ${input.place.text}` : ""}.`;
+      const summary = `${input.boxesCounted} of ${containers.length} boxes counted${payload.boxCountMatches ? "" : " (the count differs)"}${input.boxTempF === null ? "" : `, box at ${formatTempBoth(input.boxTempF)}`}${input.place.text ? `, at ${input.place.text}` : ""}.`;
       if (kind === "pickup") {
         t.status = "in_transit";
         await appendCustody(tx, t.id, actor, "status_change", { from, to: "in_transit", reason: "pickup recorded" });

@@ -2,7 +2,7 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Actor } from "../../auth/actor";
 import { UserSchema } from "../../db/entities/user.entity";
 import { LegSchema } from "../../db/entities/transfer.entity";
-import { badRequest, forbidden } from "../../http/errors";
+import { forbidden, invalidField } from "../../http/errors";
 import { transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
@@ -29,12 +29,9 @@ export async function assignLegs({
     const couriers = await tx.find(UserSchema, { id: { $in: ids }, role: "courier", disabled: false });
     const byId = new Map(couriers.map((c) => [c.id, c]));
     input.legs.forEach((l, i) => {
-      if (!byId.has(l.courierId))
-        throw badRequest(`legs.${i}.courierId: choose an active courier`, { field: `legs.${i}.courierId` });
+      if (!byId.has(l.courierId)) throw invalidField(["legs", i, "courierId"], "choose an active courier");
       if (i > 0 && input.legs[i - 1]!.courierId === l.courierId)
-        throw badRequest(`legs.${i}.courierId: the same courier cannot hand over to themselves`, {
-          field: `legs.${i}.courierId`,
-        });
+        throw invalidField(["legs", i, "courierId"], "the same courier cannot hand over to themselves");
     });
     for (const leg of old) tx.remove(leg);
     await tx.flush();

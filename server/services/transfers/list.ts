@@ -9,7 +9,7 @@ import type {
 } from "@shared/schemas/transfer";
 import type { TransferStatus, TransportMode, UsState } from "@shared/constants";
 import type { Actor } from "../../auth/actor";
-import { badRequest } from "../../http/errors";
+import { invalidField } from "../../http/errors";
 
 type Query = z.output<typeof transferListQuerySchema>;
 
@@ -53,7 +53,7 @@ function decodeCursor(cursor: string | undefined): [unknown, string] | null {
   } catch {
     // fall through
   }
-  throw badRequest("cursor: this page link is not valid; start from the first page", { field: "cursor" });
+  throw invalidField(["cursor"], "this page link is not valid; start from the first page");
 }
 
 const encodeCursor = (sortValue: string, id: string) =>

@@ -1,14 +1,14 @@
+import { TRANSFER_STATUS_WORDS } from "@shared/words";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { ref } from "@mikro-orm/core";
 import type { TransferStatus } from "@shared/constants";
 import type { TransitionInput, TransferAbilitiesDto } from "@shared/schemas/transfer";
 import { canTransition, EVENT_DRIVEN } from "@shared/transfer/lifecycle";
 import { packingFindings } from "@shared/transfer/packing";
-import { STATUS_WORDS } from "@shared/transfer/status-words";
 import type { Actor } from "../../auth/actor";
 import { AnimalSchema, ContainerSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { UserSchema } from "../../db/entities/user.entity";
-import { badRequest, conflict, forbidden } from "../../http/errors";
+import { conflict, forbidden, invalidField } from "../../http/errors";
 import { transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
@@ -82,12 +82,14 @@ export async function transitionTransfer({
     const from = t.status as TransferStatus;
     const to = input.to;
     const abilities = transferAbilities(actor, role, facts);
-    if (to === from) throw conflict(`The transfer is already ${STATUS_WORDS[to].toLowerCase()}.`);
+    if (to === from) throw conflict(`The transfer is already ${TRANSFER_STATUS_WORDS[to].toLowerCase()}.`);
     const viaEvent = EVENT_DRIVEN[to];
     if (viaEvent && canTransition(from, to))
-      throw conflict(`A transfer becomes “${STATUS_WORDS[to]}” through ${viaEvent}, not by request.`);
+      throw conflict(`A transfer becomes “${TRANSFER_STATUS_WORDS[to]}” through ${viaEvent}, not by request.`);
     if (!canTransition(from, to))
-      throw conflict(`A transfer that is “${STATUS_WORDS[from]}” cannot become “${STATUS_WORDS[to]}”.`);
+      throw conflict(
+        `A transfer that is “${TRANSFER_STATUS_WORDS[from]}” cannot become “${TRANSFER_STATUS_WORDS[to]}”.`,
+      );
     const needed = abilityFor(from, to);
     const allowed = needed ? abilities[needed] === true : abilities.withdraw || abilities.sendBack;
     if (!allowed)
@@ -97,7 +99,7 @@ export async function transitionTransfer({
           : "Your part in this transfer does not allow that step.",
       );
     if ((to === "cancelled" || (role === "receiver" && to === "draft")) && !input.reason) {
-      throw badRequest("reason: say why, so the other party knows", { field: "reason" });
+      throw invalidField(["reason"], "say why, so the other party knows");
     }
 
     if (to === "awaiting_receiver" && from === "draft") await checkCanSubmit(tx, t);

@@ -8,6 +8,9 @@ import { formatTransferNumber } from "@shared/transfer/number";
 import { EDITABLE, statusAfterEdit } from "@shared/transfer/lifecycle";
 import { diffTransferDocuments, topLevelField, type EditableDocument } from "@shared/transfer/diff";
 import { placeFromZip } from "@shared/temperature/places";
+import { jurisdictionName } from "@shared/compliance/jurisdiction";
+import type { TaxonRank, TransferStatus } from "@shared/constants";
+import { TAXON_RANK_WORDS, TRANSFER_STATUS_WORDS, changedFieldsText } from "@shared/words";
 import type { Actor } from "../../auth/actor";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
@@ -20,7 +23,7 @@ import {
   type Container,
   type Transfer,
 } from "../../db/entities/transfer.entity";
-import { badRequest, conflict, forbidden } from "../../http/errors";
+import { conflict, forbidden, invalidField } from "../../http/errors";
 import { appendCustody } from "./custody";
 import { notifyParty } from "./notify";
 import type { AppLinks } from "../../mail/links";
@@ -32,9 +35,10 @@ type PatchParsed = z.output<typeof transferPatchSchema>;
 function locate(address: Address, field: "origin" | "destination") {
   const place = placeFromZip(address.zip.slice(0, 5));
   if (place?.state && place.state !== address.state) {
-    throw badRequest(`${field}.zip: ZIP ${address.zip} is in ${place.state}, not ${address.state}`, {
-      field: `${field}.zip`,
-    });
+    throw invalidField(
+      [field, "zip"],
+      `ZIP code ${address.zip} is in ${jurisdictionName(place.state)}, not ${jurisdictionName(address.state)}`,
+    );
   }
   return { lat: place?.lat ?? null, lon: place?.lon ?? null, timeZone: place?.timeZone ?? null };
 }
@@ -54,19 +58,14 @@ function addressColumns(side: "origin" | "destination", address: Address) {
 
 async function resolveReceiver(em: EntityManager, actor: Actor, organizationId: string, contactId: string | null) {
   if (organizationId === actor.organization?.id)
-    throw badRequest("receiverOrganizationId: the receiver must be another organisation", {
-      field: "receiverOrganizationId",
-    });
+    throw invalidField(["receiverOrganizationId"], "the receiver must be another organisation");
   const org = await em.findOne(OrganizationSchema, { id: organizationId });
   if (!org || org.kind === "courier_service")
-    throw badRequest("receiverOrganizationId: choose a keeper organisation", { field: "receiverOrganizationId" });
+    throw invalidField(["receiverOrganizationId"], "choose a keeper organisation");
   let contact = null;
   if (contactId) {
     contact = await em.findOne(UserSchema, { id: contactId, organization: org, role: "member", disabled: false });
-    if (!contact)
-      throw badRequest("receiverContactId: choose a member of the receiving organisation", {
-        field: "receiverContactId",
-      });
+    if (!contact) throw invalidField(["receiverContactId"], "choose a member of the receiving organisation");
   }
   return { org, contact };
 }
@@ -77,12 +76,12 @@ async function resolveTaxa(em: EntityManager, animals: TransferInputParsed["anim
   const byId = new Map(taxa.map((t) => [t.id, t]));
   animals.forEach((a, i) => {
     const taxon = byId.get(a.taxonId);
-    if (!taxon)
-      throw badRequest(`animals.${i}.taxonId: no such species in the catalogue`, { field: `animals.${i}.taxonId` });
+    if (!taxon) throw invalidField(["animals", i, "taxonId"], "this species is not in the catalogue");
     if (!["species", "subspecies", "genus"].includes(taxon.rank))
-      throw badRequest(`animals.${i}.taxonId: choose a species (not a ${taxon.rank})`, {
-        field: `animals.${i}.taxonId`,
-      });
+      throw invalidField(
+        ["animals", i, "taxonId"],
+        `choose a species, not a ${TAXON_RANK_WORDS[taxon.rank as TaxonRank] ?? "group of species"}`,
+      );
   });
   return byId;
 }
@@ -104,7 +103,7 @@ async function replaceLines(
 
   input.containers.forEach((c, position) => {
     if (c.id && !oldC.has(c.id))
-      throw badRequest(`containers.${position}.id: not a box of this transfer`, { field: `containers.${position}.id` });
+      throw invalidField(["containers", position, "id"], "this box is not one of this transfer's");
     const values = {
       key: c.key,
       position,
@@ -125,9 +124,7 @@ async function replaceLines(
   });
   input.animals.forEach((a, position) => {
     if (a.id && !oldA.has(a.id))
-      throw badRequest(`animals.${position}.id: not an animal line of this transfer`, {
-        field: `animals.${position}.id`,
-      });
+      throw invalidField(["animals", position, "id"], "this animal line is not one of this transfer's");
     const values = {
       position,
       taxon: ref(taxa.get(a.taxonId)!),
@@ -286,7 +283,9 @@ export async function updateTransfer({
         { currentVersion: t.version },
       );
     if (!EDITABLE.includes(t.status))
-      throw conflict(`A transfer that is ${t.status.replace("_", " ")} can no longer be edited.`);
+      throw conflict(
+        `A transfer that is “${TRANSFER_STATUS_WORDS[t.status as TransferStatus]}” can no longer be edited.`,
+      );
     const before = await editableDocument(tx, t);
 
     if (input.receiverOrganizationId !== undefined || input.receiverContactId !== undefined) {
@@ -305,7 +304,7 @@ export async function updateTransfer({
     if (input.plannedDepartureAt !== undefined) t.plannedDepartureAt = new Date(input.plannedDepartureAt);
     if (input.expectedArrivalAt !== undefined) t.expectedArrivalAt = new Date(input.expectedArrivalAt);
     if (t.expectedArrivalAt <= t.plannedDepartureAt)
-      throw badRequest("expectedArrivalAt: Arrival must be after departure", { field: "expectedArrivalAt" });
+      throw invalidField(["expectedArrivalAt"], "make it later than the planned departure");
     if (input.purpose !== undefined) t.purpose = input.purpose;
     if (input.sale !== undefined) t.sale = input.sale;
     if (input.salePriceUsd !== undefined) t.salePriceUsd = input.salePriceUsd ?? null;
@@ -313,9 +312,10 @@ export async function updateTransfer({
     if (input.privateNotes !== undefined) t.senderPrivateNotes = input.privateNotes ?? null;
     if (input.containers !== undefined || input.animals !== undefined) {
       if (input.containers === undefined || input.animals === undefined) {
-        throw badRequest("containers: send boxes and animals together, so every animal names its box", {
-          field: input.containers === undefined ? "containers" : "animals",
-        });
+        throw invalidField(
+          [input.containers === undefined ? "containers" : "animals"],
+          "send the boxes and the animal lines together, so every animal names its box",
+        );
       }
       await replaceLines(tx, t, { containers: input.containers, animals: input.animals });
     }
@@ -344,8 +344,7 @@ export async function updateTransfer({
     );
     t.version += 1;
     if (next !== t.status) {
-      const fields = [...new Set(changes.map((c) => topLevelField(c.field)))].join(", ");
-      t.reconfirmationReason = `Changed after confirmation: ${fields}`;
+      t.reconfirmationReason = `Changed after confirmation: ${changedFieldsText(changes.map((c) => topLevelField(c.field)))}.`;
       await appendCustody(tx, t.id, actor, "status_change", {
         from: t.status,
         to: next,

@@ -7,7 +7,7 @@ import {
   tempInputText,
   tempUnit,
   type UnitSystem,
-} from "@/lib/units";
+} from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 
 type Kind = "length" | "temperature";

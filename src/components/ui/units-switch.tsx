@@ -1,4 +1,4 @@
-import type { UnitSystem } from "@/lib/units";
+import type { UnitSystem } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 
 const choices: { value: UnitSystem; label: string; spoken: string }[] = [

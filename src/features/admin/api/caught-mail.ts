@@ -1,4 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
+import type { OutboxStatus } from "@shared/constants";
 import { api } from "@/lib/api-client";
 
 export type CaughtMail = { id: number; from: string; to: string[]; subject: string; text: string; receivedAt: string };
@@ -6,7 +7,7 @@ export type OutboxEntry = {
   id: string;
   to: string;
   subject: string;
-  status: string;
+  status: OutboxStatus;
   attempts: number;
   lastError: string | null;
   createdAt: string;

@@ -1,5 +1,6 @@
+import { USER_ROLE_WORDS } from "@shared/words";
 import { useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
 import { USER_ROLES } from "@shared/constants";
 import { userInviteSchema } from "@shared/schemas/auth";
@@ -7,7 +8,6 @@ import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
-import { roleLabel } from "@/lib/labels";
 import { useOrganizations } from "../api/organizations";
 import { useInviteUser } from "../api/users";
 
@@ -18,7 +18,7 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
   const orgs = useOrganizations();
   const invite = useInviteUser();
   const form = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(userInviteSchema),
+    resolver: keeperResolver(userInviteSchema),
     defaultValues: { email: "", displayName: "", role: "member", organizationId: null },
   });
   const errors = form.formState.errors;
@@ -51,7 +51,7 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
       <TextField label="E-mail" type="email" error={errors.email?.message} {...form.register("email")} />
       <SelectField
         label="Role"
-        options={USER_ROLES.map((r) => ({ value: r, label: roleLabel[r] }))}
+        options={USER_ROLES.map((r) => ({ value: r, label: USER_ROLE_WORDS[r] }))}
         error={errors.role?.message}
         {...form.register("role")}
       />

@@ -1,5 +1,6 @@
+import { ORGANIZATION_KIND_WORDS } from "@shared/words";
 import { useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
 import { ORGANIZATION_KINDS, US_STATES } from "@shared/constants";
 import { organizationInputSchema, type OrganizationDto } from "@shared/schemas/auth";
@@ -7,7 +8,6 @@ import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
-import { organizationKindLabel } from "@/lib/labels";
 import { useCreateOrganization, useUpdateOrganization } from "../api/organizations";
 
 type FormIn = z.input<typeof organizationInputSchema>;
@@ -19,7 +19,7 @@ export function OrganizationForm({ existing, onDone }: { existing?: Organization
   const update = useUpdateOrganization();
   const mutation = existing ? update : create;
   const form = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(organizationInputSchema),
+    resolver: keeperResolver(organizationInputSchema),
     defaultValues: existing
       ? {
           name: existing.name,
@@ -48,7 +48,7 @@ export function OrganizationForm({ existing, onDone }: { existing?: Organization
       <TextField label="Name" error={e.name?.message} {...form.register("name")} />
       <SelectField
         label="Kind"
-        options={ORGANIZATION_KINDS.map((k) => ({ value: k, label: organizationKindLabel[k] }))}
+        options={ORGANIZATION_KINDS.map((k) => ({ value: k, label: ORGANIZATION_KIND_WORDS[k] }))}
         {...form.register("kind")}
       />
       <TextField label="Street" error={e.address?.street?.message} {...form.register("address.street")} />

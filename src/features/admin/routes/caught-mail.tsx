@@ -1,6 +1,8 @@
+import { OUTBOX_STATUS_WORDS } from "@shared/words";
 import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
 import { useCaughtMail } from "../api/caught-mail";
+import { formatInstant } from "@shared/dates";
 
 /** Demo only: what the local mail catcher received, and what is still waiting in the outbox. */
 export function CaughtMailRoute() {
@@ -34,7 +36,7 @@ export function CaughtMailRoute() {
                 <Card key={m.id}>
                   <p className="font-semibold">{m.subject}</p>
                   <p className="text-sm text-ink-soft">
-                    To {m.to.join(", ")} · {new Date(m.receivedAt).toLocaleString()}
+                    To {m.to.join(", ")} · {formatInstant(m.receivedAt)}
                   </p>
                   <pre className="mt-3 whitespace-pre-wrap break-words font-sans text-sm">{m.text}</pre>
                 </Card>
@@ -49,7 +51,7 @@ export function CaughtMailRoute() {
                   <span className="text-ink-soft">{o.to}</span>
                   <span className="flex items-center gap-2">
                     <Badge tone={o.status === "sent" ? "ok" : o.status === "dead" ? "block" : "caution"}>
-                      {o.status}
+                      {OUTBOX_STATUS_WORDS[o.status]}
                     </Badge>
                     {o.attempts > 0 ? <span className="text-ink-faint">{o.attempts} attempt(s)</span> : null}
                   </span>

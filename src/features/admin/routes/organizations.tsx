@@ -1,10 +1,10 @@
+import { ORGANIZATION_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import type { OrganizationDto } from "@shared/schemas/auth";
 import { Button } from "@/components/ui/button";
 import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
 import { Table, Td, Th } from "@/components/ui/table";
-import { organizationKindLabel } from "@/lib/labels";
 import { useOrganizations } from "../api/organizations";
 import { OrganizationForm } from "../components/organization-form";
 
@@ -56,7 +56,7 @@ export function OrganizationsRoute() {
           {orgs.data.map((o) => (
             <tr key={o.id}>
               <Td className="font-medium">{o.name}</Td>
-              <Td>{organizationKindLabel[o.kind]}</Td>
+              <Td>{ORGANIZATION_KIND_WORDS[o.kind]}</Td>
               <Td>
                 {o.address.street}, {o.address.city}, {o.address.state} {o.address.zip}
               </Td>

@@ -1,3 +1,4 @@
+import { USER_ROLE_WORDS } from "@shared/words";
 import { useState } from "react";
 import { USER_ROLES, type UserRole } from "@shared/constants";
 import { Button } from "@/components/ui/button";
@@ -5,7 +6,6 @@ import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
 import { Table, Td, Th } from "@/components/ui/table";
 import { ApiError } from "@/lib/api-client";
-import { roleLabel } from "@/lib/labels";
 import { useUpdateUser, useUsers } from "../api/users";
 import { InviteUserForm } from "../components/invite-user-form";
 
@@ -79,7 +79,7 @@ export function UsersRoute() {
                 >
                   {USER_ROLES.map((r) => (
                     <option key={r} value={r}>
-                      {roleLabel[r]}
+                      {USER_ROLE_WORDS[r]}
                     </option>
                   ))}
                 </select>

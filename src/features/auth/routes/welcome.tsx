@@ -1,8 +1,7 @@
 import { useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import { Link, useSearchParams } from "react-router";
-import { z } from "zod";
-import { passwordSchema } from "@shared/schemas/common";
+import { passwordChoiceSchema, type PasswordChoice } from "@shared/schemas/auth";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
@@ -10,17 +9,13 @@ import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { useSetPassword } from "../api/session";
 
-const formSchema = z
-  .object({ password: passwordSchema, confirm: z.string() })
-  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
-
 /** The page an invitation e-mail links to: choose a password once. */
 export function WelcomeRoute() {
   const [params] = useSearchParams();
   const token = params.get("token") ?? "";
   const setPassword = useSetPassword();
-  const form = useForm<z.infer<typeof formSchema>>({
-    resolver: zodResolver(formSchema),
+  const form = useForm<PasswordChoice>({
+    resolver: keeperResolver(passwordChoiceSchema),
     defaultValues: { password: "", confirm: "" },
   });
 

@@ -1,6 +1,6 @@
+import { SEX_WORDS } from "@shared/words";
 import type { CheckInDto } from "@shared/schemas/transfer";
 import { Badge } from "@/components/ui/feedback";
-import { sexLabel } from "@/lib/transfer-labels";
 
 const columns = [
   ["expected", "Listed"],
@@ -48,7 +48,7 @@ export function DiscrepancyTable({ checkIn }: { checkIn: CheckInDto }) {
                   <th scope="row" className="px-3 py-2.5 text-left font-normal">
                     <i>{r.scientificName}</i>
                   </th>
-                  <td className="px-3 py-2.5">{sexLabel[r.sex]}</td>
+                  <td className="px-3 py-2.5">{SEX_WORDS[r.sex]}</td>
                   {columns.map(([key]) => (
                     <td
                       key={key}

@@ -1,3 +1,4 @@
+import { SEX_WORDS } from "@shared/words";
 import { Controller, useFieldArray, useFormContext } from "react-hook-form";
 import { SEXES } from "@shared/constants";
 import type { CheckInInput, TaxonBriefDto } from "@shared/schemas/transfer";
@@ -5,7 +6,6 @@ import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import type { TaxonSearch } from "@/lib/taxa-search";
-import { sexLabel } from "@/lib/transfer-labels";
 
 type Props = { taxa: Record<string, TaxonBriefDto>; rememberTaxon: (t: TaxonBriefDto) => void; search: TaxonSearch };
 
@@ -61,7 +61,7 @@ export function ExtrasEditor({ taxa, rememberTaxon, search }: Props) {
             />
             <SelectField
               label="Sex"
-              options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))}
+              options={SEXES.map((s) => ({ value: s, label: SEX_WORDS[s] }))}
               {...register(`extras.${i}.sex`)}
             />
             <div className="sm:col-span-2">

@@ -1,3 +1,4 @@
+import { CHECK_IN_OUTCOME_WORDS, SEX_WORDS } from "@shared/words";
 import { CHECK_IN_OUTCOMES } from "@shared/constants";
 import { CHECK_IN_OUTCOME_KEYS, type AnimalDto, type CheckInItemInput } from "@shared/schemas/transfer";
 import { Button } from "@/components/ui/button";
@@ -5,7 +6,6 @@ import { CountStepper } from "@/components/ui/count-stepper";
 import { Notice } from "@/components/ui/feedback";
 import { TextAreaField, TextField } from "@/components/ui/field";
 import { TaxonName } from "@/components/ui/taxon-name";
-import { outcomeLabel, sexLabel } from "@/lib/transfer-labels";
 import { outcomeMismatch } from "./outcome-sum";
 
 type Props = {
@@ -33,7 +33,7 @@ export function OutcomeCard({ animal: a, boxLabel, value, onChange, errors }: Pr
           {a.count} × <TaxonName taxon={a.taxon} />
         </h3>
         <p className="text-sm text-ink-soft">
-          {[sexLabel[a.sex], a.identifier ? `ID ${a.identifier}` : null, boxLabel ? `in ${boxLabel}` : "not in a box"]
+          {[SEX_WORDS[a.sex], a.identifier ? `ID ${a.identifier}` : null, boxLabel ? `in ${boxLabel}` : "not in a box"]
             .filter(Boolean)
             .join(" · ")}
         </p>
@@ -44,7 +44,7 @@ export function OutcomeCard({ animal: a, boxLabel, value, onChange, errors }: Pr
           return (
             <CountStepper
               key={outcome}
-              label={outcomeLabel[outcome]}
+              label={CHECK_IN_OUTCOME_WORDS[outcome]}
               value={value[field]}
               max={a.count}
               onChange={(n) => set({ [field]: n })}

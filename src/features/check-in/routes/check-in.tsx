@@ -1,6 +1,7 @@
+import { SEX_WORDS } from "@shared/words";
 import { useState } from "react";
 import { Controller, FormProvider, useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import { Link, useParams } from "react-router";
 import type { z } from "zod";
 import { outcomeTotal } from "@shared/checkin/discrepancy";
@@ -13,12 +14,11 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useIdempotencyKey } from "@/lib/idempotency";
 import { searchTaxa } from "@/lib/taxa-search";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
-import { sexLabel } from "@/lib/transfer-labels";
 import { useCheckIn } from "../api/check-in";
 import { DiscrepancyTable } from "../components/discrepancy-table";
 import { ExtrasEditor } from "../components/extras-editor";
@@ -34,7 +34,7 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
   const [taxa, setTaxa] = useState<Record<string, TaxonBriefDto>>({});
   const [sumError, setSumError] = useState<string | null>(null);
   const form = useForm<CheckInInput, unknown, Parsed>({
-    resolver: zodResolver(checkInInputSchema),
+    resolver: keeperResolver(checkInInputSchema),
     defaultValues: {
       // Every count starts at zero: the receiver says what they found, line by line.
       items: animals.map((a) => ({
@@ -157,7 +157,7 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
   return (
     <div className="grid gap-5">
       <Notice tone="ok" title="Checked in">
-        Signed by {c.signedName} on {formatDateTime(c.signedAt)}.{" "}
+        Signed by {c.signedName} on {formatInstant(c.signedAt)}.{" "}
         <Link to={paths.register} className="font-medium text-fern underline">
           Open the collection register
         </Link>
@@ -171,7 +171,7 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
           <ul className="list-disc pl-5">
             {c.extras.map((x, i) => (
               <li key={i}>
-                {x.count} × <TaxonName taxon={x.taxon} />, {sexLabel[x.sex].toLowerCase()}
+                {x.count} × <TaxonName taxon={x.taxon} />, {SEX_WORDS[x.sex].toLowerCase()}
                 {x.notes ? ` — ${x.notes}` : ""}
               </li>
             ))}

@@ -6,6 +6,7 @@ import { LegalCaution } from "./legal-caution";
 import { OverrideForm } from "./override-form";
 import { TransferDocuments } from "./transfer-documents";
 import { VerdictBanner } from "./verdict-banner";
+import { formatDate, formatInstant } from "@shared/dates";
 
 /**
  * The transfer page's compliance section: the verdict, each animal's findings with their
@@ -34,13 +35,13 @@ export function ComplianceSection({ transferId }: { transferId: string }) {
           <VerdictBanner verdict={compliance.data.verdict} overridden={compliance.data.override !== null} />
           {compliance.data.override ? (
             <Notice tone="info" title="Overridden by an administrator">
-              {compliance.data.override.admin.displayName}, {new Date(compliance.data.override.at).toLocaleString()}: “
+              {compliance.data.override.admin.displayName}, {formatInstant(compliance.data.override.at)}: “
               {compliance.data.override.reason}”
             </Notice>
           ) : null}
           <p className="text-sm text-ink-soft">
-            Checked for the ship date {compliance.data.shipDate}, with the permits and certificates the sender and the
-            receiver have on file: {compliance.data.rulesUsed.length} rule
+            Checked for the ship date {formatDate(compliance.data.shipDate)}, with the permits and certificates the
+            sender and the receiver have on file: {compliance.data.rulesUsed.length} rule
             {compliance.data.rulesUsed.length === 1 ? " applies" : "s apply"}.
           </p>
           <FindingsByAnimal animals={compliance.data.animals} />

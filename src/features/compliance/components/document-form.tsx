@@ -1,9 +1,9 @@
+import { DOCUMENT_KIND_WORDS } from "@shared/words";
 import { Controller, useFieldArray, useForm, type FieldErrors } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
 import { DOCUMENT_KINDS } from "@shared/constants";
 import { JURISDICTIONS, jurisdictionName } from "@shared/compliance/jurisdiction";
-import { DOCUMENT_KIND_LABELS } from "@shared/compliance/labels";
 import { documentInputSchema, type DocumentDto } from "@shared/schemas/compliance";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
@@ -82,7 +82,7 @@ export function DocumentForm({
   const update = useUpdateDocument();
   const mutation = existing ? update : create;
   const form = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(documentInputSchema),
+    resolver: keeperResolver(documentInputSchema),
     defaultValues: defaultsOf(existing, holderName),
   });
   const animals = useFieldArray({ control: form.control, name: "animalsCovered" });
@@ -106,7 +106,7 @@ export function DocumentForm({
       ) : null}
       <SelectField
         label="Kind"
-        options={DOCUMENT_KINDS.map((k) => ({ value: k, label: DOCUMENT_KIND_LABELS[k] }))}
+        options={DOCUMENT_KINDS.map((k) => ({ value: k, label: DOCUMENT_KIND_WORDS[k] }))}
         {...form.register("kind")}
       />
       <SelectField

@@ -1,4 +1,4 @@
-import { EXPIRY_LABELS } from "@shared/compliance/labels";
+import { EXPIRY_WORDS } from "@shared/words";
 import type { DocumentDto } from "@shared/schemas/compliance";
 import { Tag } from "./tag";
 
@@ -17,7 +17,7 @@ export function ExpiryBadge({ expiry }: { expiry: DocumentDto["expiry"] }) {
         : "";
   return (
     <Tag tone={TONE[expiry.status]}>
-      {EXPIRY_LABELS[expiry.status]}
+      {EXPIRY_WORDS[expiry.status]}
       {detail}
     </Tag>
   );

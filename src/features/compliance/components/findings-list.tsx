@@ -1,4 +1,4 @@
-import { DOCUMENT_KIND_LABELS, SEVERITY_LABELS } from "@shared/compliance/labels";
+import { DOCUMENT_KIND_WORDS, SEVERITY_WORDS } from "@shared/words";
 import { jurisdictionName } from "@shared/compliance/jurisdiction";
 import type { EvaluateResponse, Finding } from "@shared/compliance/schemas";
 import { Tag } from "./tag";
@@ -11,7 +11,7 @@ function FindingItem({ finding }: { finding: Finding }) {
     <li className="flex flex-col gap-1.5 border-t border-rule py-3 first:border-t-0">
       <div className="flex flex-wrap items-center gap-2">
         <Tag tone={satisfied ? "ok" : SEVERITY_TONE[finding.severity]}>
-          {satisfied ? "Covered" : SEVERITY_LABELS[finding.severity]}
+          {satisfied ? "Covered" : SEVERITY_WORDS[finding.severity]}
         </Tag>
         <span className="text-sm font-semibold">
           {finding.jurisdiction === "US" ? "Federal" : jurisdictionName(finding.jurisdiction)}
@@ -20,7 +20,7 @@ function FindingItem({ finding }: { finding: Finding }) {
       <p className="text-sm leading-relaxed">{finding.message}</p>
       {satisfied ? (
         <p className="text-sm text-fern-dark">
-          Satisfied by: {DOCUMENT_KIND_LABELS[satisfied.kind]}
+          Satisfied by: {DOCUMENT_KIND_WORDS[satisfied.kind]}
           {satisfied.number ? ` no. ${satisfied.number}` : ""}
           {satisfied.jurisdiction !== "US" ? ` (${jurisdictionName(satisfied.jurisdiction)})` : ""}
         </p>

@@ -1,5 +1,5 @@
 import { useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
 import { overrideInputSchema } from "@shared/schemas/compliance";
 import { Button } from "@/components/ui/button";
@@ -15,7 +15,7 @@ type FormOut = z.output<typeof overrideInputSchema>;
 export function OverrideForm({ transferId }: { transferId: string }) {
   const override = useOverrideCompliance(transferId);
   const form = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(overrideInputSchema),
+    resolver: keeperResolver(overrideInputSchema),
     defaultValues: { reason: "" },
   });
   const submit = form.handleSubmit(({ reason }) => override.mutate(reason));

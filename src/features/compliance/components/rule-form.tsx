@@ -1,3 +1,5 @@
+import { parseOptions } from "@/lib/form-resolver";
+import { GOVERNS_WORDS } from "@shared/words";
 import { Controller, useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import { GOVERNS, type Rule } from "@shared/compliance/rule";
 import { JURISDICTIONS, jurisdictionName } from "@shared/compliance/jurisdiction";
@@ -24,15 +26,6 @@ type Values = {
   conditionsJson: string;
   effectJson: string;
   retired: boolean;
-};
-
-const GOVERNS_LABELS: Record<Rule["governs"], string> = {
-  import: "Import into the state",
-  export: "Export out of the state",
-  transit: "Passing through the state",
-  possession: "Keeping in the state",
-  interstate: "Crossing a state line",
-  movement: "Any move touching the state",
 };
 
 function valuesOf(rule: Rule, retired: boolean, reviewer: string): Values {
@@ -120,7 +113,7 @@ function resolverFor(base: Rule): Resolver<Values, unknown, RuleVersionInput> {
         effect: effect.value,
       },
     };
-    const parsed = ruleVersionInputSchema.safeParse(candidate);
+    const parsed = ruleVersionInputSchema.safeParse(candidate, parseOptions());
     if (parsed.success) return { values: parsed.data, errors: {} };
     for (const issue of parsed.error.issues) {
       const field = fieldOf(issue.path);
@@ -167,7 +160,7 @@ export function RuleForm({
       />
       <SelectField
         label="Governs"
-        options={GOVERNS.map((g) => ({ value: g, label: GOVERNS_LABELS[g] }))}
+        options={GOVERNS.map((g) => ({ value: g, label: GOVERNS_WORDS[g] }))}
         error={e.governs?.message}
         {...form.register("governs")}
       />

@@ -1,6 +1,6 @@
+import { DOCUMENT_KIND_WORDS, HOLDER_SIDE_WORDS } from "@shared/words";
 import { useState } from "react";
 import { jurisdictionName } from "@shared/compliance/jurisdiction";
-import { DOCUMENT_KIND_LABELS } from "@shared/compliance/labels";
 import type { DocumentDto, TransferDocumentDto } from "@shared/schemas/compliance";
 import { Button } from "@/components/ui/button";
 import { SelectField } from "@/components/ui/field";
@@ -10,11 +10,12 @@ import { useDocuments } from "../api/documents";
 import { useAttachDocument, useDetachDocument, useTransferDocuments } from "../api/transfer-compliance";
 import { ExpiryBadge } from "./expiry-badge";
 import { ScanList } from "./scan-list";
+import { formatDateRange } from "@shared/dates";
 
 const issuer = (d: Pick<DocumentDto, "jurisdiction">) =>
   d.jurisdiction === "US" ? "federal" : jurisdictionName(d.jurisdiction);
 const validity = (d: Pick<DocumentDto, "validFrom" | "validTo">) =>
-  d.validFrom || d.validTo ? `valid ${d.validFrom ?? "…"} to ${d.validTo ?? "…"}` : "no validity dates";
+  d.validFrom || d.validTo ? `valid ${formatDateRange(d.validFrom, d.validTo)}` : "no validity dates";
 
 function UsedDocument({
   doc,
@@ -31,14 +32,14 @@ function UsedDocument({
     <li className="flex flex-col gap-2 border-t border-rule py-3 first:border-t-0">
       <div className="flex flex-wrap items-center gap-2">
         <span className="font-medium">
-          {DOCUMENT_KIND_LABELS[doc.kind]} no. {doc.number}
+          {DOCUMENT_KIND_WORDS[doc.kind]} no. {doc.number}
         </span>
         <ExpiryBadge expiry={doc.expiry} />
         {doc.attached ? <Badge tone="neutral">Attached</Badge> : null}
       </div>
       <p className="text-sm text-ink-soft">
         {issuer(doc)}, {validity(doc)} · held by {doc.organization.name}
-        {doc.holderSide ? ` (the ${doc.holderSide})` : ""}
+        {doc.holderSide ? ` (${HOLDER_SIDE_WORDS[doc.holderSide]})` : ""}
         {doc.satisfies.length
           ? ` · satisfies ${doc.satisfies.map((s) => `${s.ruleId} for ${s.scientificName}`).join("; ")}`
           : ""}
@@ -84,7 +85,7 @@ function AttachControl({ transferId, used }: { transferId: string; used: readonl
             { value: "", label: "Choose a document" },
             ...candidates.map((d) => ({
               value: d.id,
-              label: `${DOCUMENT_KIND_LABELS[d.kind]} no. ${d.number} (${issuer(d)})`,
+              label: `${DOCUMENT_KIND_WORDS[d.kind]} no. ${d.number} (${issuer(d)})`,
             })),
           ]}
         />

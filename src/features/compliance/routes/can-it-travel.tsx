@@ -1,9 +1,9 @@
+import { ANIMAL_ORIGIN_WORDS, DOCUMENT_KIND_WORDS, PURPOSE_WORDS, SEX_WORDS } from "@shared/words";
 import { Controller, useFieldArray, useForm, type UseFormReturn } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
 import { ANIMAL_ORIGINS, DOCUMENT_KINDS, PURPOSES, SEXES, US_STATES } from "@shared/constants";
 import { JURISDICTIONS, jurisdictionName } from "@shared/compliance/jurisdiction";
-import { DOCUMENT_KIND_LABELS } from "@shared/compliance/labels";
 import { evaluateRequestSchema } from "@shared/compliance/schemas";
 import { addDays } from "@shared/temperature/zoned-time";
 import { Button } from "@/components/ui/button";
@@ -14,7 +14,6 @@ import { Card, PageHeader } from "@/components/ui/page";
 import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import { ApiError } from "@/lib/api-client";
 import { searchTaxa } from "@/lib/taxa-search";
-import { animalOriginLabel, purposeLabel, sexLabel } from "@/lib/transfer-labels";
 import { useEvaluate } from "../api/evaluate";
 import { FindingsByAnimal } from "../components/findings-list";
 import { LegalCaution } from "../components/legal-caution";
@@ -102,12 +101,12 @@ function AnimalRows({ form }: { form: Form }) {
           />
           <SelectField
             label="Origin"
-            options={ANIMAL_ORIGINS.map((o) => ({ value: o, label: animalOriginLabel[o] }))}
+            options={ANIMAL_ORIGINS.map((o) => ({ value: o, label: ANIMAL_ORIGIN_WORDS[o] }))}
             {...form.register(`animals.${index}.origin`)}
           />
           <SelectField
             label="Sex"
-            options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))}
+            options={SEXES.map((s) => ({ value: s, label: SEX_WORDS[s] }))}
             {...form.register(`animals.${index}.sex`)}
           />
           <Button
@@ -138,7 +137,7 @@ function DocumentRows({ form }: { form: Form }) {
         <div key={row.id} className="grid gap-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-3">
           <SelectField
             label="Kind"
-            options={DOCUMENT_KINDS.map((k) => ({ value: k, label: DOCUMENT_KIND_LABELS[k] }))}
+            options={DOCUMENT_KINDS.map((k) => ({ value: k, label: DOCUMENT_KIND_WORDS[k] }))}
             {...form.register(`documents.${index}.kind`)}
           />
           <SelectField
@@ -241,7 +240,7 @@ function UnknownSpecies({ error, form }: { error: ApiError; form: Form }) {
 export function CanItTravelRoute() {
   const evaluate = useEvaluate();
   const form: Form = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(evaluateRequestSchema),
+    resolver: keeperResolver(evaluateRequestSchema),
     defaultValues: {
       originState: "TN",
       destinationState: "OH",
@@ -296,7 +295,7 @@ export function CanItTravelRoute() {
               <TextField label="Ship date" type="date" error={e.shipDate?.message} {...form.register("shipDate")} />
               <SelectField
                 label="Purpose"
-                options={PURPOSES.map((p) => ({ value: p, label: purposeLabel[p] }))}
+                options={PURPOSES.map((p) => ({ value: p, label: PURPOSE_WORDS[p] }))}
                 {...form.register("purpose")}
               />
               <label className="flex min-h-11 items-center gap-2 self-end text-sm">

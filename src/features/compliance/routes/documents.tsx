@@ -1,6 +1,6 @@
+import { DOCUMENT_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { jurisdictionName } from "@shared/compliance/jurisdiction";
-import { DOCUMENT_KIND_LABELS } from "@shared/compliance/labels";
 import type { DocumentDto } from "@shared/schemas/compliance";
 import { Button } from "@/components/ui/button";
 import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
@@ -11,6 +11,7 @@ import { useDocuments } from "../api/documents";
 import { DocumentForm } from "../components/document-form";
 import { ExpiryBadge } from "../components/expiry-badge";
 import { ScanList } from "../components/scan-list";
+import { formatDateRange } from "@shared/dates";
 
 function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) {
   const [showScans, setShowScans] = useState(false);
@@ -19,7 +20,7 @@ function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) 
     <>
       <tr>
         <Td className="font-medium">
-          {DOCUMENT_KIND_LABELS[doc.kind]}
+          {DOCUMENT_KIND_WORDS[doc.kind]}
           <br />
           <span className="text-ink-soft">no. {doc.number}</span>
         </Td>
@@ -36,7 +37,7 @@ function DocumentRow({ doc, onEdit }: { doc: DocumentDto; onEdit: () => void }) 
           )}
         </Td>
         <Td>
-          {doc.validFrom ?? "…"} to {doc.validTo ?? "…"}
+          {formatDateRange(doc.validFrom, doc.validTo, "No validity dates")}
           <div className="mt-1">
             <ExpiryBadge expiry={doc.expiry} />
           </div>
@@ -88,7 +89,7 @@ export function DocumentsRoute() {
           title={
             editing === "new"
               ? "New permit or certificate"
-              : `Edit ${DOCUMENT_KIND_LABELS[editing.kind].toLowerCase()} no. ${editing.number}`
+              : `Edit ${DOCUMENT_KIND_WORDS[editing.kind].toLowerCase()} no. ${editing.number}`
           }
           className="mb-6"
         >

@@ -1,3 +1,4 @@
+import { RULE_EFFECT_WORDS } from "@shared/words";
 import { useState, type FormEvent } from "react";
 import { JURISDICTIONS, jurisdictionName, type Jurisdiction } from "@shared/compliance/jurisdiction";
 import type { Rule } from "@shared/compliance/rule";
@@ -11,17 +12,10 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { useViewer } from "@/lib/viewer";
 import { useRuleHistory, useRules } from "../api/rules";
 import { RuleForm } from "../components/rule-form";
-
-const EFFECT_LABELS = {
-  prohibited: "Prohibited",
-  permit_required: "Permit required",
-  certificate_required: "Certificate required",
-  packing: "Packing and marking",
-  advisory: "Advice",
-} as const;
+import { formatDate, formatInstant } from "@shared/dates";
 
 const inForce = (rule: Rule) =>
-  `In force ${rule.effectiveFrom ? `from ${rule.effectiveFrom}` : "since a date not recorded"}${rule.effectiveTo ? ` until ${rule.effectiveTo}` : ", still in force"}`;
+  `In force ${rule.effectiveFrom ? `from ${formatDate(rule.effectiveFrom)}` : "since a date not recorded"}${rule.effectiveTo ? ` until ${formatDate(rule.effectiveTo)}` : ", still in force"}`;
 
 const place = (j: Jurisdiction) => (j === "US" ? "Federal" : jurisdictionName(j));
 
@@ -51,10 +45,10 @@ function RuleHistory({ ruleKey, reviewer }: { ruleKey: string; reviewer: string 
             <li key={v.rule.version} className="rounded-card border border-rule bg-paper px-4 py-3 text-sm">
               <p className="font-semibold">
                 Version {v.rule.version}
-                {v.retired ? " — retired" : ""} · reviewed {v.rule.reviewedOn} by {v.rule.reviewedBy}
+                {v.retired ? " — retired" : ""} · reviewed {formatDate(v.rule.reviewedOn)} by {v.rule.reviewedBy}
                 <span className="font-normal text-ink-soft">
                   {" "}
-                  · saved {new Date(v.createdAt).toLocaleDateString()}
+                  · saved {formatInstant(v.createdAt)}
                   {v.createdBy ? ` by ${v.createdBy.displayName}` : " with the seed library"}
                 </span>
               </p>
@@ -109,14 +103,14 @@ function RuleRow({
               rule.effect.kind === "prohibited" ? "block" : rule.effect.kind.endsWith("required") ? "caution" : "info"
             }
           >
-            {EFFECT_LABELS[rule.effect.kind]}
+            {RULE_EFFECT_WORDS[rule.effect.kind]}
           </Tag>
           {rule.demo ? <Tag tone="neutral">Demo rule</Tag> : null}
           {retired ? <Tag tone="neutral">Retired</Tag> : null}
         </div>
       </Td>
       <Td>
-        {rule.reviewedOn}
+        {formatDate(rule.reviewedOn)}
         <br />
         <span className="text-ink-soft">{rule.reviewedBy}</span>
       </Td>

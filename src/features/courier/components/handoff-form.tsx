@@ -1,6 +1,7 @@
+import { HANDOFF_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
 import { handoffInputSchema, type HandoffInput, type TransferDto } from "@shared/schemas/transfer";
 import { handoffKind } from "@shared/transfer/lifecycle";
@@ -11,7 +12,6 @@ import { TextAreaField, TextField } from "@/components/ui/field";
 import { MeasureField } from "@/components/ui/measure-field";
 import { ApiError } from "@/lib/api-client";
 import { useIdempotencyKey } from "@/lib/idempotency";
-import { handoffKindLabel } from "@/lib/transfer-labels";
 import { useRecordHandoff } from "../api/record-handoff";
 import { handoffParties } from "./handoff-parties";
 
@@ -56,7 +56,7 @@ export function HandoffForm({
   const { key, settle } = useIdempotencyKey();
   const [located, setLocated] = useState<Located>({ state: "idle" });
   const form = useForm<HandoffInput, unknown, Parsed>({
-    resolver: zodResolver(handoffInputSchema),
+    resolver: keeperResolver(handoffInputSchema),
     defaultValues: defaults(t, index),
   });
   const { register, control, formState, setValue, watch } = form;
@@ -90,7 +90,7 @@ export function HandoffForm({
     record.mutate(
       { input, idempotencyKey: key },
       {
-        onSuccess: () => onRecorded(`${handoffKindLabel[kind]} recorded.`),
+        onSuccess: () => onRecorded(`${HANDOFF_KIND_WORDS[kind]} recorded.`),
         onSettled: (_data, error) => settle(error ?? undefined),
       },
     ),
@@ -99,7 +99,7 @@ export function HandoffForm({
   return (
     <form onSubmit={submit} noValidate className="grid gap-6">
       <h2 className="text-2xl font-semibold">
-        {handoffKindLabel[kind]}{" "}
+        {HANDOFF_KIND_WORDS[kind]}{" "}
         <span className="text-ink-soft">
           ({index + 1} of {t.handoffsPlanned})
         </span>

@@ -1,3 +1,4 @@
+import { HANDOFF_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
 import { useParams } from "react-router";
@@ -5,8 +6,7 @@ import { TransportCautions } from "@/components/ui/cautions";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
-import { handoffKindLabel } from "@/lib/transfer-labels";
+import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
 import { HandoffForm } from "../components/handoff-form";
@@ -50,7 +50,7 @@ export function CourierHandoffRoute() {
         </p>
         <p className="text-ink-soft">
           {t.containers.length} {t.containers.length === 1 ? "box" : "boxes"} · {animals} live{" "}
-          {animals === 1 ? "animal" : "animals"} · leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+          {animals === 1 ? "animal" : "animals"} · leaves {formatInstant(t.plannedDepartureAt, t.origin.timeZone)}
         </p>
       </header>
 
@@ -93,17 +93,17 @@ export function CourierHandoffRoute() {
                 <p className="font-semibold">
                   {i + 1}.{" "}
                   {done
-                    ? handoffKindLabel[done.kind]
+                    ? HANDOFF_KIND_WORDS[done.kind]
                     : i === 0
-                      ? handoffKindLabel.pickup
+                      ? HANDOFF_KIND_WORDS.pickup
                       : i === legs.length
-                        ? handoffKindLabel.delivery
-                        : handoffKindLabel.handoff}
+                        ? HANDOFF_KIND_WORDS.delivery
+                        : HANDOFF_KIND_WORDS.handoff}
                   {mine ? <span className="font-normal text-ink-soft"> · yours</span> : null}
                 </p>
                 <p className="text-base text-ink-soft">
                   {done
-                    ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatDateTime(done.at)}`
+                    ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatInstant(done.at)}`
                     : i === next
                       ? "To record now"
                       : "Not yet"}

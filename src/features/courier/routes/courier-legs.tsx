@@ -7,7 +7,7 @@ import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useTransfers } from "@/lib/transfer-queries";
 
 const FINISHED: readonly TransferStatus[] = ["delivered", "checked_in", "closed", "cancelled"];
@@ -23,7 +23,7 @@ function LegCard({ transfer: t }: { transfer: TransferSummaryDto }) {
         {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state}
       </p>
       <p className="text-ink-soft">
-        Leaves {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)} · {t.animalCount}{" "}
+        Leaves {formatInstant(t.plannedDepartureAt, t.origin.timeZone)} · {t.animalCount}{" "}
         {t.animalCount === 1 ? "animal" : "animals"}
       </p>
       <p className="text-sm text-ink-soft">

@@ -1,3 +1,4 @@
+import { REGISTER_CONDITION_WORDS, SEX_WORDS } from "@shared/words";
 import { useEffect, useState } from "react";
 import { Link, useSearchParams } from "react-router";
 import { SEXES } from "@shared/constants";
@@ -9,9 +10,8 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
-import { formatDate } from "@/lib/datetime";
+import { formatDate } from "@shared/dates";
 import { searchTaxa } from "@/lib/taxa-search";
-import { sexLabel } from "@/lib/transfer-labels";
 import { registerCsvHref, useRegister, type RegisterFilters } from "../api/get-register";
 
 const KEYS = ["q", "taxonId", "sex", "from", "to"] as const;
@@ -103,7 +103,7 @@ export function RegisterRoute() {
         </div>
         <SelectField
           label="Sex"
-          options={[{ value: "", label: "Any" }, ...SEXES.map((s) => ({ value: s, label: sexLabel[s] }))]}
+          options={[{ value: "", label: "Any" }, ...SEXES.map((s) => ({ value: s, label: SEX_WORDS[s] }))]}
           value={filters.sex ?? ""}
           onChange={(e) => set("sex", e.target.value)}
         />
@@ -154,7 +154,7 @@ export function RegisterRoute() {
               <Td>
                 <TaxonName taxon={r.taxon} />
               </Td>
-              <Td>{sexLabel[r.sex]}</Td>
+              <Td>{SEX_WORDS[r.sex]}</Td>
               <Td className="text-right tabular-nums">{r.count}</Td>
               <Td>{r.identifier ?? "—"}</Td>
               <Td className="whitespace-nowrap">{formatDate(r.dateAcquired)}</Td>
@@ -165,7 +165,7 @@ export function RegisterRoute() {
                 </Link>
               </Td>
               <Td>
-                {r.condition === "well" ? <Badge tone="ok">Well</Badge> : <Badge tone="caution">With a problem</Badge>}
+                <Badge tone={r.condition === "well" ? "ok" : "caution"}>{REGISTER_CONDITION_WORDS[r.condition]}</Badge>
               </Td>
               <Td className="whitespace-pre-wrap">{r.notes ?? ""}</Td>
             </tr>

@@ -1,11 +1,9 @@
-import type { PackKind } from "@shared/constants";
+import { PACK_HANDLING_WORDS, PACK_WORDS, TEMPERATURE_VERDICT_WORDS } from "@shared/words";
 import type { Verdict } from "@shared/temperature/advice";
 import type { TemperatureReport } from "@shared/temperature/report";
-import { VERDICT_WORDS } from "@shared/temperature/words";
 import { Badge, Notice } from "@/components/ui/feedback";
-import { formatDateTime } from "@/lib/datetime";
-import { packLabel } from "@/lib/transfer-labels";
-import { formatTemp } from "@/lib/units";
+import { formatInstant } from "@shared/dates";
+import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 
 type Tone = "ok" | "info" | "caution" | "block";
@@ -18,15 +16,6 @@ export const VERDICT_TONE: Readonly<Record<Verdict, Tone>> = {
   forecast_unavailable: "block",
 };
 
-const PACK_HANDLING: Readonly<Record<PackKind, string>> = {
-  heat_40h:
-    "Open it an hour before packing so it is warm, and fix it to the lid or a wall with paper between it and the containers.",
-  heat_72h:
-    "Open it an hour before packing so it is warm, and fix it to the lid or a wall with paper between it and the containers.",
-  cold: "Freeze it overnight, wrap it in paper, and keep it away from the containers.",
-  none: "Pack the containers snugly so they cannot shift; no pack is needed.",
-};
-
 /** The verdict in a sentence, the packing to do, the temperatures, a safer day, the calendar and (for transfers) each box. */
 export function AssessmentDetails({ report, showBoxes = false }: { report: TemperatureReport; showBoxes?: boolean }) {
   const [system] = useUnitSystem();
@@ -35,14 +24,14 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
   const searched = report.verdict === "hold" || report.verdict === "do_not_ship";
   return (
     <div className="flex flex-col gap-3">
-      <Notice tone={VERDICT_TONE[report.verdict]} title={VERDICT_WORDS[report.verdict]} role="status">
+      <Notice tone={VERDICT_TONE[report.verdict]} title={TEMPERATURE_VERDICT_WORDS[report.verdict]} role="status">
         {report.advice.message}
       </Notice>
       {report.advice.pack ? (
         <div>
           <h3 className="font-semibold">Packing</h3>
           <p className="text-sm">
-            <strong>{packLabel[report.advice.pack]}.</strong> {PACK_HANDLING[report.advice.pack]}
+            <strong>{PACK_WORDS[report.advice.pack]}.</strong> {PACK_HANDLING_WORDS[report.advice.pack]}
           </p>
         </div>
       ) : null}
@@ -58,7 +47,7 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       </dl>
       {report.suggestedDeparture ? (
         <Notice tone="info" title="A safer departure">
-          Leaving {formatDateTime(report.suggestedDeparture)} looks better for every box and avoids weekends and federal
+          Leaving {formatInstant(report.suggestedDeparture)} looks better for every box and avoids weekends and federal
           holidays in transit.
         </Notice>
       ) : searched ? (
@@ -118,7 +107,7 @@ function BoxVerdicts({ report }: { report: TemperatureReport }) {
               <td className="py-1 pr-3">{b.label}</td>
               <td className="py-1 pr-3">{b.profile.label}</td>
               <td className="py-1 pr-3">
-                <Badge tone={VERDICT_TONE[b.verdict]}>{VERDICT_WORDS[b.verdict]}</Badge>
+                <Badge tone={VERDICT_TONE[b.verdict]}>{TEMPERATURE_VERDICT_WORDS[b.verdict]}</Badge>
               </td>
               <td className="py-1 pr-3">
                 {b.insideF ? `${formatTemp(b.insideF.min, system)} to ${formatTemp(b.insideF.max, system)}` : "—"}

@@ -1,5 +1,5 @@
 import type { TemperatureReport } from "@shared/temperature/report";
-import { tempInUnit, type UnitSystem } from "@/lib/units";
+import { tempInUnit, type UnitSystem } from "@shared/units";
 
 /** One point of the chart: the hour (epoch ms), where the box is, outside and inside in the chosen unit. */
 export type ChartRow = { atMs: number; place: string; outside: number | null; inside: number | null };

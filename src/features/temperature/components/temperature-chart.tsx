@@ -9,20 +9,11 @@ import {
   XAxis,
   YAxis,
 } from "recharts";
+import { formatAxisHour, formatInstant } from "@shared/dates";
 import type { TemperatureReport } from "@shared/temperature/report";
-import { tempUnit } from "@/lib/units";
+import { tempUnit } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { chartRows, safeBand, type ChartRow } from "./chart-rows";
-
-const hourFormat = new Intl.DateTimeFormat("en-US", { weekday: "short", hour: "numeric" });
-const tooltipFormat = new Intl.DateTimeFormat("en-US", {
-  weekday: "short",
-  month: "short",
-  day: "numeric",
-  hour: "numeric",
-  minute: "2-digit",
-  timeZoneName: "short",
-});
 
 // The palette of tailwind.config.ts: slate for the weather, fern for the box, fern-light for the band.
 const COLOURS = { outside: "#3d5566", inside: "#2f5d3a", band: "#6f9a76" };
@@ -55,12 +46,12 @@ export function TemperatureChart({ report }: { report: TemperatureReport }) {
               type="number"
               scale="time"
               domain={["dataMin", "dataMax"]}
-              tickFormatter={(ms: number) => hourFormat.format(ms)}
+              tickFormatter={(ms: number) => formatAxisHour(ms)}
               minTickGap={24}
             />
             <YAxis unit={unit} width={64} domain={["auto", "auto"]} />
             <Tooltip
-              labelFormatter={(ms) => tooltipFormat.format(Number(ms))}
+              labelFormatter={(ms) => formatInstant(Number(ms))}
               formatter={(value, name) => [
                 `${String(value)} ${unit}`,
                 name === "outside" ? "Outside" : "Inside the box",
@@ -120,7 +111,7 @@ function HoursTable({ rows, unit }: { rows: ChartRow[]; unit: string }) {
           <tbody>
             {rows.map((r) => (
               <tr key={r.atMs} className="border-b border-rule/60 last:border-0">
-                <td className="py-1 pr-3">{tooltipFormat.format(r.atMs)}</td>
+                <td className="py-1 pr-3">{formatInstant(r.atMs)}</td>
                 <td className="py-1 pr-3">{r.place}</td>
                 <td className="py-1 pr-3">{r.outside ?? "—"}</td>
                 <td className="py-1">{r.inside ?? "—"}</td>

@@ -1,9 +1,9 @@
+import { CHECK_MARK_WORDS, TEMPERATURE_VERDICT_WORDS } from "@shared/words";
 import { useId } from "react";
 import type { TransferStatus } from "@shared/constants";
 import { blocksShipping, type TransferTemperatureDto } from "@shared/temperature/report";
-import { CHECK_MARK_WORDS, VERDICT_WORDS } from "@shared/temperature/words";
 import { Loading, Notice } from "@/components/ui/feedback";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useTransferTemperature } from "../api/transfer-temperature";
 import { AssessmentDetails } from "./assessment-details";
 import { TemperatureCautions } from "./temperature-cautions";
@@ -41,7 +41,7 @@ export function TemperatureSection({ transferId, status }: { transferId: string;
 /** What a blocking verdict means where the transfer stands: before confirmation it holds the step; once cleared it is a call to act. */
 function BlockNotice({ report, status }: { report: TransferTemperatureDto; status: TransferStatus }) {
   if (!blocksShipping(report.verdict)) return null;
-  const verdict = VERDICT_WORDS[report.verdict].toLowerCase();
+  const verdict = TEMPERATURE_VERDICT_WORDS[report.verdict].toLowerCase();
   if (status === "draft" || status === "awaiting_receiver") {
     return (
       <Notice tone="block" title="This blocks “cleared to travel”">
@@ -66,7 +66,7 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
   return (
     <>
       {report.alert ? (
-        <Notice tone="caution" role="alert" title={`The advice changed (${formatDateTime(report.alert.at)})`}>
+        <Notice tone="caution" role="alert" title={`The advice changed (${formatInstant(report.alert.at)})`}>
           Before: {report.alert.previous.message} Now: {report.alert.current.message} Both parties were e-mailed.
         </Notice>
       ) : null}
@@ -79,7 +79,8 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
           <ul className="list-disc pl-5 text-ink-soft">
             {report.checks.map((c) => (
               <li key={c.id}>
-                {formatDateTime(c.checkedAt)}, {CHECK_MARK_WORDS[c.mark]}: {VERDICT_WORDS[c.verdict].toLowerCase()}
+                {formatInstant(c.checkedAt)}, {CHECK_MARK_WORDS[c.mark]}:{" "}
+                {TEMPERATURE_VERDICT_WORDS[c.verdict].toLowerCase()}
               </li>
             ))}
           </ul>

@@ -1,18 +1,14 @@
+import { WEATHER_SCENARIOS, type WeatherScenario } from "@shared/constants";
+import { WEATHER_SCENARIO_WORDS } from "@shared/words";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
 import { useSwitchWeatherScenario, useWeatherScenario } from "../api/weather-scenario";
 
-const SCENARIO_WORDS: Record<string, string> = {
-  normal: "Ordinary weather",
-  heat_wave: "Heat wave",
-  cold_snap: "Cold snap",
-  outage: "Weather service down",
-  garbage: "Garbled answers",
-  slow: "Too slow to answer",
-  reset: "Connection dropped",
-  redirect: "Redirected",
-};
+const scenarioWords = (scenario: string): string =>
+  (WEATHER_SCENARIOS as readonly string[]).includes(scenario)
+    ? WEATHER_SCENARIO_WORDS[scenario as WeatherScenario]
+    : "Another answer";
 
 /**
  * Demo only: lets an administrator choose what the local weather fake answers. Shown only when
@@ -34,7 +30,7 @@ export function WeatherScenarioSwitch() {
             busy={change.isPending && change.variables === s}
             onClick={() => change.mutate(s)}
           >
-            {SCENARIO_WORDS[s] ?? s}
+            {scenarioWords(s)}
           </Button>
         ))}
       </div>

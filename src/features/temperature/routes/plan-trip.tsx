@@ -1,3 +1,5 @@
+import { parseOptions } from "@/lib/form-resolver";
+import { PACK_WORDS, TRANSPORT_MODE_WORDS, WALL_MATERIAL_WORDS } from "@shared/words";
 import { useState, type FormEvent } from "react";
 import {
   PACK_KINDS,
@@ -21,7 +23,6 @@ import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import { ApiError } from "@/lib/api-client";
 import { instantToLocalInput, localInputToInstant } from "@/lib/datetime";
 import { searchTaxa } from "@/lib/taxa-search";
-import { modeLabel, packLabel, wallMaterialLabel } from "@/lib/transfer-labels";
 import { useAssessTrip } from "../api/assess-trip";
 import { useProfiles } from "../api/profiles";
 import { AssessmentDetails } from "../components/assessment-details";
@@ -100,7 +101,7 @@ function requestOf(f: Form): unknown {
 
 /** Field path → first message, from the same schema the server parses with. */
 function validate(f: Form): { input: WhatIfInput | null; errors: Record<string, string> } {
-  const result = whatIfInputSchema.safeParse(requestOf(f));
+  const result = whatIfInputSchema.safeParse(requestOf(f), parseOptions());
   if (result.success) return { input: result.data, errors: {} };
   const errors: Record<string, string> = {};
   for (const issue of result.error.issues) {
@@ -157,7 +158,7 @@ export function PlanTripRoute() {
               />
               <SelectField
                 label="How"
-                options={TRANSPORT_MODES.map((m) => ({ value: m, label: modeLabel[m] }))}
+                options={TRANSPORT_MODES.map((m) => ({ value: m, label: TRANSPORT_MODE_WORDS[m] }))}
                 value={form.mode}
                 onChange={(e) => set("mode", e.target.value as TransportMode)}
                 error={err("mode")}
@@ -245,13 +246,13 @@ export function PlanTripRoute() {
               />
               <SelectField
                 label="Wall"
-                options={WALL_MATERIALS.map((w) => ({ value: w, label: wallMaterialLabel[w] }))}
+                options={WALL_MATERIALS.map((w) => ({ value: w, label: WALL_MATERIAL_WORDS[w] }))}
                 value={form.wall}
                 onChange={(e) => set("wall", e.target.value as WallMaterial)}
               />
               <SelectField
                 label="Pack you plan"
-                options={PACK_KINDS.map((p) => ({ value: p, label: packLabel[p] }))}
+                options={PACK_KINDS.map((p) => ({ value: p, label: PACK_WORDS[p] }))}
                 value={form.pack}
                 onChange={(e) => set("pack", e.target.value as PackKind)}
               />

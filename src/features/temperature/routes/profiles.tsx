@@ -1,3 +1,6 @@
+import { parseOptions } from "@/lib/form-resolver";
+import { ANIMAL_CLASSES } from "@shared/constants";
+import { ANIMAL_CLASS_WORDS } from "@shared/words";
 import { useState, type FormEvent } from "react";
 import { profileDataSchema, type ProfileData } from "@shared/temperature/profile-schema";
 import type { TemperatureProfileDto } from "@shared/temperature/report";
@@ -7,8 +10,8 @@ import { Badge, Loading, Notice } from "@/components/ui/feedback";
 import { MeasureField } from "@/components/ui/measure-field";
 import { Card, PageHeader } from "@/components/ui/page";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
-import { formatTemp } from "@/lib/units";
+import { formatInstant } from "@shared/dates";
+import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { useProfiles, useUpdateProfile } from "../api/profiles";
 
@@ -98,7 +101,7 @@ function ProfileCard({ profile, canEdit }: { profile: TemperatureProfileDto; can
             <>
               <dt className="text-ink-soft">Last edited</dt>
               <dd>
-                {profile.updatedBy.displayName}, {formatDateTime(profile.updatedAt)}
+                {profile.updatedBy.displayName}, {formatInstant(profile.updatedAt)}
               </dd>
             </>
           ) : null}
@@ -118,7 +121,7 @@ function ProfileForm({ profile, onDone }: { profile: TemperatureProfileDto; onDo
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    const result = profileDataSchema.safeParse(data);
+    const result = profileDataSchema.safeParse(data, parseOptions());
     if (!result.success) {
       const found: Record<string, string> = {};
       for (const issue of result.error.issues) found[issue.path.join(".")] ??= issue.message;
@@ -141,10 +144,7 @@ function ProfileForm({ profile, onDone }: { profile: TemperatureProfileDto; onDo
       />
       <SelectField
         label="Guideline column"
-        options={[
-          { value: "reptile", label: "Reptiles" },
-          { value: "amphibian", label: "Amphibians" },
-        ]}
+        options={ANIMAL_CLASSES.map((animalClass) => ({ value: animalClass, label: ANIMAL_CLASS_WORDS[animalClass] }))}
         value={data.animalClass}
         onChange={(e) => setData({ ...data, animalClass: e.target.value as ProfileData["animalClass"] })}
       />

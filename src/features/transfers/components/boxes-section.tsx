@@ -1,30 +1,30 @@
+import {
+  ANIMAL_ORIGIN_WORDS,
+  IDENTIFIER_KIND_WORDS,
+  LENGTH_KIND_WORDS,
+  PACK_WORDS,
+  SEX_WORDS,
+  WALL_MATERIAL_WORDS,
+} from "@shared/words";
 import { Link } from "react-router";
 import type { AnimalDto, TransferDto } from "@shared/schemas/transfer";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
-import { formatDate } from "@/lib/datetime";
-import { formatDimensions, formatLength } from "@/lib/units";
+import { formatDate } from "@shared/dates";
+import { formatDimensions, formatLength, formatWeight } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
-import {
-  animalOriginLabel,
-  identifierKindLabel,
-  lengthKindLabel,
-  packLabel,
-  sexLabel,
-  wallMaterialLabel,
-} from "@/lib/transfer-labels";
 import { Section } from "./section";
 
 function AnimalRow({ animal: a }: { animal: AnimalDto }) {
   const [system] = useUnitSystem();
   const details = [
-    sexLabel[a.sex],
-    animalOriginLabel[a.origin],
-    a.identifier ? `${a.identifierKind ? identifierKindLabel[a.identifierKind] : "ID"} ${a.identifier}` : null,
+    SEX_WORDS[a.sex],
+    ANIMAL_ORIGIN_WORDS[a.origin],
+    a.identifier ? `${a.identifierKind ? IDENTIFIER_KIND_WORDS[a.identifierKind] : "ID"} ${a.identifier}` : null,
     a.lengthMm != null
-      ? `${a.lengthKind ? lengthKindLabel[a.lengthKind].toLowerCase() : "size"} ${formatLength(a.lengthMm, system)}`
+      ? `${a.lengthKind ? LENGTH_KIND_WORDS[a.lengthKind].toLowerCase() : "size"} ${formatLength(a.lengthMm, system)}`
       : null,
-    a.weightG != null ? `${a.weightG.toLocaleString("en-US")} g` : null,
+    a.weightG != null ? formatWeight(a.weightG, system) : null,
     a.hatchDate ? `hatched ${formatDate(a.hatchDate)}` : null,
   ].filter(Boolean);
   return (
@@ -66,8 +66,8 @@ export function BoxesSection({ transfer: t }: { transfer: TransferDto }) {
             <h3 className="font-semibold">{box.label}</h3>
             <p className="text-sm text-ink-soft">
               {formatDimensions(box.lengthMm, box.widthMm, box.heightMm, system)} ·{" "}
-              {wallMaterialLabel[box.wallMaterial]}, walls {formatLength(box.wallThicknessMm, system)} ·{" "}
-              {packLabel[box.pack]}
+              {WALL_MATERIAL_WORDS[box.wallMaterial]}, walls {formatLength(box.wallThicknessMm, system)} ·{" "}
+              {PACK_WORDS[box.pack]}
               {box.sealNumber ? ` · seal ${box.sealNumber}` : " · no seal number"}
             </p>
             <ul className="divide-y divide-rule">

@@ -1,11 +1,11 @@
+import { HANDOFF_KIND_WORDS } from "@shared/words";
 import { Link } from "react-router";
 import type { HandoffDto, TransferDto } from "@shared/schemas/transfer";
 import { handoffKind } from "@shared/transfer/lifecycle";
 import { Badge } from "@/components/ui/feedback";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
-import { handoffKindLabel } from "@/lib/transfer-labels";
-import { formatTemp } from "@/lib/units";
+import { formatInstant } from "@shared/dates";
+import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
 import { useCustody } from "../api/custody";
 import { Section } from "./section";
@@ -20,7 +20,7 @@ function Recorded({ handoff: h }: { handoff: HandoffDto }) {
   return (
     <>
       <p className="text-sm">
-        {formatDateTime(h.at)} · {h.releasedByName} <span aria-hidden>→</span>
+        {formatInstant(h.at)} · {h.releasedByName} <span aria-hidden>→</span>
         <span className="sr-only">handed to</span> {h.receivedByName}
       </p>
       <p className="text-sm text-ink-soft">
@@ -79,7 +79,7 @@ export function CustodySection({ transfer: t }: { transfer: TransferDto }) {
                   className={`absolute -left-[1.72rem] top-1 h-3 w-3 rounded-full border-2 ${h ? "border-fern bg-fern" : "border-rule bg-paper-card"}`}
                 />
                 <p className="font-semibold">
-                  {i + 1}. {handoffKindLabel[kind]}{" "}
+                  {i + 1}. {HANDOFF_KIND_WORDS[kind]}{" "}
                   {h ? null : <span className="font-normal text-ink-soft">— not yet recorded</span>}
                 </p>
                 {h ? <Recorded handoff={h} /> : null}

@@ -4,7 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { TextAreaField } from "@/components/ui/field";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useMessages, usePostMessage } from "../api/messages";
 import { Section } from "./section";
 
@@ -36,7 +36,7 @@ export function DiscussionSection({ transfer: t }: { transfer: TransferDto }) {
                 {m.author.organizationName ? (
                   <span className="text-ink-soft">, {m.author.organizationName}</span>
                 ) : null}
-                <span className="text-ink-soft"> · {formatDateTime(m.at)}</span>
+                <span className="text-ink-soft"> · {formatInstant(m.at)}</span>
               </p>
               <p className="mt-1 whitespace-pre-wrap">{m.body}</p>
             </li>

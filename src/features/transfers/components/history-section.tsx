@@ -1,19 +1,18 @@
+import { describeChange } from "@shared/words";
 import type { TransferDto } from "@shared/schemas/transfer";
 import { Loading, Notice } from "@/components/ui/feedback";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
+import { useUnitSystem } from "@/lib/units-preference";
 import { useChanges } from "../api/changes";
 import { Section } from "./section";
 
-/** A stored value as one short line: text as is, anything else as compact JSON. */
-function shown(value: unknown): string {
-  if (value === null || value === undefined || value === "") return "(empty)";
-  const text = typeof value === "string" ? value : JSON.stringify(value);
-  return text.length > 160 ? `${text.slice(0, 157)}…` : text;
-}
+/** A long note stays readable in a table cell. */
+const short = (text: string) => (text.length > 160 ? `${text.slice(0, 157)}…` : text);
 
 /** Every edit: who, when, and the old and new value. */
 export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
   const changes = useChanges(t.id);
+  const [system] = useUnitSystem();
   return (
     <Section id="history" title="Change history">
       {changes.isPending ? (
@@ -48,17 +47,20 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
               </tr>
             </thead>
             <tbody className="divide-y divide-rule">
-              {changes.data.map((c, i) => (
-                <tr key={`${c.at}-${c.field}-${i}`}>
-                  <td className="whitespace-nowrap px-2 py-2 align-top">{formatDateTime(c.at)}</td>
-                  <td className="px-2 py-2 align-top">{c.actor.displayName}</td>
-                  <td className="px-2 py-2 align-top font-mono text-xs">{c.field}</td>
-                  <td className="break-all px-2 py-2 align-top text-ink-soft line-through decoration-brick/50">
-                    {shown(c.oldValue)}
-                  </td>
-                  <td className="break-all px-2 py-2 align-top">{shown(c.newValue)}</td>
-                </tr>
-              ))}
+              {changes.data.map((c, i) => {
+                const change = describeChange(c, system);
+                return (
+                  <tr key={`${c.at}-${c.field}-${i}`}>
+                    <td className="whitespace-nowrap px-2 py-2 align-top">{formatInstant(c.at)}</td>
+                    <td className="px-2 py-2 align-top">{c.actor.displayName}</td>
+                    <td className="px-2 py-2 align-top">{change.what}</td>
+                    <td className="break-words px-2 py-2 align-top text-ink-soft line-through decoration-brick/50">
+                      {short(change.was)}
+                    </td>
+                    <td className="break-words px-2 py-2 align-top">{short(change.now)}</td>
+                  </tr>
+                );
+              })}
             </tbody>
           </table>
         </div>

@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import { legsInputSchema, type LegsInput, type TransferDto } from "@shared/schemas/transfer";
 import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
@@ -16,7 +16,7 @@ function LegsEditor({ transfer, onDone }: { transfer: TransferDto; onDone: () =>
   const couriers = useDirectoryCouriers();
   const assign = useAssignLegs(transfer.id);
   const form = useForm<LegsInput, unknown, LegsParsed>({
-    resolver: zodResolver(legsInputSchema),
+    resolver: keeperResolver(legsInputSchema),
     defaultValues: {
       legs: transfer.legs.length
         ? [...transfer.legs]

@@ -1,6 +1,6 @@
+import { PURPOSE_WORDS, TRANSPORT_MODE_WORDS } from "@shared/words";
 import type { OrgBriefDto, PersonDto, PlaceDto, TransferDto } from "@shared/schemas/transfer";
-import { formatDateTime } from "@/lib/datetime";
-import { modeLabel, purposeLabel } from "@/lib/transfer-labels";
+import { formatInstant } from "@shared/dates";
 import { Section } from "./section";
 
 function Party({
@@ -46,14 +46,14 @@ export function OverviewSection({ transfer: t }: { transfer: TransferDto }) {
         <dt className="font-semibold">Goes to</dt>
         <dd>{placeText(t.destination)}</dd>
         <dt className="font-semibold">How</dt>
-        <dd>{modeLabel[t.mode]}</dd>
+        <dd>{TRANSPORT_MODE_WORDS[t.mode]}</dd>
         <dt className="font-semibold">Departure</dt>
-        <dd>{formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}</dd>
+        <dd>{formatInstant(t.plannedDepartureAt, t.origin.timeZone)}</dd>
         <dt className="font-semibold">Arrival</dt>
-        <dd>{formatDateTime(t.expectedArrivalAt, t.destination.timeZone)}</dd>
+        <dd>{formatInstant(t.expectedArrivalAt, t.destination.timeZone)}</dd>
         <dt className="font-semibold">Purpose</dt>
         <dd>
-          {purposeLabel[t.purpose]}
+          {PURPOSE_WORDS[t.purpose]}
           {t.sale
             ? `; a sale${t.salePriceUsd != null ? ` for $${t.salePriceUsd.toLocaleString("en-US")}` : ""}`
             : "; not a sale"}

@@ -1,18 +1,13 @@
+import type { TransferSortKey } from "@shared/constants";
+import { TRANSFER_SORT_WORDS, VIEWER_ROLE_WORDS } from "@shared/words";
 import { Link } from "react-router";
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type SortingState } from "@tanstack/react-table";
 import type { TransferSummaryDto } from "@shared/schemas/transfer";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
-import { viewerRoleLabel } from "@/lib/transfer-labels";
+import { formatInstant } from "@shared/dates";
 
-export type SortKey = "number" | "status" | "departure" | "updated";
-const sortWords: Record<SortKey, string> = {
-  number: "number",
-  status: "state",
-  departure: "departure",
-  updated: "last change",
-};
+export type SortKey = TransferSortKey;
 
 const columns: ColumnDef<TransferSummaryDto>[] = [
   {
@@ -27,7 +22,7 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
         >
           {row.original.number}
         </Link>
-        <span className="text-xs text-ink-soft">{viewerRoleLabel[row.original.viewerRole]}</span>
+        <span className="text-xs text-ink-soft">{VIEWER_ROLE_WORDS[row.original.viewerRole]}</span>
       </div>
     ),
   },
@@ -66,7 +61,7 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
     id: "departure",
     accessorKey: "plannedDepartureAt",
     header: "Departs",
-    cell: ({ row }) => formatDateTime(row.original.plannedDepartureAt, row.original.origin.timeZone),
+    cell: ({ row }) => formatInstant(row.original.plannedDepartureAt, row.original.origin.timeZone),
   },
   {
     id: "animals",
@@ -78,7 +73,7 @@ const columns: ColumnDef<TransferSummaryDto>[] = [
     id: "updated",
     accessorKey: "updatedAt",
     header: "Last change",
-    cell: ({ row }) => formatDateTime(row.original.updatedAt),
+    cell: ({ row }) => formatInstant(row.original.updatedAt),
   },
 ];
 
@@ -112,7 +107,7 @@ export function TransfersTable({ transfers, sort, dir, onSort }: Props) {
     <div className="overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">
-          Transfers, sorted by {sortWords[sort]} ({dir === "asc" ? "ascending" : "descending"})
+          Transfers, sorted by {TRANSFER_SORT_WORDS[sort]} ({dir === "asc" ? "ascending" : "descending"})
         </caption>
         <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
           {table.getHeaderGroups().map((group) => (

@@ -1,40 +1,32 @@
+import { describeCustodyEntry } from "@shared/words";
 import { Link, useParams } from "react-router";
 import type { CustodyEntryDto } from "@shared/schemas/transfer";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
-import { formatDateTime } from "@/lib/datetime";
+import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
+import { useUnitSystem } from "@/lib/units-preference";
 import { useCustody } from "../api/custody";
 
-/** "status_changed" → "Status changed": the log's kinds are the server's; we only make them readable. */
-const kindText = (kind: string) => kind.charAt(0).toUpperCase() + kind.slice(1).replace(/_/g, " ");
-
-function Payload({ payload }: { payload: Record<string, unknown> }) {
-  const entries = Object.entries(payload);
-  if (entries.length === 0) return null;
-  return (
-    <dl className="grid grid-cols-[max-content_1fr] gap-x-3 text-xs">
-      {entries.map(([k, v]) => (
-        <div key={k} className="contents">
-          <dt className="text-ink-soft">{k}</dt>
-          <dd className="break-all font-mono">{typeof v === "string" ? v : JSON.stringify(v)}</dd>
-        </div>
-      ))}
-    </dl>
-  );
-}
-
 function Entry({ entry: e, broken }: { entry: CustodyEntryDto; broken: boolean }) {
+  const [system] = useUnitSystem();
+  const { title, lines } = describeCustodyEntry(e, system);
   return (
     <li className={`rounded-md border p-3 ${broken ? "border-brick-line bg-brick-bg" : "border-rule bg-paper-card"}`}>
       <p className="font-semibold">
-        {e.seq}. {kindText(e.kind)}{" "}
+        {e.seq}. {title}{" "}
         <span className="font-normal text-ink-soft">
-          · {formatDateTime(e.at)} · {e.actor.displayName}
+          · {formatInstant(e.at)} · {e.actor.displayName}
         </span>
       </p>
-      <Payload payload={e.payload} />
+      {lines.length ? (
+        <ul className="mt-1 grid gap-0.5 text-sm">
+          {lines.map((line, i) => (
+            <li key={i}>{line}</li>
+          ))}
+        </ul>
+      ) : null}
       <p className="mt-1 break-all font-mono text-xs text-ink-soft">
         <span className="font-sans">Hash</span> {e.hash} <span className="font-sans">follows</span> {e.prevHash}
       </p>

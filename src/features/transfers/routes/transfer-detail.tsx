@@ -1,3 +1,4 @@
+import { VIEWER_ROLE_WORDS } from "@shared/words";
 import type { ReactNode } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
 import { useParams } from "react-router";
@@ -7,8 +8,7 @@ import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { ApiError } from "@/lib/api-client";
-import { formatDateTime } from "@/lib/datetime";
-import { viewerRoleLabel } from "@/lib/transfer-labels";
+import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { ActionsBar } from "../components/actions-bar";
 import { BoxesSection } from "../components/boxes-section";
@@ -77,11 +77,11 @@ export function TransferDetailRoute({ checks }: Props) {
     <div className="grid gap-5">
       <PageHeader
         title={`Transfer ${t.number}`}
-        eyebrow={viewerRoleLabel[t.viewerRole]}
+        eyebrow={VIEWER_ROLE_WORDS[t.viewerRole]}
         actions={<StatusBadge status={t.status} />}
       >
         {t.origin.city}, {t.origin.state} → {t.destination.city}, {t.destination.state} · leaves{" "}
-        {formatDateTime(t.plannedDepartureAt, t.origin.timeZone)}
+        {formatInstant(t.plannedDepartureAt, t.origin.timeZone)}
       </PageHeader>
       {t.status === "cancelled" && t.cancelledReason ? (
         <Notice tone="block" title="Cancelled">

@@ -1,12 +1,12 @@
+import { TRANSFER_LIST_ROLE_WORDS, TRANSFER_STATUS_WORDS } from "@shared/words";
 import { useEffect, useState } from "react";
 import { Link, useSearchParams } from "react-router";
-import { TRANSFER_STATUSES } from "@shared/constants";
+import { TRANSFER_LIST_ROLES, TRANSFER_STATUSES } from "@shared/constants";
 import { Button } from "@/components/ui/button";
 import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { SelectField, TextField } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
-import { statusLabel } from "@/lib/transfer-labels";
 import { useTransfers } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
 import { filtersFromSearch, withFilters } from "../components/list-filters";
@@ -14,13 +14,11 @@ import { TransfersTable, type SortKey } from "../components/transfers-table";
 
 const roleOptions = [
   { value: "", label: "Any part I play" },
-  { value: "sending", label: "I send" },
-  { value: "receiving", label: "I receive" },
-  { value: "carrying", label: "I carry" },
+  ...TRANSFER_LIST_ROLES.map((role) => ({ value: role, label: TRANSFER_LIST_ROLE_WORDS[role] })),
 ];
 const statusOptions = [
   { value: "", label: "Any state" },
-  ...TRANSFER_STATUSES.map((s) => ({ value: s, label: statusLabel[s] })),
+  ...TRANSFER_STATUSES.map((s) => ({ value: s, label: TRANSFER_STATUS_WORDS[s] })),
 ];
 
 /** The home page of members and admins: every transfer they can see, newest plans first. */

@@ -1,3 +1,4 @@
+import { ANIMAL_ORIGIN_WORDS, IDENTIFIER_KIND_WORDS, LENGTH_KIND_WORDS, SEX_WORDS } from "@shared/words";
 import { useState } from "react";
 import { Controller, useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { ANIMAL_ORIGINS, IDENTIFIER_KINDS, LENGTH_KINDS, SEXES } from "@shared/constants";
@@ -8,7 +9,6 @@ import { Notice } from "@/components/ui/feedback";
 import { MeasureField } from "@/components/ui/measure-field";
 import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import type { TaxonSearch } from "@/lib/taxa-search";
-import { animalOriginLabel, identifierKindLabel, lengthKindLabel, sexLabel } from "@/lib/transfer-labels";
 import { duplicateAnimal, nextAnimal } from "./form-values";
 
 const orNull = (v: unknown) => (v === "" || v == null ? null : v);
@@ -73,7 +73,7 @@ function AnimalLine({
       />
       <SelectField
         label="Sex"
-        options={SEXES.map((s) => ({ value: s, label: sexLabel[s] }))}
+        options={SEXES.map((s) => ({ value: s, label: SEX_WORDS[s] }))}
         error={e?.sex?.message}
         {...register(`animals.${index}.sex`)}
       />
@@ -82,7 +82,7 @@ function AnimalLine({
           label="Origin"
           options={[
             { value: "", label: "Choose…" },
-            ...ANIMAL_ORIGINS.map((o) => ({ value: o, label: animalOriginLabel[o] })),
+            ...ANIMAL_ORIGINS.map((o) => ({ value: o, label: ANIMAL_ORIGIN_WORDS[o] })),
           ]}
           error={e?.origin?.message}
           {...register(`animals.${index}.origin`)}
@@ -112,7 +112,7 @@ function AnimalLine({
             label="Kind of identifier"
             options={[
               { value: "", label: "None" },
-              ...IDENTIFIER_KINDS.map((k) => ({ value: k, label: identifierKindLabel[k] })),
+              ...IDENTIFIER_KINDS.map((k) => ({ value: k, label: IDENTIFIER_KIND_WORDS[k] })),
             ]}
             {...register(`animals.${index}.identifierKind`, { setValueAs: orNull })}
           />
@@ -136,7 +136,7 @@ function AnimalLine({
             label="Measured as"
             options={[
               { value: "", label: "Not measured" },
-              ...LENGTH_KINDS.map((k) => ({ value: k, label: lengthKindLabel[k] })),
+              ...LENGTH_KINDS.map((k) => ({ value: k, label: LENGTH_KIND_WORDS[k] })),
             ]}
             {...register(`animals.${index}.lengthKind`, { setValueAs: orNull })}
           />

@@ -1,3 +1,4 @@
+import { PACK_WORDS, WALL_MATERIAL_WORDS } from "@shared/words";
 import { Controller, useFieldArray, useFormContext } from "react-hook-form";
 import { PACK_KINDS, WALL_MATERIALS } from "@shared/constants";
 import type { TransferInput } from "@shared/schemas/transfer";
@@ -5,7 +6,6 @@ import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { MeasureField } from "@/components/ui/measure-field";
-import { packLabel, wallMaterialLabel } from "@/lib/transfer-labels";
 import { duplicateBox, nextBox } from "./form-values";
 
 type Dimension = "lengthMm" | "widthMm" | "heightMm" | "wallThicknessMm";
@@ -86,7 +86,7 @@ export function BoxesStep() {
             <div className="sm:col-span-2">
               <SelectField
                 label="Walls"
-                options={WALL_MATERIALS.map((m) => ({ value: m, label: wallMaterialLabel[m] }))}
+                options={WALL_MATERIALS.map((m) => ({ value: m, label: WALL_MATERIAL_WORDS[m] }))}
                 error={e?.wallMaterial?.message}
                 {...register(`containers.${index}.wallMaterial`)}
               />
@@ -94,7 +94,7 @@ export function BoxesStep() {
             <div className="sm:col-span-2">
               <SelectField
                 label="Pack"
-                options={PACK_KINDS.map((p) => ({ value: p, label: packLabel[p] }))}
+                options={PACK_KINDS.map((p) => ({ value: p, label: PACK_WORDS[p] }))}
                 error={e?.pack?.message}
                 {...register(`containers.${index}.pack`)}
               />

@@ -1,14 +1,14 @@
+import { ANIMAL_ORIGIN_WORDS, PACK_WORDS, PURPOSE_WORDS, SEX_WORDS, TRANSPORT_MODE_WORDS } from "@shared/words";
 import { useFormContext, useWatch } from "react-hook-form";
 import type { DirectoryOrganizationDto, TaxonBriefDto, TransferInput } from "@shared/schemas/transfer";
 import { packingFindings } from "@shared/transfer/packing";
 import { Notice } from "@/components/ui/feedback";
 import { TaxonName } from "@/components/ui/taxon-name";
-import { formatDateTime } from "@/lib/datetime";
-import { formatDimensions } from "@/lib/units";
+import { formatInstant } from "@shared/dates";
+import { formatDimensions } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
-import { animalOriginLabel, modeLabel, packLabel, purposeLabel, sexLabel } from "@/lib/transfer-labels";
 
-const when = (iso: string) => (iso && !Number.isNaN(Date.parse(iso)) ? formatDateTime(iso) : "not set");
+const when = (iso: string) => (iso && !Number.isNaN(Date.parse(iso)) ? formatInstant(iso) : "not set");
 
 /** Step 4: everything on one page, with the packing problems the server will also find. */
 export function ReviewStep({
@@ -41,8 +41,8 @@ export function ReviewStep({
       ) : (
         <span className="text-brick">species not chosen</span>
       )}
-      , {sexLabel[a.sex].toLowerCase()}
-      {a.origin ? `, ${animalOriginLabel[a.origin].toLowerCase()}` : ""}
+      , {SEX_WORDS[a.sex].toLowerCase()}
+      {a.origin ? `, ${ANIMAL_ORIGIN_WORDS[a.origin].toLowerCase()}` : ""}
       {a.identifier ? ` (${a.identifier})` : ""}
     </li>
   );
@@ -64,12 +64,12 @@ export function ReviewStep({
         </dd>
         <dt className="font-semibold">Travel</dt>
         <dd>
-          {v.mode ? modeLabel[v.mode] : "mode not chosen"}; leaves {when(v.plannedDepartureAt)}, arrives{" "}
+          {v.mode ? TRANSPORT_MODE_WORDS[v.mode] : "mode not chosen"}; leaves {when(v.plannedDepartureAt)}, arrives{" "}
           {when(v.expectedArrivalAt)}
         </dd>
         <dt className="font-semibold">Purpose</dt>
         <dd>
-          {v.purpose ? purposeLabel[v.purpose] : "not chosen"}
+          {v.purpose ? PURPOSE_WORDS[v.purpose] : "not chosen"}
           {v.sale ? `; a sale${v.salePriceUsd != null ? ` for $${v.salePriceUsd.toLocaleString("en-US")}` : ""}` : ""}
         </dd>
       </dl>
@@ -84,7 +84,7 @@ export function ReviewStep({
                 {Number.isFinite(c.lengthMm) && Number.isFinite(c.widthMm) && Number.isFinite(c.heightMm)
                   ? formatDimensions(c.lengthMm, c.widthMm, c.heightMm, system)
                   : "size not set"}{" "}
-                · {packLabel[c.pack]}
+                · {PACK_WORDS[c.pack]}
               </span>
             </p>
             <ul className="mt-1 list-disc pl-5">

@@ -1,9 +1,9 @@
+import { PURPOSE_WORDS, TRANSPORT_MODE_WORDS } from "@shared/words";
 import { Controller, useFormContext, useWatch } from "react-hook-form";
 import { PURPOSES, TRANSPORT_MODES, US_STATES } from "@shared/constants";
 import type { DirectoryOrganizationDto, TransferInput } from "@shared/schemas/transfer";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
 import { instantToLocalInput, localInputToInstant } from "@/lib/datetime";
-import { modeLabel, purposeLabel } from "@/lib/transfer-labels";
 
 const choose = { value: "", label: "Choose…" };
 const stateOptions = [choose, ...US_STATES.map((s) => ({ value: s, label: s }))];
@@ -111,7 +111,7 @@ export function RouteStep({
       <div className="grid gap-3 sm:grid-cols-3">
         <SelectField
           label="How it travels"
-          options={[choose, ...TRANSPORT_MODES.map((m) => ({ value: m, label: modeLabel[m] }))]}
+          options={[choose, ...TRANSPORT_MODES.map((m) => ({ value: m, label: TRANSPORT_MODE_WORDS[m] }))]}
           error={e.mode?.message}
           {...register("mode")}
         />
@@ -121,7 +121,7 @@ export function RouteStep({
       <div className="grid gap-3 sm:grid-cols-3">
         <SelectField
           label="Purpose"
-          options={[choose, ...PURPOSES.map((p) => ({ value: p, label: purposeLabel[p] }))]}
+          options={[choose, ...PURPOSES.map((p) => ({ value: p, label: PURPOSE_WORDS[p] }))]}
           error={e.purpose?.message}
           {...register("purpose")}
         />

@@ -72,9 +72,9 @@ describe("TransferForm", () => {
   it("keeps the user on a step until its fields pass the shared schema", async () => {
     renderForm(vi.fn());
     await userEvent.click(screen.getByRole("button", { name: "Next: Boxes" }));
-    // Messages from shared/schemas/transfer.ts, the same the server answers with.
-    expect(await screen.findByText("Choose the purpose of the move")).toBeInTheDocument();
-    expect(screen.getByText("Choose how the animals travel")).toBeInTheDocument();
+    // Messages from the shared message map (shared/validation/messages.ts), the same the server answers with.
+    expect(await screen.findByText("Purpose: choose one from the list.")).toBeInTheDocument();
+    expect(screen.getByText("How it travels: choose one from the list.")).toBeInTheDocument();
     expect(screen.getByRole("heading", { name: /Step 1 of 4/ })).toBeInTheDocument();
   });
 
@@ -157,5 +157,28 @@ describe("TransferForm", () => {
     expect(within(lines[0]!).getByLabelText("Identifier (optional)")).toHaveValue("985112000123456");
     expect(within(lines[1]!).getByLabelText("Identifier (optional)")).toHaveValue("");
     expect(within(lines[1]!).getByLabelText("Kind of identifier")).toHaveValue("microchip");
+  });
+
+  it("says a limit in the units the field shows: 99 in of wall is over 7.9 in, not 200 mm", async () => {
+    renderForm(vi.fn());
+    await userEvent.selectOptions(screen.getByLabelText("Receiving organisation"), receiver.id);
+    await userEvent.selectOptions(screen.getByLabelText("How it travels"), "hand_delivery");
+    await userEvent.selectOptions(screen.getByLabelText("Purpose"), "breeding");
+    fireEvent.change(screen.getByLabelText("Planned departure"), { target: { value: "2030-03-12T08:00" } });
+    fireEvent.change(screen.getByLabelText("Expected arrival"), { target: { value: "2030-03-12T18:00" } });
+    await next("Boxes");
+    for (const [label, value] of [
+      ["Length (in)", "10"],
+      ["Width (in)", "10"],
+      ["Height (in)", "10"],
+      ["Wall thickness (in)", "99"],
+    ]) {
+      await userEvent.type(screen.getByLabelText(label!), value!);
+    }
+    await userEvent.click(screen.getByRole("button", { name: "Next: Animals" }));
+    // NIST SP 811 B.8 [published]: the limit of 200 mm is 7.874 in, shown to one decimal.
+    expect(await screen.findByText("Box 1 wall thickness: use at most 7.9 in.")).toBeInTheDocument();
+    expect(screen.queryByText(/200 mm/)).not.toBeInTheDocument();
+    expect(screen.getByRole("heading", { name: /Step 2 of 4/ })).toBeInTheDocument();
   });
 });

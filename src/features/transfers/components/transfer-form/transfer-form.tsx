@@ -1,6 +1,6 @@
 import { useRef, useState } from "react";
 import { FormProvider, useForm, type FieldErrors, type FieldPath, type Resolver } from "react-hook-form";
-import { zodResolver } from "@hookform/resolvers/zod";
+import { keeperResolver } from "@/lib/form-resolver";
 import {
   createTransferSchema,
   transferInputSchema,
@@ -77,7 +77,11 @@ export function TransferForm({
   search = searchTaxa,
 }: Props) {
   const resolver: Resolver<TransferInput, unknown, TransferInputParsed> = (values, context, options) =>
-    zodResolver(mode === "create" ? createTransferSchema(new Date()) : transferInputSchema)(values, context, options);
+    keeperResolver(mode === "create" ? createTransferSchema(new Date()) : transferInputSchema)(
+      values,
+      context,
+      options,
+    );
   const form = useForm<TransferInput, unknown, TransferInputParsed>({ resolver, defaultValues, mode: "onTouched" });
   const [step, setStep] = useState(0);
   const [taxa, setTaxa] = useState(initialTaxa);

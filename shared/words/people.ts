@@ -1,7 +1,6 @@
-import type { OrganizationKind, UserRole } from "@shared/constants";
+import type { OrganizationKind, UserRole } from "../constants";
 
-/** Words on screen for stored values, in our own voice. */
-export const organizationKindLabel: Record<OrganizationKind, string> = {
+export const ORGANIZATION_KIND_WORDS: Readonly<Record<OrganizationKind, string>> = {
   breeder: "Breeder",
   nature_centre: "Nature centre or educator",
   rescue: "Rescue",
@@ -10,7 +9,7 @@ export const organizationKindLabel: Record<OrganizationKind, string> = {
   courier_service: "Courier service",
 };
 
-export const roleLabel: Record<UserRole, string> = {
+export const USER_ROLE_WORDS: Readonly<Record<UserRole, string>> = {
   admin: "Administrator",
   member: "Keeper organisation member",
   courier: "Courier",

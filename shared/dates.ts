@@ -1,0 +1,121 @@
+/**
+ * How a person reads a date or a time, on every screen, on paper and in e-mail: one format,
+ * with the time zone named. "Sat, Dec 5, 2026, 06:35 EST" for an instant; "Sat, Dec 5, 2026"
+ * for a calendar date. A 24-hour clock: no AM/PM to misread on a courier's phone at night.
+ */
+
+const instantFormats = new Map<string, Intl.DateTimeFormat>();
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+
+/** The zone the code runs in (the browser's, on a screen); "UTC" where none is known. */
+function runtimeZone(): string {
+  return new Intl.DateTimeFormat("en-US").resolvedOptions().timeZone ?? "UTC";
+}
+
+function instantFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = instantFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      weekday: "short",
+      year: "numeric",
+      month: "short",
+      day: "numeric",
+      hour: "2-digit",
+      minute: "2-digit",
+      hourCycle: "h23",
+      timeZoneName: "short",
+    });
+    instantFormats.set(timeZone, format);
+  }
+  return format;
+}
+
+function dateFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = dateFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      weekday: "short",
+      year: "numeric",
+      month: "short",
+      day: "numeric",
+    });
+    dateFormats.set(timeZone, format);
+  }
+  return format;
+}
+
+function toDate(at: string | number | Date): Date | null {
+  const date = at instanceof Date ? at : new Date(at);
+  return Number.isNaN(date.getTime()) ? null : date;
+}
+
+/** A zone name Intl accepts, or null (an unknown zone would throw). */
+function knownZone(timeZone: string | null | undefined): string | null {
+  if (!timeZone) return null;
+  try {
+    instantFormat(timeZone);
+    return timeZone;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * An instant as "Tue, Apr 14, 2026, 16:30 CDT": the local time in `timeZone` (an IANA name,
+ * e.g. the origin's), or in the zone the code runs in when none is given. An em dash when the
+ * value is not a time.
+ */
+export function formatInstant(at: string | number | Date, timeZone?: string | null): string {
+  const date = toDate(at);
+  if (!date) return "—";
+  return instantFormat(knownZone(timeZone) ?? runtimeZone()).format(date);
+}
+
+/**
+ * A calendar date ("2026-04-14", or the date part of a longer ISO text) as "Tue, Apr 14, 2026".
+ * A permit's last valid day is a day, not an instant: it reads the same in every zone.
+ */
+export function formatDate(isoDate: string): string {
+  const match = /^(\d{4})-(\d{2})-(\d{2})/.exec(isoDate);
+  const date = match ? toDate(`${match[1]}-${match[2]}-${match[3]}T12:00:00Z`) : null;
+  if (!date) return "—";
+  return dateFormat("UTC").format(date);
+}
+
+/** The calendar date an instant falls on in `timeZone` (or the runtime's zone): "Tue, Apr 14, 2026". */
+export function formatInstantDate(at: string | number | Date, timeZone?: string | null): string {
+  const date = toDate(at);
+  if (!date) return "—";
+  return dateFormat(knownZone(timeZone) ?? runtimeZone()).format(date);
+}
+
+/** A span of calendar dates: "Tue, Apr 14, 2026 – Wed, Apr 14, 2027", or "from …" when open-ended. */
+export function formatDateRange(from: string | null, to: string | null, none = "no dates given"): string {
+  if (from && to) return `${formatDate(from)} – ${formatDate(to)}`;
+  if (from) return `from ${formatDate(from)}`;
+  if (to) return `until ${formatDate(to)}`;
+  return none;
+}
+
+const hourFormats = new Map<string, Intl.DateTimeFormat>();
+
+/** A short tick for a time axis, in the same 24-hour clock: "Tue 16:00". */
+export function formatAxisHour(at: string | number | Date, timeZone?: string | null): string {
+  const date = toDate(at);
+  if (!date) return "";
+  const zone = knownZone(timeZone) ?? runtimeZone();
+  let format = hourFormats.get(zone);
+  if (!format) {
+    format = new Intl.DateTimeFormat("en-US", {
+      timeZone: zone,
+      weekday: "short",
+      hour: "2-digit",
+      minute: "2-digit",
+      hourCycle: "h23",
+    });
+    hourFormats.set(zone, format);
+  }
+  return format.format(date).replace(",", "");
+}

@@ -1,0 +1,113 @@
+import {
+  ANIMAL_ORIGINS,
+  IDENTIFIER_KINDS,
+  LENGTH_KINDS,
+  PACK_KINDS,
+  PURPOSES,
+  SEXES,
+  TRANSPORT_MODES,
+  US_STATES,
+  WALL_MATERIALS,
+} from "../constants";
+import { jurisdictionName } from "../compliance/jurisdiction";
+import { formatDate, formatInstant } from "../dates";
+import { formatLength, formatWeight, type UnitSystem } from "../units";
+import { ANIMAL_ORIGIN_WORDS, IDENTIFIER_KIND_WORDS, LENGTH_KIND_WORDS, SEX_WORDS } from "./animals";
+import { fieldName, fieldWord } from "./fields";
+import { PACK_WORDS, WALL_MATERIAL_WORDS } from "./packing";
+import { PURPOSE_WORDS, TRANSPORT_MODE_WORDS } from "./transfer";
+
+const EMPTY = "nothing";
+
+const wordsOf =
+  <T extends string>(list: readonly T[], words: Readonly<Record<T, string>>) =>
+  (value: unknown): string | null =>
+    typeof value === "string" && (list as readonly string[]).includes(value) ? words[value as T] : null;
+
+/** How the value of each field reads, by the field's key. */
+const VALUE_WORDS: Readonly<Record<string, (value: unknown, system: UnitSystem) => string | null>> = {
+  mode: wordsOf(TRANSPORT_MODES, TRANSPORT_MODE_WORDS),
+  purpose: wordsOf(PURPOSES, PURPOSE_WORDS),
+  sex: wordsOf(SEXES, SEX_WORDS),
+  origin: wordsOf(ANIMAL_ORIGINS, ANIMAL_ORIGIN_WORDS),
+  wallMaterial: wordsOf(WALL_MATERIALS, WALL_MATERIAL_WORDS),
+  pack: wordsOf(PACK_KINDS, PACK_WORDS),
+  identifierKind: wordsOf(IDENTIFIER_KINDS, IDENTIFIER_KIND_WORDS),
+  lengthKind: wordsOf(LENGTH_KINDS, LENGTH_KIND_WORDS),
+  state: (value) =>
+    typeof value === "string" && (US_STATES as readonly string[]).includes(value)
+      ? jurisdictionName(value as (typeof US_STATES)[number])
+      : null,
+  sale: (value) => (value === true ? "A sale" : value === false ? "Not a sale" : null),
+  salePriceUsd: (value) => (typeof value === "number" ? `$${value.toLocaleString("en-US")}` : null),
+  plannedDepartureAt: (value) => (typeof value === "string" ? formatInstant(value) : null),
+  expectedArrivalAt: (value) => (typeof value === "string" ? formatInstant(value) : null),
+  hatchDate: (value) => (typeof value === "string" ? formatDate(value) : null),
+  weightG: (value, system) => (typeof value === "number" ? formatWeight(value, system) : null),
+  // Ids mean nothing to a person; the transfer's page names the parties as they are now.
+  receiverOrganizationId: () => "another organisation",
+  receiverContactId: () => "another contact",
+};
+
+/** A line added or removed whole: "2 × Pogona vitticeps" or the box's label. */
+function itemSummary(list: string, value: Record<string, unknown>): string {
+  if (list === "animals") {
+    const count = typeof value.count === "number" ? value.count : null;
+    const taxon = typeof value.taxon === "string" ? value.taxon : "an animal";
+    return count === null ? taxon : `${count} × ${taxon}`;
+  }
+  return typeof value.label === "string" ? value.label : "a box";
+}
+
+function valueText(key: string, value: unknown, system: UnitSystem, list: string | null): string {
+  if (value === null || value === undefined || value === "") return EMPTY;
+  const words = VALUE_WORDS[key]?.(value, system);
+  if (words) return words;
+  if (/Mm$/.test(key) && typeof value === "number") return formatLength(value, system);
+  if (typeof value === "string") return value;
+  if (typeof value === "number") return value.toLocaleString("en-US");
+  if (typeof value === "boolean") return value ? "Yes" : "No";
+  if (list && typeof value === "object" && !Array.isArray(value))
+    return itemSummary(list, value as Record<string, unknown>);
+  return "changed";
+}
+
+const LINE_WORDS: Readonly<Record<string, string>> = { containers: "Box", animals: "Animal line" };
+
+/**
+ * One entry of a transfer's change history, as a person reads it: which field, what it was, what it
+ * became. `field` is the history's own path: "origin.zip", "containers[Box A].lengthMm",
+ * "animals[Pogona vitticeps PV-1]" (a whole line added or removed).
+ */
+export function describeChange(
+  change: { field: string; oldValue: unknown; newValue: unknown },
+  system: UnitSystem,
+): { what: string; was: string; now: string } {
+  const line = /^(containers|animals)\[(.*)\](?:\.(.+))?$/.exec(change.field);
+  if (line) {
+    const [, list = "", label = "", key] = line;
+    const group = `${LINE_WORDS[list] ?? "Line"} “${label}”`;
+    if (!key) {
+      const now = change.newValue === null ? "removed" : `added: ${valueText("", change.newValue, system, list)}`;
+      const was = change.oldValue === null ? EMPTY : valueText("", change.oldValue, system, list);
+      return { what: group, was, now };
+    }
+    return {
+      what: `${group}: ${fieldWord(key)}`,
+      was: valueText(key, change.oldValue, system, null),
+      now: valueText(key, change.newValue, system, null),
+    };
+  }
+  const path = change.field.split(".");
+  const key = path.at(-1) ?? change.field;
+  return {
+    what: fieldName(path) ?? change.field,
+    was: valueText(key, change.oldValue, system, null),
+    now: valueText(key, change.newValue, system, null),
+  };
+}
+
+/** The top-level fields an edit touched, in words: "planned departure, animal lines". */
+export function changedFieldsText(fields: readonly string[]): string {
+  return [...new Set(fields)].map(fieldWord).join(", ");
+}
