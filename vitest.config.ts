@@ -41,6 +41,8 @@ export default defineConfig({
           environment: "jsdom",
           include: ["src/**/*.test.tsx", "src/**/*.test.ts"],
           setupFiles: ["tests/support/dom-setup.ts"],
+          // A whole form typed through user-event takes a few seconds on a busy 2-core machine.
+          testTimeout: 20_000,
         },
       },
       {
