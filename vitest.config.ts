@@ -20,6 +20,8 @@ export default defineConfig({
           environment: "node",
           include: ["shared/**/*.test.ts", "server/**/*.test.ts", "fakes/**/*.test.ts", "scripts/**/*.test.ts"],
           exclude: integration,
+          // Rendering a PDF page to pixels takes a second alone and several on a busy 2-core machine.
+          testTimeout: 20_000,
         },
       },
       {

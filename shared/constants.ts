@@ -219,8 +219,35 @@ export const CUSTODY_KINDS = [
   "correction",
   /** Demo or bench data cleared to ship without the gates (gatesForLoadedData in server/composition.ts). */
   "checks_skipped",
+  /** Something on the record that a party must see: a seal that does not match, an implausible handoff … */
+  "alert_raised",
+  /** A party saw an alert and said so, with a note; the alert itself stays. */
+  "alert_acknowledged",
 ] as const;
 export type CustodyKind = (typeof CUSTODY_KINDS)[number];
+
+/**
+ * What an alert on a transfer is about. Alerts are raised by the server when the record shows
+ * something that needs a person's eyes (never by a request that says "raise"), kept for good,
+ * e-mailed to both parties, and acknowledged with a note — acknowledging never removes one.
+ */
+export const ALERT_KINDS = [
+  /** A seal number read at a handoff differs from the one on the manifest. */
+  "seal_mismatch",
+  /** A seal was found broken or missing. */
+  "seal_broken",
+  /** The boxes counted at a handoff differ from the boxes on the manifest. */
+  "count_mismatch",
+  /** A pickup recorded long before the planned departure. */
+  "early_pickup",
+  /** A handoff whose distance from the previous one cannot have been covered in the time between. */
+  "implausible_speed",
+  /** Custody handed to someone other than the leg's assigned courier or the receiver. */
+  "unexpected_party",
+  /** A box temperature read at a handoff or check-in outside the animals' safe range. */
+  "temperature_out_of_range",
+] as const;
+export type AlertKind = (typeof ALERT_KINDS)[number];
 
 /** How an animal accepted into the register arrived. */
 export const REGISTER_CONDITIONS = ["well", "problem"] as const;

@@ -35,7 +35,8 @@ export type TransferMailTopic =
   | "picked_up"
   | "delivered"
   | "checked_in"
-  | "temperature_changed";
+  | "temperature_changed"
+  | "alert";
 
 type TransferMailFacts = {
   to: string;
@@ -48,9 +49,12 @@ type TransferMailFacts = {
   summary?: string;
   previousAdvice?: string;
   advice?: string;
+  /** For an alert: its heading and its message in words. */
+  alertTitle?: string;
+  alertMessage?: string;
 };
 
-const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
+const SUBJECTS: Record<TransferMailTopic, (n: string, f: TransferMailFacts) => string> = {
   awaiting_confirmation: (n) => `Transfer ${n} is waiting for your confirmation`,
   reconfirm: (n) => `Transfer ${n} changed: please confirm it again`,
   confirmed: (n) => `Transfer ${n} was confirmed by the receiver`,
@@ -60,6 +64,7 @@ const SUBJECTS: Record<TransferMailTopic, (n: string) => string> = {
   delivered: (n) => `Transfer ${n} was delivered`,
   checked_in: (n) => `Transfer ${n} was checked in`,
   temperature_changed: (n) => `Transfer ${n}: the temperature advice changed`,
+  alert: (n, f) => `Alert on transfer ${n}: ${f.alertTitle ?? "please look"}`,
 };
 
 const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
@@ -84,6 +89,14 @@ const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
       "",
       "The advice is a planning aid, not a guarantee: look at the forecast at both ends yourselves, keep heat packs away from the animals' containers, and follow the carrier's and the states' rules.",
     ].join("\n"),
+  alert: (f) =>
+    [
+      `${f.alertTitle ?? "Alert"} on transfer ${f.number}.`,
+      "",
+      f.alertMessage ?? "",
+      "",
+      "Open the transfer to see the record, and acknowledge the alert there with a note saying what you did. If an animal may be at risk, call the other party now.",
+    ].join("\n"),
 };
 
 /** The e-mail for a step of a transfer that needs the other party. Plain text only. */
@@ -91,7 +104,7 @@ export function transferMail(topic: TransferMailTopic, f: TransferMailFacts): Ma
   return {
     to: f.to,
     topic: `transfer.${topic}`,
-    subject: SUBJECTS[topic](f.number),
+    subject: SUBJECTS[topic](f.number, f),
     text: [
       `Hello ${f.name},`,
       "",

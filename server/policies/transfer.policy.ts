@@ -61,5 +61,6 @@ export function transferAbilities(actor: Actor, role: ViewerRole, t: TransferFac
     discuss: sender || receiver,
     readCustody: true,
     readPrivateNotes: sender || receiver,
+    acknowledgeAlerts: sender || receiver || role === "courier",
   };
 }

@@ -1,4 +1,5 @@
 import type {
+  AlertDto,
   AnimalDto,
   CheckInDto,
   ContainerDto,
@@ -35,6 +36,20 @@ export function presentOrgBrief(
 }
 
 const iso = (s: string) => new Date(s).toISOString();
+
+function presentAlert(a: TransferView["alerts"][number]): AlertDto {
+  return {
+    id: a.id,
+    kind: a.kind,
+    at: iso(a.at),
+    message: a.message,
+    acknowledgedAt: a.acknowledged_at ? iso(a.acknowledged_at) : null,
+    acknowledgedBy: a.acknowledged_at
+      ? { id: a.acknowledged_by_id, displayName: a.acknowledged_by_name ?? "Unknown" }
+      : null,
+    acknowledgementNote: a.acknowledgement_note,
+  };
+}
 
 function taxon(x: TaxonRowView): TaxonBriefDto {
   return {
@@ -219,6 +234,7 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     cancelledReason: t.cancelled_reason,
     reconfirmationReason: t.reconfirmation_reason,
     loadedWithoutChecks: presentChecksSkipped(v.checksSkipped),
+    alerts: v.alerts.map(presentAlert),
     abilities,
     createdAt: iso(t.created_at),
     updatedAt: iso(t.updated_at),

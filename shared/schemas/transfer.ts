@@ -28,6 +28,7 @@ import {
   type WallMaterial,
   TRANSFER_LIST_ROLES,
   TRANSFER_SORT_KEYS,
+  type AlertKind,
   type CustodyKind,
   type HandoffKind,
   type PackingFindingCode,
@@ -190,6 +191,9 @@ export const legsInputSchema = z.strictObject({
 export type LegsInput = z.input<typeof legsInputSchema>;
 
 export const messageInputSchema = z.strictObject({ body: requiredText(4000) });
+
+/** A party saying they have seen an alert: what they did or will do about it. */
+export const alertAcknowledgeSchema = z.strictObject({ note: requiredText(1000) });
 
 /** What the person taking custody checks and records at a pickup or handoff. */
 export const handoffInputSchema = z.strictObject({
@@ -408,6 +412,21 @@ export type TransferAbilitiesDto = {
   discuss: boolean;
   readCustody: boolean;
   readPrivateNotes: boolean;
+  /** May say they have seen an alert (a party of the transfer or an assigned courier). */
+  acknowledgeAlerts: boolean;
+};
+
+/** Something on the record a party must see; kept for good, acknowledged with a note. */
+export type AlertDto = {
+  id: string;
+  kind: AlertKind;
+  /** When the server raised it (ISO 8601). */
+  at: string;
+  /** In words, naming the box, the seal, the place: "Box D: expected seal SEAL-0004, courier read SEAL-0044". */
+  message: string;
+  acknowledgedAt: string | null;
+  acknowledgedBy: { id: string | null; displayName: string } | null;
+  acknowledgementNote: string | null;
 };
 
 /** Demo or benchmark data written past the ready-to-ship gates: what was not checked, and when. */
@@ -456,6 +475,8 @@ export type TransferDto = {
    * compliance and temperature checks (the custody log holds the same entry); null otherwise.
    */
   loadedWithoutChecks: LoadedWithoutChecksDto | null;
+  /** Every alert raised on this transfer, oldest first; acknowledged ones stay. */
+  alerts: AlertDto[];
   abilities: TransferAbilitiesDto;
   createdAt: string;
   updatedAt: string;

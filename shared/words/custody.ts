@@ -1,5 +1,7 @@
 import {
+  ALERT_KINDS,
   HANDOFF_KINDS,
+  type AlertKind,
   TRANSFER_STATUSES,
   type CustodyKind,
   type HandoffKind,
@@ -8,6 +10,7 @@ import {
 import { VERDICTS as COMPLIANCE_VERDICTS } from "../compliance/schemas";
 import { ADVICE_CODES, VERDICTS as TEMPERATURE_VERDICTS } from "../temperature/advice";
 import { formatTemp, type UnitSystem } from "../units";
+import { ALERT_KIND_WORDS } from "./alerts";
 import { COMPLIANCE_VERDICT_WORDS } from "./compliance";
 import { ADVICE_WORDS, TEMPERATURE_VERDICT_WORDS } from "./temperature";
 import { HANDOFF_KIND_WORDS, TRANSFER_STATUS_WORDS } from "./transfer";
@@ -22,6 +25,8 @@ export const CUSTODY_KIND_WORDS: Readonly<Record<CustodyKind, string>> = {
   override: "Check overridden",
   correction: "Correction",
   checks_skipped: "Loaded without checks",
+  alert_raised: "Alert raised",
+  alert_acknowledged: "Alert acknowledged",
 };
 
 /** Which check an override went past. */
@@ -156,6 +161,22 @@ export function describeCustodyEntry(
       return {
         title: CUSTODY_KIND_WORDS.checks_skipped,
         lines: reason ? [reason] : ["Cleared to ship without the compliance and temperature checks."],
+      };
+    }
+    case "alert_raised": {
+      const message = textOf(payload.message);
+      const kind = isOneOf<AlertKind>(ALERT_KINDS, payload.alertKind) ? ALERT_KIND_WORDS[payload.alertKind] : null;
+      return {
+        title: kind ? `${CUSTODY_KIND_WORDS.alert_raised}: ${kind}` : CUSTODY_KIND_WORDS.alert_raised,
+        lines: message ? [message] : [],
+      };
+    }
+    case "alert_acknowledged": {
+      const message = textOf(payload.message);
+      const note = textOf(payload.note);
+      return {
+        title: CUSTODY_KIND_WORDS.alert_acknowledged,
+        lines: [...(message ? [`Alert: ${message}`] : []), ...(note ? [`Note: ${note}`] : [])],
       };
     }
     default:

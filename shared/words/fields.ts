@@ -67,6 +67,7 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   weightG: "weight",
   hatchDate: "hatch date",
   notes: "notes",
+  note: "note",
   containerKey: "box it travels in",
   // couriers and handoffs
   legs: "legs",

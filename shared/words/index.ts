@@ -3,6 +3,7 @@
  * e-mails and server messages take their words from here; each map is typed
  * `Record<Enum, string>`, so a new enum value fails the type-check until it has words.
  */
+export * from "./alerts";
 export * from "./animals";
 export * from "./compliance";
 export * from "./custody";

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
+  ALERT_KINDS,
   ANIMAL_CLASSES,
   ANIMAL_ORIGINS,
   CHECK_IN_OUTCOMES,
@@ -40,6 +41,7 @@ const effectKinds = ruleEffectSchema.options.map((option) => option.shape.kind.v
 /** Each enum of the product with every map that gives it words. */
 const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]][] = [
   ["transfer status", TRANSFER_STATUSES, [words.TRANSFER_STATUS_WORDS]],
+  ["alert kind", ALERT_KINDS, [words.ALERT_KIND_WORDS]],
   ["transport mode", TRANSPORT_MODES, [words.TRANSPORT_MODE_WORDS]],
   ["purpose", PURPOSES, [words.PURPOSE_WORDS]],
   ["viewer role", VIEWER_ROLES, [words.VIEWER_ROLE_WORDS]],

@@ -12,6 +12,7 @@ import {
   TransferSchema,
 } from "./transfer.entity";
 import { CustodyEntrySchema } from "./custody-entry.entity";
+import { TransferAlertSchema } from "./transfer-alert.entity";
 import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
@@ -43,6 +44,7 @@ export {
   MessageSchema,
   TransferChangeSchema,
   CustodyEntrySchema,
+  TransferAlertSchema,
   CheckInSchema,
   CheckInItemSchema,
   CheckInExtraSchema,
@@ -65,6 +67,7 @@ export const ENTITIES = [
   MessageSchema,
   TransferChangeSchema,
   CustodyEntrySchema,
+  TransferAlertSchema,
   CheckInSchema,
   CheckInItemSchema,
   CheckInExtraSchema,

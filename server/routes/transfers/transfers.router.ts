@@ -1,5 +1,6 @@
 import { Router, type Request } from "express";
 import {
+  alertAcknowledgeSchema,
   checkInInputSchema,
   createTransferSchema,
   handoffInputSchema,
@@ -29,6 +30,7 @@ import { createTransfer, updateTransfer } from "../../services/transfers/write-t
 import { transitionTransfer } from "../../services/transfers/transition";
 import { assignLegs } from "../../services/transfers/legs";
 import { recordHandoff } from "../../services/transfers/handoff";
+import { acknowledgeAlert } from "../../services/transfers/alerts";
 import { checkInTransfer } from "../../services/transfers/check-in";
 import { manifestExtras } from "../../services/transfers/manifest-extras";
 import { presentManifestInput } from "../../presenters/manifest.presenter";
@@ -214,6 +216,15 @@ export function transfersRouter(): Router {
     await req.em.flush();
     await req.em.populate(message, ["author", "author.organization"]);
     res.status(201).json({ message: presentMessage(message) });
+  });
+
+  router.post("/:id/alerts/:alertId/acknowledge", async (req, res) => {
+    const id = idParam(req);
+    const alertId = parse(idSchema, req.params.alertId);
+    const { note } = parse(alertAcknowledgeSchema, req.body);
+    await acknowledgeAlert({ em: req.em, actor: currentUser(req), transferId: id, alertId, note });
+    const transfer = await presentForActor(req, id);
+    res.json({ alert: transfer.alerts.find((a) => a.id === alertId), transfer });
   });
 
   return router;

@@ -1,5 +1,6 @@
 import type pg from "pg";
 import type {
+  AlertKind,
   AnimalOrigin,
   IdentifierKind,
   LengthKind,
@@ -95,6 +96,16 @@ export type TransferView = {
     org_phone: string | null;
   }[];
   handoffs: { actor_id: string | null; actor_name: string; at: string; payload: Record<string, unknown> }[];
+  alerts: {
+    id: string;
+    kind: AlertKind;
+    at: string;
+    message: string;
+    acknowledged_at: string | null;
+    acknowledged_by_id: string | null;
+    acknowledged_by_name: string | null;
+    acknowledgement_note: string | null;
+  }[];
   checkIn: {
     signed_at: string;
     signed_name: string;
@@ -210,6 +221,10 @@ SELECT json_build_object(
                       FROM leg l JOIN app_user u ON u.id = l.courier_id LEFT JOIN organization o ON o.id = u.organization_id WHERE l.transfer_id = t.id), '[]'),
   'handoffs', coalesce((SELECT json_agg(json_build_object('actor_id', e.actor_id, 'actor_name', e.actor_name, 'at', e.at, 'payload', e.payload) ORDER BY e.seq)
                           FROM custody_entry e WHERE e.transfer_id = t.id AND e.kind = 'handoff'), '[]'),
+  'alerts', coalesce((SELECT json_agg(json_build_object('id', al.id, 'kind', al.kind, 'at', al.at, 'message', al.message,
+                           'acknowledged_at', al.acknowledged_at, 'acknowledged_by_id', al.acknowledged_by_id,
+                           'acknowledged_by_name', al.acknowledged_by_name, 'acknowledgement_note', al.acknowledgement_note) ORDER BY al.at, al.custody_seq)
+                        FROM transfer_alert al WHERE al.transfer_id = t.id), '[]'),
   'checkIn', (SELECT json_build_object('signed_at', ci.signed_at, 'signed_name', ci.signed_name, 'notes', ci.notes, 'signed_by_id', su.id, 'signed_by_name', su.display_name,
                 'items', coalesce((SELECT json_agg(to_jsonb(i.*) - 'check_in_id' - 'id') FROM check_in_item i WHERE i.check_in_id = ci.id), '[]'),
                 'extras', coalesce((SELECT json_agg(json_build_object('count', e.count, 'sex', e.sex, 'notes', e.notes, 'taxon', ${TAXON_JSON("x")}))
@@ -226,7 +241,7 @@ WHERE t.id = $1`;
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
   const { rows } = await pool.query<{ view: TransferView }>({
-    name: "transfer-view-v2",
+    name: "transfer-view-v3",
     text: TRANSFER_VIEW_SQL,
     values: [id],
   });

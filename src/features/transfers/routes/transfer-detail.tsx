@@ -11,6 +11,7 @@ import { ApiError } from "@/lib/api-client";
 import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { ActionsBar } from "../components/actions-bar";
+import { AlertsSection } from "../components/alerts-section";
 import { BoxesSection } from "../components/boxes-section";
 import { CustodySection } from "../components/custody-section";
 import { DiscussionSection } from "../components/discussion-section";
@@ -93,6 +94,7 @@ export function TransferDetailRoute({ checks }: Props) {
           {t.reconfirmationReason}
         </Notice>
       ) : null}
+      <AlertsSection transfer={t} />
       <ActionsBar transfer={t} />
       <PaperworkLinks transferId={t.id} />
       <TransportCautions />
