@@ -5,6 +5,7 @@ import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
 import { safeNext } from "@/lib/safe-next";
+import { useDocumentTitle } from "@/lib/document-title";
 import { useSession, useSignIn } from "../api/session";
 
 export function SignInRoute() {
@@ -14,6 +15,7 @@ export function SignInRoute() {
   const [params] = useSearchParams();
   const [email, setEmail] = useState("");
   const [password, setPassword] = useState("");
+  useDocumentTitle("Sign in");
 
   if (session.data) return <Navigate to={safeNext(params.get("next"))} replace />;
 

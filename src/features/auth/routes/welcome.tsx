@@ -8,6 +8,7 @@ import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
+import { useDocumentTitle } from "@/lib/document-title";
 import { useSetPassword } from "../api/session";
 
 const formSchema = z
@@ -19,6 +20,7 @@ export function WelcomeRoute() {
   const [params] = useSearchParams();
   const token = params.get("token") ?? "";
   const setPassword = useSetPassword();
+  useDocumentTitle("Choose your password");
   const form = useForm<z.infer<typeof formSchema>>({
     resolver: zodResolver(formSchema),
     defaultValues: { password: "", confirm: "" },
