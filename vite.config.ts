@@ -45,6 +45,9 @@ export default defineConfig({
     chunkSizeWarningLimit: 2000,
     rolldownOptions: {
       output: {
+        // Module bodies run in import order whichever chunk they land in (needed once groups stop
+        // pulling in their imports, or a chunk may call React before React's chunk has run).
+        strictExecutionOrder: true,
         codeSplitting: {
           // A group takes the modules it names, not their imports (React stays in the entry).
           includeDependenciesRecursively: false,

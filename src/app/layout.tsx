@@ -1,5 +1,6 @@
 import { Navigate, Outlet, useLocation } from "react-router";
 import { Loading, Notice } from "@/components/ui/feedback";
+import { ToastProvider } from "@/components/ui/toast";
 import { paths } from "@/config/paths";
 import type { Viewer } from "@/lib/viewer";
 import { useSession } from "@/features/auth/api/session";
@@ -28,17 +29,19 @@ export function AppLayout() {
     return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
 
   return (
-    <div className="min-h-screen">
-      <a
-        href="#main"
-        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-card focus:px-3 focus:py-2"
-      >
-        Skip to content
-      </a>
-      <AppHeader session={session.data} />
-      <main id="main" className="mx-auto max-w-6xl px-4 py-6">
-        <Outlet context={session.data satisfies Viewer} />
-      </main>
-    </div>
+    <ToastProvider>
+      <div className="min-h-screen">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-card focus:px-3 focus:py-2"
+        >
+          Skip to content
+        </a>
+        <AppHeader session={session.data} />
+        <main id="main" className="mx-auto max-w-6xl px-4 py-6">
+          <Outlet context={session.data satisfies Viewer} />
+        </main>
+      </div>
+    </ToastProvider>
   );
 }
