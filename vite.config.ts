@@ -4,15 +4,6 @@ import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
 import { compression, defineAlgorithm } from "vite-plugin-compression2";
 
-/** Client modules the entry itself imports: they stay in the entry's chunk, out of the groups below. */
-const ENTRY_MODULES = [
-  "src/lib/api-client.ts",
-  "src/lib/transfer-queries.ts",
-  "src/lib/query-string.ts",
-  "src/components/ui/feedback.tsx",
-];
-const inEntry = (id: string) => ENTRY_MODULES.some((entry) => id.replaceAll("\\", "/").endsWith(entry));
-
 const apiTarget = process.env.HATCHWAY_API_URL ?? "http://127.0.0.1:3000";
 
 export default defineConfig({
@@ -45,22 +36,13 @@ export default defineConfig({
     chunkSizeWarningLimit: 2000,
     rolldownOptions: {
       output: {
-        // Module bodies run in import order whichever chunk they land in (needed once groups stop
-        // pulling in their imports, or a chunk may call React before React's chunk has run).
-        strictExecutionOrder: true,
         codeSplitting: {
-          // A group takes the modules it names, not their imports (React stays in the entry).
+          // The form library and the schema library in one chunk, fetched by the screens with a
+          // form: one request instead of several on a phone link. A group takes only the modules it
+          // names (these import React, which stays in the entry's chunks), so nothing here can pull
+          // React, or our own code, away from the sign-in page.
           includeDependenciesRecursively: false,
-          // Fewer, larger chunks behind the sign-in page: on a phone link every request costs a
-          // round trip. The entry (React, the router, the query client) stays as it is.
-          groups: [
-            {
-              name: "forms",
-              test: /node_modules[\\/](react-hook-form|@hookform|zod)[\\/]/,
-              priority: 20,
-            },
-            { name: "kit", test: (id) => /[\\/]src[\\/](components|lib)[\\/]/.test(id) && !inEntry(id), priority: 10 },
-          ],
+          groups: [{ name: "forms", test: /node_modules[\\/](react-hook-form|@hookform[\\/]resolvers|zod)[\\/]/ }],
         },
       },
     },

@@ -168,7 +168,7 @@ async function main() {
   const build = spawnSync(
     path.join(PROJECT_ROOT, "node_modules/.bin/vite"),
     ["build", "--logLevel", "error", "--outDir", DIST, "--emptyOutDir"],
-    { cwd: PROJECT_ROOT, stdio: "inherit" },
+    { cwd: PROJECT_ROOT, stdio: "inherit", env: { ...process.env, NODE_ENV: "production" } },
   );
   if (build.status !== 0) throw new Error("the client build failed");
 

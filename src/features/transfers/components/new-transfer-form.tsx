@@ -155,7 +155,12 @@ export function NewTransferForm({ userId, organizations, senderOrganizationId, s
         title="Leave the new transfer?"
         confirmLabel="Leave"
         cancelLabel="Stay on the form"
-        onConfirm={() => blocker.proceed?.()}
+        onConfirm={() => {
+          // Once the person chose to leave, this form never stops a navigation again (not even
+          // the Back that may come before React has taken this page down).
+          leaving.current = true;
+          blocker.proceed?.();
+        }}
         onCancel={() => blocker.reset?.()}
       >
         <p>
