@@ -1,5 +1,3 @@
-import path from "node:path";
-import { existsSync } from "node:fs";
 import express, { type Express } from "express";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { AppBase, AppContext } from "./context";
@@ -13,6 +11,7 @@ import { usersRouter } from "./routes/users/users.router";
 import { organizationsRouter } from "./routes/organizations/organizations.router";
 import { caughtMailRouter } from "./routes/mail/mail.router";
 import { queryCounter } from "./http/query-count";
+import { clientFiles } from "./http/client-files";
 import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
 import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
@@ -85,14 +84,8 @@ export function createApp(input: AppContext | AppBase): Express {
   api.use(notFoundApi);
   app.use("/api", api);
 
-  const dist = path.resolve(ctx.env.CLIENT_DIST);
-  if (existsSync(path.join(dist, "index.html"))) {
-    app.use(express.static(dist, { index: false, maxAge: "1h" }));
-    app.get("/{*splat}", (_req, res) => {
-      res.setHeader("Cache-Control", "no-cache");
-      res.sendFile(path.join(dist, "index.html"));
-    });
-  }
+  const client = clientFiles(ctx.env.CLIENT_DIST);
+  if (client) app.use(client);
 
   app.use(errorHandler);
   return app;

@@ -2,10 +2,11 @@ import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
 import { RouterProvider } from "react-router";
 import { AppProviders, createQueryClient } from "./app/providers";
-import { router } from "./app/router";
+import { createAppRouter } from "./app/router";
 import "./index.css";
 
 const client = createQueryClient();
+const router = createAppRouter(client);
 
 createRoot(document.getElementById("root")!).render(
   <StrictMode>

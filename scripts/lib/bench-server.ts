@@ -6,7 +6,12 @@ import { prepareDatabase } from "./prepare-db";
 export type BenchServer = { baseUrl: string; databaseUrl: string; cluster: Cluster; stop(): Promise<void> };
 
 export async function startBenchServer(
-  options: { port?: number; beforeStart?: (databaseUrl: string, baseUrl: string) => Promise<void> } = {},
+  options: {
+    port?: number;
+    beforeStart?: (databaseUrl: string, baseUrl: string) => Promise<void>;
+    /** More environment for the server, e.g. CLIENT_DIST for a built client. */
+    env?: Record<string, string>;
+  } = {},
 ): Promise<BenchServer> {
   const cluster = await startCluster("test", Number(process.env.HATCHWAY_TEST_PG_PORT ?? 54329));
   const db = "hatchway_bench";
@@ -37,6 +42,7 @@ export async function startBenchServer(
       WEATHER_URL: "http://127.0.0.1:9",
       WORKERS: "false",
       BENCH_ROUTES: "true",
+      ...options.env,
     },
     stdio: ["ignore", "inherit", "inherit"],
   });

@@ -1,52 +1,116 @@
-import { createBrowserRouter } from "react-router";
+import type { ComponentType } from "react";
+import type { QueryClient } from "@tanstack/react-query";
+import { createBrowserRouter, type LoaderFunctionArgs } from "react-router";
+import { Loading } from "@/components/ui/feedback";
 import { paths } from "@/config/paths";
-import { AppLayout } from "./layout";
-import { HomeRoute } from "./routes/home";
-import { NotFoundRoute } from "./routes/not-found";
+import { transferQueryOptions } from "@/lib/transfer-queries";
+import { sessionQueryOptions } from "@/features/auth/api/session";
 import { RouteErrorBoundary } from "./routes/error-boundary";
-import { SignInRoute } from "@/features/auth/routes/sign-in";
-import { WelcomeRoute } from "@/features/auth/routes/welcome";
-import { UsersRoute } from "@/features/admin/routes/users";
-import { OrganizationsRoute } from "@/features/admin/routes/organizations";
-import { CaughtMailRoute } from "@/features/admin/routes/caught-mail";
-import { TransferNewRoute } from "@/features/transfers/routes/transfer-new";
-import { TransferPageRoute } from "./routes/transfer-page";
-import { TransferEditRoute } from "@/features/transfers/routes/transfer-edit";
-import { TransferCustodyRoute } from "@/features/transfers/routes/transfer-custody";
-import { CheckInRoute } from "@/features/check-in/routes/check-in";
-import { CourierHandoffRoute } from "@/features/courier/routes/courier-handoff";
-import { RegisterRoute } from "@/features/register/routes/register";
-import { DocumentsRoute } from "@/features/compliance/routes/documents";
-import { CanItTravelRoute } from "@/features/compliance/routes/can-it-travel";
-import { RulesRoute } from "@/features/compliance/routes/rules";
-import { PlanTripRoute } from "@/features/temperature/routes/plan-trip";
-import { TemperatureProfilesRoute } from "@/features/temperature/routes/profiles";
+import { NotFoundRoute } from "./routes/not-found";
 
-export const router = createBrowserRouter([
-  { path: paths.signIn, element: <SignInRoute />, errorElement: <RouteErrorBoundary /> },
-  { path: paths.welcome, element: <WelcomeRoute />, errorElement: <RouteErrorBoundary /> },
-  {
-    path: "/",
-    element: <AppLayout />,
-    errorElement: <RouteErrorBoundary />,
-    children: [
-      { index: true, element: <HomeRoute /> },
-      { path: paths.transfers.new, element: <TransferNewRoute /> },
-      { path: paths.transfers.detail.pattern, element: <TransferPageRoute /> },
-      { path: paths.transfers.edit.pattern, element: <TransferEditRoute /> },
-      { path: paths.transfers.custody.pattern, element: <TransferCustodyRoute /> },
-      { path: paths.transfers.checkIn.pattern, element: <CheckInRoute /> },
-      { path: paths.courier.handoff.pattern, element: <CourierHandoffRoute /> },
-      { path: paths.register, element: <RegisterRoute /> },
-      { path: paths.permits, element: <DocumentsRoute /> },
-      { path: paths.canItTravel, element: <CanItTravelRoute /> },
-      { path: paths.admin.rules, element: <RulesRoute /> },
-      { path: paths.planTrip, element: <PlanTripRoute /> },
-      { path: paths.admin.temperatureProfiles, element: <TemperatureProfilesRoute /> },
-      { path: paths.admin.users, element: <UsersRoute /> },
-      { path: paths.admin.organizations, element: <OrganizationsRoute /> },
-      { path: paths.admin.mail, element: <CaughtMailRoute /> },
-      { path: "*", element: <NotFoundRoute /> },
-    ],
-  },
-]);
+/**
+ * A route whose screen is its own chunk, fetched when the route matches (React Router's `lazy`).
+ * The sign-in page then needs only what it shows; heavy libraries (charts, tables, form state)
+ * come with the screens that use them. The router loads a layout and its child in parallel.
+ */
+function screen<Name extends string>(load: () => Promise<Record<Name, ComponentType>>, name: Name) {
+  return async () => ({ Component: (await load())[name] });
+}
+
+const firstLoad = (
+  <div className="mx-auto max-w-6xl px-4">
+    <Loading label="Opening Hatchway…" />
+  </div>
+);
+
+/**
+ * The app's routes. Loaders start the data a screen needs while its chunk is still on the way
+ * (without waiting for it: the screen's own query picks up the request in flight), so a phone
+ * on a slow link pays one round trip for code and data together, not one after the other.
+ */
+export function createAppRouter(queryClient: QueryClient) {
+  const prefetchSession = () => {
+    void queryClient.prefetchQuery(sessionQueryOptions());
+    return null;
+  };
+  const prefetchTransfer = ({ params }: LoaderFunctionArgs) => {
+    if (params.transferId) void queryClient.prefetchQuery(transferQueryOptions(params.transferId));
+    return null;
+  };
+
+  return createBrowserRouter([
+    {
+      path: paths.signIn,
+      lazy: screen(() => import("@/features/auth/routes/sign-in"), "SignInRoute"),
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+    },
+    {
+      path: paths.welcome,
+      lazy: screen(() => import("@/features/auth/routes/welcome"), "WelcomeRoute"),
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+    },
+    {
+      path: "/",
+      lazy: screen(() => import("./layout"), "AppLayout"),
+      loader: prefetchSession,
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+      children: [
+        { index: true, lazy: screen(() => import("./routes/home"), "HomeRoute") },
+        {
+          path: paths.transfers.new,
+          lazy: screen(() => import("@/features/transfers/routes/transfer-new"), "TransferNewRoute"),
+        },
+        {
+          path: paths.transfers.detail.pattern,
+          loader: prefetchTransfer,
+          lazy: screen(() => import("./routes/transfer-page"), "TransferPageRoute"),
+        },
+        {
+          path: paths.transfers.edit.pattern,
+          lazy: screen(() => import("@/features/transfers/routes/transfer-edit"), "TransferEditRoute"),
+        },
+        {
+          path: paths.transfers.custody.pattern,
+          lazy: screen(() => import("@/features/transfers/routes/transfer-custody"), "TransferCustodyRoute"),
+        },
+        {
+          path: paths.transfers.checkIn.pattern,
+          lazy: screen(() => import("@/features/check-in/routes/check-in"), "CheckInRoute"),
+        },
+        {
+          path: paths.courier.handoff.pattern,
+          loader: prefetchTransfer,
+          lazy: screen(() => import("@/features/courier/routes/courier-handoff"), "CourierHandoffRoute"),
+        },
+        { path: paths.register, lazy: screen(() => import("@/features/register/routes/register"), "RegisterRoute") },
+        { path: paths.permits, lazy: screen(() => import("@/features/compliance/routes/documents"), "DocumentsRoute") },
+        {
+          path: paths.canItTravel,
+          lazy: screen(() => import("@/features/compliance/routes/can-it-travel"), "CanItTravelRoute"),
+        },
+        { path: paths.admin.rules, lazy: screen(() => import("@/features/compliance/routes/rules"), "RulesRoute") },
+        {
+          path: paths.planTrip,
+          lazy: screen(() => import("@/features/temperature/routes/plan-trip"), "PlanTripRoute"),
+        },
+        {
+          path: paths.admin.temperatureProfiles,
+          lazy: screen(() => import("@/features/temperature/routes/profiles"), "TemperatureProfilesRoute"),
+        },
+        { path: paths.admin.users, lazy: screen(() => import("@/features/admin/routes/users"), "UsersRoute") },
+        {
+          path: paths.admin.organizations,
+          lazy: screen(() => import("@/features/admin/routes/organizations"), "OrganizationsRoute"),
+        },
+        {
+          path: paths.admin.mail,
+          lazy: screen(() => import("@/features/admin/routes/caught-mail"), "CaughtMailRoute"),
+        },
+        { path: "*", element: <NotFoundRoute /> },
+      ],
+    },
+  ]);
+}

@@ -67,9 +67,13 @@ describe("one transfer from draft to check-in", () => {
       page.waitForResponse((r) => r.url().endsWith("/legs") && r.status() === 200),
       page.getByRole("button", { name: "Save couriers" }).click(),
     ]);
+    // Sending asks first, in a dialog that says what will happen.
+    await page.getByRole("button", { name: "Send to the receiver" }).click();
+    const ask = page.getByRole("dialog", { name: /^Send HW-\d{2}-\w{5} to Willow Marsh Nature Centre\?$/ });
+    await ask.waitFor();
     await Promise.all([
       page.waitForResponse((r) => r.url().endsWith("/transition") && r.status() === 200),
-      page.getByRole("button", { name: "Send to the receiver" }).click(),
+      ask.getByRole("button", { name: "Send to the receiver" }).click(),
     ]);
     await expect.poll(() => page.getByText("Waiting for the receiver", { exact: true }).count()).toBeGreaterThan(0);
     await expectAccessible(page);
@@ -101,6 +105,10 @@ describe("one transfer from draft to check-in", () => {
         .getByLabel("Why it is safe to confirm anyway")
         .fill("Heated van door to door; we collect at the depot ourselves.");
       await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
+      await page
+        .getByRole("dialog", { name: "Confirm past the temperature block?" })
+        .getByRole("button", { name: "Confirm anyway" })
+        .click();
     }
     await expect.poll(() => page.getByText("Cleared to travel", { exact: true }).count()).toBeGreaterThan(0);
     await screenshot(page, "story-3-receiver-confirmed");

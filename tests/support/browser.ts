@@ -1,27 +1,16 @@
 /** Debian's Chromium driven by playwright-core: never a downloaded browser. */
 import { mkdirSync } from "node:fs";
 import path from "node:path";
-import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import type { Browser, BrowserContext, Page } from "playwright-core";
 import AxeBuilder from "@axe-core/playwright";
 import { expect, inject } from "vitest";
 import { OUTPUT_DIR } from "./constants";
+import { launchChromium } from "./chromium";
 
 export const SCREENSHOT_DIR = path.join(OUTPUT_DIR, "screenshots");
 
-export async function launchBrowser(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-    headless: true,
-    args: [
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
-  });
+export function launchBrowser(): Promise<Browser> {
+  return launchChromium();
 }
 
 export const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };

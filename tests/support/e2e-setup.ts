@@ -44,7 +44,8 @@ export default async function setup(project: TestProject) {
   const build = spawnSync(
     path.join(PROJECT_ROOT, "node_modules/.bin/vite"),
     ["build", "--logLevel", "error", "--outDir", dist, "--emptyOutDir"],
-    { cwd: PROJECT_ROOT, stdio: "inherit" },
+    // The build users get: vitest sets NODE_ENV=test, which would give React's development build.
+    { cwd: PROJECT_ROOT, stdio: "inherit", env: { ...process.env, NODE_ENV: "production" } },
   );
   if (build.status !== 0) throw new Error("the client build for the browser tests failed");
 

@@ -1,11 +1,14 @@
 import { isRouteErrorResponse, Link, useRouteError } from "react-router";
 import { paths } from "@/config/paths";
+import { useDocumentTitle } from "@/lib/document-title";
 import { NotFoundRoute } from "./not-found";
 
 /** Shown when a screen fails to render; says what happened without technical detail. */
 export function RouteErrorBoundary() {
   const error = useRouteError();
-  if (isRouteErrorResponse(error) && error.status === 404) return <NotFoundRoute />;
+  const notFound = isRouteErrorResponse(error) && error.status === 404;
+  useDocumentTitle(notFound ? null : "Something broke");
+  if (notFound) return <NotFoundRoute />;
   return (
     <div role="alert" className="mx-auto max-w-xl px-4 py-16 text-center">
       <h1 className="text-2xl font-semibold">Something on this page broke</h1>

@@ -1,7 +1,9 @@
 import { Link } from "react-router";
 import { paths } from "@/config/paths";
+import { useDocumentTitle } from "@/lib/document-title";
 
 export function NotFoundRoute() {
+  useDocumentTitle("Page not found");
   return (
     <div className="mx-auto max-w-xl px-4 py-16 text-center">
       <p className="font-display text-5xl text-fern">404</p>

@@ -7,7 +7,7 @@ export function TransferPageRoute() {
   return (
     <TransferDetailRoute
       checks={(t) => (
-        <div className="grid gap-5">
+        <div className="grid grid-cols-1 gap-5">
           <ComplianceSection transferId={t.id} />
           <TemperatureSection transferId={t.id} status={t.status} />
         </div>

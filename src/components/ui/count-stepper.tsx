@@ -46,7 +46,7 @@ export function CountStepper({ label, value, onChange, min = 0, max = 10_000, hi
             const n = Number.parseInt(e.target.value, 10);
             onChange(Number.isNaN(n) ? min : clamp(n));
           }}
-          className="h-12 w-20 rounded-md border border-rule bg-paper-card px-2 text-center text-xl font-semibold text-ink focus:border-fern focus:outline-none"
+          className="h-12 w-20 rounded-md border border-rule bg-paper-card px-2 text-center text-xl font-semibold text-ink focus:border-fern focus-visible:outline-hidden focus-visible:ring-3 focus-visible:ring-fern-ring"
         />
         <button
           type="button"

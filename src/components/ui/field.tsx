@@ -31,7 +31,7 @@ function FieldShell({ label, error, hint, id, children }: FieldShellProps) {
 }
 
 const control =
-  "min-h-11 w-full rounded-md border bg-paper-card px-3 py-2 text-base text-ink placeholder:text-ink-faint focus:border-fern focus:outline-none";
+  "min-h-11 w-full rounded-md border bg-paper-card px-3 py-2 text-base text-ink placeholder:text-ink-faint focus:border-fern focus-visible:outline-hidden focus-visible:ring-3 focus-visible:ring-fern-ring";
 
 type InputProps = InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string; hint?: ReactNode };
 

@@ -79,7 +79,7 @@ export const MeasureField = forwardRef<HTMLInputElement, Props>(function Measure
           setText(e.target.value);
           onChange(parsed);
         }}
-        className={`min-h-11 w-full rounded-md border bg-paper-card px-3 py-2 text-base text-ink focus:border-fern focus:outline-none ${error ? "border-brick" : "border-rule"}`}
+        className={`min-h-11 w-full rounded-md border bg-paper-card px-3 py-2 text-base text-ink focus:border-fern focus-visible:outline-hidden focus-visible:ring-3 focus-visible:ring-fern-ring ${error ? "border-brick" : "border-rule"}`}
       />
       {hint && !error ? (
         <p id={`${id}-hint`} className="text-sm text-ink-soft">

@@ -1,16 +1,21 @@
 import type { ReactNode } from "react";
+import { useDocumentTitle } from "@/lib/document-title";
 
+/** The page's heading; it also names the page in the browser tab (`documentTitle`, else `title`). */
 export function PageHeader({
   title,
+  documentTitle,
   eyebrow,
   actions,
   children,
 }: {
   title: string;
+  documentTitle?: string;
   eyebrow?: string;
   actions?: ReactNode;
   children?: ReactNode;
 }) {
+  useDocumentTitle(documentTitle ?? title);
   return (
     <header className="mb-6 flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
       <div>

@@ -1,9 +1,13 @@
 import type { ReactNode } from "react";
 
-/** A plain, accessible table in the notebook style; horizontal scroll on narrow screens. */
+/**
+ * A plain, accessible table in the notebook style; horizontal scroll on narrow screens. The scroller
+ * is `relative` so screen-reader-only text in the cells (absolutely placed) scrolls with it instead of
+ * widening the page.
+ */
 export function Table({ caption, head, children }: { caption: string; head: ReactNode; children: ReactNode }) {
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+    <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">{head}</thead>

@@ -186,7 +186,7 @@ export function TaxonCombobox({
           setOpen(false);
           onBlur?.();
         }}
-        className={`min-h-11 w-full rounded-md border bg-paper-card px-3 py-2 text-base text-ink placeholder:text-ink-faint focus:border-fern focus:outline-none ${error ? "border-brick" : "border-rule"}`}
+        className={`min-h-11 w-full rounded-md border bg-paper-card px-3 py-2 text-base text-ink placeholder:text-ink-faint focus:border-fern focus-visible:outline-hidden focus-visible:ring-3 focus-visible:ring-fern-ring ${error ? "border-brick" : "border-rule"}`}
       />
       <ul
         id={listId}

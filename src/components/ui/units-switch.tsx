@@ -18,7 +18,7 @@ export function UnitsSwitch() {
           aria-pressed={system === choice.value}
           aria-label={choice.spoken}
           onClick={() => setSystem(choice.value)}
-          className={`min-h-11 min-w-16 rounded px-2 text-sm font-semibold ${system === choice.value ? "bg-fern text-paper-card" : "text-ink-soft hover:bg-paper-deep"}`}
+          className={`min-h-11 min-w-16 whitespace-nowrap rounded px-2 text-sm font-semibold ${system === choice.value ? "bg-fern text-paper-card" : "text-ink-soft hover:bg-paper-deep"}`}
         >
           {choice.label}
         </button>

@@ -5,14 +5,27 @@ import { Button } from "@/components/ui/button";
 import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
 import { Table, Td, Th } from "@/components/ui/table";
+import { useToast } from "@/components/ui/toast";
 import { ApiError } from "@/lib/api-client";
 import { useUpdateUser, useUsers } from "../api/users";
 import { InviteUserForm } from "../components/invite-user-form";
+import { RoleChangeDialog, type RoleChange } from "../components/role-change-dialog";
 
 export function UsersRoute() {
   const users = useUsers();
   const update = useUpdateUser();
   const [inviting, setInviting] = useState(false);
+  const [roleChange, setRoleChange] = useState<RoleChange | null>(null);
+  const notify = useToast();
+
+  const changeRole = ({ user, role }: RoleChange) =>
+    update.mutate(
+      { id: user.id, patch: { role } },
+      {
+        onSuccess: () => notify(`${user.displayName}’s role is now ${USER_ROLE_WORDS[role]}`),
+        onSettled: () => setRoleChange(null),
+      },
+    );
 
   return (
     <>
@@ -75,7 +88,10 @@ export function UsersRoute() {
                   id={`role-${u.id}`}
                   className="min-h-10 rounded-md border border-rule bg-paper-card px-2"
                   value={u.role}
-                  onChange={(e) => update.mutate({ id: u.id, patch: { role: e.target.value as UserRole } })}
+                  onChange={(e) => {
+                    update.reset();
+                    setRoleChange({ user: u, role: e.target.value as UserRole });
+                  }}
                 >
                   {USER_ROLES.map((r) => (
                     <option key={r} value={r}>
@@ -105,6 +121,12 @@ export function UsersRoute() {
           ))}
         </Table>
       )}
+      <RoleChangeDialog
+        change={roleChange}
+        busy={update.isPending}
+        onConfirm={changeRole}
+        onCancel={() => setRoleChange(null)}
+      />
     </>
   );
 }

@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { LoginInput, SetPasswordInput, UserDto } from "@shared/schemas/auth";
 import { api, ApiError, resetCsrf } from "@/lib/api-client";
+import { forgetAllWork } from "@/lib/kept-work";
 
 export type Abilities = {
   manageUsers: boolean;
@@ -42,6 +43,8 @@ export function useSignOut() {
     mutationFn: () => api<void>("/api/auth/logout", { method: "POST" }),
     onSettled: () => {
       resetCsrf();
+      // What the browser kept for the person (e.g. a half-typed transfer) goes with them.
+      forgetAllWork();
       client.clear();
       client.setQueryData(sessionKey, null);
     },

@@ -1,10 +1,11 @@
-import { useState, type FormEvent } from "react";
+import { useRef, useState, type FormEvent } from "react";
 import { Navigate, useNavigate, useSearchParams } from "react-router";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
 import { safeNext } from "@/lib/safe-next";
+import { useDocumentTitle } from "@/lib/document-title";
 import { useSession, useSignIn } from "../api/session";
 
 export function SignInRoute() {
@@ -14,11 +15,25 @@ export function SignInRoute() {
   const [params] = useSearchParams();
   const [email, setEmail] = useState("");
   const [password, setPassword] = useState("");
+  const [missing, setMissing] = useState<{ email?: string; password?: string }>({});
+  const emailInput = useRef<HTMLInputElement>(null);
+  const passwordInput = useRef<HTMLInputElement>(null);
+  useDocumentTitle("Sign in");
 
   if (session.data) return <Navigate to={safeNext(params.get("next"))} replace />;
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
+    // Checked here, so an empty form never leaves the browser (nor counts against the sign-in limit).
+    const found = {
+      email: email.trim() ? undefined : "Enter your e-mail address",
+      password: password ? undefined : "Enter your password",
+    };
+    setMissing(found);
+    if (found.email || found.password) {
+      (found.email ? emailInput : passwordInput).current?.focus();
+      return;
+    }
     signIn.mutate({ email, password }, { onSuccess: () => navigate(safeNext(params.get("next")), { replace: true }) });
   };
   const error =
@@ -45,19 +60,23 @@ export function SignInRoute() {
             </Notice>
           ) : null}
           <TextField
+            ref={emailInput}
             label="E-mail"
             type="email"
             autoComplete="username"
             required
             value={email}
+            error={missing.email}
             onChange={(e) => setEmail(e.target.value)}
           />
           <TextField
+            ref={passwordInput}
             label="Password"
             type="password"
             autoComplete="current-password"
             required
             value={password}
+            error={missing.password}
             onChange={(e) => setPassword(e.target.value)}
           />
           <Button type="submit" size="lg" busy={signIn.isPending}>

@@ -7,6 +7,7 @@ import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
+import { useDocumentTitle } from "@/lib/document-title";
 import { useSetPassword } from "../api/session";
 
 /** The page an invitation e-mail links to: choose a password once. */
@@ -14,6 +15,7 @@ export function WelcomeRoute() {
   const [params] = useSearchParams();
   const token = params.get("token") ?? "";
   const setPassword = useSetPassword();
+  useDocumentTitle("Choose your password");
   const form = useForm<PasswordChoice>({
     resolver: keeperResolver(passwordChoiceSchema),
     defaultValues: { password: "", confirm: "" },

@@ -22,7 +22,7 @@ export function DiscrepancyTable({ checkIn }: { checkIn: CheckInDto }) {
           <Badge tone="caution">What arrived differs from the manifest</Badge>
         )}
       </p>
-      <div className="overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+      <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Arrivals compared with the manifest</caption>
           <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">

@@ -155,7 +155,7 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
 function Results({ transfer: t }: { transfer: TransferDto }) {
   const c = t.checkIn!;
   return (
-    <div className="grid gap-5">
+    <div className="grid grid-cols-1 gap-5">
       <Notice tone="ok" title="Checked in">
         Signed by {c.signedName} on {formatInstant(c.signedAt)}.{" "}
         <Link to={paths.register} className="font-medium text-fern underline">
@@ -197,7 +197,7 @@ export function CheckInRoute() {
     );
   const t = transfer.data;
   return (
-    <div className="grid gap-5">
+    <div className="grid grid-cols-1 gap-5">
       <PageHeader
         title={`Check-in for ${t.number}`}
         eyebrow={`From ${t.sender.organization.name}`}

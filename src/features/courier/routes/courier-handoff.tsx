@@ -9,6 +9,7 @@ import { ApiError } from "@/lib/api-client";
 import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
+import { useDocumentTitle } from "@/lib/document-title";
 import { HandoffForm } from "../components/handoff-form";
 
 const phoneLink =
@@ -20,6 +21,7 @@ export function CourierHandoffRoute() {
   const viewer = useViewer();
   const transfer = useTransfer(transferId);
   const [recorded, setRecorded] = useState<string | null>(null);
+  useDocumentTitle(transfer.data ? `Leg of ${transfer.data.number}` : "Your leg");
 
   if (transfer.isPending) return <Loading label="Loading the transfer…" />;
   if (transfer.error) {

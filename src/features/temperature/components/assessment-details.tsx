@@ -79,7 +79,7 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
 function BoxVerdicts({ report }: { report: TemperatureReport }) {
   const [system] = useUnitSystem();
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-left text-sm">
         <caption className="mb-1 text-left font-semibold">Box by box</caption>
         <thead>

@@ -1,79 +1,59 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import type { TransferStatus } from "@shared/constants";
-import type { TransferAbilitiesDto, TransferDto } from "@shared/schemas/transfer";
+import type { TransferDto } from "@shared/schemas/transfer";
 import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Notice } from "@/components/ui/feedback";
 import { TextAreaField } from "@/components/ui/field";
+import { useToast } from "@/components/ui/toast";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { useTransitionTransfer } from "../api/transition-transfer";
-
-type Step = {
-  ability: keyof Pick<TransferAbilitiesDto, "submit" | "withdraw" | "confirm" | "sendBack" | "cancel" | "close">;
-  to: TransferStatus;
-  label: string;
-  variant: "primary" | "secondary" | "danger";
-  /** Steps that tell the other party "no" say why. */
-  reason?: { label: string; confirm: string };
-};
-
-// The server decides which of these the caller may take (abilities); this only names them.
-const STEPS: Step[] = [
-  { ability: "submit", to: "awaiting_receiver", label: "Send to the receiver", variant: "primary" },
-  { ability: "confirm", to: "ready", label: "Confirm and clear to travel", variant: "primary" },
-  {
-    ability: "sendBack",
-    to: "draft",
-    label: "Send back to the sender",
-    variant: "secondary",
-    reason: { label: "What needs to change?", confirm: "Send back" },
-  },
-  { ability: "withdraw", to: "draft", label: "Take back to draft", variant: "secondary" },
-  { ability: "close", to: "closed", label: "Close the record", variant: "secondary" },
-  {
-    ability: "cancel",
-    to: "cancelled",
-    label: "Cancel the transfer",
-    variant: "danger",
-    reason: { label: "Why is it cancelled?", confirm: "Cancel the transfer" },
-  },
-];
+import { TemperatureOverride } from "./temperature-override";
+import { STEPS, type Step } from "./transition-steps";
 
 const linkButton = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 font-medium";
 
-/**
- * A refusal a party may override with a reason: the temperature gate (a planning aid, not law).
- * Compliance blocks are not offered here; only an administrator can override those.
- */
-function overridableBlock(error: unknown): boolean {
-  if (!(error instanceof ApiError) || error.status !== 409) return false;
+/** The temperature report behind a refusal the receiver may override with a reason; null otherwise. */
+function overridableBlock(error: unknown): { advice: string | null } | null {
+  if (!(error instanceof ApiError) || error.status !== 409) return null;
   const details = (error.body as { error?: Record<string, unknown> } | undefined)?.error;
-  return Boolean(details && "temperature" in details && !("compliance" in details));
+  if (!details || !("temperature" in details) || "compliance" in details) return null;
+  const report = details.temperature as { advice?: { message?: string } } | undefined;
+  return { advice: report?.advice?.message ?? null };
 }
 
 /** The buttons the caller's abilities allow, and the links to the screens where work is done. */
 export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
   const transition = useTransitionTransfer(t.id);
+  const notify = useToast();
   const [asking, setAsking] = useState<Step | null>(null);
   const [reason, setReason] = useState("");
   const [reasonError, setReasonError] = useState<string | null>(null);
   const steps = STEPS.filter((s) => t.abilities[s.ability]);
   const packingOpen = t.abilities.submit && t.packingFindings.length > 0;
-
-  const [overrideReason, setOverrideReason] = useState("");
-  const canOverride = transition.variables?.to === "ready" && overridableBlock(transition.error);
+  const block = transition.variables?.to === "ready" ? overridableBlock(transition.error) : null;
 
   function take(step: Step, why?: string, override = false) {
     transition.mutate(
       { to: step.to, reason: why, ...(override ? { override: true } : {}) },
       {
-        onSuccess: () => {
+        onSuccess: (updated) => {
           setAsking(null);
           setReason("");
+          const done = step.done(updated);
+          notify(done.title, done.detail);
         },
+        onError: () => setAsking(null),
       },
     );
+  }
+
+  function start(step: Step) {
+    transition.reset();
+    setReasonError(null);
+    if (step.ask) setAsking(step);
+    else take(step);
   }
 
   const links = [
@@ -89,6 +69,7 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
   ].filter((l) => l !== null);
 
   if (steps.length === 0 && links.length === 0) return null;
+  const question = asking?.ask?.(t);
   return (
     <div
       className="grid gap-3 rounded-card border border-rule bg-paper-deep/60 p-3"
@@ -100,31 +81,19 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
           {transition.error instanceof ApiError ? transition.error.message : "Check your connection and try again."}
         </Notice>
       ) : null}
-      {canOverride ? (
-        <form
-          className="grid gap-2 rounded-card border border-brick-line bg-paper-card p-3"
-          onSubmit={(e) => {
-            e.preventDefault();
-            const confirm = STEPS.find((x) => x.ability === "confirm")!;
-            if (overrideReason.trim()) take(confirm, overrideReason.trim(), true);
-          }}
-        >
-          <p className="text-sm">
-            You may still confirm, if you have checked the weather yourself and the animals are packed for it. Say why:
-            your reason and the temperature verdict go into the custody log for everyone on the transfer to see.
-          </p>
-          <TextAreaField
-            label="Why it is safe to confirm anyway"
-            value={overrideReason}
-            maxLength={1000}
-            onChange={(e) => setOverrideReason(e.target.value)}
-          />
-          <div>
-            <Button type="submit" variant="danger" disabled={!overrideReason.trim()} busy={transition.isPending}>
-              Confirm anyway, with this reason
-            </Button>
-          </div>
-        </form>
+      {block ? (
+        <TemperatureOverride
+          transfer={t}
+          advice={block.advice}
+          busy={transition.isPending}
+          onConfirm={(why) =>
+            take(
+              STEPS.find((x) => x.ability === "confirm")!,
+              why,
+              true,
+            )
+          }
+        />
       ) : null}
       {packingOpen ? (
         <Notice tone="caution">
@@ -147,27 +116,28 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
             variant={s.variant}
             busy={transition.isPending && transition.variables?.to === s.to && !asking}
             disabled={transition.isPending}
-            onClick={() => {
-              transition.reset();
-              if (s.reason) {
-                setAsking(s);
-                setReasonError(null);
-              } else take(s);
-            }}
+            onClick={() => start(s)}
           >
             {s.label}
           </Button>
         ))}
       </div>
-      {asking?.reason ? (
-        <form
-          className="grid gap-2"
-          onSubmit={(e) => {
-            e.preventDefault();
-            if (!reason.trim()) setReasonError("Say why, so the other party knows what to do.");
-            else take(asking, reason.trim());
-          }}
-        >
+      <ConfirmDialog
+        open={asking !== null}
+        title={question?.title ?? ""}
+        confirmLabel={question?.confirm ?? ""}
+        cancelLabel={question?.cancel}
+        tone={asking?.variant === "danger" ? "danger" : "primary"}
+        busy={transition.isPending}
+        onCancel={() => setAsking(null)}
+        onConfirm={() => {
+          if (!asking) return;
+          if (asking.reason && !reason.trim()) setReasonError("Say why, so the other party knows what to do.");
+          else take(asking, asking.reason ? reason.trim() : undefined);
+        }}
+      >
+        <p>{question?.happens}</p>
+        {asking?.reason ? (
           <TextAreaField
             label={asking.reason.label}
             value={reason}
@@ -176,20 +146,8 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
             error={reasonError ?? undefined}
             autoFocus
           />
-          <div className="flex gap-2">
-            <Button
-              type="submit"
-              variant={asking.variant === "danger" ? "danger" : "primary"}
-              busy={transition.isPending}
-            >
-              {asking.reason.confirm}
-            </Button>
-            <Button type="button" variant="ghost" onClick={() => setAsking(null)}>
-              Keep it as it is
-            </Button>
-          </div>
-        </form>
-      ) : null}
+        ) : null}
+      </ConfirmDialog>
     </div>
   );
 }

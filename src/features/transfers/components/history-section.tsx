@@ -24,7 +24,7 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
       ) : changes.data.length === 0 ? (
         <p className="text-ink-soft">No edits since the transfer was created.</p>
       ) : (
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full border-collapse text-left text-sm">
             <caption className="sr-only">Edits to this transfer</caption>
             <thead className="text-xs uppercase tracking-wide text-ink-soft">

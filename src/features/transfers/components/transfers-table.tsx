@@ -104,7 +104,7 @@ export function TransfersTable({ transfers, sort, dir, onSort }: Props) {
   });
 
   return (
-    <div className="overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+    <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">
           Transfers, sorted by {TRANSFER_SORT_WORDS[sort]} ({dir === "asc" ? "ascending" : "descending"})

@@ -75,7 +75,8 @@ export function TransferDetailRoute({ checks }: Props) {
   }
   const t = transfer.data;
   return (
-    <div className="grid gap-5">
+    // minmax(0, 1fr): a wide table scrolls inside its box instead of widening the page on a phone.
+    <div className="grid grid-cols-1 gap-5">
       <PageHeader
         title={`Transfer ${t.number}`}
         eyebrow={VIEWER_ROLE_WORDS[t.viewerRole]}

@@ -1,19 +1,21 @@
-import { useNavigate } from "react-router";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
-import { paths } from "@/config/paths";
+import { formatInstant } from "@shared/dates";
 import { useViewer } from "@/lib/viewer";
-import { useCreateTransfer } from "../api/create-transfer";
 import { useDirectoryOrganizations } from "../api/directory";
-import { blankTransfer } from "../components/transfer-form/form-values";
-import { TransferForm } from "../components/transfer-form/transfer-form";
+import { NewTransferForm } from "../components/new-transfer-form";
+import { clearBrowserDraft, readBrowserDraft } from "../components/transfer-form/draft-storage";
 
 /** A new transfer, saved as a draft; sending it to the receiver is a step on its page. */
 export function TransferNewRoute() {
   const viewer = useViewer();
   const directory = useDirectoryOrganizations();
-  const create = useCreateTransfer();
-  const navigate = useNavigate();
+  const userId = viewer.user.id;
+  // Read once: the form keeps the copy up to date from here on.
+  const [restored, setRestored] = useState(() => readBrowserDraft(userId));
+  const [attempt, setAttempt] = useState(0);
   const ownOrganizationId = viewer.user.organization?.id ?? null;
 
   if (!viewer.abilities.draftTransfers) {
@@ -32,24 +34,38 @@ export function TransferNewRoute() {
     );
 
   const own = directory.data.find((o) => o.id === ownOrganizationId);
+  const startOver = () => {
+    clearBrowserDraft(userId);
+    setRestored(null);
+    setAttempt((n) => n + 1);
+  };
   return (
     <>
       <PageHeader title="New transfer" eyebrow={viewer.user.organization?.name}>
-        Saved as a draft: nothing is sent to the receiver until you say so.
+        Saved as a draft once the route and parties are chosen; nothing is sent to the receiver until you say so.
       </PageHeader>
-      <TransferForm
-        mode="create"
-        defaultValues={blankTransfer(
-          own ? { street: own.street, city: own.city, state: own.state, zip: own.zip } : null,
-        )}
-        initialTaxa={{}}
+      {restored ? (
+        <div className="mb-5">
+          <Notice tone="info" title="Picked up where you left off">
+            <p>
+              What you typed was kept in this browser tab ({formatInstant(restored.keptAt)}).
+              {restored.serverDraft
+                ? ` The draft ${restored.serverDraft.number} is saved on Hatchway; starting over leaves it in your transfers list.`
+                : ""}
+            </p>
+            <Button variant="secondary" className="mt-2" onClick={startOver}>
+              Start over
+            </Button>
+          </Notice>
+        </div>
+      ) : null}
+      <NewTransferForm
+        key={attempt}
+        userId={userId}
         organizations={directory.data}
         senderOrganizationId={ownOrganizationId}
-        submitLabel="Save the draft"
-        onSave={async (values) => {
-          const transfer = await create.mutateAsync(values);
-          navigate(paths.transfers.detail.href(transfer.id));
-        }}
+        senderAddress={own ? { street: own.street, city: own.city, state: own.state, zip: own.zip } : null}
+        restored={restored}
       />
     </>
   );

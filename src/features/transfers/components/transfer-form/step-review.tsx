@@ -48,7 +48,7 @@ export function ReviewStep({
   );
 
   return (
-    <div className="grid gap-5">
+    <div className="grid grid-cols-1 gap-5">
       <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
         <dt className="font-semibold">Receiver</dt>
         <dd>{receiver?.name ?? "not chosen"}</dd>

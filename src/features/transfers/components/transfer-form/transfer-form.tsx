@@ -1,5 +1,12 @@
-import { useRef, useState } from "react";
-import { FormProvider, useForm, type FieldErrors, type FieldPath, type Resolver } from "react-hook-form";
+import { useEffect, useRef, useState } from "react";
+import {
+  FormProvider,
+  useForm,
+  type FieldErrors,
+  type FieldPath,
+  type Resolver,
+  type UseFormReturn,
+} from "react-hook-form";
 import { keeperResolver } from "@/lib/form-resolver";
 import {
   createTransferSchema,
@@ -49,6 +56,9 @@ function stepOf(fieldPaths: string[]): number {
   return index === -1 ? STEPS.length - 1 : index;
 }
 
+export type TransferFormApi = UseFormReturn<TransferInput, unknown, TransferInputParsed>;
+export type TransferFormProgress = { values: TransferInput; step: number; taxa: Record<string, TaxonBriefDto> };
+
 type Props = {
   mode: "create" | "edit";
   defaultValues: TransferInput;
@@ -60,6 +70,17 @@ type Props = {
   submitLabel: string;
   /** The species search; the real one unless a test passes its own. */
   search?: TaxonSearch;
+  /** The step shown, when the caller keeps it (e.g. in the address, so Back goes one step back). */
+  step?: number;
+  /** Asked to show another step; without it the form keeps its step itself. */
+  onStepChange?: (next: number) => void;
+  /**
+   * After a step's fields pass, before the next step opens: keeps what is complete (the new
+   * transfer's draft). A rejected ApiError is shown like a failed save, and the step stays open.
+   */
+  onStepDone?: (values: TransferInput, step: number, form: TransferFormApi) => Promise<unknown>;
+  /** Every change of a value, of the step or of the species known by name (the browser's copy). */
+  onProgress?: (progress: TransferFormProgress) => void;
 };
 
 /**
@@ -75,6 +96,10 @@ export function TransferForm({
   onSave,
   submitLabel,
   search = searchTaxa,
+  step: shownStep,
+  onStepChange,
+  onStepDone,
+  onProgress,
 }: Props) {
   const resolver: Resolver<TransferInput, unknown, TransferInputParsed> = (values, context, options) =>
     keeperResolver(mode === "create" ? createTransferSchema(new Date()) : transferInputSchema)(
@@ -83,21 +108,61 @@ export function TransferForm({
       options,
     );
   const form = useForm<TransferInput, unknown, TransferInputParsed>({ resolver, defaultValues, mode: "onTouched" });
-  const [step, setStep] = useState(0);
+  const [ownStep, setOwnStep] = useState(0);
+  const step = Math.min(Math.max(shownStep ?? ownStep, 0), STEPS.length - 1);
   const [taxa, setTaxa] = useState(initialTaxa);
   const [saveError, setSaveError] = useState<string | null>(null);
+  const [advancing, setAdvancing] = useState(false);
   const heading = useRef<HTMLHeadingElement>(null);
 
+  // Report every change to whoever keeps a copy; the latest step and species ride along.
+  const reported = useRef({ onProgress, step, taxa });
+  useEffect(() => {
+    reported.current = { onProgress, step, taxa };
+    onProgress?.({ values: form.getValues(), step, taxa });
+  }, [onProgress, step, taxa, form]);
+  useEffect(() => {
+    const subscription = form.watch((values) => {
+      const { onProgress: report, step: at, taxa: known } = reported.current;
+      report?.({ values: values as TransferInput, step: at, taxa: known });
+    });
+    return () => subscription.unsubscribe();
+  }, [form]);
+
   function go(next: number) {
-    setStep(next);
+    if (onStepChange) onStepChange(next);
+    else setOwnStep(next);
     // Move focus to the new step's heading so keyboard and screen-reader users start at its top.
     requestAnimationFrame(() => heading.current?.focus());
   }
 
+  /** A refused or failed save: said above the step, and on the field the server named. */
+  function showSaveError(err: unknown) {
+    const message = err instanceof ApiError ? err.message : "Not saved. Check your connection and try again.";
+    setSaveError(message);
+    if (err instanceof ApiError && err.field && err.field !== "body") {
+      form.setError(err.field as FieldPath<TransferInput>, { message });
+      go(stepOf([err.field]));
+    }
+  }
+
   async function forward() {
     const current = STEPS[step];
-    if (current && (current.fields.length === 0 || (await form.trigger([...current.fields], { shouldFocus: true }))))
-      go(step + 1);
+    if (!current) return;
+    if (current.fields.length > 0 && !(await form.trigger([...current.fields], { shouldFocus: true }))) return;
+    if (onStepDone) {
+      setSaveError(null);
+      setAdvancing(true);
+      try {
+        await onStepDone(form.getValues(), step, form);
+      } catch (err) {
+        showSaveError(err);
+        return;
+      } finally {
+        setAdvancing(false);
+      }
+    }
+    go(step + 1);
   }
 
   const submit = form.handleSubmit(
@@ -106,12 +171,7 @@ export function TransferForm({
       try {
         await onSave(values);
       } catch (err) {
-        const message = err instanceof ApiError ? err.message : "Not saved. Check your connection and try again.";
-        setSaveError(message);
-        if (err instanceof ApiError && err.field && err.field !== "body") {
-          form.setError(err.field as FieldPath<TransferInput>, { message });
-          go(stepOf([err.field]));
-        }
+        showSaveError(err);
       }
     },
     (errors: FieldErrors<TransferInput>) => go(stepOf(Object.keys(errors))),
@@ -161,7 +221,7 @@ export function TransferForm({
           {/* Distinct keys: React must not reuse the "Next" button as the submit button, or the
               click that reaches the last step would also submit the form. */}
           {step < STEPS.length - 1 ? (
-            <Button key="next" type="button" onClick={() => void forward()}>
+            <Button key="next" type="button" busy={advancing} onClick={() => void forward()}>
               Next: {STEPS[step + 1]!.title}
             </Button>
           ) : (
