@@ -5,18 +5,21 @@ import { prepareDatabase } from "./prepare-db";
 
 export type BenchServer = { baseUrl: string; databaseUrl: string; cluster: Cluster; stop(): Promise<void> };
 
+/** The server connects as the app role (D18); the data is loaded as the owner, like the migrations. */
+
 export async function startBenchServer(
-  options: { port?: number; beforeStart?: (databaseUrl: string, baseUrl: string) => Promise<void> } = {},
+  options: { port?: number; beforeStart?: (ownerUrl: string, baseUrl: string) => Promise<void> } = {},
 ): Promise<BenchServer> {
   const cluster = await startCluster("test", Number(process.env.HATCHWAY_TEST_PG_PORT ?? 54329));
   const db = "hatchway_bench";
   await dropDatabase(cluster, db);
   await ensureDatabase(cluster, db);
-  const databaseUrl = cluster.url(db);
+  const ownerUrl = cluster.url(db, "owner");
+  const databaseUrl = cluster.url(db, "app");
   const port = options.port ?? Number(process.env.PORT ?? 3901);
   const baseUrl = `http://127.0.0.1:${port}`;
-  await prepareDatabase(databaseUrl, { seed: true, publicUrl: baseUrl });
-  await options.beforeStart?.(databaseUrl, baseUrl);
+  await prepareDatabase(ownerUrl, { seed: true, publicUrl: baseUrl });
+  await options.beforeStart?.(ownerUrl, baseUrl);
 
   // BENCH_CPU_PROF=<folder> writes a V8 CPU profile of the server when it stops (for chrome://inspect or speedscope).
   const profiling = process.env.BENCH_CPU_PROF ? ["--cpu-prof", "--cpu-prof-dir", process.env.BENCH_CPU_PROF] : [];

@@ -4,10 +4,12 @@ import { Migration20261201220520 } from "./Migration20261201220520";
 import { Migration20261201222513_transfer_record } from "./Migration20261201222513_transfer_record";
 import { Migration20261201300000_compliance } from "./Migration20261201300000_compliance";
 import { Migration20261201310000_temperature } from "./Migration20261201310000_temperature";
+import { Migration20261202130000_least_privilege } from "./Migration20261202130000_least_privilege";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
   { name: "Migration20261201222513_transfer_record", class: Migration20261201222513_transfer_record },
   { name: "Migration20261201300000_compliance", class: Migration20261201300000_compliance },
   { name: "Migration20261201310000_temperature", class: Migration20261201310000_temperature },
+  { name: "Migration20261202130000_least_privilege", class: Migration20261202130000_least_privilege },
 ];
