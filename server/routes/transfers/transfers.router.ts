@@ -22,7 +22,7 @@ import { parse } from "../../http/validate";
 import { transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
 import { factsOfView, presentTransfer } from "../../presenters/transfer.presenter";
 import { readTransferView } from "../../services/transfers/read-view";
-import { readCustodyLog } from "../../services/transfers/custody";
+import { exportCustodyLog, readCustodyLog } from "../../services/transfers/custody";
 import { loadTransferForActor } from "../../services/transfers/load";
 import { listTransfers } from "../../services/transfers/list";
 import { createTransfer, updateTransfer } from "../../services/transfers/write-transfer";
@@ -166,6 +166,16 @@ export function transfersRouter(): Router {
     const id = idParam(req);
     await loadTransferForActor(req.em, id, currentUser(req));
     res.json(await readCustodyLog(req.em, id));
+  });
+
+  // The log to keep, for anyone who may read it: checkable later without Hatchway (D19).
+  router.get("/:id/custody/export", async (req, res) => {
+    const id = idParam(req);
+    const { transfer } = await loadTransferForActor(req.em, id, currentUser(req));
+    const exported = await exportCustodyLog(req.em, transfer);
+    res.attachment(`${transfer.number}-custody.json`);
+    res.setHeader("X-Content-Type-Options", "nosniff");
+    res.type("application/json").send(`${JSON.stringify(exported, null, 2)}\n`);
   });
 
   router.get("/:id/changes", async (req, res) => {
