@@ -5,7 +5,8 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import type { AppBase, AppContext } from "./context";
 import { composeApp, isComposed } from "./composition";
 import { correlationId, errorHandler, notFoundApi } from "./http/errors";
-import { csrfProtection, noStore, rejectNul, requireJsonBody, securityHeaders } from "./http/security";
+import { csrfProtection, noStore, requireJsonBody, securityHeaders } from "./http/security";
+import { jsonBody, wellFormedAddress } from "./http/well-formed-text";
 import { configurePassport, sessionMiddleware } from "./auth/session";
 import { healthRouter } from "./routes/health/health.router";
 import { authRouter } from "./routes/auth/auth.router";
@@ -39,6 +40,7 @@ export function createApp(input: AppContext | AppBase): Express {
   const api = express.Router();
   if (ctx.env.BENCH_ROUTES) api.use(queryCounter(ctx));
   api.use(noStore);
+  api.use(wellFormedAddress);
   api.use("/health", healthRouter(ctx));
   if (ctx.env.BENCH_ROUTES) {
     // The benchmark's ceiling: Express plus one pg round trip, no session, no ORM.
@@ -47,12 +49,11 @@ export function createApp(input: AppContext | AppBase): Express {
       res.json(rows[0]);
     });
   }
-  const json = express.json({ limit: "1mb", type: "application/json" });
-  const jsonBody = requireJsonBody();
+  const json = jsonBody();
+  const onlyJson = requireJsonBody();
   const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
-  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : jsonBody)(req, res, next));
-  api.use((req, res, next) => (req.method === "GET" || req.method === "HEAD" ? next() : json(req, res, next)));
-  api.use(rejectNul);
+  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : onlyJson)(req, res, next));
+  api.use(json);
   // One EntityManager per request (MikroORM's request context), forked on first use only; the
   // getter lives on this app's request prototype, so a request that needs no ORM pays nothing.
   Object.defineProperty(app.request, "em", {

@@ -2,8 +2,6 @@ import { randomBytes, timingSafeEqual } from "node:crypto";
 import type { RequestHandler } from "express";
 import helmet from "helmet";
 import { HttpError } from "./errors";
-import { NO_CONTROL_CHARACTERS } from "@shared/schemas/common";
-import { sentence } from "@shared/validation/messages";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -50,47 +48,6 @@ export function requireJsonBody(allowed: string[] = []): RequestHandler {
     if (req.is("application/json") || allowed.some((type) => req.is(type))) return next();
     next(new HttpError(415, "unsupported_media_type", "Send the request body as application/json."));
   };
-}
-
-/** Rejects NUL characters anywhere in a parsed JSON body, keys included, naming the field. */
-export const rejectNul: RequestHandler = (req, _res, next) => {
-  const found = findNul(req.body, "");
-  if (found !== null)
-    return next(
-      new HttpError(400, "invalid", nulMessage(found), {
-        field: found || "body",
-      }),
-    );
-  next();
-};
-
-/** "Box 1 label: remove the invisible control characters." — or about a key, without echoing it. */
-function nulMessage(found: string): string {
-  const parts = found ? found.split(".").map((part) => (/^\d+$/.test(part) ? Number(part) : part)) : [];
-  const badKey = parts.findIndex((part) => typeof part === "string" && part.includes("\u0000"));
-  if (badKey >= 0) return sentence(parts.slice(0, badKey), `${NO_CONTROL_CHARACTERS} from the name of a field`);
-  return sentence(parts, NO_CONTROL_CHARACTERS);
-}
-
-function findNul(value: unknown, path: string, depth = 0): string | null {
-  if (depth > 64) return path;
-  if (typeof value === "string") return value.includes("\u0000") ? path : null;
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) {
-      const hit = findNul(value[i], `${path}${path ? "." : ""}${i}`, depth + 1);
-      if (hit !== null) return hit;
-    }
-    return null;
-  }
-  if (value && typeof value === "object") {
-    for (const [k, v] of Object.entries(value)) {
-      const p = `${path}${path ? "." : ""}${k}`;
-      if (k.includes("\u0000")) return p;
-      const hit = findNul(v, p, depth + 1);
-      if (hit !== null) return hit;
-    }
-  }
-  return null;
 }
 
 declare module "express-session" {
