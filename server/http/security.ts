@@ -29,6 +29,12 @@ export function securityHeaders(): RequestHandler {
   });
 }
 
+/**
+ * For files we serve that are not pages of ours (scans, the manifest and labels PDFs): load
+ * nothing, run nothing, and be a unique origin even when the browser renders it.
+ */
+export const SANDBOX_CSP = "default-src 'none'; sandbox";
+
 /** API answers are records: never cached by the browser or a proxy. */
 export const noStore: RequestHandler = (_req, res, next) => {
   res.setHeader("Cache-Control", "no-store");

@@ -18,6 +18,7 @@ import {
   uploadScan,
 } from "../../services/compliance/documents";
 import { scanBody } from "./scan-upload";
+import { SANDBOX_CSP } from "../../http/security";
 
 const idParam = (req: Request, name = "id") => parse(idSchema, req.params[name]);
 
@@ -93,7 +94,7 @@ export function documentsRouter(ctx: AppContext): Router {
       "Content-Type": scan.contentType,
       "Content-Length": String(object.contentLength ?? scan.sizeBytes),
       "X-Content-Type-Options": "nosniff",
-      "Content-Security-Policy": "sandbox",
+      "Content-Security-Policy": SANDBOX_CSP,
       "Cache-Control": "no-store",
       "Repr-Digest": `sha-256=:${Buffer.from(scan.sha256, "hex").toString("base64")}:`,
     });

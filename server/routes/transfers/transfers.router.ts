@@ -19,6 +19,7 @@ import { forbidden, notFound } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { idempotent } from "../../http/idempotency";
 import { parse } from "../../http/validate";
+import { SANDBOX_CSP } from "../../http/security";
 import { transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
 import { factsOfView, presentTransfer } from "../../presenters/transfer.presenter";
 import { readTransferView } from "../../services/transfers/read-view";
@@ -158,6 +159,7 @@ export function transfersRouter(): Router {
         `${req.query.download === "1" ? "attachment" : "inline"}; filename="${name}"`,
       );
       res.setHeader("X-Content-Type-Options", "nosniff");
+      res.setHeader("Content-Security-Policy", SANDBOX_CSP);
       res.send(Buffer.from(bytes));
     });
   }

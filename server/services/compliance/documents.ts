@@ -27,6 +27,7 @@ import {
 import { presentDocument } from "../../presenters/document.presenter";
 import { loadTransferForActor } from "../transfers/load";
 import { evaluateTransfer } from "./evaluation";
+import { scanContentProblem } from "./scan-content";
 
 /** Most scans one document keeps (front and back of a few pages). */
 export const SCANS_PER_DOCUMENT_MAX = 20;
@@ -316,7 +317,8 @@ export function cleanFileName(raw: string | undefined, fallback: string): string
 }
 
 /**
- * Stores a scan: its type is read from the bytes (the declared type is ignored), the key is
+ * Stores a scan: its type is read from the bytes (the declared type is ignored) and the file
+ * must open as that type (a PDF with a page, an image of the size it states), the key is
  * ours, the SHA-256 is kept. The object is written first and the row second; if the row cannot
  * be written the object is deleted again, so a failure leaves neither behind.
  */
@@ -345,6 +347,8 @@ export async function uploadScan({
       "unsupported_file",
       "That file is not a PDF, JPEG or PNG. Scan or save the document in one of those formats.",
     );
+  const problem = await scanContentProblem(body, contentType);
+  if (problem) throw new HttpError(415, "unsupported_file", problem);
   if ((await em.count(DocumentScanSchema, { document: doc.id })) >= SCANS_PER_DOCUMENT_MAX) {
     throw conflict(`A document keeps at most ${SCANS_PER_DOCUMENT_MAX} scans; remove one first.`);
   }
