@@ -5,7 +5,7 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import type { AppBase, AppContext } from "./context";
 import { composeApp, isComposed } from "./composition";
 import { correlationId, errorHandler, notFoundApi } from "./http/errors";
-import { csrfProtection, noStore, requireJsonBody, securityHeaders } from "./http/security";
+import { csrfProtection, noSourceMaps, noStore, requireJsonBody, securityHeaders } from "./http/security";
 import { jsonBody, wellFormedAddress } from "./http/well-formed-text";
 import { configurePassport, sessionMiddleware } from "./auth/session";
 import { healthRouter } from "./routes/health/health.router";
@@ -32,10 +32,10 @@ export function createApp(input: AppContext | AppBase): Express {
   const app = express();
   app.disable("x-powered-by");
   app.locals.ctx = ctx;
-  if (ctx.env.SECURE_COOKIES) app.set("trust proxy", 1);
+  if (ctx.env.TRUST_PROXY_HOPS > 0) app.set("trust proxy", ctx.env.TRUST_PROXY_HOPS);
 
   app.use(correlationId);
-  app.use(securityHeaders());
+  app.use(securityHeaders({ https: ctx.env.SECURE_COOKIES }));
 
   const api = express.Router();
   if (ctx.env.BENCH_ROUTES) api.use(queryCounter(ctx));
@@ -88,6 +88,8 @@ export function createApp(input: AppContext | AppBase): Express {
 
   const dist = path.resolve(ctx.env.CLIENT_DIST);
   if (existsSync(path.join(dist, "index.html"))) {
+    // Source maps are never served, whatever the build left in the folder (D22).
+    app.use(noSourceMaps);
     app.use(express.static(dist, { index: false, maxAge: "1h" }));
     app.get("/{*splat}", (_req, res) => {
       res.setHeader("Cache-Control", "no-cache");

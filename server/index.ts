@@ -29,6 +29,8 @@ async function main() {
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5 });
   pool.on("error", (err) => console.error("[pg] idle client error", err.message));
   await checkDatabaseLogin(pool, env.NODE_ENV === "production");
+  if (env.NODE_ENV === "production" && !env.SECURE_COOKIES)
+    console.warn("[hatchway] warning: production without SECURE_COOKIES: cookies travel without the Secure flag.");
   // The composition root builds everything once; this process then serves it and runs its workers.
   const ctx = composeApp({ env, orm, pool });
   const app = createApp(ctx);

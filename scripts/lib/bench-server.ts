@@ -28,6 +28,8 @@ export async function startBenchServer(
     env: {
       ...process.env,
       NODE_ENV: "production",
+      // Plain HTTP on loopback: the one production run without Secure cookies, said out loud.
+      SECURE_COOKIES: "false",
       PORT: String(port),
       PUBLIC_URL: baseUrl,
       DATABASE_URL: databaseUrl,

@@ -5,8 +5,11 @@ import { HttpError } from "./errors";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
-/** Helmet with the tightened policy of our trust baseline. */
-export function securityHeaders(): RequestHandler {
+/**
+ * Helmet with the tightened policy of our trust baseline. Served over HTTPS, browsers are also
+ * told to use nothing else for a year, subdomains included (HSTS; RFC 6797 §6.1).
+ */
+export function securityHeaders({ https }: { https: boolean }): RequestHandler {
   return helmet({
     contentSecurityPolicy: {
       useDefaults: true,
@@ -25,7 +28,7 @@ export function securityHeaders(): RequestHandler {
       },
     },
     crossOriginEmbedderPolicy: false,
-    strictTransportSecurity: false,
+    strictTransportSecurity: https ? { maxAge: 365 * 24 * 3600, includeSubDomains: true, preload: false } : false,
   });
 }
 
@@ -34,6 +37,21 @@ export function securityHeaders(): RequestHandler {
  * nothing, run nothing, and be a unique origin even when the browser renders it.
  */
 export const SANDBOX_CSP = "default-src 'none'; sandbox";
+
+/** A 404 for any source map (`*.map`, however the path is written), before the static files are looked at. */
+export const noSourceMaps: RequestHandler = (req, res, next) => {
+  let decoded = req.path;
+  try {
+    decoded = decodeURIComponent(req.path);
+  } catch {
+    // A malformed path finds no file either.
+  }
+  if (/\.map$/i.test(decoded.replace(/[/\\.\s]+$/, ""))) {
+    res.status(404).type("text/plain").send("Not found");
+    return;
+  }
+  next();
+};
 
 /** API answers are records: never cached by the browser or a proxy. */
 export const noStore: RequestHandler = (_req, res, next) => {

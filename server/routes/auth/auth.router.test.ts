@@ -1,5 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
+import pg from "pg";
+import { createApp } from "../../app";
+import { composeApp } from "../../composition";
 import { anonymousClient, createTestApp, signIn, type TestApp } from "../../../tests/support/app";
 import { buildUser } from "../../../tests/factories";
 
@@ -204,5 +207,33 @@ describe("session", () => {
       [created, user.id],
     );
     expect((await client.get("/api/auth/me")).status).toBe(401);
+  });
+});
+
+describe("when sessions cannot be stored", () => {
+  it("/api/auth/csrf answers 503 instead of a token that would never work", async () => {
+    // The app's own clients, except that the pool sessions are written through points nowhere.
+    const nowhere = new pg.Pool({ connectionString: "postgres://hatchway_app@127.0.0.1:1/nowhere", max: 1 });
+    nowhere.on("error", () => undefined);
+    const broken = createApp(composeApp({ env: t.env, orm: t.orm, pool: nowhere }));
+    try {
+      const res = await request(broken).get("/api/auth/csrf");
+      expect(res.status).toBe(503);
+      expect(res.body.error.message).toMatch(/session could not be stored/);
+      expect(res.body.csrfToken).toBeUndefined();
+    } finally {
+      await nowhere.end();
+    }
+  });
+});
+
+describe("sign-out", () => {
+  it("tells the browser to clear what the session left behind", async () => {
+    const user = await buildUser(em());
+    const client = await signIn(t.app, user.email);
+    const res = await client.post("/api/auth/logout");
+    expect(res.status).toBe(204);
+    // W3C Clear Site Data §3.1: quoted, comma-separated types [published].
+    expect(res.headers["clear-site-data"]).toBe('"cache", "cookies", "storage"');
   });
 });
