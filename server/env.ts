@@ -49,8 +49,14 @@ const fields = z.object({
   WORKERS: bool.default(true),
   /** Mounts /api/__bench routes (the bare SELECT 1 baseline); only the benchmark sets it. */
   BENCH_ROUTES: bool.default(false),
-  LOGIN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
+  /** Sign-in throttling (server/auth/throttle.ts, D22): failures on one account from anywhere before it is locked. */
+  LOGIN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(20),
+  /** Failures on one account from one address before that address may not try it. */
+  LOGIN_MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS: z.coerce.number().int().min(1).default(5),
+  /** Failures from one address in an hour, across accounts, before each further one slows it down. */
   LOGIN_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).default(30),
+  /** The longest an address is made to wait between attempts once it is being slowed. */
+  LOGIN_ADDRESS_DELAY_MAX_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
   LOGIN_BLOCK_MINUTES: z.coerce.number().int().min(1).default(15),
 });
 

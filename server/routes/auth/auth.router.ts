@@ -67,7 +67,7 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
       await throttle.recordFailure(key, ip);
       throw invalidCredentials();
     }
-    await throttle.recordSuccess(key);
+    await throttle.recordSuccess(key, ip);
     await logIn(req, user);
     req.session.createdAt = Date.now();
     req.session.lastSeenAt = Date.now();
