@@ -20,7 +20,7 @@ import { currentUser, requireUser } from "../../http/guards";
 import { idempotent } from "../../http/idempotency";
 import { parse } from "../../http/validate";
 import { SANDBOX_CSP } from "../../http/security";
-import { transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
+import { mayCheckIn, transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
 import { factsOfView, presentTransfer } from "../../presenters/transfer.presenter";
 import { readTransferView } from "../../services/transfers/read-view";
 import { exportCustodyLog, readCustodyLog } from "../../services/transfers/custody";
@@ -106,8 +106,10 @@ export function transfersRouter(): Router {
 
   router.post("/:id/handoffs", async (req, res) => {
     const id = idParam(req);
-    // Existence and access first: a stranger learns nothing from the idempotency answers.
-    await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    // Existence and access first: a stranger learns nothing from the idempotency answers, and
+    // a role that never records handoffs is refused before its body or the state is looked at.
+    const { role } = await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    if (role === "admin") throw forbidden("Administrators can read transfers but not record handoffs.");
     const input = parse(handoffInputSchema, req.body);
     await idempotent(req, res, `handoff:${id}`, async () => {
       await recordHandoff({
@@ -124,7 +126,8 @@ export function transfersRouter(): Router {
 
   router.post("/:id/check-in", async (req, res) => {
     const id = idParam(req);
-    await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    const { role } = await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    if (!mayCheckIn(role)) throw forbidden("Only a member of the receiving organisation can check the animals in.");
     const input = parse(checkInInputSchema, req.body);
     await idempotent(req, res, `check-in:${id}`, async () => {
       await checkInTransfer({

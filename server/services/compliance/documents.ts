@@ -22,12 +22,15 @@ import {
   canHoldDocuments,
   canReadTransferDocuments,
   isHolder,
+  mayAttachDocuments,
   type DocumentViewer,
 } from "../../policies/document.policy";
 import { presentDocument } from "../../presenters/document.presenter";
 import { loadTransferForActor } from "../transfers/load";
 import { evaluateTransfer } from "./evaluation";
 import { scanContentProblem } from "./scan-content";
+
+const ONLY_PARTIES_ATTACH = "Only the sender and the receiver attach documents to a transfer.";
 
 /** Most scans one document keeps (front and back of a few pages). */
 export const SCANS_PER_DOCUMENT_MAX = 20;
@@ -255,6 +258,7 @@ export async function attachDocument({
   documentId: string;
 }) {
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
+  if (!mayAttachDocuments(role)) throw forbidden(ONLY_PARTIES_ATTACH);
   const doc = await em.findOne(PermitDocumentSchema, { id: documentId });
   if (!doc || !isHolder(actor, doc.organization.id)) throw notFound("That document");
   if (!canAttachDocuments(role, transfer.status as TransferStatus))
@@ -285,6 +289,7 @@ export async function detachDocument({
   documentId: string;
 }) {
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
+  if (!mayAttachDocuments(role)) throw forbidden(ONLY_PARTIES_ATTACH);
   const link = await em.findOne(
     TransferDocumentSchema,
     { transfer: transfer.id, document: documentId },
