@@ -11,14 +11,13 @@ import {
   type MessageDto,
   type TransferChangeDto,
 } from "@shared/schemas/transfer";
-import { idSchema } from "@shared/schemas/common";
 import type { Actor } from "../../auth/actor";
 import { MessageSchema, TransferChangeSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { forbidden, notFound } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { idempotent } from "../../http/idempotency";
-import { parse } from "../../http/validate";
+import { parse, pathId } from "../../http/validate";
 import { SANDBOX_CSP } from "../../http/security";
 import { mayCheckIn, transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
 import { factsOfView, presentTransfer } from "../../presenters/transfer.presenter";
@@ -49,7 +48,7 @@ export async function presentForActor(req: Request, transferId: string) {
   return presentTransfer(view, role, transferAbilities(actor, role, facts));
 }
 
-const idParam = (req: Request) => parse(idSchema, req.params.id);
+const idParam = (req: Request) => pathId(req, "id", "transfer");
 
 export function transfersRouter(): Router {
   const router = Router();
