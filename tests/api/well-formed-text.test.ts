@@ -31,13 +31,15 @@ const organization = (name: string) =>
 
 /** Posts raw bytes as a new organisation, with the given Content-Type. */
 function postBytes(body: Buffer | string, contentType = "application/json") {
-  return admin.agent
-    .post("/api/organizations")
-    .set("X-CSRF-Token", admin.csrf)
-    .set("Content-Type", contentType)
-    // As bytes: superagent would otherwise serialise a Buffer given with a JSON type as JSON.
-    .serialize((bytes: Buffer) => bytes as unknown as string)
-    .send(Buffer.isBuffer(body) ? body : Buffer.from(body, "utf8"));
+  return (
+    admin.agent
+      .post("/api/organizations")
+      .set("X-CSRF-Token", admin.csrf)
+      .set("Content-Type", contentType)
+      // As bytes: superagent would otherwise serialise a Buffer given with a JSON type as JSON.
+      .serialize((bytes: Buffer) => bytes as unknown as string)
+      .send(Buffer.isBuffer(body) ? body : Buffer.from(body, "utf8"))
+  );
 }
 
 const organizations = async () => Number((await t.ctx.pool.query("SELECT count(*) FROM organization")).rows[0].count);
