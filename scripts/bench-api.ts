@@ -87,9 +87,9 @@ async function main() {
   announceRuntime("bench");
   let detailId = "";
   const server = await startBenchServer({
-    beforeStart: async (databaseUrl, baseUrl) => {
+    beforeStart: async (ownerUrl, baseUrl) => {
       process.stdout.write("[bench] seeding a 50-animal transfer and 100,000 list rows…\n");
-      ({ detailId } = await seedBenchData(databaseUrl, baseUrl));
+      ({ detailId } = await seedBenchData(ownerUrl, baseUrl));
     },
   });
   try {

@@ -47,8 +47,8 @@ async function main() {
   try {
     cluster = await startCluster("dev", PG_PORT);
     await ensureDatabase(cluster, "hatchway");
-    const databaseUrl = cluster.url("hatchway");
-    const { seeded } = await prepareDatabase(databaseUrl, { seed: true, publicUrl: PUBLIC_URL });
+    // Migrations and demo data as the owner role; the server as the app role, which owns nothing (D18).
+    const { seeded } = await prepareDatabase(cluster.url("hatchway", "owner"), { seed: true, publicUrl: PUBLIC_URL });
     step(seeded ? "database migrated and demo scenario seeded" : "database migrated (existing data kept)");
 
     step("building the client…");
@@ -73,7 +73,7 @@ async function main() {
       HOST: "127.0.0.1",
       PORT: String(PORT),
       PUBLIC_URL,
-      DATABASE_URL: databaseUrl,
+      DATABASE_URL: cluster.url("hatchway", "app"),
       SESSION_SECRET: localSecret("session"),
       CLIENT_DIST: path.join(PROJECT_ROOT, "dist"),
     };

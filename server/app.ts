@@ -3,7 +3,8 @@ import type { EntityManager } from "@mikro-orm/postgresql";
 import type { AppBase, AppContext } from "./context";
 import { composeApp, isComposed } from "./composition";
 import { correlationId, errorHandler, notFoundApi } from "./http/errors";
-import { csrfProtection, noStore, rejectNul, requireJsonBody, securityHeaders } from "./http/security";
+import { csrfProtection, noSourceMaps, noStore, requireJsonBody, securityHeaders } from "./http/security";
+import { jsonBody, wellFormedAddress } from "./http/well-formed-text";
 import { configurePassport, sessionMiddleware } from "./auth/session";
 import { healthRouter } from "./routes/health/health.router";
 import { authRouter } from "./routes/auth/auth.router";
@@ -30,14 +31,15 @@ export function createApp(input: AppContext | AppBase): Express {
   const app = express();
   app.disable("x-powered-by");
   app.locals.ctx = ctx;
-  if (ctx.env.SECURE_COOKIES) app.set("trust proxy", 1);
+  if (ctx.env.TRUST_PROXY_HOPS > 0) app.set("trust proxy", ctx.env.TRUST_PROXY_HOPS);
 
   app.use(correlationId);
-  app.use(securityHeaders());
+  app.use(securityHeaders({ https: ctx.env.SECURE_COOKIES }));
 
   const api = express.Router();
   if (ctx.env.BENCH_ROUTES) api.use(queryCounter(ctx));
   api.use(noStore);
+  api.use(wellFormedAddress);
   api.use("/health", healthRouter(ctx));
   if (ctx.env.BENCH_ROUTES) {
     // The benchmark's ceiling: Express plus one pg round trip, no session, no ORM.
@@ -46,12 +48,11 @@ export function createApp(input: AppContext | AppBase): Express {
       res.json(rows[0]);
     });
   }
-  const json = express.json({ limit: "1mb", type: "application/json" });
-  const jsonBody = requireJsonBody();
+  const json = jsonBody();
+  const onlyJson = requireJsonBody();
   const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
-  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : jsonBody)(req, res, next));
-  api.use((req, res, next) => (req.method === "GET" || req.method === "HEAD" ? next() : json(req, res, next)));
-  api.use(rejectNul);
+  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : onlyJson)(req, res, next));
+  api.use(json);
   // One EntityManager per request (MikroORM's request context), forked on first use only; the
   // getter lives on this app's request prototype, so a request that needs no ORM pays nothing.
   Object.defineProperty(app.request, "em", {
@@ -85,7 +86,8 @@ export function createApp(input: AppContext | AppBase): Express {
   app.use("/api", api);
 
   const client = clientFiles(ctx.env.CLIENT_DIST);
-  if (client) app.use(client);
+  // Source maps are never served, however the path is spelled (D22).
+  if (client) app.use(noSourceMaps, client);
 
   app.use(errorHandler);
   return app;

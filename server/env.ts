@@ -6,14 +6,21 @@ const bool = z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" |
  * The environment, parsed once at boot. A bad value stops the process with a message
  * naming the variable, instead of failing later in a request.
  */
-export const envSchema = z.object({
+const fields = z.object({
   NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
   HOST: z.string().default("127.0.0.1"),
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   PUBLIC_URL: z.url().default("http://127.0.0.1:3000"),
   DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, "must be a postgres:// URL"),
   SESSION_SECRET: z.string().min(32, "must be at least 32 characters"),
-  SECURE_COOKIES: bool.default(false),
+  /**
+   * Served over HTTPS (behind a proxy that terminates TLS): cookies are Secure with the
+   * `__Host-` prefix and HSTS is sent. On by default in production; a production run on plain
+   * HTTP (the benchmark on loopback) must say `false` out loud.
+   */
+  SECURE_COOKIES: bool.optional(),
+  /** Proxies in front of the server whose X-Forwarded-* headers are believed; 1 when SECURE_COOKIES, else 0. */
+  TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).optional(),
   SESSION_IDLE_MINUTES: z.coerce
     .number()
     .int()
@@ -42,12 +49,28 @@ export const envSchema = z.object({
   WORKERS: bool.default(true),
   /** Mounts /api/__bench routes (the bare SELECT 1 baseline); only the benchmark sets it. */
   BENCH_ROUTES: bool.default(false),
-  LOGIN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
+  /** Sign-in throttling (server/auth/throttle.ts, D22): failures on one account from anywhere before it is locked. */
+  LOGIN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(20),
+  /** Failures on one account from one address before that address may not try it. */
+  LOGIN_MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS: z.coerce.number().int().min(1).default(5),
+  /** Failures from one address in an hour, across accounts, before each further one slows it down. */
   LOGIN_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).default(30),
+  /** The longest an address is made to wait between attempts once it is being slowed. */
+  LOGIN_ADDRESS_DELAY_MAX_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
   LOGIN_BLOCK_MINUTES: z.coerce.number().int().min(1).default(15),
 });
 
-export type Env = z.infer<typeof envSchema>;
+export const envSchema = fields
+  .transform((env) => {
+    const secure = env.SECURE_COOKIES ?? env.NODE_ENV === "production";
+    return { ...env, SECURE_COOKIES: secure, TRUST_PROXY_HOPS: env.TRUST_PROXY_HOPS ?? (secure ? 1 : 0) };
+  })
+  .refine((env) => !env.SECURE_COOKIES || env.PUBLIC_URL.startsWith("https://"), {
+    path: ["PUBLIC_URL"],
+    message: "must be an https:// address when cookies are Secure (SECURE_COOKIES, on by default in production)",
+  });
+
+export type Env = z.output<typeof envSchema>;
 
 export function parseEnv(source: Record<string, string | undefined> = process.env): Env {
   const result = envSchema.safeParse(source);

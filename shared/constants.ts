@@ -249,6 +249,23 @@ export const ALERT_KINDS = [
 ] as const;
 export type AlertKind = (typeof ALERT_KINDS)[number];
 
+/**
+ * How a custody chain can be found broken (shared/custody/hash-chain.ts): an entry missing from
+ * the middle, out of order, changed, or not pointing at the one before; entries missing from
+ * the end or added past the chain's head; the head itself missing or not matching.
+ */
+export const CHAIN_PROBLEMS = [
+  "missing",
+  "out_of_order",
+  "changed",
+  "unlinked",
+  "missing_tail",
+  "beyond_head",
+  "head_missing",
+  "head_mismatch",
+] as const;
+export type ChainProblem = (typeof CHAIN_PROBLEMS)[number];
+
 /** How an animal accepted into the register arrived. */
 export const REGISTER_CONDITIONS = ["well", "problem"] as const;
 export type RegisterCondition = (typeof REGISTER_CONDITIONS)[number];

@@ -19,6 +19,7 @@ import { gatesForLoadedData } from "../../server/composition";
 import { createLinks } from "../../server/mail/links";
 
 export async function seedBenchData(
+  /** The owner role's URL (D18): the bulk insert ends with ANALYZE, which only the owner may run. */
   databaseUrl: string,
   publicUrl: string,
   bulkTransfers = 100_000,

@@ -5,10 +5,12 @@ import { prepareDatabase } from "./prepare-db";
 
 export type BenchServer = { baseUrl: string; databaseUrl: string; cluster: Cluster; stop(): Promise<void> };
 
+/** The server connects as the app role (D18); the data is loaded as the owner, like the migrations. */
+
 export async function startBenchServer(
   options: {
     port?: number;
-    beforeStart?: (databaseUrl: string, baseUrl: string) => Promise<void>;
+    beforeStart?: (ownerUrl: string, baseUrl: string) => Promise<void>;
     /** More environment for the server, e.g. CLIENT_DIST for a built client. */
     env?: Record<string, string>;
   } = {},
@@ -17,11 +19,12 @@ export async function startBenchServer(
   const db = "hatchway_bench";
   await dropDatabase(cluster, db);
   await ensureDatabase(cluster, db);
-  const databaseUrl = cluster.url(db);
+  const ownerUrl = cluster.url(db, "owner");
+  const databaseUrl = cluster.url(db, "app");
   const port = options.port ?? Number(process.env.PORT ?? 3901);
   const baseUrl = `http://127.0.0.1:${port}`;
-  await prepareDatabase(databaseUrl, { seed: true, publicUrl: baseUrl });
-  await options.beforeStart?.(databaseUrl, baseUrl);
+  await prepareDatabase(ownerUrl, { seed: true, publicUrl: baseUrl });
+  await options.beforeStart?.(ownerUrl, baseUrl);
 
   // BENCH_CPU_PROF=<folder> writes a V8 CPU profile of the server when it stops (for chrome://inspect or speedscope).
   const profiling = process.env.BENCH_CPU_PROF ? ["--cpu-prof", "--cpu-prof-dir", process.env.BENCH_CPU_PROF] : [];
@@ -30,6 +33,8 @@ export async function startBenchServer(
     env: {
       ...process.env,
       NODE_ENV: "production",
+      // Plain HTTP on loopback: the one production run without Secure cookies, said out loud.
+      SECURE_COOKIES: "false",
       PORT: String(port),
       PUBLIC_URL: baseUrl,
       DATABASE_URL: databaseUrl,

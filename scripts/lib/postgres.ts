@@ -8,18 +8,31 @@ import { createHash } from "node:crypto";
 import { accessSync, constants, existsSync, mkdirSync, readdirSync, chownSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import pg from "pg";
+import { APP_ROLE, OWNER_ROLE, ROLE_ATTRIBUTES } from "../../server/db/roles";
 
 export const PROJECT_ROOT = path.resolve(import.meta.dirname, "../..");
 const isRoot = process.getuid?.() === 0;
+/** The cluster's superuser (created by initdb): sets up roles and databases, nothing else. */
 const DB_USER = "hatchway";
+
+/**
+ * Who connects (D18): `admin` the cluster's superuser (roles, databases, tests that tamper on
+ * purpose), `owner` the role that owns the schema and runs the migrations and seeders, `app`
+ * the server's login, which owns nothing.
+ */
+export type DatabaseRole = "admin" | "owner" | "app";
+const ROLE_NAMES: Record<DatabaseRole, string> = { admin: DB_USER, owner: OWNER_ROLE, app: APP_ROLE };
 
 export type Cluster = {
   name: string;
   port: number;
   dataDir: string;
-  url: (db: string) => string;
+  url: (db: string, role: DatabaseRole) => string;
   startedByUs: boolean;
 };
+
+const urlFor = (port: number) => (db: string, role: DatabaseRole) =>
+  `postgres://${ROLE_NAMES[role]}@127.0.0.1:${port}/${db}`;
 
 function log(message: string) {
   process.stdout.write(`[postgres] ${message}\n`);
@@ -107,7 +120,7 @@ export async function startCluster(name: string, port: number): Promise<Cluster>
     name,
     port,
     dataDir,
-    url: (db) => `postgres://${DB_USER}@127.0.0.1:${port}/${db}`,
+    url: urlFor(port),
     startedByUs: false,
   };
 
@@ -142,6 +155,7 @@ export async function startCluster(name: string, port: number): Promise<Cluster>
         `Port ${port} already has a PostgreSQL server that is not Hatchway's "${name}" cluster. Stop it or free the port.`,
       );
     }
+    await ensureRoles(cluster);
     return cluster;
   }
   const logFile = path.join(dataDir, "server.log");
@@ -150,6 +164,7 @@ export async function startCluster(name: string, port: number): Promise<Cluster>
   if (!isReady(bin, port)) throw new Error(`PostgreSQL did not become ready on port ${port}; see ${logFile}`);
   cluster.startedByUs = true;
   log(`cluster "${name}" listening on 127.0.0.1:${port}`);
+  await ensureRoles(cluster);
   return cluster;
 }
 
@@ -159,8 +174,8 @@ export function stopCluster(cluster: Cluster): void {
   run(bin, "pg_ctl", ["-D", cluster.dataDir, "-m", "fast", "-w", "stop"], { allowFail: true });
 }
 
-async function withAdmin<T>(cluster: Cluster, fn: (client: pg.Client) => Promise<T>): Promise<T> {
-  const client = new pg.Client({ connectionString: cluster.url("postgres") });
+async function withAdmin<T>(cluster: Cluster, fn: (client: pg.Client) => Promise<T>, db = "postgres"): Promise<T> {
+  const client = new pg.Client({ connectionString: cluster.url(db, "admin") });
   await client.connect();
   try {
     return await fn(client);
@@ -174,18 +189,89 @@ const ident = (name: string) => {
   return `"${name}"`;
 };
 
-export async function ensureDatabase(cluster: Cluster, db: string): Promise<void> {
+/**
+ * The owner and app logins (D18), created once per cluster and held to no attribute beyond
+ * logging in. Safe when two processes start at once: a role the other one created is fine.
+ */
+export async function ensureRoles(cluster: Cluster): Promise<void> {
   await withAdmin(cluster, async (client) => {
-    const { rowCount } = await client.query("SELECT 1 FROM pg_database WHERE datname = $1", [db]);
-    if (!rowCount) await client.query(`CREATE DATABASE ${ident(db)}`);
+    for (const role of [OWNER_ROLE, APP_ROLE]) {
+      await client.query(`DO $$ BEGIN
+          CREATE ROLE ${ident(role)} ${ROLE_ATTRIBUTES};
+        EXCEPTION WHEN duplicate_object OR unique_violation THEN NULL;
+        END $$`);
+      await client.query(`ALTER ROLE ${ident(role)} ${ROLE_ATTRIBUTES}`);
+    }
+    // The app inherits nothing from any role it might be made a member of by mistake.
+    await client.query(`ALTER ROLE ${ident(APP_ROLE)} NOINHERIT`);
   });
 }
 
-/** Drops and re-creates `db` as a copy of `template` (fast: a file copy inside the server). */
+/**
+ * A database belongs to the owner role; the app may connect to it and nothing else at the
+ * database level (no CREATE, no TEMPORARY). Also adopts a database made before the roles
+ * existed: its tables and functions pass from the superuser to the owner.
+ */
+async function secureDatabase(cluster: Cluster, db: string): Promise<void> {
+  await withAdmin(cluster, async (client) => {
+    await client.query(`ALTER DATABASE ${ident(db)} OWNER TO ${ident(OWNER_ROLE)}`);
+    await client.query(`REVOKE ALL ON DATABASE ${ident(db)} FROM PUBLIC`);
+    await client.query(`GRANT CONNECT ON DATABASE ${ident(db)} TO ${ident(APP_ROLE)}`);
+  });
+  await withAdmin(
+    cluster,
+    async (client) => {
+      await client.query(`DO $$
+        DECLARE object record;
+        BEGIN
+          FOR object IN
+            SELECT c.oid::regclass AS name, c.relkind FROM pg_class c
+              JOIN pg_namespace n ON n.oid = c.relnamespace
+             WHERE n.nspname = 'public' AND c.relkind IN ('r', 'p', 'v', 'm', 'f', 'S')
+               AND c.relowner <> '${OWNER_ROLE}'::regrole
+               -- extension members and sequences that belong to a column follow their owner
+               AND NOT EXISTS (SELECT 1 FROM pg_depend d WHERE d.classid = 'pg_class'::regclass
+                                  AND d.objid = c.oid AND d.deptype IN ('e', 'a', 'i'))
+          LOOP
+            EXECUTE format('ALTER %s %s OWNER TO ${OWNER_ROLE}',
+              CASE object.relkind WHEN 'S' THEN 'SEQUENCE' WHEN 'v' THEN 'VIEW'
+                WHEN 'm' THEN 'MATERIALIZED VIEW' WHEN 'f' THEN 'FOREIGN TABLE' ELSE 'TABLE' END,
+              object.name);
+          END LOOP;
+          FOR object IN
+            SELECT p.oid::regprocedure AS name FROM pg_proc p
+              JOIN pg_namespace n ON n.oid = p.pronamespace
+             WHERE n.nspname = 'public' AND p.proowner <> '${OWNER_ROLE}'::regrole
+               AND NOT EXISTS (SELECT 1 FROM pg_depend d WHERE d.classid = 'pg_proc'::regclass
+                                  AND d.objid = p.oid AND d.deptype = 'e')
+          LOOP
+            EXECUTE format('ALTER ROUTINE %s OWNER TO ${OWNER_ROLE}', object.name);
+          END LOOP;
+        END $$`);
+    },
+    db,
+  );
+}
+
+export async function ensureDatabase(cluster: Cluster, db: string): Promise<void> {
+  await withAdmin(cluster, async (client) => {
+    const { rowCount } = await client.query("SELECT 1 FROM pg_database WHERE datname = $1", [db]);
+    if (!rowCount) await client.query(`CREATE DATABASE ${ident(db)} OWNER ${ident(OWNER_ROLE)}`);
+  });
+  await secureDatabase(cluster, db);
+}
+
+/**
+ * Drops and re-creates `db` as a copy of `template` (fast: a file copy inside the server). The
+ * copy keeps the template's objects with their owners and grants; the database-level owner and
+ * privileges are set again, since they are not part of the copy.
+ */
 export async function recreateFromTemplate(cluster: Cluster, db: string, template: string): Promise<void> {
   await withAdmin(cluster, async (client) => {
     await client.query(`DROP DATABASE IF EXISTS ${ident(db)} WITH (FORCE)`);
-    await client.query(`CREATE DATABASE ${ident(db)} TEMPLATE ${ident(template)}`);
+    await client.query(`CREATE DATABASE ${ident(db)} TEMPLATE ${ident(template)} OWNER ${ident(OWNER_ROLE)}`);
+    await client.query(`REVOKE ALL ON DATABASE ${ident(db)} FROM PUBLIC`);
+    await client.query(`GRANT CONNECT ON DATABASE ${ident(db)} TO ${ident(APP_ROLE)}`);
   });
 }
 
@@ -197,5 +283,5 @@ export async function dropDatabase(cluster: Cluster, db: string): Promise<void> 
 
 /** A handle on a cluster some other process started (test workers use the global setup's). */
 export function clusterOnPort(name: string, port: number): Cluster {
-  return { name, port, dataDir: "", url: (db) => `postgres://${DB_USER}@127.0.0.1:${port}/${db}`, startedByUs: false };
+  return { name, port, dataDir: "", url: urlFor(port), startedByUs: false };
 }

@@ -5,18 +5,18 @@ import { seedReferenceData } from "../../server/db/seeders/reference.seeder";
 import { createLinks } from "../../server/mail/links";
 
 /**
- * Applies the committed migrations, loads the reference data (species catalogue and the
+ * As the owner role (`ownerUrl`, D18): applies the committed migrations, loads the reference data (species catalogue and the
  * like) when missing, and seeds the demo scenario when asked and the database has no users.
  * `publicUrl` is the address of the app that will serve it: the demo's e-mails link there.
  */
 export async function prepareDatabase(
-  databaseUrl: string,
+  ownerUrl: string,
   options: { seed: false } | { seed: true; publicUrl: string },
 ): Promise<{ seeded: boolean }> {
-  const orm = await initORM(databaseUrl, { poolMax: 2 });
+  const orm = await initORM(ownerUrl, { poolMax: 2 });
   try {
     await migrate(orm);
-    await seedReferenceData(databaseUrl);
+    await seedReferenceData(ownerUrl);
     if (!options.seed) return { seeded: false };
     const users = await orm.em.fork().count(UserSchema, {});
     if (users > 0) return { seeded: false };

@@ -17,8 +17,9 @@ export function ormConfig(databaseUrl: string, options: { debug?: boolean; poolM
     // No schema discovery at run time: the committed migrations are the schema.
     discovery: { warnWhenNoEntities: true },
     pool: { min: 0, max: options.poolMax ?? 10 },
-    // Tables owned by libraries (sessions, sign-in throttling), created by our first migration.
-    schemaGenerator: { skipTables: ["session", "auth_throttle"] },
+    // Tables owned by libraries (sessions, sign-in throttling), created by our first migration,
+    // and the custody chain's head, which only a trigger writes (D19).
+    schemaGenerator: { skipTables: ["session", "auth_throttle", "custody_head"] },
     migrations: {
       path: here("./migrations"),
       pathTs: here("./migrations"),

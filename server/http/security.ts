@@ -2,13 +2,14 @@ import { randomBytes, timingSafeEqual } from "node:crypto";
 import type { RequestHandler } from "express";
 import helmet from "helmet";
 import { HttpError } from "./errors";
-import { NO_CONTROL_CHARACTERS } from "@shared/schemas/common";
-import { sentence } from "@shared/validation/messages";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
-/** Helmet with the tightened policy of our trust baseline. */
-export function securityHeaders(): RequestHandler {
+/**
+ * Helmet with the tightened policy of our trust baseline. Served over HTTPS, browsers are also
+ * told to use nothing else for a year, subdomains included (HSTS; RFC 6797 §6.1).
+ */
+export function securityHeaders({ https }: { https: boolean }): RequestHandler {
   return helmet({
     contentSecurityPolicy: {
       useDefaults: true,
@@ -27,9 +28,30 @@ export function securityHeaders(): RequestHandler {
       },
     },
     crossOriginEmbedderPolicy: false,
-    strictTransportSecurity: false,
+    strictTransportSecurity: https ? { maxAge: 365 * 24 * 3600, includeSubDomains: true, preload: false } : false,
   });
 }
+
+/**
+ * For files we serve that are not pages of ours (scans, the manifest and labels PDFs): load
+ * nothing, run nothing, and be a unique origin even when the browser renders it.
+ */
+export const SANDBOX_CSP = "default-src 'none'; sandbox";
+
+/** A 404 for any source map (`*.map`, however the path is written), before the static files are looked at. */
+export const noSourceMaps: RequestHandler = (req, res, next) => {
+  let decoded = req.path;
+  try {
+    decoded = decodeURIComponent(req.path);
+  } catch {
+    // A malformed path finds no file either.
+  }
+  if (/\.map$/i.test(decoded.replace(/[/\\.\s]+$/, ""))) {
+    res.status(404).type("text/plain").send("Not found");
+    return;
+  }
+  next();
+};
 
 /** API answers are records: never cached by the browser or a proxy. */
 export const noStore: RequestHandler = (_req, res, next) => {
@@ -50,47 +72,6 @@ export function requireJsonBody(allowed: string[] = []): RequestHandler {
     if (req.is("application/json") || allowed.some((type) => req.is(type))) return next();
     next(new HttpError(415, "unsupported_media_type", "Send the request body as application/json."));
   };
-}
-
-/** Rejects NUL characters anywhere in a parsed JSON body, keys included, naming the field. */
-export const rejectNul: RequestHandler = (req, _res, next) => {
-  const found = findNul(req.body, "");
-  if (found !== null)
-    return next(
-      new HttpError(400, "invalid", nulMessage(found), {
-        field: found || "body",
-      }),
-    );
-  next();
-};
-
-/** "Box 1 label: remove the invisible control characters." — or about a key, without echoing it. */
-function nulMessage(found: string): string {
-  const parts = found ? found.split(".").map((part) => (/^\d+$/.test(part) ? Number(part) : part)) : [];
-  const badKey = parts.findIndex((part) => typeof part === "string" && part.includes("\u0000"));
-  if (badKey >= 0) return sentence(parts.slice(0, badKey), `${NO_CONTROL_CHARACTERS} from the name of a field`);
-  return sentence(parts, NO_CONTROL_CHARACTERS);
-}
-
-function findNul(value: unknown, path: string, depth = 0): string | null {
-  if (depth > 64) return path;
-  if (typeof value === "string") return value.includes("\u0000") ? path : null;
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) {
-      const hit = findNul(value[i], `${path}${path ? "." : ""}${i}`, depth + 1);
-      if (hit !== null) return hit;
-    }
-    return null;
-  }
-  if (value && typeof value === "object") {
-    for (const [k, v] of Object.entries(value)) {
-      const p = `${path}${path ? "." : ""}${k}`;
-      if (k.includes("\u0000")) return p;
-      const hit = findNul(v, p, depth + 1);
-      if (hit !== null) return hit;
-    }
-  }
-  return null;
 }
 
 declare module "express-session" {

@@ -25,9 +25,14 @@ export function documentAbilities(viewer: DocumentViewer): DocumentAbilitiesDto 
   return { edit: viewer === "holder", upload: viewer === "holder", readScans: viewer !== "courier" };
 }
 
+/** Only the sender and the receiver ever attach (or take off) documents; checked before the state. */
+export function mayAttachDocuments(role: ViewerRole): boolean {
+  return role === "sender" || role === "receiver";
+}
+
 /** A party attaches (or takes off) its own organisation's documents while the transfer can still be edited. */
 export function canAttachDocuments(role: ViewerRole, status: TransferStatus): boolean {
-  return (role === "sender" || role === "receiver") && EDITABLE.includes(status);
+  return mayAttachDocuments(role) && EDITABLE.includes(status);
 }
 
 /** The documents a transfer uses are for its sender, receiver and couriers; admins read the verdict only. */

@@ -1,6 +1,13 @@
 import { describe, expect, it } from "vitest";
 import type { Actor } from "../auth/actor";
-import { handoffAllowed, transferAbilities, viewerRoleFor, type TransferFacts } from "./transfer.policy";
+import {
+  handoffAllowed,
+  mayRequestTransition,
+  takesPartInHandoff,
+  transferAbilities,
+  viewerRoleFor,
+  type TransferFacts,
+} from "./transfer.policy";
 
 const org = (id: string) => ({ id, name: id, kind: "breeder" as const });
 const member = (id: string, orgId: string): Actor => ({
@@ -83,5 +90,33 @@ describe("transfer policy", () => {
     expect(transferAbilities(courier("c2"), "courier", facts({ status: "delivered", handoffsDone: 3 })).checkIn).toBe(
       false,
     );
+  });
+});
+
+// Denials before state checks: what a role may ever do does not depend on the state (SECURITY.md, Access).
+describe("what a role may ever do", () => {
+  it("only the sender sends and cancels, only the receiver confirms, couriers and admins move nothing", () => {
+    for (const to of ["awaiting_receiver", "cancelled"] as const) {
+      expect(mayRequestTransition("sender", to)).toBe(true);
+      expect(mayRequestTransition("receiver", to)).toBe(false);
+    }
+    expect(mayRequestTransition("receiver", "ready")).toBe(true);
+    expect(mayRequestTransition("sender", "ready")).toBe(false);
+    for (const to of ["draft", "ready", "closed", "cancelled"] as const) {
+      expect(mayRequestTransition("courier", to)).toBe(false);
+      expect(mayRequestTransition("admin", to)).toBe(false);
+    }
+  });
+  it("each handoff has its two parties, whatever has been recorded", () => {
+    const t = facts({ handoffsDone: 2, status: "in_transit" });
+    expect(takesPartInHandoff(member("s", "S"), "sender", t, 0)).toBe(true);
+    expect(takesPartInHandoff(member("s", "S"), "sender", t, 1)).toBe(false);
+    expect(takesPartInHandoff(courier("c1"), "courier", t, 0)).toBe(true);
+    expect(takesPartInHandoff(courier("c1"), "courier", t, 1)).toBe(true);
+    expect(takesPartInHandoff(courier("c1"), "courier", t, 2)).toBe(false);
+    expect(takesPartInHandoff(courier("c2"), "courier", t, 0)).toBe(false);
+    expect(takesPartInHandoff(member("r", "R"), "receiver", t, 2)).toBe(true);
+    expect(takesPartInHandoff(member("r", "R"), "receiver", facts({ legCourierIds: [] }), 0)).toBe(false);
+    expect(takesPartInHandoff(admin, "admin", t, 0)).toBe(false);
   });
 });

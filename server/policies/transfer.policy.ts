@@ -30,6 +30,38 @@ export function viewerRoleFor(
 }
 
 /**
+ * Whether this role may ever ask for a step to `to`, in any state: only the sender and the
+ * receiver move a transfer, the sender alone sends it or cancels it, the receiver alone
+ * confirms it. Checked before the state, so a role that may not act learns nothing about the
+ * state from a 409 (SECURITY.md, Access).
+ */
+export function mayRequestTransition(role: ViewerRole, to: TransferStatus): boolean {
+  if (role !== "sender" && role !== "receiver") return false;
+  if (to === "awaiting_receiver" || to === "cancelled") return role === "sender";
+  if (to === "ready") return role === "receiver";
+  return true;
+}
+
+/**
+ * Whether the caller takes part in handoff `index` at all, whatever has been recorded: the
+ * sender releases the first, the receiver takes the last, each leg's courier takes one and
+ * releases the next. Checked before the state, like mayRequestTransition.
+ */
+export function takesPartInHandoff(actor: Actor, role: ViewerRole, t: TransferFacts, index: number): boolean {
+  const legs = t.legCourierIds.length;
+  if (role === "sender") return index === 0;
+  if (role === "receiver") return legs > 0 && index === legs;
+  if (role === "courier")
+    return t.legCourierIds.some((id, leg) => id === actor.id && (index === leg || index === leg + 1));
+  return false;
+}
+
+/** Only the receiver ever checks animals in. */
+export function mayCheckIn(role: ViewerRole): boolean {
+  return role === "receiver";
+}
+
+/**
  * The handoff the caller may record now: the next one in order, by the party taking custody
  * or the one releasing it (one leg's receiver is the next leg's releaser). Null otherwise.
  */

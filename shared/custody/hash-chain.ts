@@ -1,5 +1,7 @@
 import { sha256 } from "@noble/hashes/sha256";
 import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils";
+import type { ChainProblem } from "../constants";
+import { chainBreakSentence } from "../words/custody";
 
 /** The `prevHash` of a transfer's first custody entry. */
 export const GENESIS_HASH = "0".repeat(64);
@@ -43,29 +45,81 @@ export function entryHash(prevHash: string, entry: ChainEntry): string {
   return sha256Hex(`${prevHash}\n${canonicalJson(entry)}`);
 }
 
+/** The hashing rule in words, carried in every export so that a reader can recompute it anywhere. */
+export const CHAIN_RULE =
+  'hash = lower-case hex SHA-256 of the UTF-8 bytes of prevHash + "\\n" + the canonical JSON of the entry\'s ' +
+  "{transferId, seq, kind, actorId, actorName, at, payload}; canonical JSON sorts object keys (by UTF-16 code units), " +
+  "omits white space and writes strings and numbers as ECMAScript's JSON.stringify does (RFC 8785). The first " +
+  "entry's prevHash is 64 zeros; each later entry's prevHash is the hash of the entry before it; the head names " +
+  "the last entry's seq and hash.";
+
 export function seal(prevHash: string, entry: ChainEntry): SealedEntry {
   return { ...entry, prevHash, hash: entryHash(prevHash, entry) };
 }
 
-export type ChainCheck = { intact: boolean; brokenAt: number | null; reason: string | null };
+/** The chain's end as recorded apart from the entries (the `custody_head` row, D19). */
+export type ChainHead = { seq: number; hash: string };
+
+/** One place where the chain is not what was written. `seq` is where it breaks, `toSeq` the end of a run. */
+export type ChainBreak = { seq: number; toSeq: number; problem: ChainProblem; message: string };
+
+export type ChainCheck = {
+  intact: boolean;
+  /** The first sequence number at which the log is not what was written, or null. */
+  brokenAt: number | null;
+  /** That first break in a sentence, or null. */
+  reason: string | null;
+  /** Every break found, in order. */
+  breaks: ChainBreak[];
+};
+
+function breakAt(problem: ChainProblem, seq: number, toSeq = seq): ChainBreak {
+  return { seq, toSeq, problem, message: chainBreakSentence(problem, seq, toSeq) };
+}
 
 /**
- * Recomputes the chain from the first entry. Any edited, removed, inserted or re-ordered
- * entry breaks it at that point, and the answer says where and how.
+ * Recomputes the chain from the first entry and compares its end with the head kept apart
+ * from it. An edited, removed, inserted or re-ordered entry breaks it where that happened; so
+ * do entries removed from the end (the head names a later one), entries added with the
+ * safeguards off (past the head), and a replaced last entry (the head names another hash).
+ * `head` null means no head was recorded; the log must then be empty.
  */
-export function verifyChain(entries: readonly SealedEntry[]): ChainCheck {
+export function verifyChain(entries: readonly SealedEntry[], head: ChainHead | null): ChainCheck {
+  const breaks: ChainBreak[] = [];
   let prev = GENESIS_HASH;
-  for (let i = 0; i < entries.length; i++) {
-    const e = entries[i]!;
-    const expectedSeq = i + 1;
-    if (e.seq !== expectedSeq)
-      return { intact: false, brokenAt: e.seq, reason: `entry ${expectedSeq} is missing or out of order` };
-    if (e.prevHash !== prev)
-      return { intact: false, brokenAt: e.seq, reason: `entry ${e.seq} does not point at the entry before it` };
-    const { prevHash: _p, hash, ...body } = e;
-    if (entryHash(prev, body) !== hash)
-      return { intact: false, brokenAt: e.seq, reason: `entry ${e.seq} was changed after it was written` };
+  let expected = 1;
+  let linkKnown = true;
+  let last: SealedEntry | null = null;
+  for (const entry of entries) {
+    if (entry.seq < expected) {
+      breaks.push(breakAt("out_of_order", entry.seq));
+      continue;
+    }
+    if (entry.seq > expected) {
+      breaks.push(breakAt("missing", expected, entry.seq - 1));
+      linkKnown = false;
+    }
+    const { prevHash, hash, ...body } = entry;
+    if (entryHash(prevHash, body) !== hash) breaks.push(breakAt("changed", entry.seq));
+    else if (linkKnown && prevHash !== prev) breaks.push(breakAt("unlinked", entry.seq));
     prev = hash;
+    expected = entry.seq + 1;
+    linkKnown = true;
+    last = entry;
   }
-  return { intact: true, brokenAt: null, reason: null };
+  const lastSeq = last?.seq ?? 0;
+  if (head === null) {
+    if (last) breaks.push(breakAt("head_missing", lastSeq));
+  } else if (head.seq > lastSeq) {
+    breaks.push(breakAt("missing_tail", lastSeq + 1, head.seq));
+  } else if (head.seq < lastSeq) {
+    const atHead = entries.find((entry) => entry.seq === head.seq);
+    if (atHead && atHead.hash !== head.hash) breaks.push(breakAt("head_mismatch", head.seq));
+    breaks.push(breakAt("beyond_head", head.seq + 1, lastSeq));
+  } else if (last && last.hash !== head.hash) {
+    breaks.push(breakAt("head_mismatch", lastSeq));
+  }
+  breaks.sort((a, b) => a.seq - b.seq);
+  const first = breaks[0] ?? null;
+  return { intact: first === null, brokenAt: first?.seq ?? null, reason: first?.message ?? null, breaks };
 }

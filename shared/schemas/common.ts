@@ -1,16 +1,24 @@
 import { LIMITS, US_STATES } from "../constants";
 import { limitsAsShown, type Quantity } from "../units";
+import { isWellFormedText } from "../validation/text";
 import { z } from "../validation/zod";
 
 const NUL = "\u0000";
 /** What a keeper is told about an invisible NUL character pasted into a field. */
 export const NO_CONTROL_CHARACTERS = "remove the invisible control characters";
 
-/** A trimmed text field that refuses NUL characters and caps its length. */
+/**
+ * What a keeper is told about a lone surrogate: half of a UTF-16 pair, which no character is
+ * made of (JSON's `"\ud800"` escape can still write one). The server refuses it in any field.
+ */
+export const BROKEN_CHARACTER = "type it again: it holds a broken character (half of a UTF-16 pair, such as \\ud800)";
+
+/** A trimmed text field that refuses NUL characters and broken characters, and caps its length. */
 export function text(max: number = LIMITS.nameMax) {
   return z
     .string()
     .refine((s) => !s.includes(NUL), { params: { instruction: NO_CONTROL_CHARACTERS } })
+    .refine((s) => isWellFormedText(s), { params: { instruction: BROKEN_CHARACTER } })
     .transform((s) => s.trim())
     .pipe(z.string().max(max));
 }

@@ -35,6 +35,7 @@ import {
   type RegisterCondition,
   type ViewerRole,
 } from "../constants";
+import type { ChainBreak, ChainHead, SealedEntry } from "../custody/hash-chain";
 import { instruction } from "../validation/messages";
 import { z } from "../validation/zod";
 import {
@@ -516,6 +517,27 @@ export type CustodyLogDto = {
   intact: boolean;
   brokenAt: number | null;
   reason: string | null;
+  /** Every break found, in order (the first is `brokenAt` and `reason`). */
+  breaks: ChainBreak[];
+  /** The chain's end as recorded apart from the entries (D19), or null when nothing was recorded. */
+  head: ChainHead | null;
+};
+
+/**
+ * A transfer's custody log to keep and check later without Hatchway
+ * (`GET /api/transfers/:id/custody/export`; scripts/verify-custody-export.mjs checks it).
+ */
+export type CustodyExportDto = {
+  format: "hatchway-custody-export/1";
+  exportedAt: string;
+  transfer: { id: string; number: string };
+  /** How each hash is computed, so anyone can recompute it. */
+  chain: { algorithm: "SHA-256"; genesisHash: string; rule: string };
+  /** Every entry exactly as sealed: the fields the hash covers, then `prevHash` and `hash`. */
+  entries: SealedEntry[];
+  head: ChainHead | null;
+  /** What Hatchway found when it exported. */
+  check: { intact: boolean; brokenAt: number | null; reason: string | null; breaks: ChainBreak[] };
 };
 
 export type TransferChangeDto = {

@@ -12,6 +12,10 @@ import type { z } from "zod";
 import { formatInstantDate } from "../dates";
 import { DEFAULT_UNIT_SYSTEM, formatLimit, type Quantity, type UnitSystem } from "../units";
 import { fieldName } from "../words/fields";
+import { excerpt } from "./text";
+
+/** Unknown keys named in one message; the rest are counted. */
+const KEYS_NAMED_MAX = 3;
 
 /** What a map may read on an issue, raw (while zod parses) or final (after). */
 type IssueLike = {
@@ -157,10 +161,12 @@ function instructionFor(issue: IssueLike, units: UnitSystem): string {
     case "not_multiple_of":
       return issue.divisor === 1 ? "use a whole number" : `use a multiple of ${Number(issue.divisor)}`;
     case "unrecognized_keys": {
-      const keys = (issue.keys ?? []).map((key) => `“${key}”`).join(", ");
-      return (issue.keys?.length ?? 0) > 1
-        ? `remove ${keys}: these are not fields here`
-        : `remove ${keys}: it is not a field here`;
+      // Named, never echoed whole: a few keys, each cut short (server messages quote at most an excerpt).
+      const all = issue.keys ?? [];
+      const named = all.slice(0, KEYS_NAMED_MAX).map((key) => `“${excerpt(key)}”`);
+      if (all.length > KEYS_NAMED_MAX) named.push(`${all.length - KEYS_NAMED_MAX} more`);
+      const keys = named.join(", ");
+      return all.length > 1 ? `remove ${keys}: these are not fields here` : `remove ${keys}: it is not a field here`;
     }
     case "invalid_value":
       return "choose one from the list";
@@ -228,7 +234,8 @@ export function describeIssues(
   const issue = error.issues[0];
   if (!issue) return { field: "body", message: "Some of what was sent could not be read." };
   if (issue.code === "unrecognized_keys") {
-    return { field: issue.keys[0] ?? (issue.path.join(".") || "body"), message: inUnits(issue, units) };
+    const key = issue.keys[0];
+    return { field: key !== undefined ? excerpt(key) : issue.path.join(".") || "body", message: inUnits(issue, units) };
   }
   return { field: issue.path.length ? issue.path.join(".") : "body", message: inUnits(issue, units) };
 }

@@ -1,5 +1,6 @@
 import {
   ALERT_KINDS,
+  type ChainProblem,
   HANDOFF_KINDS,
   type AlertKind,
   TRANSFER_STATUSES,
@@ -28,6 +29,45 @@ export const CUSTODY_KIND_WORDS: Readonly<Record<CustodyKind, string>> = {
   alert_raised: "Alert raised",
   alert_acknowledged: "Alert acknowledged",
 };
+
+/** What a break in the custody chain is, as a short heading. */
+export const CHAIN_PROBLEM_WORDS: Readonly<Record<ChainProblem, string>> = {
+  missing: "Entries missing",
+  out_of_order: "Entry out of order",
+  changed: "Entry changed",
+  unlinked: "Link broken",
+  missing_tail: "Entries missing at the end",
+  beyond_head: "Entries past the recorded end",
+  head_missing: "End of the log not recorded",
+  head_mismatch: "Last entry replaced",
+};
+
+const entries = (from: number, to: number) => (from === to ? `Entry ${from}` : `Entries ${from} to ${to}`);
+
+/**
+ * The sentence for one break: where it is (`from`, and `to` for a run of entries) and what it
+ * means. Verification (shared/custody/hash-chain.ts) and the export's checker say these.
+ */
+export function chainBreakSentence(problem: ChainProblem, from: number, to = from): string {
+  switch (problem) {
+    case "missing":
+      return `${entries(from, to)} ${from === to ? "is" : "are"} missing from the log.`;
+    case "out_of_order":
+      return `Entry ${from} is out of order.`;
+    case "changed":
+      return `Entry ${from} was changed after it was written.`;
+    case "unlinked":
+      return `Entry ${from} does not point at the entry before it: one of the two was changed or replaced.`;
+    case "missing_tail":
+      return `${entries(from, to)} at the end of the log ${from === to ? "is" : "are"} missing: the log's recorded end is entry ${to}.`;
+    case "beyond_head":
+      return `${entries(from, to)} ${from === to ? "was" : "were"} added past the log's recorded end (entry ${from - 1}), bypassing the database's safeguards.`;
+    case "head_missing":
+      return `The log's recorded end is missing, so entries after entry ${from} could have been removed unnoticed.`;
+    case "head_mismatch":
+      return `Entry ${from} is not the entry the log's recorded end names: it was replaced.`;
+  }
+}
 
 /** Which check an override went past. */
 const GATE_WORDS: Readonly<Record<"compliance" | "temperature", string>> = {

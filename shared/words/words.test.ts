@@ -6,6 +6,7 @@ import {
   CHECK_IN_OUTCOMES,
   CHECK_MARKS,
   CUSTODY_KINDS,
+  CHAIN_PROBLEMS,
   DOCUMENT_KINDS,
   FORECAST_UNAVAILABLE_REASONS,
   HANDOFF_KINDS,
@@ -74,6 +75,7 @@ const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]
   ["weather scenario", WEATHER_SCENARIOS, [words.WEATHER_SCENARIO_WORDS]],
   ["outbox status", OUTBOX_STATUSES, [words.OUTBOX_STATUS_WORDS]],
   ["custody kind", CUSTODY_KINDS, [words.CUSTODY_KIND_WORDS]],
+  ["custody chain problem", CHAIN_PROBLEMS, [words.CHAIN_PROBLEM_WORDS]],
   [
     "temperature profile group",
     PROFILE_GROUPS,

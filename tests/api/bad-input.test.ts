@@ -108,6 +108,47 @@ describe("bad input", () => {
     expect((await admin.post("/api/temperature/assess", trip)).body.error.message).toBe(inches.body.error.message);
   });
 
+  it("a message repeats at most a short excerpt of what was sent", async () => {
+    const longKey = "k".repeat(5000);
+    const res = await admin.post("/api/organizations", { ...org, [longKey]: 1, other1: 1, other2: 1, other3: 1 });
+    expect(res.status).toBe(400);
+    expect(res.body.error.message.length).toBeLessThan(200);
+    expect(res.body.error.message).toMatch(/1 more/);
+    expect(res.body.error.field.length).toBeLessThanOrEqual(40);
+    const typed = `Zz${"q".repeat(190)}`;
+    const species = await admin.post("/api/compliance/evaluate", {
+      originState: "TN",
+      destinationState: "OH",
+      transitStates: [],
+      shipDate: "2026-05-12",
+      purpose: "private_keeping",
+      sale: false,
+      animals: [{ scientificName: typed, count: 1, lengthMm: null, origin: "captive_bred", sex: "unknown" }],
+      documents: [],
+    });
+    expect(species.body.error.code).toBe("unknown_species");
+    expect(species.body.error.message).not.toContain(typed);
+    expect(species.body.error.message.length).toBeLessThan(120);
+  });
+
+  it("an id in the address that is not an id is named as that path parameter, not as the body", async () => {
+    const transfer = await admin.get("/api/transfers/not-an-id");
+    expect(transfer.status).toBe(400);
+    expect(transfer.body.error).toMatchObject({
+      code: "invalid_path",
+      field: "id",
+      message: "The transfer id in the address is not valid.",
+    });
+    const document = await admin.get(`/api/documents/${"x".repeat(3000)}/scans/also-not-an-id`);
+    expect(document.body.error).toMatchObject({ field: "id", message: "The document id in the address is not valid." });
+    const attachment = await admin.del("/api/transfers/01a23704-abf9-7675-ab93-e52c942c1436/documents/nope");
+    expect(attachment.body.error).toMatchObject({
+      field: "documentId",
+      message: "The document id in the address is not valid.",
+    });
+    expect((await admin.patch("/api/users/123", {})).body.error.field).toBe("id");
+  });
+
   it("an operator object never reaches a query", async () => {
     const res = await admin.post("/api/auth/login", { email: { $ne: null }, password: "x" });
     expect(res.status).toBe(400);

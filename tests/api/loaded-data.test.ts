@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { createTestApp, signIn, type TestApp } from "../support/app";
+import { createTestApp, databaseUrlAs, signIn, type TestApp } from "../support/app";
 import { buildTransfer } from "../factories";
 import { prepareDatabase } from "../../scripts/lib/prepare-db";
 import { seedBenchData } from "../../scripts/lib/bench-data";
@@ -13,9 +13,10 @@ let benchDetailId: string;
 
 beforeAll(async () => {
   t = await createTestApp();
-  const { seeded } = await prepareDatabase(t.env.DATABASE_URL, { seed: true, publicUrl: DEMO_URL });
+  // Loaded as the owner role, like `npm start` and the benchmark do (D18).
+  const { seeded } = await prepareDatabase(databaseUrlAs("owner"), { seed: true, publicUrl: DEMO_URL });
   expect(seeded).toBe(true);
-  ({ detailId: benchDetailId } = await seedBenchData(t.env.DATABASE_URL, DEMO_URL, 3));
+  ({ detailId: benchDetailId } = await seedBenchData(databaseUrlAs("owner"), DEMO_URL, 3));
 }, 120_000);
 afterAll(() => t.close());
 

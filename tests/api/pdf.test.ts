@@ -48,6 +48,9 @@ describe("GET /api/transfers/:id/manifest.pdf", () => {
     const res = await fetchPdf(cast.sender.email, "manifest.pdf");
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toBe("application/pdf");
+    // Paper of ours, but not a page of ours: the same sandbox as a stored scan (SECURITY.md, Files).
+    expect(res.headers["content-security-policy"]).toBe("default-src 'none'; sandbox");
+    expect(res.headers["x-content-type-options"]).toBe("nosniff");
     const bytes = new Uint8Array(res.body as Buffer);
     const text = (await extractPageTexts(bytes)).join("\n");
     for (const name of ["Pantherophis guttatus", "Crotalus atrox", "Ambystoma mexicanum"]) expect(text).toContain(name);
@@ -121,6 +124,7 @@ describe("GET /api/transfers/:id/labels.pdf", () => {
   it("gives one 4 × 6 in label per box, the venomous one marked", async () => {
     const res = await fetchPdf(cast.receiver.email, "labels.pdf");
     expect(res.status).toBe(200);
+    expect(res.headers["content-security-policy"]).toBe("default-src 'none'; sandbox");
     const bytes = new Uint8Array(res.body as Buffer);
     const sizes = await pageSizesPt(bytes);
     expect(sizes).toEqual([

@@ -1,16 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
 import { expectAccessible, launchBrowser, newPage, screenshot, signInAs } from "../support/browser";
+import { pdfWithPages } from "../support/scan-files";
 
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();
+  PDF = await pdfWithPages(1);
 });
 afterAll(() => browser?.close());
 
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
-/** ISO 32000-1 §7.5.2 and ISO/IEC 15948 §5.2 signatures [published]; the rest is filler. */
-const PDF = Buffer.from("%PDF-1.4\n1 0 obj\n<< /Type /Catalog >>\nendobj\n%%EOF\n", "latin1");
+/** A one-page PDF made by pdf-lib (the server opens every PDF scan: D21) and a 1 × 1 PNG (ISO/IEC 15948) [published]. */
+let PDF: Buffer;
 const PNG = Buffer.from(
   "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==",
   "base64",

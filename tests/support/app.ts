@@ -10,6 +10,26 @@ import { composeApp, type CompositionOptions } from "../../server/composition";
 import { DEMO_PASSWORD } from "../factories";
 import { TEST_PUBLIC_URL } from "./constants";
 
+/**
+ * A connection to this worker's database as another role than the app's (D18): `owner` loads
+ * data the way the seeders do; `admin` (the superuser) tampers with the evidence on purpose.
+ */
+export async function withDatabaseAs<T>(role: "owner" | "admin", fn: (client: pg.Client) => Promise<T>): Promise<T> {
+  const client = new pg.Client({ connectionString: databaseUrlAs(role) });
+  await client.connect();
+  try {
+    return await fn(client);
+  } finally {
+    await client.end();
+  }
+}
+
+export function databaseUrlAs(role: "owner" | "admin"): string {
+  const url = process.env[role === "owner" ? "TEST_OWNER_DATABASE_URL" : "TEST_ADMIN_DATABASE_URL"];
+  if (!url) throw new Error("run integration tests through vitest's integration project");
+  return url;
+}
+
 export type TestApp = { app: Express; ctx: AppContext; orm: Orm; env: Env; close(): Promise<void> };
 
 export function testEnv(overrides: Record<string, string> = {}): Env {

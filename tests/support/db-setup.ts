@@ -18,4 +18,8 @@ for (let attempt = 0; ; attempt++) {
     await new Promise((r) => setTimeout(r, 100 + Math.random() * 200));
   }
 }
-process.env.TEST_DATABASE_URL = cluster.url(db);
+// The app connects as the app role (D18), as in production. Tests that load data the way the
+// seeders do use the owner; tests that tamper with the evidence on purpose use the superuser.
+process.env.TEST_DATABASE_URL = cluster.url(db, "app");
+process.env.TEST_OWNER_DATABASE_URL = cluster.url(db, "owner");
+process.env.TEST_ADMIN_DATABASE_URL = cluster.url(db, "admin");

@@ -35,10 +35,10 @@ export default async function setup(project: TestProject) {
   const db = "hatchway_e2e";
   await dropDatabase(cluster, db);
   await ensureDatabase(cluster, db);
-  const databaseUrl = cluster.url(db);
+  const databaseUrl = cluster.url(db, "app");
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  await prepareDatabase(databaseUrl, { seed: true, publicUrl: baseUrl });
+  await prepareDatabase(cluster.url(db, "owner"), { seed: true, publicUrl: baseUrl });
 
   const dist = path.join(OUTPUT_DIR, "dist-e2e");
   const build = spawnSync(

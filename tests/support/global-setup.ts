@@ -11,10 +11,11 @@ export default async function setup() {
   const cluster = await startCluster("test", TEST_PG_PORT);
   await dropDatabase(cluster, TEMPLATE_DB);
   await ensureDatabase(cluster, TEMPLATE_DB);
-  const orm = await initORM(cluster.url(TEMPLATE_DB), { poolMax: 1 });
+  // As the owner role, like `npm start` and a deployment: the copies keep its ownership and grants.
+  const orm = await initORM(cluster.url(TEMPLATE_DB, "owner"), { poolMax: 1 });
   try {
     await migrate(orm);
-    await seedReferenceData(cluster.url(TEMPLATE_DB));
+    await seedReferenceData(cluster.url(TEMPLATE_DB, "owner"));
   } finally {
     await orm.close();
   }

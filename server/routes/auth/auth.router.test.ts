@@ -1,5 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
+import pg from "pg";
+import { createApp } from "../../app";
+import { composeApp } from "../../composition";
 import { anonymousClient, createTestApp, signIn, type TestApp } from "../../../tests/support/app";
 import { buildUser } from "../../../tests/factories";
 
@@ -73,22 +76,86 @@ describe("sign-in", () => {
   });
 });
 
-describe("per-address limit", () => {
-  it("blocks an IP address that fails across many accounts", async () => {
-    const strict = await createTestApp({ LOGIN_MAX_FAILURES_PER_IP: "4", LOGIN_MAX_FAILURES_PER_ACCOUNT: "100" });
+// OWASP Authentication Cheat Sheet, "Account Lockout" and "Protect against automated attacks":
+// count failures per account, limit per account and address, and slow (not lock) an address
+// that fails across many accounts, so a shared network is not locked out [published].
+describe("sign-in throttling by address", () => {
+  /** An app behind one trusted proxy hop, so each test can sign in "from" an address of its own. */
+  async function throttledApp(overrides: Record<string, string>) {
+    const app = await createTestApp({ TRUST_PROXY_HOPS: "1", ...overrides });
+    await app.ctx.pool.query("DELETE FROM auth_throttle");
+    const from = async (address: string) => {
+      const client = await anonymousClient(app.app);
+      return (email: string, password: string) =>
+        client.post("/api/auth/login", { email, password }).set("X-Forwarded-For", address);
+    };
+    return { app, from };
+  }
+
+  it("an address failing across many accounts is slowed for seconds, and a colleague there still signs in", async () => {
+    const { app, from } = await throttledApp({
+      LOGIN_MAX_FAILURES_PER_IP: "4",
+      LOGIN_ADDRESS_DELAY_MAX_SECONDS: "2",
+      LOGIN_MAX_FAILURES_PER_ACCOUNT: "100",
+      LOGIN_MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS: "100",
+    });
     try {
-      // Earlier tests in this file failed from the same loopback address: start from zero.
-      await strict.ctx.pool.query("DELETE FROM auth_throttle");
-      const client = await anonymousClient(strict.app);
-      for (let i = 0; i < 4; i++) {
-        expect(
-          (await client.post("/api/auth/login", { email: `spray-${i}@example.test`, password: "x".repeat(10) })).status,
-        ).toBe(401);
-      }
-      const res = await client.post("/api/auth/login", { email: "spray-new@example.test", password: "x".repeat(10) });
-      expect(res.status).toBe(429);
+      const colleague = await buildUser(app.orm.em.fork());
+      const school = await from("198.51.100.20");
+      for (let i = 0; i < 5; i++) expect((await school(`spray-${i}@example.test`, "x".repeat(10))).status).toBe(401);
+      // Past the free failures: the next attempt from that address waits, but seconds, not 15 minutes.
+      const slowed = await school(colleague.email, "hatchway-demo");
+      expect(slowed.status).toBe(429);
+      expect(Number(slowed.headers["retry-after"])).toBeGreaterThan(0);
+      expect(Number(slowed.headers["retry-after"])).toBeLessThanOrEqual(2);
+      expect(slowed.body.error.message).toMatch(/from this network\. Try again in \d seconds?\./);
+      // Someone at another address is not slowed at all.
+      const elsewhere = await from("203.0.113.9");
+      expect((await elsewhere(colleague.email, "wrong-password")).status).toBe(401);
+      // After the wait, the colleague at the shared address signs in.
+      await new Promise((resolve) => setTimeout(resolve, Number(slowed.headers["retry-after"]) * 1000 + 100));
+      expect((await school(colleague.email, "hatchway-demo")).status).toBe(200);
     } finally {
-      await strict.close();
+      await app.close();
+    }
+  });
+
+  it("an account's failures from one address stop that address, not the account's owner elsewhere", async () => {
+    const { app, from } = await throttledApp({
+      LOGIN_MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS: "3",
+      LOGIN_MAX_FAILURES_PER_ACCOUNT: "100",
+      LOGIN_MAX_FAILURES_PER_IP: "1000",
+    });
+    try {
+      const user = await buildUser(app.orm.em.fork());
+      const guesser = await from("198.51.100.66");
+      for (let i = 0; i < 3; i++) expect((await guesser(user.email, `guess-${i}-password`)).status).toBe(401);
+      const blocked = await guesser(user.email, "hatchway-demo");
+      expect(blocked.status).toBe(429);
+      expect(Number(blocked.headers["retry-after"])).toBeGreaterThan(60);
+      expect(blocked.body.error.message).toMatch(/for this e-mail address/);
+      // The same address may still sign in to other accounts; the owner signs in from home.
+      const other = await buildUser(app.orm.em.fork());
+      expect((await guesser(other.email, "hatchway-demo")).status).toBe(200);
+      expect((await (await from("203.0.113.50"))(user.email, "hatchway-demo")).status).toBe(200);
+    } finally {
+      await app.close();
+    }
+  });
+
+  it("failures on one account spread over many addresses lock the account", async () => {
+    const { app, from } = await throttledApp({
+      LOGIN_MAX_FAILURES_PER_ACCOUNT: "4",
+      LOGIN_MAX_FAILURES_PER_ACCOUNT_AND_ADDRESS: "100",
+      LOGIN_MAX_FAILURES_PER_IP: "1000",
+    });
+    try {
+      const user = await buildUser(app.orm.em.fork());
+      for (let i = 0; i < 4; i++)
+        expect((await (await from(`192.0.2.${10 + i}`))(user.email, "wrong-password")).status).toBe(401);
+      expect((await (await from("192.0.2.99"))(user.email, "hatchway-demo")).status).toBe(429);
+    } finally {
+      await app.close();
     }
   });
 });
@@ -204,5 +271,33 @@ describe("session", () => {
       [created, user.id],
     );
     expect((await client.get("/api/auth/me")).status).toBe(401);
+  });
+});
+
+describe("when sessions cannot be stored", () => {
+  it("/api/auth/csrf answers 503 instead of a token that would never work", async () => {
+    // The app's own clients, except that the pool sessions are written through points nowhere.
+    const nowhere = new pg.Pool({ connectionString: "postgres://hatchway_app@127.0.0.1:1/nowhere", max: 1 });
+    nowhere.on("error", () => undefined);
+    const broken = createApp(composeApp({ env: t.env, orm: t.orm, pool: nowhere }));
+    try {
+      const res = await request(broken).get("/api/auth/csrf");
+      expect(res.status).toBe(503);
+      expect(res.body.error.message).toMatch(/session could not be stored/);
+      expect(res.body.csrfToken).toBeUndefined();
+    } finally {
+      await nowhere.end();
+    }
+  });
+});
+
+describe("sign-out", () => {
+  it("tells the browser to clear what the session left behind", async () => {
+    const user = await buildUser(em());
+    const client = await signIn(t.app, user.email);
+    const res = await client.post("/api/auth/logout");
+    expect(res.status).toBe(204);
+    // W3C Clear Site Data §3.1: quoted, comma-separated types [published].
+    expect(res.headers["clear-site-data"]).toBe('"cache", "cookies", "storage"');
   });
 });

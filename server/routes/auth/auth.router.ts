@@ -6,7 +6,7 @@ import { emailKey } from "@shared/schemas/common";
 import type { AppContext } from "../../context";
 import { UserSchema } from "../../db/entities/user.entity";
 import { PasswordTokenSchema } from "../../db/entities/password-token.entity";
-import { HttpError } from "../../http/errors";
+import { HttpError, unavailable } from "../../http/errors";
 import { parse } from "../../http/validate";
 import { csrfTokenFor } from "../../http/security";
 import { presentActor, type Actor } from "../../auth/actor";
@@ -42,8 +42,19 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
   const router = Router();
   const throttle = createLoginThrottle(ctx.pool, ctx.env);
 
-  router.get("/csrf", (req, res) => {
-    res.json({ csrfToken: csrfTokenFor(req.session) });
+  // The token is only worth handing out once the session that holds it is stored: otherwise
+  // every later request would be refused with a token that never works.
+  router.get("/csrf", (req, res, next) => {
+    const csrfToken = csrfTokenFor(req.session);
+    req.session.save((err) => {
+      if (err) {
+        console.error("[session] could not store a session", (err as Error).message);
+        return next(
+          unavailable("Signing in is not possible right now: the session could not be stored. Try again in a minute."),
+        );
+      }
+      res.json({ csrfToken });
+    });
   });
 
   router.post("/login", async (req, res, next) => {
@@ -56,7 +67,7 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
       await throttle.recordFailure(key, ip);
       throw invalidCredentials();
     }
-    await throttle.recordSuccess(key);
+    await throttle.recordSuccess(key, ip);
     await logIn(req, user);
     req.session.createdAt = Date.now();
     req.session.lastSeenAt = Date.now();
@@ -68,7 +79,14 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
       if (err) return next(err);
       req.session.destroy((destroyErr) => {
         if (destroyErr) return next(destroyErr);
-        res.clearCookie(ctx.env.SECURE_COOKIES ? "__Host-hatchway" : "hatchway.sid", { path: "/" });
+        res.clearCookie(ctx.env.SECURE_COOKIES ? "__Host-hatchway" : "hatchway.sid", {
+          path: "/",
+          secure: ctx.env.SECURE_COOKIES,
+          httpOnly: true,
+          sameSite: "lax",
+        });
+        // The browser forgets what this session left behind: cached records, cookies, storage.
+        res.setHeader("Clear-Site-Data", '"cache", "cookies", "storage"');
         res.status(204).end();
       });
     });

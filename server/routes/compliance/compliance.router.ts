@@ -1,4 +1,5 @@
 import { Router } from "express";
+import { excerpt } from "@shared/validation/text";
 import { evaluateRequestSchema } from "@shared/compliance/schemas";
 import type { AppContext } from "../../context";
 import { invalidField } from "../../http/errors";
@@ -40,7 +41,7 @@ function whatIfRouter(ctx: AppContext): Router {
       const hint = suggestions.length ? ` Did you mean ${suggestions.map((s) => s.scientificName).join(", ")}?` : "";
       throw invalidField(
         ["animals", outcome.index, "scientificName"],
-        `“${name}” is not in the species list.${hint}`,
+        `“${excerpt(name)}” is not in the species list.${hint}`,
         { suggestions },
         "unknown_species",
       );

@@ -2,7 +2,7 @@ import { Router } from "express";
 import { z } from "zod";
 import { ruleListQuerySchema, ruleVersionInputSchema, type RuleSummaryDto } from "@shared/schemas/compliance";
 import { currentUser, requirePolicy } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { parse, pathParam } from "../../http/validate";
 import { canManageRules } from "../../policies/compliance.policy";
 import { presentRuleVersion } from "../../presenters/compliance-rule.presenter";
 import { appendRuleVersion, createRule, listCurrentRules, ruleHistory } from "../../services/compliance/rules";
@@ -31,12 +31,12 @@ export function rulesRouter(): Router {
   });
 
   router.get("/:ruleKey", async (req, res) => {
-    const ruleKey = parse(ruleKeySchema, req.params.ruleKey);
+    const ruleKey = pathParam(req, "ruleKey", "rule name", ruleKeySchema);
     res.json({ ruleKey, versions: (await ruleHistory(req.em, ruleKey)).map(presentRuleVersion) });
   });
 
   router.post("/:ruleKey/versions", async (req, res) => {
-    const ruleKey = parse(ruleKeySchema, req.params.ruleKey);
+    const ruleKey = pathParam(req, "ruleKey", "rule name", ruleKeySchema);
     const input = parse(ruleVersionInputSchema, req.body);
     const row = await appendRuleVersion({ em: req.em, actor: currentUser(req), ruleKey, input });
     res.status(201).json({ version: presentRuleVersion(row) });

@@ -1,9 +1,8 @@
 import { Router, type Request } from "express";
 import type { TransferStatus } from "@shared/constants";
-import { idSchema } from "@shared/schemas/common";
 import { attachDocumentSchema, overrideInputSchema } from "@shared/schemas/compliance";
 import { currentUser, requireUser } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { parse, pathId } from "../../http/validate";
 import { canOverrideCompliance } from "../../policies/compliance.policy";
 import { canAttachDocuments, canReadTransferDocuments } from "../../policies/document.policy";
 import { presentTransferCompliance } from "../../presenters/transfer-compliance.presenter";
@@ -13,7 +12,8 @@ import { currentOverride } from "../../services/compliance/gate";
 import { overrideCompliance } from "../../services/compliance/override";
 import { loadTransferForActor } from "../../services/transfers/load";
 
-const idParam = (req: Request, name = "id") => parse(idSchema, req.params[name]);
+const idParam = (req: Request, name: "id" | "documentId" = "id") =>
+  pathId(req, name, name === "id" ? "transfer" : "document");
 
 /** The transfer's verdict as the caller sees it now, with the documents on file. */
 async function complianceFor(req: Request, transferId: string) {

@@ -10,6 +10,7 @@ import { actorOf, buildOrganization, buildTransfer, buildUser, type TransferCast
 import type { Storage } from "../../adapters/storage";
 import { uploadScan } from "../../services/compliance/documents";
 import { assignLegs } from "../../services/transfers/legs";
+import { jpeg, pdfWithPages, png, pngClaiming } from "../../../tests/support/scan-files";
 
 const BUCKET = "hatchway-documents-test";
 const directory = mkdtempSync(path.join(tmpdir(), "hatchway-s3-"));
@@ -18,6 +19,7 @@ let t: TestApp;
 const em = () => t.orm.em.fork();
 
 beforeAll(async () => {
+  PDF = await pdfWithPages(1);
   s3 = await startS3Fake({ directory, bucket: BUCKET });
   t = await createTestApp({ S3_ENDPOINT: s3.endpoint, S3_BUCKET: BUCKET });
 });
@@ -27,15 +29,10 @@ afterAll(async () => {
 });
 
 const ascii = (text: string) => Buffer.from(text, "latin1");
-/** Minimal files: the signatures of ISO 32000-1 §7.5.2 (PDF), ITU T.81 (JPEG SOI + APP0) and ISO/IEC 15948 §5.2 (PNG) [published]. */
-const PDF = Buffer.concat([
-  ascii("%PDF-1.7\n%\xe2\xe3\xcf\xd3\n1 0 obj\n<< /Type /Catalog >>\nendobj\n"),
-  ascii("%%EOF\n"),
-]);
-const JPEG = Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0xff, 0xd9]);
-const PNG = Buffer.from([
-  0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d, 0x49, 0x48, 0x44, 0x52,
-]);
+/** Real files (tests/support/scan-files.ts): a one-page PDF, a JPEG and a PNG that decode fully. */
+let PDF: Buffer;
+const JPEG = jpeg(32, 24);
+const PNG = png(24, 16);
 const HTML = ascii("<html><body><script>alert(1)</script></body></html>");
 const sha256 = (bytes: Buffer) => createHash("sha256").update(bytes).digest("hex");
 
@@ -161,7 +158,7 @@ describe("scans in S3", () => {
     expect(download.headers["content-type"]).toBe("application/pdf");
     expect(download.headers["content-disposition"]).toBe('attachment; filename="permit scan.pdf"');
     expect(download.headers["x-content-type-options"]).toBe("nosniff");
-    expect(download.headers["content-security-policy"]).toBe("sandbox");
+    expect(download.headers["content-security-policy"]).toBe("default-src 'none'; sandbox");
     expect(download.headers["cache-control"]).toBe("no-store");
   });
 
@@ -185,6 +182,28 @@ describe("scans in S3", () => {
     const tooBig = await upload(holder, documentId, big, "application/pdf");
     expect([tooBig.status, tooBig.body.error.code]).toEqual([413, "too_large"]);
     expect((await upload(holder, documentId, Buffer.alloc(0), "application/pdf")).status).toBe(400);
+    expect(await scanRows(documentId)).toBe(rows);
+    expect(await storedKeys()).toEqual(keys);
+  });
+
+  it("refuses a file that only starts like a PDF or an image: it must open, with a page or at its stated size", async () => {
+    const rows = await scanRows(documentId);
+    const keys = await storedKeys();
+    for (const [name, bytes, type] of [
+      ["the five bytes %PDF-", ascii("%PDF-"), "PDF"],
+      ["a PDF catalogue with no page tree", ascii("%PDF-1.7\n1 0 obj\n<< /Type /Catalog >>\nendobj\n%%EOF\n"), "PDF"],
+      ["a PDF with no pages", await pdfWithPages(0), "PDF"],
+      ["a PDF cut in half", PDF.subarray(0, PDF.length >> 1), "PDF"],
+      ["a PNG signature and nothing more", PNG.subarray(0, 16), "PNG"],
+      ["a PNG cut short", PNG.subarray(0, PNG.length - 20), "PNG"],
+      ["a PNG whose header says twice its width", pngClaiming(PNG, 48, 16), "PNG"],
+      ["a JPEG cut short", JPEG.subarray(0, JPEG.length >> 1), "JPEG"],
+    ] as const) {
+      const res = await upload(holder, documentId, bytes, "application/octet-stream");
+      expect([res.status, res.body.error?.code], name).toEqual([415, "unsupported_file"]);
+      expect(res.body.error.message, name).toContain(type);
+      expect(res.body.error.message, name).toMatch(/again|lower resolution/);
+    }
     expect(await scanRows(documentId)).toBe(rows);
     expect(await storedKeys()).toEqual(keys);
   });

@@ -1,12 +1,11 @@
 import { pipeline } from "node:stream/promises";
 import { Router, type Request } from "express";
-import { idSchema } from "@shared/schemas/common";
 import { documentInputSchema, documentListQuerySchema } from "@shared/schemas/compliance";
 import type { AppContext } from "../../context";
 import { DocumentScanSchema, PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { forbidden, notFound } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { parse, pathId } from "../../http/validate";
 import { canHoldDocuments, documentAbilities } from "../../policies/document.policy";
 import { presentDocument, presentScan } from "../../presenters/document.presenter";
 import {
@@ -18,8 +17,9 @@ import {
   uploadScan,
 } from "../../services/compliance/documents";
 import { scanBody } from "./scan-upload";
+import { SANDBOX_CSP } from "../../http/security";
 
-const idParam = (req: Request, name = "id") => parse(idSchema, req.params[name]);
+const idParam = (req: Request, name: "id" | "scanId" = "id") => pathId(req, name, name === "id" ? "document" : "scan");
 
 /** Permits and certificates: the organisation's own, and those a transfer uses for its parties. */
 export function documentsRouter(ctx: AppContext): Router {
@@ -93,7 +93,7 @@ export function documentsRouter(ctx: AppContext): Router {
       "Content-Type": scan.contentType,
       "Content-Length": String(object.contentLength ?? scan.sizeBytes),
       "X-Content-Type-Options": "nosniff",
-      "Content-Security-Policy": "sandbox",
+      "Content-Security-Policy": SANDBOX_CSP,
       "Cache-Control": "no-store",
       "Repr-Digest": `sha-256=:${Buffer.from(scan.sha256, "hex").toString("base64")}:`,
     });

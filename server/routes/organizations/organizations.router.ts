@@ -1,10 +1,9 @@
 import { Router } from "express";
 import { organizationInputSchema, organizationPatchSchema } from "@shared/schemas/auth";
-import { idSchema } from "@shared/schemas/common";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { notFound } from "../../http/errors";
 import { requirePolicy } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { parse, pathId } from "../../http/validate";
 import { canManageOrganizations } from "../../policies/organization.policy";
 import { presentOrganization } from "../../presenters/organization.presenter";
 
@@ -31,7 +30,7 @@ export function organizationsRouter(): Router {
   });
 
   router.patch("/:id", async (req, res) => {
-    const id = parse(idSchema, req.params.id);
+    const id = pathId(req, "id", "organisation");
     const input = parse(organizationPatchSchema, req.body);
     const org = await req.em.findOne(OrganizationSchema, { id });
     if (!org) throw notFound("That organisation");

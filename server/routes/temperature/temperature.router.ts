@@ -1,13 +1,13 @@
 import { Router, type Request } from "express";
+import { excerpt } from "@shared/validation/text";
 import { z } from "zod";
 import { PROFILE_GROUPS } from "@shared/constants";
-import { idSchema } from "@shared/schemas/common";
 import { profileDataSchema } from "@shared/temperature/profile-schema";
 import { whatIfInputSchema } from "@shared/temperature/schemas";
 import type { AppContext } from "../../context";
 import { HttpError, invalidField, unavailable } from "../../http/errors";
 import { currentUser, requirePolicy, requireUser } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { parse, pathId, pathParam } from "../../http/validate";
 import { canEditTemperatureProfiles, canPlanTrips, canSwitchWeatherScenario } from "../../policies/temperature.policy";
 import { presentProfile, presentTransferTemperature } from "../../presenters/temperature.presenter";
 import { latestAlert, recentChecks } from "../../services/temperature/checks";
@@ -52,7 +52,7 @@ export function temperatureRouter(ctx: AppContext): Router {
   const router = Router();
 
   router.get("/transfers/:id/temperature", requireUser, async (req: Request, res) => {
-    const { transfer } = await loadTransferForActor(req.em, parse(idSchema, req.params.id), currentUser(req));
+    const { transfer } = await loadTransferForActor(req.em, pathId(req, "id", "transfer"), currentUser(req));
     const report = await assessTransferTemperature({ em: req.em, source, transfer, nowMs: Date.now() });
     const [alert, checks] = await Promise.all([latestAlert(req.em, transfer.id), recentChecks(req.em, transfer.id)]);
     res.json(presentTransferTemperature(transfer, report, alert, checks));
@@ -66,7 +66,9 @@ export function temperatureRouter(ctx: AppContext): Router {
       const taxon = input.scientificName ? await findTaxonByName(req.em, input.scientificName) : null;
       if (input.scientificName && !taxon) {
         const suggestions = (await searchTaxa(ctx, input.scientificName, 5)).map((t) => t.scientificName);
-        throw invalidField(["scientificName"], `“${input.scientificName}” is not in the species list`, { suggestions });
+        throw invalidField(["scientificName"], `“${excerpt(input.scientificName)}” is not in the species list`, {
+          suggestions,
+        });
       }
       res.json(await assessWhatIf({ em: req.em, source, input, taxon, nowMs: Date.now() }));
     },
@@ -84,7 +86,7 @@ export function temperatureRouter(ctx: AppContext): Router {
     "/temperature/profiles/:group",
     requirePolicy(canEditTemperatureProfiles, "Only an administrator can edit temperature profiles."),
     async (req, res) => {
-      const group = parse(groupParam, req.params.group);
+      const group = pathParam(req, "group", "temperature profile", groupParam);
       const data = parse(profileDataSchema, req.body);
       await saveProfile({ em: req.em, actor: currentUser(req), input: { group, data } });
       const em = req.em.fork();

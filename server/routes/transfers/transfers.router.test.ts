@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
-import { createTestApp, signIn, type Client, type TestApp } from "../../../tests/support/app";
+import { createTestApp, signIn, withDatabaseAs, type Client, type TestApp } from "../../../tests/support/app";
 import {
   buildOrganization,
   buildTransfer,
@@ -157,7 +157,9 @@ describe("life cycle through the API", () => {
     const s = await signIn(t.app, cast.sender.email);
     const r = await signIn(t.app, cast.receiver.email);
     const id = cast.transfer.id;
-    expect((await s.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(409); // skipping a step
+    expect((await r.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(409); // skipping a step
+    // The sender never confirms: refused before the state is looked at, in this state as in the next.
+    expect((await s.post(`/api/transfers/${id}/transition`, { to: "ready" })).status).toBe(403);
     expect((await s.post(`/api/transfers/${id}/transition`, { to: "awaiting_receiver" })).body.transfer.status).toBe(
       "awaiting_receiver",
     );
@@ -513,13 +515,21 @@ describe("handoffs under pressure", () => {
 describe("the custody log in the database", () => {
   it("refuses UPDATE, DELETE and TRUNCATE, and a transfer with entries cannot be deleted", async () => {
     const cast = await buildTransfer(em(), { status: "awaiting_receiver" });
-    await expect(
-      t.ctx.pool.query("UPDATE custody_entry SET actor_name = 'x' WHERE transfer_id = $1", [cast.transfer.id]),
-    ).rejects.toThrow(/append-only/);
-    await expect(
-      t.ctx.pool.query("DELETE FROM custody_entry WHERE transfer_id = $1", [cast.transfer.id]),
-    ).rejects.toThrow(/append-only/);
-    await expect(t.ctx.pool.query("TRUNCATE custody_entry CASCADE")).rejects.toThrow(/append-only/);
+    // The app's role is refused by its privileges (D18); the table's owner by the triggers (D6).
+    for (const [pool, refusal] of [
+      [t.ctx.pool, /permission denied/],
+      [null, /append-only/],
+    ] as const) {
+      const run = (sql: string, values: unknown[] = []) =>
+        pool ? pool.query(sql, values) : withDatabaseAs("owner", (client) => client.query(sql, values));
+      await expect(
+        run("UPDATE custody_entry SET actor_name = 'x' WHERE transfer_id = $1", [cast.transfer.id]),
+      ).rejects.toThrow(refusal);
+      await expect(run("DELETE FROM custody_entry WHERE transfer_id = $1", [cast.transfer.id])).rejects.toThrow(
+        refusal,
+      );
+      await expect(run("TRUNCATE custody_entry CASCADE")).rejects.toThrow(refusal);
+    }
     await expect(t.ctx.pool.query("DELETE FROM transfer WHERE id = $1", [cast.transfer.id])).rejects.toThrow(
       /foreign key|violates/,
     );
@@ -528,18 +538,18 @@ describe("the custody log in the database", () => {
   it("tampering that slips past the triggers is detected by the chain", async () => {
     const cast = await buildTransfer(em(), { status: "ready" });
     const s = await signIn(t.app, cast.sender.email);
-    // A superuser can disable triggers: the hash chain still shows the edit.
-    const client = await t.ctx.pool.connect();
-    try {
+    // A superuser can disable triggers (the app's role cannot: tests/api/database-roles.test.ts):
+    // the hash chain still shows the edit.
+    await withDatabaseAs("admin", async (client) => {
+      await client.query("BEGIN");
       await client.query("ALTER TABLE custody_entry DISABLE TRIGGER custody_entry_no_update_delete");
       await client.query(
         "UPDATE custody_entry SET payload = jsonb_set(payload, '{to}', '\"closed\"') WHERE transfer_id = $1 AND seq = 2",
         [cast.transfer.id],
       );
-    } finally {
       await client.query("ALTER TABLE custody_entry ENABLE TRIGGER custody_entry_no_update_delete");
-      client.release();
-    }
+      await client.query("COMMIT");
+    });
     const log = (await s.get(`/api/transfers/${cast.transfer.id}/custody`)).body;
     expect(log).toMatchObject({ intact: false, brokenAt: 2 });
   });

@@ -12,18 +12,18 @@ import {
   type MessageDto,
   type TransferChangeDto,
 } from "@shared/schemas/transfer";
-import { idSchema } from "@shared/schemas/common";
 import type { Actor } from "../../auth/actor";
 import { MessageSchema, TransferChangeSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { forbidden, notFound } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { idempotent } from "../../http/idempotency";
-import { parse } from "../../http/validate";
-import { transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
+import { parse, pathId } from "../../http/validate";
+import { SANDBOX_CSP } from "../../http/security";
+import { mayCheckIn, transferAbilities, viewerRoleFor } from "../../policies/transfer.policy";
 import { factsOfView, presentTransfer } from "../../presenters/transfer.presenter";
 import { readTransferView } from "../../services/transfers/read-view";
-import { readCustodyLog } from "../../services/transfers/custody";
+import { exportCustodyLog, readCustodyLog } from "../../services/transfers/custody";
 import { loadTransferForActor } from "../../services/transfers/load";
 import { listTransfers } from "../../services/transfers/list";
 import { createTransfer, updateTransfer } from "../../services/transfers/write-transfer";
@@ -50,7 +50,7 @@ export async function presentForActor(req: Request, transferId: string) {
   return presentTransfer(view, role, transferAbilities(actor, role, facts));
 }
 
-const idParam = (req: Request) => parse(idSchema, req.params.id);
+const idParam = (req: Request) => pathId(req, "id", "transfer");
 
 export function transfersRouter(): Router {
   const router = Router();
@@ -107,8 +107,10 @@ export function transfersRouter(): Router {
 
   router.post("/:id/handoffs", async (req, res) => {
     const id = idParam(req);
-    // Existence and access first: a stranger learns nothing from the idempotency answers.
-    await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    // Existence and access first: a stranger learns nothing from the idempotency answers, and
+    // a role that never records handoffs is refused before its body or the state is looked at.
+    const { role } = await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    if (role === "admin") throw forbidden("Administrators can read transfers but not record handoffs.");
     const input = parse(handoffInputSchema, req.body);
     await idempotent(req, res, `handoff:${id}`, async () => {
       await recordHandoff({
@@ -125,7 +127,8 @@ export function transfersRouter(): Router {
 
   router.post("/:id/check-in", async (req, res) => {
     const id = idParam(req);
-    await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    const { role } = await loadTransferForActor(req.em.fork(), id, currentUser(req));
+    if (!mayCheckIn(role)) throw forbidden("Only a member of the receiving organisation can check the animals in.");
     const input = parse(checkInInputSchema, req.body);
     await idempotent(req, res, `check-in:${id}`, async () => {
       await checkInTransfer({
@@ -160,6 +163,7 @@ export function transfersRouter(): Router {
         `${req.query.download === "1" ? "attachment" : "inline"}; filename="${name}"`,
       );
       res.setHeader("X-Content-Type-Options", "nosniff");
+      res.setHeader("Content-Security-Policy", SANDBOX_CSP);
       res.send(Buffer.from(bytes));
     });
   }
@@ -168,6 +172,16 @@ export function transfersRouter(): Router {
     const id = idParam(req);
     await loadTransferForActor(req.em, id, currentUser(req));
     res.json(await readCustodyLog(req.em, id));
+  });
+
+  // The log to keep, for anyone who may read it: checkable later without Hatchway (D19).
+  router.get("/:id/custody/export", async (req, res) => {
+    const id = idParam(req);
+    const { transfer } = await loadTransferForActor(req.em, id, currentUser(req));
+    const exported = await exportCustodyLog(req.em, transfer);
+    res.attachment(`${transfer.number}-custody.json`);
+    res.setHeader("X-Content-Type-Options", "nosniff");
+    res.type("application/json").send(`${JSON.stringify(exported, null, 2)}\n`);
   });
 
   router.get("/:id/changes", async (req, res) => {
@@ -220,7 +234,7 @@ export function transfersRouter(): Router {
 
   router.post("/:id/alerts/:alertId/acknowledge", async (req, res) => {
     const id = idParam(req);
-    const alertId = parse(idSchema, req.params.alertId);
+    const alertId = pathId(req, "alertId", "alert");
     const { note } = parse(alertAcknowledgeSchema, req.body);
     await acknowledgeAlert({ em: req.em, actor: currentUser(req), transferId: id, alertId, note });
     const transfer = await presentForActor(req, id);

@@ -1,14 +1,13 @@
 import { Router } from "express";
 import { ref } from "@mikro-orm/core";
 import { userInviteSchema, userPatchSchema } from "@shared/schemas/auth";
-import { idSchema } from "@shared/schemas/common";
 import type { AppContext } from "../../context";
 import { UserSchema } from "../../db/entities/user.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { PasswordTokenSchema } from "../../db/entities/password-token.entity";
 import { badRequest, invalidField, notFound } from "../../http/errors";
 import { currentUser, requirePolicy } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { parse, pathId } from "../../http/validate";
 import { canManageUsers } from "../../policies/user.policy";
 import { presentUserForAdmin } from "../../presenters/user.presenter";
 import { inviteUser } from "../../services/invite-user";
@@ -31,7 +30,7 @@ export function usersRouter(ctx: AppContext): Router {
   });
 
   router.patch("/:id", async (req, res) => {
-    const id = parse(idSchema, req.params.id);
+    const id = pathId(req, "id", "user");
     const input = parse(userPatchSchema, req.body);
     const user = await req.em.findOne(UserSchema, { id }, { populate: ["organization"] });
     if (!user) throw notFound("That user");

@@ -22,11 +22,15 @@ import {
   canHoldDocuments,
   canReadTransferDocuments,
   isHolder,
+  mayAttachDocuments,
   type DocumentViewer,
 } from "../../policies/document.policy";
 import { presentDocument } from "../../presenters/document.presenter";
 import { loadTransferForActor } from "../transfers/load";
 import { evaluateTransfer } from "./evaluation";
+import { scanContentProblem } from "./scan-content";
+
+const ONLY_PARTIES_ATTACH = "Only the sender and the receiver attach documents to a transfer.";
 
 /** Most scans one document keeps (front and back of a few pages). */
 export const SCANS_PER_DOCUMENT_MAX = 20;
@@ -254,6 +258,7 @@ export async function attachDocument({
   documentId: string;
 }) {
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
+  if (!mayAttachDocuments(role)) throw forbidden(ONLY_PARTIES_ATTACH);
   const doc = await em.findOne(PermitDocumentSchema, { id: documentId });
   if (!doc || !isHolder(actor, doc.organization.id)) throw notFound("That document");
   if (!canAttachDocuments(role, transfer.status as TransferStatus))
@@ -284,6 +289,7 @@ export async function detachDocument({
   documentId: string;
 }) {
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
+  if (!mayAttachDocuments(role)) throw forbidden(ONLY_PARTIES_ATTACH);
   const link = await em.findOne(
     TransferDocumentSchema,
     { transfer: transfer.id, document: documentId },
@@ -316,7 +322,8 @@ export function cleanFileName(raw: string | undefined, fallback: string): string
 }
 
 /**
- * Stores a scan: its type is read from the bytes (the declared type is ignored), the key is
+ * Stores a scan: its type is read from the bytes (the declared type is ignored) and the file
+ * must open as that type (a PDF with a page, an image of the size it states), the key is
  * ours, the SHA-256 is kept. The object is written first and the row second; if the row cannot
  * be written the object is deleted again, so a failure leaves neither behind.
  */
@@ -345,6 +352,8 @@ export async function uploadScan({
       "unsupported_file",
       "That file is not a PDF, JPEG or PNG. Scan or save the document in one of those formats.",
     );
+  const problem = await scanContentProblem(body, contentType);
+  if (problem) throw new HttpError(415, "unsupported_file", problem);
   if ((await em.count(DocumentScanSchema, { document: doc.id })) >= SCANS_PER_DOCUMENT_MAX) {
     throw conflict(`A document keeps at most ${SCANS_PER_DOCUMENT_MAX} scans; remove one first.`);
   }

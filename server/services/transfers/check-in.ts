@@ -15,7 +15,7 @@ import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
-import { transferAbilities } from "../../policies/transfer.policy";
+import { mayCheckIn, transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -55,6 +55,7 @@ export async function checkInTransfer({
 }) {
   return em.transactional(async (tx) => {
     const { transfer: t, role, facts } = await loadTransferForActor(tx, transferId, actor, { lock: true });
+    if (!mayCheckIn(role)) throw forbidden("Only a member of the receiving organisation can check the animals in.");
     if (t.status !== "delivered")
       throw conflict(
         t.status === "checked_in" || t.status === "closed"

@@ -1,7 +1,15 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { GENESIS_HASH, seal, verifyChain, type SealedEntry } from "@shared/custody/hash-chain";
+import { IsolationLevel } from "@mikro-orm/core";
+import {
+  CHAIN_RULE,
+  GENESIS_HASH,
+  seal,
+  verifyChain,
+  type ChainHead,
+  type SealedEntry,
+} from "@shared/custody/hash-chain";
 import type { CustodyKind } from "@shared/constants";
-import type { CustodyLogDto } from "@shared/schemas/transfer";
+import type { CustodyExportDto, CustodyLogDto } from "@shared/schemas/transfer";
 import type { Actor } from "../../auth/actor";
 import { CustodyEntrySchema } from "../../db/entities/custody-entry.entity";
 import { TransferSchema } from "../../db/entities/transfer.entity";
@@ -20,10 +28,13 @@ export async function appendCustody(
   kind: CustodyKind,
   payload: Record<string, unknown>,
 ) {
-  const last = await em.findOne(
-    CustodyEntrySchema,
-    { transfer: transferId },
-    { orderBy: { seq: "desc" }, fields: ["seq", "hash"] },
+  // The head, not the last row: a log whose end was cut off keeps growing from where it really
+  // ended, and the gap stays visible (D19). The database refuses any other sequence or link.
+  // Entries appended earlier in this unit of work are written first, so the head includes them.
+  await em.flush();
+  const [last] = await em.execute<{ seq: number; hash: string }[]>(
+    `SELECT seq, hash FROM custody_head WHERE transfer_id = ?`,
+    [transferId],
   );
   const sealed = seal(last?.hash ?? GENESIS_HASH, {
     transferId,
@@ -48,21 +59,42 @@ export async function appendCustody(
   return sealed;
 }
 
-/** The whole log, oldest first, with the result of recomputing the chain. */
+type LogRead = { transferId: string; sealed: SealedEntry[]; head: ChainHead | null };
+
+/**
+ * The entries and the head in one snapshot (REPEATABLE READ), so an entry appended while this
+ * reads cannot look like a tampered end.
+ */
+async function readChain(em: EntityManager, transferId: string): Promise<LogRead> {
+  return em.transactional(
+    async (tx) => {
+      const rows = await tx.find(CustodyEntrySchema, { transfer: transferId }, { orderBy: { seq: "asc" } });
+      const heads = await tx.execute<{ seq: number; hash: string }[]>(
+        `SELECT seq, hash FROM custody_head WHERE transfer_id = ?`,
+        [transferId],
+      );
+      const sealed: SealedEntry[] = rows.map((r) => ({
+        transferId,
+        seq: r.seq,
+        kind: r.kind,
+        actorId: r.actorId ?? null,
+        actorName: r.actorName,
+        at: r.at.toISOString(),
+        payload: r.payload,
+        prevHash: r.prevHash,
+        hash: r.hash,
+      }));
+      const head = heads[0] ? { seq: Number(heads[0].seq), hash: heads[0].hash } : null;
+      return { transferId, sealed, head };
+    },
+    { isolationLevel: IsolationLevel.REPEATABLE_READ, readOnly: true },
+  );
+}
+
+/** The whole log, oldest first, with the result of recomputing the chain against its head. */
 export async function readCustodyLog(em: EntityManager, transferId: string): Promise<CustodyLogDto> {
-  const rows = await em.find(CustodyEntrySchema, { transfer: transferId }, { orderBy: { seq: "asc" } });
-  const sealed: SealedEntry[] = rows.map((r) => ({
-    transferId,
-    seq: r.seq,
-    kind: r.kind,
-    actorId: r.actorId ?? null,
-    actorName: r.actorName,
-    at: r.at.toISOString(),
-    payload: r.payload,
-    prevHash: r.prevHash,
-    hash: r.hash,
-  }));
-  const check = verifyChain(sealed);
+  const { sealed, head } = await readChain(em, transferId);
+  const check = verifyChain(sealed, head);
   return {
     entries: sealed.map((e) => ({
       seq: e.seq,
@@ -74,5 +106,26 @@ export async function readCustodyLog(em: EntityManager, transferId: string): Pro
       hash: e.hash,
     })),
     ...check,
+    head,
+  };
+}
+
+/**
+ * The log to keep: every entry exactly as sealed, the head, the hashing rule, and what
+ * Hatchway found. scripts/verify-custody-export.mjs checks it with nothing but Node.js.
+ */
+export async function exportCustodyLog(
+  em: EntityManager,
+  transfer: { id: string; number: string },
+): Promise<CustodyExportDto> {
+  const { sealed, head } = await readChain(em, transfer.id);
+  return {
+    format: "hatchway-custody-export/1",
+    exportedAt: new Date().toISOString(),
+    transfer: { id: transfer.id, number: transfer.number },
+    chain: { algorithm: "SHA-256", genesisHash: GENESIS_HASH, rule: CHAIN_RULE },
+    entries: sealed,
+    head,
+    check: verifyChain(sealed, head),
   };
 }

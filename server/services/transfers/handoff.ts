@@ -9,7 +9,7 @@ import { TRANSFER_STATUS_WORDS } from "@shared/words";
 import type { Actor } from "../../auth/actor";
 import { ContainerSchema } from "../../db/entities/transfer.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
-import { handoffAllowed } from "../../policies/transfer.policy";
+import { handoffAllowed, takesPartInHandoff } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -40,6 +40,12 @@ export async function recordHandoff({
   try {
     return await em.transactional(async (tx) => {
       const { transfer: t, role, facts, legs } = await loadTransferForActor(tx, transferId, actor, { lock: true });
+      if (!takesPartInHandoff(actor, role, facts, input.handoffIndex))
+        throw forbidden(
+          role === "admin"
+            ? "Administrators can read transfers but not record handoffs."
+            : "This handoff is for another courier or the receiver to record.",
+        );
       if (input.handoffIndex < facts.handoffsDone) throw conflict("This handoff has already been recorded.");
       const allowed = handoffAllowed(actor, role, facts);
       if (allowed === null) {

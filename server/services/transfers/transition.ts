@@ -9,7 +9,7 @@ import type { Actor } from "../../auth/actor";
 import { AnimalSchema, ContainerSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
-import { transferAbilities } from "../../policies/transfer.policy";
+import { mayRequestTransition, transferAbilities } from "../../policies/transfer.policy";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -82,6 +82,12 @@ export async function transitionTransfer({
     const from = t.status as TransferStatus;
     const to = input.to;
     const abilities = transferAbilities(actor, role, facts);
+    if (!mayRequestTransition(role, to))
+      throw forbidden(
+        role === "admin"
+          ? "Administrators can read transfers but not move them."
+          : "Your part in this transfer does not allow that step.",
+      );
     if (to === from) throw conflict(`The transfer is already ${TRANSFER_STATUS_WORDS[to].toLowerCase()}.`);
     const viaEvent = EVENT_DRIVEN[to];
     if (viaEvent && canTransition(from, to))

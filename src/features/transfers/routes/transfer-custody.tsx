@@ -46,15 +46,25 @@ export function TransferCustodyRoute() {
         title={`Custody log${number ? ` for ${number}` : ""}`}
         eyebrow="Append-only record"
         actions={
-          <Link
-            to={paths.transfers.detail.href(transferId)}
-            className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
-          >
-            Back to the transfer
-          </Link>
+          <>
+            <a
+              href={`/api/transfers/${encodeURIComponent(transferId)}/custody/export`}
+              download
+              className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+            >
+              Download the log to keep
+            </a>
+            <Link
+              to={paths.transfers.detail.href(transferId)}
+              className="inline-flex min-h-11 items-center px-2 font-medium text-fern underline"
+            >
+              Back to the transfer
+            </Link>
+          </>
         }
       >
-        Each entry carries the hash of the one before it, so a changed or missing entry shows.
+        Each entry carries the hash of the one before it, and the log&apos;s end is recorded apart from the entries, so
+        a changed or missing entry shows — at the end too. The downloaded log can be checked later without Hatchway.
       </PageHeader>
       {custody.isPending ? (
         <Loading label="Loading the custody log…" />
@@ -70,12 +80,25 @@ export function TransferCustodyRoute() {
             </Notice>
           ) : (
             <Notice tone="block" role="alert" title={`The log is broken at entry ${custody.data.brokenAt ?? "?"}`}>
-              {custody.data.reason ?? "An entry does not match the one before it."} Tell your administrator.
+              {custody.data.breaks.length > 1 ? (
+                <ul className="mb-1 grid gap-0.5">
+                  {custody.data.breaks.map((b) => (
+                    <li key={`${b.problem}-${b.seq}`}>{b.message}</li>
+                  ))}
+                </ul>
+              ) : (
+                `${custody.data.reason ?? "An entry does not match the one before it."} `
+              )}
+              Tell your administrator.
             </Notice>
           )}
           <ol className="grid gap-2">
             {custody.data.entries.map((e) => (
-              <Entry key={e.seq} entry={e} broken={custody.data.brokenAt === e.seq} />
+              <Entry
+                key={e.seq}
+                entry={e}
+                broken={custody.data.breaks.some((b) => e.seq >= b.seq && e.seq <= b.toSeq)}
+              />
             ))}
           </ol>
         </div>
