@@ -83,8 +83,15 @@ export const ORGANIZATION_KINDS = [
 ] as const;
 export type OrganizationKind = (typeof ORGANIZATION_KINDS)[number];
 
-export const USER_ROLES = ["admin", "member", "courier"] as const;
+/**
+ * `admin` runs the site; within an organisation a `manager` runs its people and details, a
+ * `member` keeps animals (keeper organisations) and a `courier` carries (courier services).
+ */
+export const USER_ROLES = ["admin", "manager", "member", "courier"] as const;
 export type UserRole = (typeof USER_ROLES)[number];
+
+/** The roles of the people of a keeper organisation, who send and receive transfers. */
+export const KEEPER_ROLES = ["manager", "member"] as const satisfies readonly UserRole[];
 
 export const TRANSPORT_MODES = ["overnight_air", "ground_courier", "hand_delivery"] as const;
 export type TransportMode = (typeof TRANSPORT_MODES)[number];

@@ -66,7 +66,7 @@ export async function buildUser(em: EntityManager, overrides: UserOverrides = {}
   const organization =
     overrides.organization !== undefined
       ? overrides.organization
-      : role === "member"
+      : role === "member" || role === "manager"
         ? await buildOrganization(em)
         : role === "courier"
           ? await buildOrganization(em, { kind: "courier_service" })

@@ -66,3 +66,20 @@ export function presentActor(actor: Actor): UserDto {
     organization: actor.organization,
   };
 }
+
+/**
+ * A person who keeps animals for an organisation: a manager or member of a keeper organisation
+ * (not of a courier service). Keepers send and receive transfers, hold permits and plan trips.
+ */
+export function isKeeper(actor: Actor): boolean {
+  return (
+    (actor.role === "member" || actor.role === "manager") &&
+    actor.organization !== null &&
+    actor.organization.kind !== "courier_service"
+  );
+}
+
+/** A courier of a courier service: carries the legs assigned to them. */
+export function isCourier(actor: Actor): boolean {
+  return actor.role === "courier";
+}

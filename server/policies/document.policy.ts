@@ -2,7 +2,7 @@ import type { DocumentAbilitiesDto } from "@shared/schemas/compliance";
 import type { ViewerRole } from "@shared/schemas/transfer";
 import type { TransferStatus } from "@shared/constants";
 import { EDITABLE } from "@shared/transfer/lifecycle";
-import type { Actor } from "../auth/actor";
+import { isKeeper, type Actor } from "../auth/actor";
 
 /**
  * Who the caller is to a permit or certificate: a member of the organisation holding it, a
@@ -13,7 +13,7 @@ export type DocumentViewer = "holder" | "party" | "courier";
 
 /** Members of a keeper organisation hold permits and certificates; admins and couriers do not. */
 export function canHoldDocuments(actor: Actor): boolean {
-  return actor.role === "member" && actor.organization !== null && !actor.disabled;
+  return isKeeper(actor) && !actor.disabled;
 }
 
 export function isHolder(actor: Actor, holderOrganizationId: string): boolean {

@@ -1,8 +1,8 @@
-import type { Actor } from "../auth/actor";
+import { isKeeper, type Actor } from "../auth/actor";
 
 /** Who may plan a trip with the what-if: keepers (members) and admins, not couriers. */
 export function canPlanTrips(actor: Actor): boolean {
-  return !actor.disabled && (actor.role === "member" || actor.role === "admin");
+  return !actor.disabled && (isKeeper(actor) || actor.role === "admin");
 }
 
 /** Who may change the temperature profiles every verdict is computed with: admins. */

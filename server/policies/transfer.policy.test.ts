@@ -34,6 +34,7 @@ const facts = (over: Partial<TransferFacts> = {}): TransferFacts => ({
   receiverOrganizationId: "R",
   legCourierIds: ["c1", "c2"],
   handoffsDone: 0,
+  everSent: true,
   ...over,
 });
 
@@ -48,6 +49,28 @@ describe("transfer policy", () => {
     expect(viewerRoleFor(courier("c9"), t)).toBeNull();
     expect(viewerRoleFor(member("o", "O"), t)).toBeNull();
     expect(viewerRoleFor(admin, t)).toBe("admin");
+  });
+
+  // Issue 14, §4: a draft is the sender's until it is sent; once sent it stays shared, also
+  // when sent back for changes (the status is "draft" again).
+  it("keeps a draft never sent from the receiver and the couriers, and not a draft sent back", () => {
+    const unsent = facts({ status: "draft", everSent: false });
+    expect(viewerRoleFor(member("s", "S"), unsent)).toBe("sender");
+    expect(viewerRoleFor(member("r", "R"), unsent)).toBeNull();
+    expect(viewerRoleFor(courier("c1"), unsent)).toBeNull();
+    expect(viewerRoleFor(admin, unsent)).toBe("admin");
+    expect(viewerRoleFor(member("r", "R"), facts({ status: "cancelled", everSent: false }))).toBeNull();
+    const sentBack = facts({ status: "draft", everSent: true });
+    expect(viewerRoleFor(member("r", "R"), sentBack)).toBe("receiver");
+    expect(viewerRoleFor(courier("c1"), sentBack)).toBe("courier");
+    const manager: Actor = { ...member("m", "R"), role: "manager" };
+    expect(viewerRoleFor(manager, facts())).toBe("receiver");
+    const courierManager: Actor = {
+      ...courier("cm"),
+      role: "manager",
+      organization: { id: "couriers", name: "couriers", kind: "courier_service" },
+    };
+    expect(viewerRoleFor(courierManager, facts({ senderOrganizationId: "couriers" }))).toBeNull();
   });
 
   it("walks custody along the legs: pickup by leg 1, then leg 2, then the receiver", () => {

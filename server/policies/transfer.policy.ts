@@ -1,7 +1,7 @@
 import type { TransferAbilitiesDto, ViewerRole } from "@shared/schemas/transfer";
 import type { TransferStatus } from "@shared/constants";
 import { CANCELLABLE, EDITABLE } from "@shared/transfer/lifecycle";
-import type { Actor } from "../auth/actor";
+import { isCourier, isKeeper, type Actor } from "../auth/actor";
 
 export type TransferFacts = {
   status: TransferStatus;
@@ -10,7 +10,19 @@ export type TransferFacts = {
   /** Courier user ids by leg, in leg order. */
   legCourierIds: readonly string[];
   handoffsDone: number;
+  /** Whether the sender ever sent it to the receiver (a transfer sent back stays shared). */
+  everSent: boolean;
 };
+
+/**
+ * A draft is the sender's until it is sent (issue 14, §4): the receiver and the couriers do not
+ * see it at all before the first sending. Once sent it stays shared, also when it is sent back
+ * for changes. A transfer made in a later state by the loaders (demo, fixtures) counts as sent;
+ * one cancelled before it was ever sent stays the sender's.
+ */
+export function sharedWithOtherParties(t: Pick<TransferFacts, "status" | "everSent">): boolean {
+  return t.everSent || (t.status !== "draft" && t.status !== "cancelled");
+}
 
 /**
  * Who the caller is to this transfer: a member of the sending or receiving organisation,
@@ -18,13 +30,14 @@ export type TransferFacts = {
  */
 export function viewerRoleFor(
   actor: Actor,
-  t: Pick<TransferFacts, "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds">,
+  t: Pick<TransferFacts, "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds" | "status" | "everSent">,
 ): ViewerRole | null {
   if (actor.disabled) return null;
   const orgId = actor.organization?.id;
-  if (actor.role === "member" && orgId === t.senderOrganizationId) return "sender";
-  if (actor.role === "member" && orgId === t.receiverOrganizationId) return "receiver";
-  if (actor.role === "courier" && t.legCourierIds.includes(actor.id)) return "courier";
+  if (isKeeper(actor) && orgId === t.senderOrganizationId) return "sender";
+  if (!sharedWithOtherParties(t)) return actor.role === "admin" ? "admin" : null;
+  if (isKeeper(actor) && orgId === t.receiverOrganizationId) return "receiver";
+  if (isCourier(actor) && t.legCourierIds.includes(actor.id)) return "courier";
   if (actor.role === "admin") return "admin";
   return null;
 }

@@ -1,4 +1,4 @@
-import type { Actor } from "../auth/actor";
+import { isCourier, isKeeper, type Actor } from "../auth/actor";
 
 /** Who may manage accounts: admins only. */
 export function canManageUsers(actor: Actor): boolean {
@@ -11,7 +11,7 @@ export function abilitiesOf(actor: Actor) {
     manageUsers: canManageUsers(actor),
     manageOrganizations: actor.role === "admin",
     readCaughtMail: actor.role === "admin",
-    draftTransfers: actor.role === "member" && actor.organization != null,
-    carryTransfers: actor.role === "courier",
+    draftTransfers: isKeeper(actor),
+    carryTransfers: isCourier(actor),
   };
 }

@@ -85,6 +85,7 @@ export function factsOfView(v: TransferView): TransferFacts {
     receiverOrganizationId: v.t.receiver_organization_id,
     legCourierIds: v.legs.map((l) => l.courier_id),
     handoffsDone: v.handoffs.length,
+    everSent: v.t.first_sent_at != null,
   };
 }
 

@@ -11,6 +11,7 @@ export const ORGANIZATION_KIND_WORDS: Readonly<Record<OrganizationKind, string>>
 
 export const USER_ROLE_WORDS: Readonly<Record<UserRole, string>> = {
   admin: "Administrator",
+  manager: "Manager",
   member: "Keeper organisation member",
   courier: "Courier",
 };

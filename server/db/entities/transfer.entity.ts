@@ -54,6 +54,8 @@ export const TransferSchema = defineEntity({
     handlingNotes: p.text().nullable(),
     senderPrivateNotes: p.text().nullable(),
     receiverPrivateNotes: p.text().nullable(),
+    /** When the sender first sent it to the receiver; until then the draft is the sender's alone. */
+    firstSentAt: p.datetime().nullable(),
     confirmedAt: p.datetime().nullable(),
     confirmedBy: () => p.manyToOne(UserSchema).ref().nullable(),
     cancelledReason: p.text().nullable(),

@@ -1,3 +1,5 @@
+import { isKeeper } from "../../auth/actor";
+import { KEEPER_ROLES } from "@shared/constants";
 import { Router } from "express";
 import type { DirectoryCourierDto, DirectoryOrganizationDto } from "@shared/schemas/transfer";
 import type { UsState } from "@shared/constants";
@@ -11,7 +13,8 @@ export function directoryRouter(): Router {
   const router = Router();
   router.use(requireUser, (req, _res, next) => {
     const actor = currentUser(req);
-    if (actor.role === "courier") return next(forbidden("The directory is for keeper organisations."));
+    if (!isKeeper(actor) && actor.role !== "admin")
+      return next(forbidden("The directory is for keeper organisations."));
     next();
   });
 
@@ -23,7 +26,7 @@ export function directoryRouter(): Router {
     );
     const members = await req.em.find(
       UserSchema,
-      { role: "member", disabled: false, organization: { $in: orgs.map((o) => o.id) } },
+      { role: { $in: KEEPER_ROLES }, disabled: false, organization: { $in: orgs.map((o) => o.id) } },
       { orderBy: { displayName: "asc" } },
     );
     const organizations: DirectoryOrganizationDto[] = orgs.map((o) => ({

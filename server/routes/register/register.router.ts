@@ -1,3 +1,4 @@
+import { isKeeper } from "../../auth/actor";
 import { Router, type Request } from "express";
 import { stringify } from "csv-stringify/sync";
 import { registerQuerySchema, type RegisterEntryDto } from "@shared/schemas/transfer";
@@ -17,7 +18,7 @@ export function neutraliseCell(value: string): string {
 
 async function entriesFor(req: Request): Promise<RegisterEntryDto[]> {
   const actor = currentUser(req);
-  if (actor.role !== "member" || !actor.organization)
+  if (!isKeeper(actor) || !actor.organization)
     throw forbidden("The collection register belongs to a keeper organisation.");
   const q = parse(registerQuerySchema, req.query);
   const where: Record<string, unknown> = { organization: actor.organization.id };

@@ -1,11 +1,11 @@
 import { createHash, randomUUID } from "node:crypto";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { UniqueConstraintViolationException } from "@mikro-orm/core";
+import { UniqueConstraintViolationException, type FilterQuery } from "@mikro-orm/core";
 import { sniffScanType, SCAN_EXTENSIONS } from "@shared/compliance/scan-type";
 import type { TransferStatus } from "@shared/constants";
 import type { DocumentInput, TransferDocumentDto } from "@shared/schemas/compliance";
 import { documentInputSchema } from "@shared/schemas/compliance";
-import type { Actor } from "../../auth/actor";
+import { isCourier, type Actor } from "../../auth/actor";
 import type { Storage } from "../../adapters/storage";
 import {
   DocumentScanSchema,
@@ -32,7 +32,13 @@ import { scanContentProblem } from "./scan-content";
 
 const ONLY_PARTIES_ATTACH = "Only the sender and the receiver attach documents to a transfer.";
 
+/** A draft never sent is the sender's alone (sharedWithOtherParties in transfer.policy.ts). */
+const SHARED_WITH_OTHER_PARTIES: FilterQuery<Transfer> = {
+  $or: [{ firstSentAt: { $ne: null } }, { status: { $nin: ["draft", "cancelled"] } }],
+};
+
 /** Most scans one document keeps (front and back of a few pages). */
+
 export const SCANS_PER_DOCUMENT_MAX = 20;
 /** Transfers between the same two parties looked at when deciding whether a document is shared. */
 const SHARED_TRANSFERS_LOOKED_AT = 50;
@@ -160,23 +166,29 @@ export async function documentViewer(
       TransferSchema,
       {
         $or: [
-          { senderOrganization: holderOrg, receiverOrganization: mine },
+          { $and: [{ senderOrganization: holderOrg, receiverOrganization: mine }, SHARED_WITH_OTHER_PARTIES] },
           { senderOrganization: mine, receiverOrganization: holderOrg },
         ],
       },
       options,
     );
-  } else if (actor.role === "courier") {
+  } else if (isCourier(actor)) {
     const carried = (await em.find(LegSchema, { courier: actor.id })).map((leg) => leg.transfer.id);
     if (carried.length)
       candidates = await em.find(
         TransferSchema,
-        { id: { $in: carried }, $or: [{ senderOrganization: holderOrg }, { receiverOrganization: holderOrg }] },
+        {
+          id: { $in: carried },
+          $and: [
+            { $or: [{ senderOrganization: holderOrg }, { receiverOrganization: holderOrg }] },
+            SHARED_WITH_OTHER_PARTIES,
+          ],
+        },
         options,
       );
   }
   if (!(await someTransferUses(em, doc, candidates))) return null;
-  return actor.role === "courier" ? "courier" : "party";
+  return isCourier(actor) ? "courier" : "party";
 }
 
 /** Loads a document the caller may see, with its organisation; 404 for anyone else. */

@@ -1,3 +1,4 @@
+import { KEEPER_ROLES } from "@shared/constants";
 import { DOCUMENT_KIND_WORDS } from "@shared/words";
 import { LockMode } from "@mikro-orm/core";
 import { addDays } from "@shared/temperature/zoned-time";
@@ -34,7 +35,7 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
     );
     for (const doc of docs) {
       const org = orgs.get(doc.organization.id)!;
-      const members = await tx.find(UserSchema, { organization: org.id, role: "member", disabled: false });
+      const members = await tx.find(UserSchema, { organization: org.id, role: { $in: KEEPER_ROLES }, disabled: false });
       const { daysLeft } = expiryOf(doc.validTo ?? null, today);
       for (const member of members) {
         enqueueMail(

@@ -8,7 +8,7 @@ import type {
   ViewerRole,
 } from "@shared/schemas/transfer";
 import type { TransferStatus, TransportMode, UsState } from "@shared/constants";
-import type { Actor } from "../../auth/actor";
+import { isCourier, isKeeper, type Actor } from "../../auth/actor";
 import { invalidField } from "../../http/errors";
 
 type Query = z.output<typeof transferListQuerySchema>;
@@ -92,15 +92,17 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
   const orgId = actor.organization?.id ?? null;
   const branches: string[] = [];
   const where = (visibility: string) => [visibility, ...filters].join(" AND ");
+  // A draft never sent is the sender's alone (sharedWithOtherParties in transfer.policy.ts).
+  const shared = `(first_sent_at IS NOT NULL OR status NOT IN ('draft', 'cancelled'))`;
   if (actor.role === "admin") branches.push(where("TRUE"));
-  else if (actor.role === "courier")
-    branches.push(where(`id IN (SELECT transfer_id FROM leg WHERE courier_id = ${p(actor.id)})`));
-  else if (orgId) {
+  else if (isCourier(actor))
+    branches.push(where(`id IN (SELECT transfer_id FROM leg WHERE courier_id = ${p(actor.id)}) AND ${shared}`));
+  else if (orgId && isKeeper(actor)) {
     const org = p(orgId);
     if (q.role !== "receiving") branches.push(where(`sender_organization_id = ${org}`));
-    if (q.role !== "sending") branches.push(where(`receiver_organization_id = ${org}`));
+    if (q.role !== "sending") branches.push(where(`receiver_organization_id = ${org} AND ${shared}`));
   }
-  if (actor.role === "member" && q.role === "carrying") branches.length = 0;
+  if (isKeeper(actor) && q.role === "carrying") branches.length = 0;
   if (branches.length === 0) return { transfers: [], nextCursor: null };
 
   // Each branch walks its own index in order and stops at the page size; the union is small.
@@ -132,7 +134,7 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
   const roleOf = (r: Row): ViewerRole =>
     actor.role === "admin"
       ? "admin"
-      : actor.role === "courier"
+      : isCourier(actor)
         ? "courier"
         : r.sender_organization_id === orgId
           ? "sender"

@@ -30,6 +30,7 @@ export async function loadTransferForActor(
     receiverOrganizationId: transfer.receiverOrganization.id,
     legCourierIds: legs.map((l) => l.courier.id),
     handoffsDone,
+    everSent: transfer.firstSentAt != null,
   };
   const role = viewerRoleFor(actor, facts);
   if (!role) throw notFound("That transfer");

@@ -1,3 +1,4 @@
+import { KEEPER_ROLES } from "@shared/constants";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { Actor } from "../../auth/actor";
 import { UserSchema } from "../../db/entities/user.entity";
@@ -25,7 +26,7 @@ export async function notifyParty(
   const contact = contactRef ? await em.findOne(UserSchema, { id: contactRef.id, disabled: false }) : null;
   const recipients = contact
     ? [contact]
-    : await em.find(UserSchema, { organization: orgRef.id, role: "member", disabled: false });
+    : await em.find(UserSchema, { organization: orgRef.id, role: { $in: KEEPER_ROLES }, disabled: false });
   const org = await em.findOneOrFail(OrganizationSchema, { id: orgRef.id });
   for (const r of recipients) {
     enqueueMail(

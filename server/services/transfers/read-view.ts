@@ -27,6 +27,7 @@ export type TransferView = {
     sale_price_usd: number | null;
     sender_organization_id: string;
     receiver_organization_id: string;
+    first_sent_at: string | null;
     origin_street: string;
     origin_city: string;
     origin_state: string;
@@ -165,6 +166,7 @@ const T_JSON = jsonOf("t", [
   "sale_price_usd",
   "sender_organization_id",
   "receiver_organization_id",
+  "first_sent_at",
   "origin_street",
   "origin_city",
   "origin_state",

@@ -118,6 +118,8 @@ export async function transitionTransfer({
       t.confirmedBy = ref(tx.getReference(UserSchema, actor.id));
       t.reconfirmationReason = null;
     }
+    // From now on the receiver and the couriers see it, also if it is sent back (issue 14, §4).
+    if (to === "awaiting_receiver") t.firstSentAt ??= new Date();
     if (to === "cancelled") t.cancelledReason = input.reason ?? null;
     await appendCustody(tx, t.id, actor, "status_change", { from, to, reason: input.reason ?? null });
 

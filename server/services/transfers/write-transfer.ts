@@ -1,3 +1,4 @@
+import { KEEPER_ROLES } from "@shared/constants";
 import { randomBytes } from "node:crypto";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { LockMode, ref, UniqueConstraintViolationException } from "@mikro-orm/core";
@@ -11,7 +12,7 @@ import { placeFromZip } from "@shared/temperature/places";
 import { jurisdictionName } from "@shared/compliance/jurisdiction";
 import type { TaxonRank, TransferStatus } from "@shared/constants";
 import { TAXON_RANK_WORDS, TRANSFER_STATUS_WORDS, changedFieldsText } from "@shared/words";
-import type { Actor } from "../../auth/actor";
+import { isKeeper, type Actor } from "../../auth/actor";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
@@ -64,7 +65,12 @@ async function resolveReceiver(em: EntityManager, actor: Actor, organizationId: 
     throw invalidField(["receiverOrganizationId"], "choose a keeper organisation");
   let contact = null;
   if (contactId) {
-    contact = await em.findOne(UserSchema, { id: contactId, organization: org, role: "member", disabled: false });
+    contact = await em.findOne(UserSchema, {
+      id: contactId,
+      organization: org,
+      role: { $in: KEEPER_ROLES },
+      disabled: false,
+    });
     if (!contact) throw invalidField(["receiverContactId"], "choose a member of the receiving organisation");
   }
   return { org, contact };
@@ -167,7 +173,7 @@ export async function createTransfer({
   actor: Actor;
   input: TransferInputParsed;
 }) {
-  if (actor.role !== "member" || !actor.organization)
+  if (!isKeeper(actor) || !actor.organization)
     throw forbidden("Only a member of a keeper organisation can draft a transfer.");
   return em
     .transactional(async (tx) => {

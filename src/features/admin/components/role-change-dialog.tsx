@@ -7,6 +7,8 @@ import { USER_ROLE_WORDS } from "@shared/words";
 const ROLE_POWERS: Record<UserRole, string> = {
   admin:
     "Administrators read every transfer, manage people and organisations, and edit the rule library and the temperature profiles.",
+  manager:
+    "Managers run their own organisation: they invite its people, change their roles, disable them and edit the organisation's details; in a keeper organisation they also do everything a member does.",
   member:
     "Members of a keeper organisation draft, send, confirm and check in their organisation's transfers, and keep its register.",
   courier: "Couriers see only the legs they are assigned to, and record pickups and handoffs.",
