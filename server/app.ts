@@ -7,6 +7,7 @@ import { csrfProtection, noSourceMaps, noStore, requireJsonBody, securityHeaders
 import { jsonBody, wellFormedAddress } from "./http/well-formed-text";
 import { configurePassport, sessionMiddleware } from "./auth/session";
 import { healthRouter } from "./routes/health/health.router";
+import { signupRouter } from "./routes/signup/signup.router";
 import { authRouter } from "./routes/auth/auth.router";
 import { usersRouter } from "./routes/users/users.router";
 import { organizationsRouter } from "./routes/organizations/organizations.router";
@@ -72,6 +73,7 @@ export function createApp(input: AppContext | AppBase): Express {
   api.use(csrfProtection([new URL(ctx.env.PUBLIC_URL).origin]));
 
   api.use("/auth", authRouter(ctx, auth));
+  api.use("/signup", signupRouter(ctx));
   api.use("/users", usersRouter(ctx));
   api.use("/organizations", organizationsRouter());
   api.use("/dev/mail", caughtMailRouter(ctx));

@@ -58,6 +58,10 @@ const fields = z.object({
   /** The longest an address is made to wait between attempts once it is being slowed. */
   LOGIN_ADDRESS_DELAY_MAX_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
   LOGIN_BLOCK_MINUTES: z.coerce.number().int().min(1).default(15),
+  /** Sign-up, confirmation and reset requests per e-mail address per hour (server/auth/throttle.ts). */
+  ACCOUNT_REQUESTS_PER_ADDRESS_PER_HOUR: z.coerce.number().int().min(1).default(5),
+  /** The same requests per network address per hour, each kind counted apart. */
+  ACCOUNT_REQUESTS_PER_IP_PER_HOUR: z.coerce.number().int().min(1).default(30),
 });
 
 export const envSchema = fields

@@ -90,6 +90,14 @@ export type OrganizationKind = (typeof ORGANIZATION_KINDS)[number];
 export const USER_ROLES = ["admin", "manager", "member", "courier"] as const;
 export type UserRole = (typeof USER_ROLES)[number];
 
+/**
+ * What a one-time link sent by e-mail does: choose a first password (an invitation), confirm the
+ * address a new organisation signed up with, set a new password after "Forgot your password?",
+ * or accept joining an organisation (an existing account invited by a manager).
+ */
+export const ACCOUNT_TOKEN_PURPOSES = ["set_password", "confirm_email", "reset_password", "join_organization"] as const;
+export type AccountTokenPurpose = (typeof ACCOUNT_TOKEN_PURPOSES)[number];
+
 /** The roles of the people of a keeper organisation, who send and receive transfers. */
 export const KEEPER_ROLES = ["manager", "member"] as const satisfies readonly UserRole[];
 

@@ -1,4 +1,5 @@
 import type { RequestHandler } from "express";
+import type pg from "pg";
 import session from "express-session";
 import passport from "passport";
 import { Strategy as LocalStrategy } from "passport-local";
@@ -65,7 +66,8 @@ export function configurePassport(ctx: AppContext): passport.PassportStatic {
       em.findOne(UserSchema, { emailKey: emailKey(email) }, { populate: ["organization"] })
         .then(async (user) => {
           const ok = await verifyPassword(user?.passwordHash, password);
-          if (!user || !ok || user.disabled) return done(null, false);
+          // A sign-up whose address is not yet confirmed cannot sign in (issue 14, §1).
+          if (!user || !ok || user.disabled || user.awaitingConfirmation) return done(null, false);
           done(null, actorFromUser(user));
         })
         .catch(done);
@@ -93,4 +95,31 @@ export function configurePassport(ctx: AppContext): passport.PassportStatic {
   };
   instance.deserializeUser(deserialize as never);
   return instance;
+}
+
+/**
+ * Signs `actor` in on this request's session: passport regenerates the session id (fixation
+ * defence) and keepSessionInfo carries the CSRF token over (D5); the timeouts start now.
+ */
+export async function signInSession(req: Express.Request, actor: Actor): Promise<void> {
+  await new Promise<void>((resolve, reject) =>
+    req.logIn(actor, { session: true, keepSessionInfo: true }, (err) => (err ? reject(err) : resolve())),
+  );
+  const now = Date.now();
+  if (req.session) {
+    req.session.createdAt = now;
+    req.session.lastSeenAt = now;
+  }
+}
+
+/**
+ * Ends every stored session of a user except `keepSessionId` (after a password is set by a
+ * link or changed): whoever knew the old password is signed out everywhere.
+ */
+export async function endOtherSessions(pool: pg.Pool, userId: string, keepSessionId: string | null): Promise<number> {
+  const { rowCount } = await pool.query(
+    `DELETE FROM session WHERE sess->'passport'->>'user' = $1 AND ($2::text IS NULL OR sid <> $2)`,
+    [userId, keepSessionId],
+  );
+  return rowCount ?? 0;
 }

@@ -92,3 +92,62 @@ export function createLoginThrottle(pool: pg.Pool, env: Env) {
 }
 
 export type LoginThrottle = ReturnType<typeof createLoginThrottle>;
+
+/** The account requests that are limited: sign-up, confirming a sign-up, asking for a new password. */
+export type AccountAction = "signup" | "confirm" | "reset";
+
+const ACCOUNT_WINDOW_S = 3600;
+
+/**
+ * Sign-up, confirmation and password-reset requests, limited like sign-in (D22) in the same
+ * PostgreSQL table: per e-mail address (an address cannot be flooded with mail) and per network
+ * address (one machine cannot create organisations or try tokens in bulk), each per hour. Every
+ * request counts, success or not: the answer is the same either way, so there is no failure to
+ * count. OWASP Forgot Password Cheat Sheet, "implement rate limiting" [published].
+ */
+export function createAccountThrottle(pool: pg.Pool, env: Env) {
+  const common = { storeClient: pool, storeType: "pool", tableName: "auth_throttle", tableCreated: true };
+  const limiters = new Map<string, RateLimiterPostgres>();
+  const limiter = (prefix: string, points: number) => {
+    const key = `${prefix}:${points}`;
+    let found = limiters.get(key);
+    if (!found) {
+      found = new RateLimiterPostgres({ ...common, keyPrefix: prefix, points, duration: ACCOUNT_WINDOW_S });
+      limiters.set(key, found);
+    }
+    return found;
+  };
+
+  return {
+    /** Counts one request of `action` and throws 429 with Retry-After when the address or the network is over its limit. */
+    async consume(action: AccountAction, ip: string, accountKey: string | null): Promise<void> {
+      const checks: [RateLimiterPostgres, string, string][] = [
+        [limiter(`${action}-ip`, env.ACCOUNT_REQUESTS_PER_IP_PER_HOUR), ip, "from this network"],
+      ];
+      if (accountKey)
+        checks.push([
+          limiter(`${action}-acct`, env.ACCOUNT_REQUESTS_PER_ADDRESS_PER_HOUR),
+          accountKey,
+          "for this e-mail address",
+        ]);
+      for (const [limit, key, where] of checks) {
+        try {
+          await limit.consume(key, 1);
+        } catch (rejection) {
+          if (rejection instanceof Error) throw rejection;
+          const ms = (rejection as { msBeforeNext: number }).msBeforeNext;
+          const minutes = Math.max(1, Math.ceil(ms / 60_000));
+          throw new HttpError(
+            429,
+            "too_many_attempts",
+            `Too many requests ${where}. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`,
+            undefined,
+            { "Retry-After": String(Math.max(1, Math.ceil(ms / 1000))) },
+          );
+        }
+      }
+    },
+  };
+}
+
+export type AccountThrottle = ReturnType<typeof createAccountThrottle>;

@@ -149,3 +149,74 @@ export function documentExpiryMail(p: {
     ].join("\n"),
   };
 }
+
+const SIGNATURE = ["", "— Hatchway"];
+
+/** After a sign-up: the one-time link that confirms the address and opens the account. */
+export function signupConfirmationMail(p: {
+  to: string;
+  name: string;
+  organization: string;
+  link: string;
+  hours: number;
+}): MailDraft {
+  return {
+    to: p.to,
+    topic: "account.confirm_signup",
+    subject: "Confirm your e-mail address for Hatchway",
+    text: [
+      `Hello ${p.name},`,
+      "",
+      `You signed up ${p.organization} on Hatchway, the shared record for moving live animals between keepers.`,
+      `Confirm your e-mail address to open the account (the link works once and expires in ${p.hours} hours):`,
+      p.link,
+      "",
+      "If you did not sign up, ignore this message: without the confirmation nothing happens.",
+      ...SIGNATURE,
+    ].join("\n"),
+  };
+}
+
+/** To an address that already has an account, when someone signs up with it: no second account is made. */
+export function signupAddressTakenMail(p: {
+  to: string;
+  name: string;
+  signInLink: string;
+  resetLink: string;
+}): MailDraft {
+  return {
+    to: p.to,
+    topic: "account.signup_taken",
+    subject: "Someone tried to sign up to Hatchway with your e-mail address",
+    text: [
+      `Hello ${p.name},`,
+      "",
+      "Someone just tried to sign up a new organisation on Hatchway with this e-mail address. It already has an account, so nothing was created.",
+      "",
+      `If it was you, sign in instead: ${p.signInLink}`,
+      `If you forgot your password, choose a new one here: ${p.resetLink}`,
+      "",
+      "If it was not you, you can ignore this message; your account has not changed.",
+      ...SIGNATURE,
+    ].join("\n"),
+  };
+}
+
+/** "Forgot your password?": a one-time link to choose a new one. */
+export function passwordResetMail(p: { to: string; name: string; link: string; hours: number }): MailDraft {
+  return {
+    to: p.to,
+    topic: "account.password_reset",
+    subject: "Choose a new Hatchway password",
+    text: [
+      `Hello ${p.name},`,
+      "",
+      `Someone asked to reset the password of your Hatchway account. Choose a new password here (the link works once and expires in ${p.hours} hours):`,
+      p.link,
+      "",
+      "Setting a new password signs your account out everywhere else.",
+      "If you did not ask for this, ignore this message: your password stays as it is.",
+      ...SIGNATURE,
+    ].join("\n"),
+  };
+}

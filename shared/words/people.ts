@@ -1,4 +1,4 @@
-import type { OrganizationKind, UserRole } from "../constants";
+import type { AccountTokenPurpose, OrganizationKind, UserRole } from "../constants";
 
 export const ORGANIZATION_KIND_WORDS: Readonly<Record<OrganizationKind, string>> = {
   breeder: "Breeder",
@@ -14,4 +14,12 @@ export const USER_ROLE_WORDS: Readonly<Record<UserRole, string>> = {
   manager: "Manager",
   member: "Keeper organisation member",
   courier: "Courier",
+};
+
+/** What a one-time link from an e-mail was for, said when it no longer works. */
+export const ACCOUNT_TOKEN_PURPOSE_WORDS: Readonly<Record<AccountTokenPurpose, string>> = {
+  set_password: "Choosing your first password",
+  confirm_email: "Confirming your e-mail address",
+  reset_password: "Choosing a new password",
+  join_organization: "Joining an organisation",
 };

@@ -15,6 +15,15 @@ export const OrganizationSchema = defineEntity({
     zip: p.string().length(10),
     phone: p.string().length(40),
     email: p.string().length(254),
+    /**
+     * Invited by a sender or made by a sign-up not yet confirmed: it can already be the receiver
+     * (or courier service) of a transfer, and becomes a full organisation when its first person confirms.
+     */
+    pending: p.boolean().default(false),
+    /** Shown in the directory (name, kind, city and state only); off until the organisation chooses it. */
+    listed: p.boolean().default(false),
+    /** The organisation whose person invited this one, if it came by invitation. */
+    invitedBy: () => p.manyToOne(OrganizationSchema).ref().nullable(),
     createdAt: createdAtProperty(),
   },
 });

@@ -17,6 +17,8 @@ export const UserSchema = defineEntity({
     role: p.enum([...USER_ROLES]),
     organization: () => p.manyToOne(OrganizationSchema).ref().nullable(),
     disabled: p.boolean().default(false),
+    /** A person who signed up and has not yet confirmed their e-mail address cannot sign in. */
+    awaitingConfirmation: p.boolean().default(false),
     createdAt: createdAtProperty(),
   },
 });

@@ -9,6 +9,7 @@ import { Migration20261202130000_least_privilege } from "./Migration202612021300
 import { Migration20261202130100_custody_head } from "./Migration20261202130100_custody_head";
 import { Migration20261202150000_draft_privacy } from "./Migration20261202150000_draft_privacy";
 import { Migration20261202150100_organization_roles } from "./Migration20261202150100_organization_roles";
+import { Migration20261202150200_joining } from "./Migration20261202150200_joining";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -20,4 +21,5 @@ export const MIGRATIONS = [
   { name: "Migration20261202130100_custody_head", class: Migration20261202130100_custody_head },
   { name: "Migration20261202150000_draft_privacy", class: Migration20261202150000_draft_privacy },
   { name: "Migration20261202150100_organization_roles", class: Migration20261202150100_organization_roles },
+  { name: "Migration20261202150200_joining", class: Migration20261202150200_joining },
 ];

@@ -1,4 +1,3 @@
-import { createHash } from "node:crypto";
 import { Router, type Request, type Response, type NextFunction } from "express";
 import type passport from "passport";
 import { loginSchema, setPasswordSchema } from "@shared/schemas/auth";
@@ -11,7 +10,11 @@ import { parse } from "../../http/validate";
 import { csrfTokenFor } from "../../http/security";
 import { presentActor, type Actor } from "../../auth/actor";
 import { abilitiesOf } from "../../policies/user.policy";
-import { createLoginThrottle } from "../../auth/throttle";
+import { createAccountThrottle, createLoginThrottle } from "../../auth/throttle";
+import { consumeAccountToken } from "../../auth/tokens";
+import { endOtherSessions, signInSession } from "../../auth/session";
+import { requestPasswordReset } from "../../services/signup";
+import { passwordResetRequestSchema } from "@shared/schemas/account";
 import { hashPassword } from "../../auth/passwords";
 
 /** One answer for unknown e-mail, wrong password and disabled account. */
@@ -31,16 +34,10 @@ function authenticate(
   });
 }
 
-function logIn(req: Request, user: Actor): Promise<void> {
-  // passport regenerates the session id here; keepSessionInfo carries the CSRF token over.
-  return new Promise((resolve, reject) =>
-    req.logIn(user, { session: true, keepSessionInfo: true }, (err) => (err ? reject(err) : resolve())),
-  );
-}
-
 export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Router {
   const router = Router();
   const throttle = createLoginThrottle(ctx.pool, ctx.env);
+  const accountThrottle = createAccountThrottle(ctx.pool, ctx.env);
 
   // The token is only worth handing out once the session that holds it is stored: otherwise
   // every later request would be refused with a token that never works.
@@ -68,9 +65,7 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
       throw invalidCredentials();
     }
     await throttle.recordSuccess(key, ip);
-    await logIn(req, user);
-    req.session.createdAt = Date.now();
-    req.session.lastSeenAt = Date.now();
+    await signInSession(req, user);
     res.json({ user: presentActor(user) });
   });
 
@@ -97,23 +92,35 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
     res.json({ user: presentActor(req.user), abilities: abilitiesOf(req.user) });
   });
 
-  // The link in an invitation e-mail: a one-time token to choose a password.
+  // "Forgot your password?": the same 202 for every address, known or not (issue 14, §1).
+  router.post("/password-reset", async (req, res) => {
+    const { email } = parse(passwordResetRequestSchema, req.body);
+    await accountThrottle.consume("reset", req.ip ?? "unknown", emailKey(email));
+    await requestPasswordReset({ em: req.em, email, links: ctx.links });
+    ctx.kickOutbox();
+    res.status(202).json({ status: "check_your_email" });
+  });
+
+  // The link in an invitation or a reset e-mail: a one-time token to choose a password. Every
+  // other session of the account ends, so whoever knew the old password is signed out.
   router.post("/password", async (req, res) => {
     const input = parse(setPasswordSchema, req.body);
-    const tokenHash = createHash("sha256").update(input.token).digest("hex");
-    const token = await req.em.findOne(PasswordTokenSchema, { tokenHash }, { populate: ["user"] });
-    if (!token || token.usedAt || token.expiresAt.getTime() < Date.now()) {
-      throw new HttpError(
-        400,
-        "invalid_token",
-        "This link has expired or was already used. Ask an administrator for a new invitation.",
-        { field: "token" },
+    await accountThrottle.consume("reset", req.ip ?? "unknown", null);
+    const passwordHash = await hashPassword(input.password);
+    const userId = await req.em.transactional(async (tx) => {
+      const token = await consumeAccountToken(tx, input.token, ["set_password", "reset_password"]);
+      const user = await tx.findOneOrFail(UserSchema, { id: token.user.id });
+      user.passwordHash = passwordHash;
+      // The link came to this address: it is confirmed now.
+      user.awaitingConfirmation = false;
+      await tx.nativeUpdate(
+        PasswordTokenSchema,
+        { user: user.id, purpose: { $in: ["set_password", "reset_password"] }, usedAt: null, id: { $ne: token.id } },
+        { usedAt: new Date() },
       );
-    }
-    const user = await req.em.findOneOrFail(UserSchema, { id: token.user.id });
-    user.passwordHash = await hashPassword(input.password);
-    token.usedAt = new Date();
-    await req.em.flush();
+      return user.id;
+    });
+    await endOtherSessions(ctx.pool, userId, req.user?.id === userId ? req.sessionID : null);
     res.status(204).end();
   });
 

@@ -1,0 +1,55 @@
+import { ORGANIZATION_KINDS } from "../constants";
+import { instruction } from "../validation/messages";
+import { z } from "../validation/zod";
+import { emailSchema, passwordSchema, phoneSchema, requiredText, text, usStateSchema, zipSchema } from "./common";
+
+/** A one-time link's token as it arrives from the e-mail (the server only keeps its SHA-256). */
+export const linkTokenSchema = text(200).pipe(
+  z.string().min(20, { error: instruction("this link is not whole; open the link from the e-mail again") }),
+);
+
+/** The organisation a sign-up creates: the public contract of POST /api/signup (issue 14, §1). */
+export const signupOrganizationSchema = z.strictObject({
+  name: requiredText(200),
+  kind: z.enum(ORGANIZATION_KINDS),
+  street: requiredText(200),
+  city: requiredText(100),
+  state: usStateSchema,
+  zip: zipSchema,
+  phone: phoneSchema,
+  email: emailSchema,
+});
+
+/** Its first person, who becomes its manager. */
+export const signupUserSchema = z.strictObject({
+  email: emailSchema,
+  displayName: requiredText(120),
+  password: passwordSchema,
+});
+
+export const signupSchema = z.strictObject({
+  organization: signupOrganizationSchema,
+  user: signupUserSchema,
+  /** The token of an invitation e-mail: sign up into the organisation that was invited. */
+  invitation: linkTokenSchema.optional(),
+});
+export type SignupInput = z.infer<typeof signupSchema>;
+
+export const confirmSignupSchema = z.strictObject({ token: linkTokenSchema });
+
+export const passwordResetRequestSchema = z.strictObject({ email: emailSchema });
+
+/** The sign-up form: the same fields, and the password typed twice (only the first goes to the server). */
+export const signupFormSchema = z
+  .strictObject({
+    organization: signupOrganizationSchema,
+    user: signupUserSchema.extend({ confirm: z.string() }),
+  })
+  .refine((v) => v.user.password === v.user.confirm, {
+    path: ["user", "confirm"],
+    params: { instruction: "the two passwords differ; type the same one again" },
+  });
+export type SignupForm = z.infer<typeof signupFormSchema>;
+
+/** The one answer to a sign-up and to a reset request, whatever the address. */
+export type CheckYourEmailDto = { status: "check_your_email" };
