@@ -75,7 +75,7 @@ export function createApp(input: AppContext | AppBase): Express {
   api.use("/auth", authRouter(ctx, auth));
   api.use("/signup", signupRouter(ctx));
   api.use("/users", usersRouter(ctx));
-  api.use("/organizations", organizationsRouter());
+  api.use("/organizations", organizationsRouter(ctx));
   api.use("/dev/mail", caughtMailRouter(ctx));
   api.use("/taxa", taxaRouter(ctx));
   api.use("/transfers", transfersRouter());

@@ -220,3 +220,32 @@ export function passwordResetMail(p: { to: string; name: string; link: string; h
     ].join("\n"),
   };
 }
+
+/** To an existing account invited to an organisation: nothing changes until they accept. */
+export function joinOrganizationMail(p: {
+  to: string;
+  name: string;
+  invitedBy: string;
+  organization: string;
+  role: string;
+  link: string;
+  hours: number;
+}): MailDraft {
+  return {
+    to: p.to,
+    topic: "account.join_organization",
+    subject: `${p.invitedBy} invites you to join ${p.organization} on Hatchway`,
+    text: [
+      `Hello ${p.name},`,
+      "",
+      `${p.invitedBy} invites you to join ${p.organization} on Hatchway as ${p.role}.`,
+      "Your account stays as it is unless you accept. Accepting moves your account to that organisation.",
+      "",
+      `Sign in and accept here (the link works once and expires in ${p.hours} hours):`,
+      p.link,
+      "",
+      "If you do not want to join, ignore this message.",
+      ...SIGNATURE,
+    ].join("\n"),
+  };
+}

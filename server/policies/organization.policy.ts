@@ -1,6 +1,26 @@
+import type { OrganizationKind, UserRole } from "@shared/constants";
 import type { Actor } from "../auth/actor";
 
-/** Organisations are kept by admins. */
+/** Organisations are kept by admins: listing all of them, creating one by hand. */
 export function canManageOrganizations(actor: Actor): boolean {
   return actor.role === "admin" && !actor.disabled;
+}
+
+/**
+ * Who the caller is to an organisation's people and details: its manager (or the site admin)
+ * may change them; its other people may not; anyone else does not see it at all (404).
+ */
+export function organizationAccess(actor: Actor, organizationId: string): "manage" | "belongs" | null {
+  if (actor.disabled) return null;
+  if (actor.role === "admin") return "manage";
+  if (actor.organization?.id !== organizationId) return null;
+  return actor.role === "manager" ? "manage" : "belongs";
+}
+
+/**
+ * The roles a person can hold in an organisation of this kind: a keeper organisation has
+ * managers and members, a courier service managers and couriers. Nobody is made site admin here.
+ */
+export function rolesInOrganization(kind: OrganizationKind): readonly UserRole[] {
+  return kind === "courier_service" ? ["manager", "courier"] : ["manager", "member"];
 }

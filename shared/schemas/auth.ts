@@ -1,6 +1,7 @@
 import { ORGANIZATION_KINDS, USER_ROLES } from "../constants";
 import { instruction } from "../validation/messages";
 import { z } from "../validation/zod";
+import { linkTokenSchema } from "./account";
 import { addressSchema, emailSchema, idSchema, passwordSchema, phoneSchema, requiredText, text } from "./common";
 
 export const loginSchema = z.strictObject({
@@ -35,7 +36,7 @@ export const organizationInputSchema = z.strictObject({
 });
 export type OrganizationInput = z.infer<typeof organizationInputSchema>;
 
-export const organizationPatchSchema = organizationInputSchema.partial().strict();
+export const organizationPatchSchema = organizationInputSchema.extend({ listed: z.boolean() }).partial().strict();
 export type OrganizationPatch = z.infer<typeof organizationPatchSchema>;
 
 export const userInviteSchema = z.strictObject({
@@ -74,3 +75,27 @@ export type UserDto = {
 };
 
 export type AdminUserDto = UserDto & { disabled: boolean; invitationPending: boolean; createdAt: string };
+
+/** The roles a manager hands out within an organisation: never the site administrator's. */
+export const ORGANIZATION_ROLES = ["manager", "member", "courier"] as const;
+
+/** A manager invites a person to the organisation (issue 14, §2). */
+export const memberInviteSchema = z.strictObject({
+  email: emailSchema,
+  displayName: requiredText(120),
+  role: z.enum(ORGANIZATION_ROLES),
+});
+export type MemberInviteInput = z.infer<typeof memberInviteSchema>;
+
+/** A manager changes a person's role, or disables (or enables) them: one change at a time. */
+export const memberPatchSchema = z.union([
+  z.strictObject({ role: z.enum(ORGANIZATION_ROLES) }),
+  z.strictObject({ disabled: z.boolean() }),
+]);
+export type MemberPatchInput = z.infer<typeof memberPatchSchema>;
+
+/** Accepting, from an e-mail link, to join an organisation with an account one already has. */
+export const joinOrganizationSchema = z.strictObject({ token: linkTokenSchema });
+
+/** A person of an organisation as its manager sees them. */
+export type MemberDto = AdminUserDto;

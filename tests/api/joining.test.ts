@@ -6,11 +6,13 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { OrganizationSchema } from "../../server/db/entities/organization.entity";
-import { OutboxMessageSchema } from "../../server/db/entities/outbox-message.entity";
 import { PasswordTokenSchema } from "../../server/db/entities/password-token.entity";
 import { UserSchema } from "../../server/db/entities/user.entity";
 import { buildUser } from "../factories";
 import { anonymousClient, createTestApp, signIn, type TestApp } from "../support/app";
+import { lastMail as caughtMail, signupBody } from "../support/account";
+
+const lastMail = (address: string, topic?: string) => caughtMail(t.orm, address, topic);
 
 let t: TestApp;
 const em = () => t.orm.em.fork();
@@ -18,40 +20,6 @@ beforeAll(async () => {
   t = await createTestApp({ ACCOUNT_REQUESTS_PER_IP_PER_HOUR: "1000" });
 });
 afterAll(() => t.close());
-
-let n = 0;
-export function signupBody(over: { email?: string; kind?: string; name?: string } = {}) {
-  n += 1;
-  return {
-    organization: {
-      name: over.name ?? `Fernbrook Herp Society ${n}`,
-      kind: over.kind ?? "nature_centre",
-      street: "12 Alder Way",
-      city: "Bend",
-      state: "OR",
-      zip: "97701",
-      phone: "+1 541 555 0101",
-      email: `office-${n}@fernbrook.example`,
-    },
-    user: {
-      email: over.email ?? `keeper-${n}@fernbrook.example`,
-      displayName: "Rowan Pike",
-      password: "a long enough secret",
-    },
-  };
-}
-
-/** The last e-mail the outbox holds for an address, and the token of the link in it. */
-export async function lastMail(address: string, topic?: string) {
-  const mails = await em().find(
-    OutboxMessageSchema,
-    { toAddress: address, ...(topic ? { topic } : {}) },
-    { orderBy: { createdAt: "desc" } },
-  );
-  const mail = mails[0];
-  const token = mail?.textBody.match(/token=([A-Za-z0-9_-]+)/)?.[1] ?? null;
-  return { mail, token, count: mails.length };
-}
 
 describe("sign-up", () => {
   it("answers 202 check_your_email, mails a link, and opens the account only once confirmed", async () => {
