@@ -8,6 +8,7 @@ import { jsonBody, wellFormedAddress } from "./http/well-formed-text";
 import { configurePassport, sessionMiddleware } from "./auth/session";
 import { healthRouter } from "./routes/health/health.router";
 import { signupRouter } from "./routes/signup/signup.router";
+import { accountRouter } from "./routes/account/account.router";
 import { authRouter } from "./routes/auth/auth.router";
 import { usersRouter } from "./routes/users/users.router";
 import { organizationsRouter } from "./routes/organizations/organizations.router";
@@ -74,6 +75,7 @@ export function createApp(input: AppContext | AppBase): Express {
 
   api.use("/auth", authRouter(ctx, auth));
   api.use("/signup", signupRouter(ctx));
+  api.use("/account", accountRouter(ctx));
   api.use("/users", usersRouter(ctx));
   api.use("/organizations", organizationsRouter(ctx));
   api.use("/dev/mail", caughtMailRouter(ctx));

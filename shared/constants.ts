@@ -98,6 +98,13 @@ export type UserRole = (typeof USER_ROLES)[number];
 export const ACCOUNT_TOKEN_PURPOSES = ["set_password", "confirm_email", "reset_password", "join_organization"] as const;
 export type AccountTokenPurpose = (typeof ACCOUNT_TOKEN_PURPOSES)[number];
 
+/**
+ * The e-mails a person may choose not to receive. Alerts on a transfer and changes of the
+ * temperature advice carry safety information and are always sent: they are not in this list.
+ */
+export const MAIL_CHOICES = ["transfer_steps", "document_expiry", "leg_assignments"] as const;
+export type MailChoice = (typeof MAIL_CHOICES)[number];
+
 /** The roles of the people of a keeper organisation, who send and receive transfers. */
 export const KEEPER_ROLES = ["manager", "member"] as const satisfies readonly UserRole[];
 

@@ -1,4 +1,4 @@
-import { ORGANIZATION_KINDS } from "../constants";
+import { MAIL_CHOICES, ORGANIZATION_KINDS } from "../constants";
 import { instruction } from "../validation/messages";
 import { z } from "../validation/zod";
 import { emailSchema, passwordSchema, phoneSchema, requiredText, text, usStateSchema, zipSchema } from "./common";
@@ -53,3 +53,26 @@ export type SignupForm = z.infer<typeof signupFormSchema>;
 
 /** The one answer to a sign-up and to a reset request, whatever the address. */
 export type CheckYourEmailDto = { status: "check_your_email" };
+
+/** The account page: one's own name and which e-mails to receive (issue 14, §2). */
+export const accountPatchSchema = z.strictObject({
+  displayName: requiredText(120).optional(),
+  /** For each choice, whether to receive it. Alerts that carry safety information are not choices. */
+  mail: z.partialRecord(z.enum(MAIL_CHOICES), z.boolean()).optional(),
+});
+export type AccountPatchInput = z.infer<typeof accountPatchSchema>;
+
+/** Changing one's password asks for the current one. */
+export const passwordChangeSchema = z.strictObject({
+  currentPassword: z.string().max(1024),
+  newPassword: passwordSchema,
+});
+
+export type AccountDto = {
+  id: string;
+  email: string;
+  displayName: string;
+  role: string;
+  organization: { id: string; name: string; kind: string } | null;
+  mail: Record<(typeof MAIL_CHOICES)[number], boolean>;
+};

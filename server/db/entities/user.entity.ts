@@ -19,6 +19,8 @@ export const UserSchema = defineEntity({
     disabled: p.boolean().default(false),
     /** A person who signed up and has not yet confirmed their e-mail address cannot sign in. */
     awaitingConfirmation: p.boolean().default(false),
+    /** The e-mails this person turned off (MAIL_CHOICES); safety alerts are never among them. */
+    mailOptOuts: p.array().default([]),
     createdAt: createdAtProperty(),
   },
 });

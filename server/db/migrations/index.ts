@@ -10,6 +10,7 @@ import { Migration20261202130100_custody_head } from "./Migration20261202130100_
 import { Migration20261202150000_draft_privacy } from "./Migration20261202150000_draft_privacy";
 import { Migration20261202150100_organization_roles } from "./Migration20261202150100_organization_roles";
 import { Migration20261202150200_joining } from "./Migration20261202150200_joining";
+import { Migration20261202150300_account_mail } from "./Migration20261202150300_account_mail";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -22,4 +23,5 @@ export const MIGRATIONS = [
   { name: "Migration20261202150000_draft_privacy", class: Migration20261202150000_draft_privacy },
   { name: "Migration20261202150100_organization_roles", class: Migration20261202150100_organization_roles },
   { name: "Migration20261202150200_joining", class: Migration20261202150200_joining },
+  { name: "Migration20261202150300_account_mail", class: Migration20261202150300_account_mail },
 ];

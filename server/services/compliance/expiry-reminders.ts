@@ -38,6 +38,7 @@ export async function sendExpiryReminders(ctx: AppContext, today = todayUtc()): 
       const members = await tx.find(UserSchema, { organization: org.id, role: { $in: KEEPER_ROLES }, disabled: false });
       const { daysLeft } = expiryOf(doc.validTo ?? null, today);
       for (const member of members) {
+        if (member.mailOptOuts.includes("document_expiry")) continue;
         enqueueMail(
           tx,
           documentExpiryMail({

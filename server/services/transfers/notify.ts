@@ -28,7 +28,10 @@ export async function notifyParty(
     ? [contact]
     : await em.find(UserSchema, { organization: orgRef.id, role: { $in: KEEPER_ROLES }, disabled: false });
   const org = await em.findOneOrFail(OrganizationSchema, { id: orgRef.id });
+  // Alerts and temperature advice carry safety information: sent whatever the person chose.
+  const safety = topic === "alert" || topic === "temperature_changed";
   for (const r of recipients) {
+    if (!safety && r.mailOptOuts.includes("transfer_steps")) continue;
     enqueueMail(
       em,
       transferMail(topic, {
