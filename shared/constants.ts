@@ -93,9 +93,16 @@ export type UserRole = (typeof USER_ROLES)[number];
 /**
  * What a one-time link sent by e-mail does: choose a first password (an invitation), confirm the
  * address a new organisation signed up with, set a new password after "Forgot your password?",
- * or accept joining an organisation (an existing account invited by a manager).
+ * accept joining an organisation (an existing account invited by a manager), or sign up an
+ * organisation a sender invited to a transfer (`invite_organization`, no account yet).
  */
-export const ACCOUNT_TOKEN_PURPOSES = ["set_password", "confirm_email", "reset_password", "join_organization"] as const;
+export const ACCOUNT_TOKEN_PURPOSES = [
+  "set_password",
+  "confirm_email",
+  "reset_password",
+  "join_organization",
+  "invite_organization",
+] as const;
 export type AccountTokenPurpose = (typeof ACCOUNT_TOKEN_PURPOSES)[number];
 
 /**

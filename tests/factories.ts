@@ -30,7 +30,7 @@ const next = () => `${Date.now().toString(36)}${(++counter).toString(36)}`;
 export const DEMO_PASSWORD = "hatchway-demo";
 
 type OrgOverrides = Partial<
-  Pick<Organization, "name" | "kind" | "street" | "city" | "state" | "zip" | "phone" | "email">
+  Pick<Organization, "name" | "kind" | "street" | "city" | "state" | "zip" | "phone" | "email" | "listed" | "pending">
 >;
 
 export async function buildOrganization(em: EntityManager, overrides: OrgOverrides = {}): Promise<Organization> {

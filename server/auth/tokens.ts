@@ -19,9 +19,9 @@ export const hashToken = (token: string) => createHash("sha256").update(token).d
  */
 export function issueAccountToken(
   em: EntityManager,
-  user: User,
+  user: User | null,
   purpose: AccountTokenPurpose,
-  options: { hours?: number; organization?: Organization; role?: UserRole } = {},
+  options: { hours?: number; organization?: Organization; role?: UserRole; invitedBy?: User } = {},
 ): string {
   const token = randomBytes(32).toString("base64url");
   em.create(PasswordTokenSchema, {
@@ -31,6 +31,7 @@ export function issueAccountToken(
     expiresAt: new Date(Date.now() + (options.hours ?? ACCOUNT_LINK_HOURS) * 3600_000),
     organization: options.organization ?? null,
     role: options.role ?? null,
+    invitedBy: options.invitedBy ?? null,
   });
   return token;
 }
@@ -43,6 +44,8 @@ const NO_LONGER_WORKS: Record<AccountTokenPurpose, string> = {
   reset_password: 'This link has expired or was already used. Ask for a new one with "Forgot your password?".',
   join_organization:
     "This invitation has expired or was already used. Ask the organisation's manager to invite you again.",
+  invite_organization:
+    "This invitation has expired or was already used. Ask the person who invited you to invite you again.",
 };
 
 /**

@@ -249,3 +249,34 @@ export function joinOrganizationMail(p: {
     ].join("\n"),
   };
 }
+
+/** To the address a sender invited as the other party of a transfer: who invited them, why, and the way in. */
+export function organizationInvitationMail(p: {
+  to: string;
+  organization: string;
+  invitedBy: string;
+  invitedByOrganization: string;
+  asCourier: boolean;
+  link: string;
+  hours: number;
+}): MailDraft {
+  const why = p.asCourier
+    ? `would like ${p.organization} to carry live animals for them`
+    : `would like to send live animals to ${p.organization}`;
+  return {
+    to: p.to,
+    topic: "account.invite_organization",
+    subject: `${p.invitedBy} of ${p.invitedByOrganization} invites ${p.organization} to Hatchway`,
+    text: [
+      "Hello,",
+      "",
+      `${p.invitedBy} of ${p.invitedByOrganization} ${why}, and uses Hatchway, the shared record for moving live animals between keepers: the animals, the permits each state asks for, the temperature on the way and every handoff, in one place for the sender, the courier and the receiver.`,
+      "",
+      `Sign up ${p.organization} here to see ${p.asCourier ? "what they ask you to carry" : "the transfer waiting for you"} (the link works once and expires in ${p.hours} hours):`,
+      p.link,
+      "",
+      "Signing up is free and makes nobody else's account. If you do not know the sender, ignore this message.",
+      ...SIGNATURE,
+    ].join("\n"),
+  };
+}

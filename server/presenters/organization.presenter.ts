@@ -14,5 +14,7 @@ export function presentOrganization(org: Organization): OrganizationDto {
     },
     phone: org.phone,
     email: org.email,
+    pending: org.pending,
+    listed: org.listed,
   };
 }

@@ -138,7 +138,7 @@ export async function changeMember({
 export async function acceptMembership({ em, actor, token }: { em: EntityManager; actor: Actor; token: string }) {
   return em.transactional(async (tx) => {
     const row = await consumeAccountToken(tx, token, ["join_organization"]);
-    if (row.user.id !== actor.id)
+    if (row.user?.id !== actor.id)
       throw new HttpError(
         400,
         "invalid_token",
@@ -150,6 +150,8 @@ export async function acceptMembership({ em, actor, token }: { em: EntityManager
     const organization = await tx.findOneOrFail(OrganizationSchema, { id: row.organization!.id });
     const user = await tx.findOneOrFail(UserSchema, { id: actor.id });
     user.organization = ref(organization);
+    // An organisation invited to a transfer becomes a full one when its first person accepts.
+    if (organization.pending) organization.pending = false;
     user.role = row.role ?? rolesInOrganization(organization.kind)[1]!;
     return { user, organization };
   });

@@ -84,7 +84,7 @@ async function invitedOrganization(em: EntityManager, input: SignupInput): Promi
     : null;
   if (
     !invitation ||
-    invitation.purpose !== "join_organization" ||
+    invitation.purpose !== "invite_organization" ||
     invitation.usedAt ||
     invitation.expiresAt.getTime() < Date.now() ||
     !organization ||
@@ -104,7 +104,7 @@ async function invitedOrganization(em: EntityManager, input: SignupInput): Promi
 export async function confirmSignup({ em, token }: { em: EntityManager; token: string }): Promise<User> {
   return em.transactional(async (tx) => {
     const row = await consumeAccountToken(tx, token, ["confirm_email"]);
-    const user = await tx.findOneOrFail(UserSchema, { id: row.user.id }, { populate: ["organization"] });
+    const user = await tx.findOneOrFail(UserSchema, { id: row.user!.id }, { populate: ["organization"] });
     user.awaitingConfirmation = false;
     const organization = user.organization?.getEntity();
     if (organization?.pending) organization.pending = false;
@@ -142,4 +142,24 @@ export async function requestPasswordReset({
       }),
     );
   });
+}
+
+/** The invitation a sign-up page was opened from, to fill in its name and state; null when it no longer works. */
+export async function readInvitation(em: EntityManager, token: string) {
+  const invitation = await em.findOne(
+    PasswordTokenSchema,
+    { tokenHash: hashToken(token), purpose: "invite_organization" },
+    { populate: ["organization", "invitedBy", "invitedBy.organization"] },
+  );
+  const organization = invitation?.organization?.getEntity();
+  if (!invitation || invitation.usedAt || invitation.expiresAt.getTime() < Date.now() || !organization?.pending)
+    return null;
+  const inviter = invitation.invitedBy?.getEntity();
+  return {
+    organization: { name: organization.name, kind: organization.kind, state: organization.state },
+    invitedBy: {
+      displayName: inviter?.displayName ?? "A Hatchway member",
+      organizationName: inviter?.organization?.getEntity()?.name ?? null,
+    },
+  };
 }

@@ -76,3 +76,18 @@ export type AccountDto = {
   organization: { id: string; name: string; kind: string } | null;
   mail: Record<(typeof MAIL_CHOICES)[number], boolean>;
 };
+
+/** A sender invites the other party of a transfer by e-mail (issue 14, §3): a public contract. */
+export const organizationInvitationSchema = z.strictObject({
+  organizationName: requiredText(200),
+  kind: z.enum(ORGANIZATION_KINDS),
+  email: emailSchema,
+  state: usStateSchema,
+});
+export type OrganizationInvitationInput = z.infer<typeof organizationInvitationSchema>;
+
+/** What the sign-up page shows about the invitation it was opened from. */
+export type InvitationDto = {
+  organization: { name: string; kind: (typeof ORGANIZATION_KINDS)[number]; state: string };
+  invitedBy: { displayName: string; organizationName: string | null };
+};

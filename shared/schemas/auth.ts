@@ -63,6 +63,10 @@ export type OrganizationDto = {
   address: z.infer<typeof addressSchema>;
   phone: string;
   email: string;
+  /** Invited and nobody signed up yet (issue 14, §3). */
+  pending: boolean;
+  /** Shown in the directory (name, kind, city and state only). */
+  listed: boolean;
 };
 
 /** The signed-in user as the API presents them. */

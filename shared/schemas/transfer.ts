@@ -580,9 +580,13 @@ export type DirectoryOrganizationDto = {
   kind: OrganizationKind;
   city: string;
   state: UsState;
+  /** Empty for an organisation shown only because it is listed: the directory shows name, kind, city and state. */
   zip: string;
   street: string;
   contacts: PersonDto[];
+  /** Invited by the caller's organisation, nobody signed up yet. */
+  pending: boolean;
+  listed: boolean;
 };
 export type DirectoryCourierDto = { id: string; displayName: string; organizationName: string | null };
 

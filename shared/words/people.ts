@@ -22,4 +22,5 @@ export const ACCOUNT_TOKEN_PURPOSE_WORDS: Readonly<Record<AccountTokenPurpose, s
   confirm_email: "Confirming your e-mail address",
   reset_password: "Choosing a new password",
   join_organization: "Joining an organisation",
+  invite_organization: "Signing up an invited organisation",
 };

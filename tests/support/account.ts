@@ -32,6 +32,6 @@ export async function lastMail(orm: Orm, address: string, topic?: string) {
     .fork()
     .find(OutboxMessageSchema, { toAddress: address, ...(topic ? { topic } : {}) }, { orderBy: { createdAt: "desc" } });
   const mail = mails[0];
-  const token = mail?.textBody.match(/token=([A-Za-z0-9_-]+)/)?.[1] ?? null;
+  const token = mail?.textBody.match(/(?:token|invitation)=([A-Za-z0-9_-]+)/)?.[1] ?? null;
   return { mail, token, count: mails.length };
 }

@@ -14,7 +14,10 @@ export const PasswordTokenSchema = defineEntity({
   tableName: "password_token",
   properties: {
     id: idProperty(),
-    user: () => p.manyToOne(UserSchema).ref(),
+    /** Null for `invite_organization`: the invited organisation has nobody yet. */
+    user: () => p.manyToOne(UserSchema).ref().nullable(),
+    /** Who sent an `invite_organization`: named in the e-mail and on the sign-up page. */
+    invitedBy: () => p.manyToOne(UserSchema).ref().nullable(),
     purpose: p.enum([...ACCOUNT_TOKEN_PURPOSES]).default("set_password"),
     /** For `join_organization`: the organisation the account is asked to join, and as what. */
     organization: () => p.manyToOne(OrganizationSchema).ref().nullable(),

@@ -11,6 +11,7 @@ import { Migration20261202150000_draft_privacy } from "./Migration20261202150000
 import { Migration20261202150100_organization_roles } from "./Migration20261202150100_organization_roles";
 import { Migration20261202150200_joining } from "./Migration20261202150200_joining";
 import { Migration20261202150300_account_mail } from "./Migration20261202150300_account_mail";
+import { Migration20261202150400_organization_invitations } from "./Migration20261202150400_organization_invitations";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -24,4 +25,8 @@ export const MIGRATIONS = [
   { name: "Migration20261202150100_organization_roles", class: Migration20261202150100_organization_roles },
   { name: "Migration20261202150200_joining", class: Migration20261202150200_joining },
   { name: "Migration20261202150300_account_mail", class: Migration20261202150300_account_mail },
+  {
+    name: "Migration20261202150400_organization_invitations",
+    class: Migration20261202150400_organization_invitations,
+  },
 ];

@@ -109,7 +109,7 @@ export function authRouter(ctx: AppContext, auth: passport.PassportStatic): Rout
     const passwordHash = await hashPassword(input.password);
     const userId = await req.em.transactional(async (tx) => {
       const token = await consumeAccountToken(tx, input.token, ["set_password", "reset_password"]);
-      const user = await tx.findOneOrFail(UserSchema, { id: token.user.id });
+      const user = await tx.findOneOrFail(UserSchema, { id: token.user!.id });
       user.passwordHash = passwordHash;
       // The link came to this address: it is confirmed now.
       user.awaitingConfirmation = false;

@@ -103,7 +103,7 @@ export function organizationsRouter(ctx: AppContext): Router {
           usedAt: null,
           expiresAt: { $gt: new Date() },
         })
-      ).map((t) => t.user.id),
+      ).map((t) => t.user!.id),
     );
     res.json({ members: people.map((p) => presentUserForAdmin(p, !p.passwordHash && pending.has(p.id))) });
   });

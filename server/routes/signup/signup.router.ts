@@ -7,7 +7,8 @@ import { actorFromUser, presentActor } from "../../auth/actor";
 import { createAccountThrottle } from "../../auth/throttle";
 import { signInSession } from "../../auth/session";
 import { abilitiesOf } from "../../policies/user.policy";
-import { confirmSignup, signUp } from "../../services/signup";
+import { confirmSignup, readInvitation, signUp } from "../../services/signup";
+import { notFound } from "../../http/errors";
 
 /**
  * Organisations join by themselves (issue 14, §1): POST /api/signup always answers 202
@@ -24,6 +25,14 @@ export function signupRouter(ctx: AppContext): Router {
     await signUp({ em: req.em, input, links: ctx.links });
     ctx.kickOutbox();
     res.status(202).json(checkYourEmail);
+  });
+
+  // The sign-up page opened from an invitation e-mail shows who invited and fills in name and state.
+  router.get("/invitation", async (req, res) => {
+    const { token } = parse(confirmSignupSchema, { token: req.query.token });
+    const invitation = await readInvitation(req.em, token);
+    if (!invitation) throw notFound("That invitation");
+    res.json({ invitation });
   });
 
   router.post("/confirm", async (req, res) => {

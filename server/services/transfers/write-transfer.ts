@@ -63,6 +63,9 @@ async function resolveReceiver(em: EntityManager, actor: Actor, organizationId: 
   const org = await em.findOne(OrganizationSchema, { id: organizationId });
   if (!org || org.kind === "courier_service")
     throw invalidField(["receiverOrganizationId"], "choose a keeper organisation");
+  // A pending organisation (invited, nobody signed up yet) is a receiver only for whoever invited it.
+  if (org.pending && org.invitedBy?.id !== actor.organization?.id)
+    throw invalidField(["receiverOrganizationId"], "choose an organisation from the directory, or invite one");
   let contact = null;
   if (contactId) {
     contact = await em.findOne(UserSchema, {

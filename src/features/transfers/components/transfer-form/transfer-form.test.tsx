@@ -20,6 +20,8 @@ const sender: DirectoryOrganizationDto = {
   state: "TN",
   zip: "37201",
   contacts: [],
+  pending: false,
+  listed: false,
 };
 const receiver: DirectoryOrganizationDto = {
   id: "00000000-0000-4000-8000-0000000000a2",
@@ -30,6 +32,8 @@ const receiver: DirectoryOrganizationDto = {
   state: "OR",
   zip: "97201",
   contacts: [{ id: "00000000-0000-4000-8000-0000000000c1", displayName: "Milo Faraday", email: "milo@example.org" }],
+  pending: false,
+  listed: true,
 };
 const boxTurtle: TaxonSearchHitDto = {
   id: "00000000-0000-4000-8000-0000000000b1",
