@@ -257,6 +257,7 @@ export async function buildTransfer(
       actor: s,
       transferId: transfer.id,
       input: { legs: couriers.map((c) => ({ courierId: c.id })) },
+      links,
     });
   }
   const containers = await em.fork().find(ContainerSchema, { transfer: transfer.id });

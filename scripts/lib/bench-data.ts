@@ -70,12 +70,14 @@ export async function seedBenchData(
       actor: s,
       transferId: t.id,
       input: { legs: couriers.slice(0, 2).map((c) => ({ courierId: c.id })) },
+      links,
     });
     await assignLegs({
       em: em.fork(),
       actor: s,
       transferId: t.id,
       input: { legs: couriers.map((c) => ({ courierId: c.id })) },
+      links,
     });
     const containers = await em.fork().find(ContainerSchema, { transfer: t.id });
     for (let i = 0; i < 4; i++) {

@@ -280,3 +280,32 @@ export function organizationInvitationMail(p: {
     ].join("\n"),
   };
 }
+
+/** To a courier given a leg of a transfer, or whose leg was taken away. */
+export function legAssignmentMail(p: {
+  to: string;
+  name: string;
+  number: string;
+  change: "assigned" | "removed";
+  leg: number;
+  legs: number;
+  actor: string;
+  link: string;
+}): MailDraft {
+  const which = p.legs > 1 ? `leg ${p.leg} of ${p.legs}` : "the leg";
+  const assigned = p.change === "assigned";
+  return {
+    to: p.to,
+    topic: assigned ? "courier.leg_assigned" : "courier.leg_removed",
+    subject: assigned ? `You carry transfer ${p.number}` : `You no longer carry transfer ${p.number}`,
+    text: [
+      `Hello ${p.name},`,
+      "",
+      assigned
+        ? `${p.actor} assigned you ${which} of transfer ${p.number}. Open it to see the pickup, the boxes and the handling notes:`
+        : `${p.actor} took you off transfer ${p.number}: you no longer carry it, and it has left your list of legs.`,
+      p.link,
+      ...SIGNATURE,
+    ].join("\n"),
+  };
+}

@@ -12,7 +12,19 @@ export type TransferFacts = {
   handoffsDone: number;
   /** Whether the sender ever sent it to the receiver (a transfer sent back stays shared). */
   everSent: boolean;
+  /** The courier service asked to carry it, if any: its manager assigns the couriers. */
+  courierServiceId?: string | null;
 };
+
+/** The manager of the courier service the sender chose for this transfer. */
+export function managesCourierService(actor: Actor, t: Pick<TransferFacts, "courierServiceId">): boolean {
+  return (
+    actor.role === "manager" &&
+    actor.organization?.kind === "courier_service" &&
+    !!t.courierServiceId &&
+    actor.organization.id === t.courierServiceId
+  );
+}
 
 /**
  * A draft is the sender's until it is sent (issue 14, §4): the receiver and the couriers do not
@@ -30,7 +42,10 @@ export function sharedWithOtherParties(t: Pick<TransferFacts, "status" | "everSe
  */
 export function viewerRoleFor(
   actor: Actor,
-  t: Pick<TransferFacts, "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds" | "status" | "everSent">,
+  t: Pick<
+    TransferFacts,
+    "senderOrganizationId" | "receiverOrganizationId" | "legCourierIds" | "status" | "everSent" | "courierServiceId"
+  >,
 ): ViewerRole | null {
   if (actor.disabled) return null;
   const orgId = actor.organization?.id;
@@ -38,6 +53,7 @@ export function viewerRoleFor(
   if (!sharedWithOtherParties(t)) return actor.role === "admin" ? "admin" : null;
   if (isKeeper(actor) && orgId === t.receiverOrganizationId) return "receiver";
   if (isCourier(actor) && t.legCourierIds.includes(actor.id)) return "courier";
+  if (managesCourierService(actor, t)) return "courier";
   if (actor.role === "admin") return "admin";
   return null;
 }
@@ -100,7 +116,7 @@ export function transferAbilities(actor: Actor, role: ViewerRole, t: TransferFac
     sendBack: receiver && t.status === "awaiting_receiver",
     cancel: sender && CANCELLABLE.includes(t.status),
     close: (sender || receiver) && t.status === "checked_in",
-    assignCouriers: sender && EDITABLE.includes(t.status),
+    assignCouriers: (sender || (role === "courier" && managesCourierService(actor, t))) && EDITABLE.includes(t.status),
     handOff: handoffAllowed(actor, role, t),
     checkIn: receiver && t.status === "delivered",
     discuss: sender || receiver,

@@ -86,6 +86,7 @@ export function factsOfView(v: TransferView): TransferFacts {
     legCourierIds: v.legs.map((l) => l.courier_id),
     handoffsDone: v.handoffs.length,
     everSent: v.t.first_sent_at != null,
+    courierServiceId: v.t.courier_service_id,
   };
 }
 

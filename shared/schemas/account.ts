@@ -1,7 +1,16 @@
 import { MAIL_CHOICES, ORGANIZATION_KINDS } from "../constants";
 import { instruction } from "../validation/messages";
 import { z } from "../validation/zod";
-import { emailSchema, passwordSchema, phoneSchema, requiredText, text, usStateSchema, zipSchema } from "./common";
+import {
+  emailSchema,
+  idSchema,
+  passwordSchema,
+  phoneSchema,
+  requiredText,
+  text,
+  usStateSchema,
+  zipSchema,
+} from "./common";
 
 /** A one-time link's token as it arrives from the e-mail (the server only keeps its SHA-256). */
 export const linkTokenSchema = text(200).pipe(
@@ -91,3 +100,6 @@ export type InvitationDto = {
   organization: { name: string; kind: (typeof ORGANIZATION_KINDS)[number]; state: string };
   invitedBy: { displayName: string; organizationName: string | null };
 };
+
+/** The sender chooses the courier service that carries a transfer (null: none). */
+export const courierServiceChoiceSchema = z.strictObject({ organizationId: idSchema.nullable() });

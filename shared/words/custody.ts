@@ -140,6 +140,10 @@ function checkIn(payload: Record<string, unknown>): string[] {
 }
 
 function couriersAssigned(payload: Record<string, unknown>): string[] {
+  if ("courierService" in payload) {
+    const service = payload.courierService ? textOf(recordOf(payload.courierService).name) : null;
+    return [service ? `Courier service asked to carry it: ${service}.` : "No courier service asked to carry it."];
+  }
   const legs = listOf(payload.legs).map(recordOf);
   if (legs.length === 0) return ["No couriers."];
   return legs.map((leg, i) => `Leg ${numberOf(leg.sequence) ?? i + 1}: ${textOf(leg.courierName) ?? "a courier"}.`);

@@ -56,6 +56,8 @@ export const TransferSchema = defineEntity({
     receiverPrivateNotes: p.text().nullable(),
     /** When the sender first sent it to the receiver; until then the draft is the sender's alone. */
     firstSentAt: p.datetime().nullable(),
+    /** The courier service the sender asked to carry it; its manager assigns its couriers to the legs. */
+    courierService: () => p.manyToOne(OrganizationSchema).ref().nullable(),
     confirmedAt: p.datetime().nullable(),
     confirmedBy: () => p.manyToOne(UserSchema).ref().nullable(),
     cancelledReason: p.text().nullable(),

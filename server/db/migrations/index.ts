@@ -12,6 +12,7 @@ import { Migration20261202150100_organization_roles } from "./Migration202612021
 import { Migration20261202150200_joining } from "./Migration20261202150200_joining";
 import { Migration20261202150300_account_mail } from "./Migration20261202150300_account_mail";
 import { Migration20261202150400_organization_invitations } from "./Migration20261202150400_organization_invitations";
+import { Migration20261202150500_courier_service } from "./Migration20261202150500_courier_service";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -29,4 +30,5 @@ export const MIGRATIONS = [
     name: "Migration20261202150400_organization_invitations",
     class: Migration20261202150400_organization_invitations,
   },
+  { name: "Migration20261202150500_courier_service", class: Migration20261202150500_courier_service },
 ];

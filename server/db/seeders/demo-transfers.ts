@@ -167,6 +167,7 @@ async function runPlan(em: EntityManager, { links, gates }: Wiring, plan: Plan) 
           toLabel: i === plan.cast.couriers.length - 1 ? `${plan.to.city}, ${plan.to.state}` : "Relay point",
         })),
       },
+      links,
     });
   }
   const containers = await em.fork().find(ContainerSchema, { transfer: t.id }, { orderBy: { position: "asc" } });

@@ -274,6 +274,7 @@ describe("who sees a document", () => {
       actor: await actorOf(em(), cast.sender),
       transferId: cast.transfer.id,
       input: { legs: [{ courierId: cast.couriers[0]!.id }] },
+      links: t.ctx.links,
     });
     sender = await signIn(t.app, cast.sender.email);
     receiver = await signIn(t.app, cast.receiver.email);

@@ -222,6 +222,8 @@ describe("life cycle through the API", () => {
     expect(mail.rows.map((m) => m.topic)).toEqual([
       "transfer.awaiting_confirmation",
       "transfer.confirmed",
+      // The courier given the leg is told (issue 14, §3).
+      "courier.leg_assigned",
       "transfer.picked_up",
       "transfer.picked_up",
       "transfer.delivered",

@@ -29,6 +29,8 @@ import { listTransfers } from "../../services/transfers/list";
 import { createTransfer, updateTransfer } from "../../services/transfers/write-transfer";
 import { transitionTransfer } from "../../services/transfers/transition";
 import { assignLegs } from "../../services/transfers/legs";
+import { chooseCourierService } from "../../services/transfers/courier-service";
+import { courierServiceChoiceSchema } from "@shared/schemas/account";
 import { recordHandoff } from "../../services/transfers/handoff";
 import { acknowledgeAlert } from "../../services/transfers/alerts";
 import { checkInTransfer } from "../../services/transfers/check-in";
@@ -101,7 +103,16 @@ export function transfersRouter(): Router {
   router.put("/:id/legs", async (req, res) => {
     const id = idParam(req);
     const input = parse(legsInputSchema, req.body);
-    await assignLegs({ em: req.em, actor: currentUser(req), transferId: id, input });
+    await assignLegs({ em: req.em, actor: currentUser(req), transferId: id, input, links: req.ctx.links });
+    req.ctx.kickOutbox();
+    res.json({ transfer: await presentForActor(req, id) });
+  });
+
+  // The courier service asked to carry it (issue 14, §3); its manager then assigns the legs.
+  router.put("/:id/courier-service", async (req, res) => {
+    const id = idParam(req);
+    const { organizationId } = parse(courierServiceChoiceSchema, req.body);
+    await chooseCourierService({ em: req.em, actor: currentUser(req), transferId: id, organizationId });
     res.json({ transfer: await presentForActor(req, id) });
   });
 

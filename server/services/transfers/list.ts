@@ -97,6 +97,8 @@ export async function listTransfers(pool: pg.Pool, actor: Actor, q: Query): Prom
   if (actor.role === "admin") branches.push(where("TRUE"));
   else if (isCourier(actor))
     branches.push(where(`id IN (SELECT transfer_id FROM leg WHERE courier_id = ${p(actor.id)}) AND ${shared}`));
+  else if (orgId && actor.role === "manager" && actor.organization?.kind === "courier_service")
+    branches.push(where(`courier_service_id = ${p(orgId)} AND ${shared}`));
   else if (orgId && isKeeper(actor)) {
     const org = p(orgId);
     if (q.role !== "receiving") branches.push(where(`sender_organization_id = ${org}`));

@@ -31,6 +31,7 @@ export async function loadTransferForActor(
     legCourierIds: legs.map((l) => l.courier.id),
     handoffsDone,
     everSent: transfer.firstSentAt != null,
+    courierServiceId: transfer.courierService?.id ?? null,
   };
   const role = viewerRoleFor(actor, facts);
   if (!role) throw notFound("That transfer");

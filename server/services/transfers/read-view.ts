@@ -28,6 +28,7 @@ export type TransferView = {
     sender_organization_id: string;
     receiver_organization_id: string;
     first_sent_at: string | null;
+    courier_service_id: string | null;
     origin_street: string;
     origin_city: string;
     origin_state: string;
@@ -167,6 +168,7 @@ const T_JSON = jsonOf("t", [
   "sender_organization_id",
   "receiver_organization_id",
   "first_sent_at",
+  "courier_service_id",
   "origin_street",
   "origin_city",
   "origin_state",
