@@ -39,6 +39,8 @@ export class DemoSeeder extends Seeder {
       zip: "97401",
       phone: "+1 541 555 0177",
       email: "animals@willowmarsh.example",
+      // A receiver that chose to be listed in the directory (name, kind, city and state shown).
+      listed: true,
     });
     const rescue = await buildOrganization(em, {
       name: "Second Shell Turtle Rescue",
@@ -49,6 +51,8 @@ export class DemoSeeder extends Seeder {
       zip: "43215",
       phone: "+1 614 555 0119",
       email: "intake@secondshell.example",
+      // Not listed: only organisations that already share a transfer with it see it.
+      listed: false,
     });
     const couriers = await buildOrganization(em, {
       name: "Nightjar Ground Couriers",
@@ -59,6 +63,7 @@ export class DemoSeeder extends Seeder {
       zip: "40202",
       phone: "+1 502 555 0190",
       email: "dispatch@nightjar.example",
+      listed: true,
     });
 
     await buildUser(em, {
@@ -70,13 +75,13 @@ export class DemoSeeder extends Seeder {
     const sender = await buildUser(em, {
       email: "sender@demo.hatchway.test",
       displayName: "Ruth Calder",
-      role: "member",
+      role: "manager",
       organization: breeder,
     });
     const receiver = await buildUser(em, {
       email: "receiver@demo.hatchway.test",
       displayName: "Milo Faraday",
-      role: "member",
+      role: "manager",
       organization: centre,
     });
     const courier = await buildUser(em, {
@@ -88,7 +93,7 @@ export class DemoSeeder extends Seeder {
     const other = await buildUser(em, {
       email: "other@demo.hatchway.test",
       displayName: "Ivy Brandt",
-      role: "member",
+      role: "manager",
       organization: rescue,
     });
     // A second driver for the relay leg of the demo's two-courier transfer.
@@ -96,6 +101,13 @@ export class DemoSeeder extends Seeder {
       email: "relay@demo.hatchway.test",
       displayName: "Theo Brannock",
       role: "courier",
+      organization: couriers,
+    });
+    // The courier service's manager assigns Juno and Theo to the legs of the transfers it carries.
+    await buildUser(em, {
+      email: "dispatch@demo.hatchway.test",
+      displayName: "Wren Okafor",
+      role: "manager",
       organization: couriers,
     });
     await seedDemoDocuments(em, { breeder, centre, rescue });

@@ -112,7 +112,7 @@ export async function seedDemoDocuments(
   for (const [org, record] of plan) {
     const member = await em.findOne(
       UserSchema,
-      { organization: org.id, role: "member" },
+      { organization: org.id, role: { $in: ["manager", "member"] } },
       { orderBy: { createdAt: "asc" } },
     );
     if (!member) throw new Error(`demo documents: ${org.name} has no member to record them`);
