@@ -13,5 +13,6 @@ export function abilitiesOf(actor: Actor) {
     readCaughtMail: actor.role === "admin",
     draftTransfers: isKeeper(actor),
     carryTransfers: isCourier(actor),
+    manageOwnOrganization: actor.role === "manager" && actor.organization != null && !actor.disabled,
   };
 }

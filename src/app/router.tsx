@@ -52,6 +52,30 @@ export function createAppRouter(queryClient: QueryClient) {
       hydrateFallbackElement: firstLoad,
     },
     {
+      path: paths.resetPassword,
+      lazy: screen(() => import("@/features/auth/routes/welcome"), "WelcomeRoute"),
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+    },
+    {
+      path: paths.signUp,
+      lazy: screen(() => import("@/features/account/routes/sign-up"), "SignUpRoute"),
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+    },
+    {
+      path: paths.signUpConfirm,
+      lazy: screen(() => import("@/features/account/routes/sign-up-confirm"), "SignUpConfirmRoute"),
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+    },
+    {
+      path: paths.forgotPassword,
+      lazy: screen(() => import("@/features/account/routes/forgot-password"), "ForgotPasswordRoute"),
+      errorElement: <RouteErrorBoundary />,
+      hydrateFallbackElement: firstLoad,
+    },
+    {
       path: "/",
       lazy: screen(() => import("./layout"), "AppLayout"),
       loader: prefetchSession,
@@ -59,6 +83,12 @@ export function createAppRouter(queryClient: QueryClient) {
       hydrateFallbackElement: firstLoad,
       children: [
         { index: true, lazy: screen(() => import("./routes/home"), "HomeRoute") },
+        { path: paths.account, lazy: screen(() => import("@/features/account/routes/account"), "AccountRoute") },
+        { path: paths.join, lazy: screen(() => import("@/features/account/routes/join"), "JoinRoute") },
+        {
+          path: paths.organizationMembers,
+          lazy: screen(() => import("@/features/organization/routes/members"), "MembersRoute"),
+        },
         {
           path: paths.transfers.new,
           lazy: screen(() => import("@/features/transfers/routes/transfer-new"), "TransferNewRoute"),

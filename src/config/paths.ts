@@ -10,6 +10,13 @@ export const paths = {
   home: "/",
   signIn: "/sign-in",
   welcome: "/welcome",
+  signUp: "/sign-up",
+  signUpConfirm: "/sign-up/confirm",
+  forgotPassword: "/forgot-password",
+  resetPassword: "/reset-password",
+  join: "/join",
+  account: "/account",
+  organizationMembers: "/organization/people",
   transfers: {
     new: "/transfers/new",
     detail: withTransferId(""),

@@ -9,6 +9,8 @@ export type Abilities = {
   readCaughtMail: boolean;
   draftTransfers: boolean;
   carryTransfers: boolean;
+  /** A manager runs their own organisation's people and details. */
+  manageOwnOrganization: boolean;
 };
 export type Session = { user: UserDto; abilities: Abilities } | null;
 

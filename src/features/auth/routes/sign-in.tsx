@@ -1,5 +1,6 @@
 import { useRef, useState, type FormEvent } from "react";
-import { Navigate, useNavigate, useSearchParams } from "react-router";
+import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
+import { paths } from "@/config/paths";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
@@ -82,6 +83,14 @@ export function SignInRoute() {
           <Button type="submit" size="lg" busy={signIn.isPending}>
             Sign in
           </Button>
+          <div className="flex flex-wrap justify-between gap-2 text-sm">
+            <Link className="font-semibold text-fern underline" to={paths.forgotPassword}>
+              Forgot your password?
+            </Link>
+            <Link className="font-semibold text-fern underline" to={paths.signUp}>
+              Create an organisation
+            </Link>
+          </div>
         </form>
       </div>
     </main>

@@ -3,6 +3,7 @@ import { Controller, useFormContext, useWatch } from "react-hook-form";
 import { PURPOSES, TRANSPORT_MODES, US_STATES } from "@shared/constants";
 import type { DirectoryOrganizationDto, TransferInput } from "@shared/schemas/transfer";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
+import { InviteReceiver } from "./invite-receiver";
 import { instantToLocalInput, localInputToInstant } from "@/lib/datetime";
 
 const choose = { value: "", label: "Choose…" };
@@ -79,7 +80,13 @@ export function RouteStep({
       <div className="grid gap-3 sm:grid-cols-2">
         <SelectField
           label="Receiving organisation"
-          options={[choose, ...receivers.map((o) => ({ value: o.id, label: `${o.name} (${o.city}, ${o.state})` }))]}
+          options={[
+            choose,
+            ...receivers.map((o) => ({
+              value: o.id,
+              label: o.pending ? `${o.name} (invited, ${o.state})` : `${o.name} (${o.city}, ${o.state})`,
+            })),
+          ]}
           error={e.receiverOrganizationId?.message}
           {...register("receiverOrganizationId", {
             onChange: (event: { target: { value: string } }) => {
@@ -106,6 +113,14 @@ export function RouteStep({
           {...register("receiverContactId", { setValueAs: (v: string | null) => (v ? v : null) })}
         />
       </div>
+      <InviteReceiver
+        onInvited={(organizationId) =>
+          setValue("receiverOrganizationId", organizationId, {
+            shouldDirty: true,
+            shouldValidate: formState.isSubmitted,
+          })
+        }
+      />
       <AddressFields which="origin" legend="Leaves from" />
       <AddressFields which="destination" legend="Goes to" />
       <div className="grid gap-3 sm:grid-cols-3">
