@@ -24,7 +24,7 @@ const NAV: NavItem[] = [
     label: "Plan a trip",
     show: (s) => s.abilities.draftTransfers || s.abilities.manageOrganizations,
   },
-  { to: paths.organizationMembers, label: "Our people", show: (s) => s.abilities.manageOwnOrganization },
+  { to: paths.organizationMembers, label: "Team", show: (s) => s.abilities.manageOwnOrganization },
   { to: paths.account, label: "Account", show: () => true },
   { to: paths.admin.users, label: "People", show: (s) => s.abilities.manageUsers },
   { to: paths.admin.organizations, label: "Organisations", show: (s) => s.abilities.manageOrganizations },
