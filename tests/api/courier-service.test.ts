@@ -47,6 +47,10 @@ describe("a courier service carries a transfer", () => {
     const list = await boss.get("/api/transfers");
     expect(list.body.transfers.map((x: { id: string }) => x.id)).toContain(cast.transfer.id);
 
+    // The directory gives the manager its own couriers only.
+    const directory = await boss.get("/api/directory/couriers");
+    expect(directory.status).toBe(200);
+    expect(directory.body.couriers.map((c: { id: string }) => c.id).sort()).toEqual([first.id, second.id].sort());
     // Only its own couriers.
     const foreign = await put(boss, `${base}/legs`, { legs: [{ courierId: outsider.id }] });
     expect(foreign.status).toBe(400);

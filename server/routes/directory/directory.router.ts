@@ -13,6 +13,9 @@ export function directoryRouter(): Router {
   const router = Router();
   router.use(requireUser, (req, _res, next) => {
     const actor = currentUser(req);
+    // A courier service's manager reads its own couriers, to assign them to legs (issue 14, §3).
+    const serviceManager = actor.role === "manager" && actor.organization?.kind === "courier_service";
+    if (serviceManager && req.path === "/couriers") return next();
     if (!isKeeper(actor) && actor.role !== "admin")
       return next(forbidden("The directory is for keeper organisations."));
     next();
@@ -73,7 +76,13 @@ export function directoryRouter(): Router {
   router.get("/couriers", async (req, res) => {
     const couriers = await req.em.find(
       UserSchema,
-      { role: "courier", disabled: false },
+      {
+        role: "courier",
+        disabled: false,
+        ...(currentUser(req).role === "manager" && currentUser(req).organization?.kind === "courier_service"
+          ? { organization: currentUser(req).organization!.id }
+          : {}),
+      },
       { populate: ["organization"], orderBy: { displayName: "asc" } },
     );
     const list: DirectoryCourierDto[] = couriers.map((c) => ({
