@@ -28,7 +28,7 @@ export async function inviteUser({
   const key = emailKey(input.email);
   if (await em.count(UserSchema, { emailKey: key }))
     throw conflict("An account with this e-mail already exists.", { field: "email" });
-  if (input.role === "member" && !input.organizationId)
+  if ((input.role === "member" || input.role === "manager") && !input.organizationId)
     throw invalidField(["organizationId"], "a keeper organisation member needs an organisation");
   const organization = input.organizationId ? await em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
   if (input.organizationId && !organization)

@@ -48,7 +48,7 @@ export function usersRouter(ctx: AppContext): Router {
     if (input.displayName !== undefined) user.displayName = input.displayName;
     if (input.role !== undefined) user.role = input.role;
     if (input.disabled !== undefined) user.disabled = input.disabled;
-    if (user.role === "member" && !user.organization)
+    if ((user.role === "member" || user.role === "manager") && !user.organization)
       throw invalidField(["organizationId"], "a keeper organisation member needs an organisation");
     await req.em.flush();
     const pending = await req.em.count(PasswordTokenSchema, { user, usedAt: null });
