@@ -121,9 +121,15 @@ export function uncovered(coverage: readonly CoverageEntry[]): CoverageEntry[] {
   return coverage.filter((entry) => !entry.covered);
 }
 
+/** The jurisdiction's name inside a sentence: "federal law", "Tennessee", "the District of Columbia". */
+export function nameInSentence(entry: Pick<CoverageEntry, "jurisdiction" | "name">): string {
+  return entry.jurisdiction === FEDERAL ? "federal law" : entry.name;
+}
+
 /** "Tennessee (ask Tennessee Wildlife Resources Agency, https://…)": who to ask, in a sentence. */
-export function askWhom(entry: Pick<CoverageEntry, "name" | "agency">): string {
-  return entry.agency.url ? `${entry.name} (ask ${entry.agency.name}, ${entry.agency.url})` : entry.name;
+export function askWhom(entry: Pick<CoverageEntry, "jurisdiction" | "name" | "agency">): string {
+  const name = nameInSentence(entry);
+  return entry.agency.url ? `${name} (ask ${entry.agency.name}, ${entry.agency.url})` : name;
 }
 
 /** "Tennessee, Kentucky and Oregon". */

@@ -54,6 +54,7 @@ describe("seed state rules", () => {
     expect(new Set(demo.map((rule) => rule.jurisdiction)).size).toBeGreaterThanOrEqual(8);
     for (const rule of demo) expect(rule.citation.text).toContain(DEMO_RULE_NOTICE);
     expect(STATE_RULES.find((rule) => rule.id === HAWAII_SNAKES)?.demo).toBe(false);
+    expect(STATE_RULES.find((rule) => rule.id === "hi-hrs150a-6-gila-monster")?.demo).toBe(false);
     for (const policy of STATE_TRANSIT_POLICIES)
       expect(stateTransitPolicySchema.safeParse(policy).error).toBeUndefined();
   });
@@ -86,6 +87,16 @@ describe("HRS 150A-6: no live snake into Hawaii", () => {
     expect(finding(evaluate(buildAnimal(noSuborder), { destinationState: "HI" }), HAWAII_SNAKES)?.severity).toBe(
       "blocks",
     );
+  });
+
+  it("forbids a Gila monster going to Hawaii, and no other lizard", () => {
+    // [published] HRS 150A-6(3): "Any live snake, flying fox, fruit bat, Gila monster …" may not be transported to the State
+    const gila = evaluate(buildAnimal(T.gilaMonster), { originState: "AZ", destinationState: "HI" });
+    expect(finding(gila, "hi-hrs150a-6-gila-monster")?.severity).toBe("blocks");
+    expect(gila.verdict).toBe("blocked");
+    expect(
+      finding(evaluate(buildAnimal(T.beardedDragon), { destinationState: "HI" }), "hi-hrs150a-6-gila-monster"),
+    ).toBeUndefined();
   });
 
   it("does not reach a snake leaving Hawaii", () => {

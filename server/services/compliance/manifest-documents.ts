@@ -16,9 +16,9 @@ export async function manifestDocuments(ctx: AppContext, transferId: string): Pr
   if (!transfer) return {};
   const { result, documents } = await evaluateTransfer(em, transfer);
   const satisfying = new Set(
-    result.animals.flatMap((a) =>
-      a.findings.map((f) => (f.satisfiedBy as { id?: string } | null)?.id).filter((id): id is string => Boolean(id)),
-    ),
+    [...result.shipmentFindings, ...result.animals.flatMap((a) => a.findings)]
+      .map((f) => (f.satisfiedBy as { id?: string } | null)?.id)
+      .filter((id): id is string => Boolean(id)),
   );
   return {
     documents: documents
