@@ -113,9 +113,15 @@ function override(payload: Record<string, unknown>): string[] {
       : gate === "temperature" && isOneOf(TEMPERATURE_VERDICTS, payload.verdict)
         ? TEMPERATURE_VERDICT_WORDS[payload.verdict]
         : null;
-  const lines = [
-    gate ? `Went past ${GATE_WORDS[gate]}${verdict ? `, which said “${verdict}”` : ""}.` : "Went past a check.",
-  ];
+  const unverified = listOf(payload.unverified)
+    .map((entry) => textOf(recordOf(entry).name))
+    .filter((n) => n !== null);
+  const lines =
+    payload.acknowledgement === true && gate === "compliance"
+      ? [
+          `Accepted ${GATE_WORDS.compliance}${verdict ? ` as “${verdict}”` : ""}: the rules of ${unverified.length ? unverified.join(", ") : "a state on the route"} are not reviewed in Hatchway's library.`,
+        ]
+      : [gate ? `Went past ${GATE_WORDS[gate]}${verdict ? `, which said “${verdict}”` : ""}.` : "Went past a check."];
   if (isOneOf(ADVICE_CODES, payload.advice)) lines.push(`The advice was: ${ADVICE_WORDS[payload.advice]}.`);
   const findings = listOf(payload.findings).length;
   if (findings) lines.push(`${findings} open ${findings === 1 ? "finding" : "findings"} at the time.`);

@@ -20,7 +20,7 @@ export function coverageRouter(): Router {
     res.json({ coverage: await listCoverage(req.em) });
   });
 
-  router.put(
+  router.patch(
     "/:jurisdiction",
     requirePolicy(canManageRules, "Only an administrator records reviews of the rule library."),
     async (req, res) => {

@@ -1,3 +1,4 @@
+import { ref } from "@mikro-orm/core";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { CoverageRecord } from "@shared/compliance/coverage";
 import { FEDERAL, jurisdictionName, type Jurisdiction } from "@shared/compliance/jurisdiction";
@@ -129,7 +130,7 @@ export async function recordCoverageReview({
   row.reviewedOn = input.reviewedOn;
   row.reviewedBy = input.reviewedBy === null ? null : input.reviewedBy.trim();
   if (input.notes !== undefined) row.notes = input.notes;
-  row.updatedBy = em.getReference(UserSchema, actor.id) as unknown as typeof row.updatedBy;
+  row.updatedBy = ref(em.getReference(UserSchema, actor.id));
   await em.flush();
   await em.populate(row, ["updatedBy"]);
   return presentCoverage(row, counts);
