@@ -43,14 +43,27 @@ const STEPS: Step[] = [
 const linkButton = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 font-medium";
 
 /**
- * A refusal a party may override with a reason: the temperature gate (a planning aid, not law).
- * Compliance blocks are not offered here; only an administrator can override those.
+ * A refusal the confirming party may answer with a reason: the temperature gate (a planning aid,
+ * not law), or an unverified compliance verdict (a state on the route whose rules Hatchway has not
+ * reviewed). Compliance blocks are not offered here; only an administrator can override those.
  */
-function overridableBlock(error: unknown): boolean {
-  if (!(error instanceof ApiError) || error.status !== 409) return false;
+function overridableBlock(error: unknown): "temperature" | "unverified" | null {
+  if (!(error instanceof ApiError) || error.status !== 409) return null;
   const details = (error.body as { error?: Record<string, unknown> } | undefined)?.error;
-  return Boolean(details && "temperature" in details && !("compliance" in details));
+  if (details?.acknowledgeUnverified === true) return "unverified";
+  return details && "temperature" in details && !("compliance" in details) ? "temperature" : null;
 }
+
+const OVERRIDE_WORDS = {
+  temperature: {
+    text: "You may still confirm, if you have checked the weather yourself and the animals are packed for it. Say why: your reason and the temperature verdict go into the custody log for everyone on the transfer to see.",
+    label: "Why it is safe to confirm anyway",
+  },
+  unverified: {
+    text: "You may still confirm once you have asked the agencies named above whether these animals may go this way. Say what they told you: your reason goes into the custody log for everyone on the transfer to see.",
+    label: "What the agencies told you",
+  },
+} as const;
 
 /** The buttons the caller's abilities allow, and the links to the screens where work is done. */
 export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
@@ -62,7 +75,7 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
   const packingOpen = t.abilities.submit && t.packingFindings.length > 0;
 
   const [overrideReason, setOverrideReason] = useState("");
-  const canOverride = transition.variables?.to === "ready" && overridableBlock(transition.error);
+  const canOverride = transition.variables?.to === "ready" ? overridableBlock(transition.error) : null;
 
   function take(step: Step, why?: string, override = false) {
     transition.mutate(
@@ -109,12 +122,9 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
             if (overrideReason.trim()) take(confirm, overrideReason.trim(), true);
           }}
         >
-          <p className="text-sm">
-            You may still confirm, if you have checked the weather yourself and the animals are packed for it. Say why:
-            your reason and the temperature verdict go into the custody log for everyone on the transfer to see.
-          </p>
+          <p className="text-sm">{OVERRIDE_WORDS[canOverride].text}</p>
           <TextAreaField
-            label="Why it is safe to confirm anyway"
+            label={OVERRIDE_WORDS[canOverride].label}
             value={overrideReason}
             maxLength={1000}
             onChange={(e) => setOverrideReason(e.target.value)}
