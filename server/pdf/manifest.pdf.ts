@@ -1,4 +1,5 @@
 import {
+  MANIFEST_CHECK_WORDS,
   ANIMAL_ORIGIN_WORDS,
   DOCUMENT_KIND_WORDS,
   PACK_WORDS,
@@ -12,7 +13,7 @@ import { embedFonts, fitText, safeText, textWidthPt, wrapText } from "./fonts";
 import { formatDateRange, formatInstant } from "@shared/dates";
 import { formatDimensionsBoth, formatLengthBoth, formatTempRangeBoth, formatWeightBoth } from "@shared/units";
 import { COLORS, PageFlow, drawNoteBox, drawTable, type Cell, type TableRow } from "./layout";
-import type { ManifestAnimal, ManifestBox, ManifestInput, PartyBlock } from "./manifest-input";
+import type { ManifestAnimal, ManifestBox, ManifestInput, ManifestVerdict, PartyBlock } from "./manifest-input";
 import { drawQrCode } from "./qr";
 import { animalsInBox, speciesTotals } from "./species-totals";
 
@@ -47,6 +48,8 @@ export async function renderManifestPdf(input: ManifestInput): Promise<Uint8Arra
   const flow = new PageFlow(doc, fonts, MARGINS, (f) => runningHeader(f, input));
 
   drawTitleBlock(flow, input);
+  drawVerdicts(flow, input.verdicts);
+  flow.gap(4);
   drawParties(flow, input.sender, input.receiver);
   drawCouriers(flow, input);
   flow.gap(8);
@@ -129,6 +132,74 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
     color: COLORS.muted,
   });
   flow.y = topY - QR_SIZE_PT - 28;
+}
+
+/** The colours of a verdict on paper: green, amber, brick red, as on the transfer page. */
+export const VERDICT_COLOURS = {
+  ok: { ink: COLORS.green, fill: COLORS.greenTint },
+  caution: { ink: COLORS.amber, fill: COLORS.amberTint },
+  block: { ink: COLORS.brick, fill: COLORS.brickTint },
+} as const;
+
+/**
+ * The transfer's current verdicts side by side, under the title: what was checked, what it says in
+ * the page's words and colours ("DO NOT SHIP", "UNVERIFIED"), why, and when (in the origin's zone).
+ */
+function drawVerdicts(flow: PageFlow, verdicts: readonly ManifestVerdict[]): void {
+  if (verdicts.length === 0) {
+    flow.paragraph("No check of the rules or the temperature could be made for this manifest.", {
+      bold: true,
+      color: COLORS.brick,
+    });
+    return;
+  }
+  const gapPt = 12;
+  const colW = (flow.width - gapPt * (verdicts.length - 1)) / verdicts.length;
+  const innerW = colW - 16;
+  const laid = verdicts.map((v) => ({
+    v,
+    headline: wrapText(flow.fonts.bold, v.headline, 12, innerW),
+    detail: wrapText(flow.fonts.regular, v.detail, 7.5, innerW),
+    when: wrapText(flow.fonts.regular, `Checked ${formatInstant(v.checkedAt, v.tz)}`, 7, innerW),
+  }));
+  const heightPt = Math.max(
+    ...laid.map((l) => 22 + l.headline.length * 14 + l.detail.length * 9.5 + l.when.length * 9 + 8),
+  );
+  flow.ensure(heightPt + 8);
+  const topY = flow.y;
+  laid.forEach(({ v, headline, detail, when }, i) => {
+    const x = flow.left + i * (colW + gapPt);
+    const colours = VERDICT_COLOURS[v.tone];
+    flow.page.drawRectangle({
+      x,
+      y: topY - heightPt,
+      width: colW,
+      height: heightPt,
+      color: colours.fill,
+      borderColor: colours.ink,
+      borderWidth: 1.5,
+    });
+    flow.drawLine(MANIFEST_CHECK_WORDS[v.check].toUpperCase(), x + 8, topY - 13, {
+      bold: true,
+      sizePt: 7,
+      color: colours.ink,
+    });
+    let y = topY - 18;
+    for (const line of headline) {
+      y -= 14;
+      flow.page.drawText(line, { x: x + 8, y: y + 2, size: 12, font: flow.fonts.bold, color: colours.ink });
+    }
+    y -= 2;
+    for (const line of detail) {
+      y -= 9.5;
+      flow.page.drawText(line, { x: x + 8, y, size: 7.5, font: flow.fonts.regular, color: COLORS.ink });
+    }
+    for (const line of when) {
+      y -= 9;
+      flow.page.drawText(line, { x: x + 8, y, size: 7, font: flow.fonts.regular, color: COLORS.muted });
+    }
+  });
+  flow.y = topY - heightPt - 4;
 }
 
 function partyLines(party: PartyBlock): { text: string; bold: boolean }[] {
@@ -267,7 +338,7 @@ function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
 }
 
 function drawBoxes(flow: PageFlow, boxes: ManifestBox[]): void {
-  flow.heading("Contents by box", 80);
+  flow.heading("Contents by box", 120);
   let lineNo = 0;
   for (const box of boxes) {
     // The label is one line of the user's text; its own line breaks would split the title.

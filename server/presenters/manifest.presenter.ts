@@ -76,6 +76,7 @@ export function presentManifestInput(
     })),
     documents: extras.documents,
     temperature: extras.temperature,
+    verdicts: extras.verdicts,
     handlingNotes: t.handling_notes,
     // The sender and the receiver head the contacts from their own blocks; these are the others.
     emergencyContacts: [

@@ -45,14 +45,6 @@ export const RULE_EFFECT_WORDS: Readonly<Record<RuleEffect["kind"], string>> = {
   advisory: "Advice",
 };
 
-/** The verdict as the manifest and labels print it, in capitals where it must stop a reader. */
-export const COMPLIANCE_VERDICT_PRINTED: Readonly<Record<Verdict, string>> = {
-  clear: "Rules checked: clear to travel",
-  unverified: "UNVERIFIED",
-  needs_documents: "DO NOT SHIP: documents needed",
-  blocked: "DO NOT SHIP",
-};
-
 /** Where a jurisdiction sits on the route. */
 export const ROUTE_ROLE_WORDS: Readonly<Record<RouteRole, string>> = {
   federal: "Federal",
