@@ -133,6 +133,21 @@ export const ROUTE_SAMPLE_KM = 5;
  */
 export function transitStatesAlong(origin: LatLon, destination: LatLon, mode: TransportMode): UsState[] {
   if (mode === "overnight_air") return [];
+  const key = `${origin.lat},${origin.lon}|${destination.lat},${destination.lon}`;
+  const known = routesSeen.get(key);
+  if (known) return [...known];
+  const states = statesAlong(origin, destination);
+  // A pure function of the two positions: remembered (a few hundred routes at most), never a setting.
+  if (routesSeen.size >= ROUTES_REMEMBERED) routesSeen.delete(routesSeen.keys().next().value as string);
+  routesSeen.set(key, states);
+  return [...states];
+}
+
+/** Routes whose states were worked out, oldest first; each takes tens of milliseconds to lay out. */
+const routesSeen = new Map<string, readonly UsState[]>();
+const ROUTES_REMEMBERED = 500;
+
+function statesAlong(origin: LatLon, destination: LatLon): UsState[] {
   const steps = Math.max(1, Math.ceil(haversineKm(origin, destination) / ROUTE_SAMPLE_KM));
   const seen: UsState[] = [];
   for (let step = 1; step < steps; step++) {
