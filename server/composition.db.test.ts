@@ -107,7 +107,11 @@ describe("two apps built in one process", () => {
     expect(await countRows(a, "temperature_check", cast.transfer.id)).toBe(1);
     const custody = (await (await signIn(a.app, cast.receiver.email)).get(`/api/transfers/${cast.transfer.id}/custody`))
       .body.entries as { kind: string; payload: Record<string, unknown> }[];
-    expect(custody.filter((e) => e.kind === "override").map((e) => e.payload.gate)).toEqual(["temperature"]);
+    // In gate order: the acknowledged "unverified" rules check (no state on the route is reviewed), then the temperature.
+    expect(custody.filter((e) => e.kind === "override").map((e) => e.payload.gate)).toEqual([
+      "compliance",
+      "temperature",
+    ]);
     expect(custody.some((e) => e.kind === "checks_skipped")).toBe(false);
     // B's gates never saw A's transfer.
     expect(seenByB.filter((s) => s.endsWith(cast.transfer.id))).toEqual([]);

@@ -159,8 +159,34 @@ export async function transferInput(
   };
 }
 
-/** The reason test fixtures give when they confirm past the temperature gate. */
-export const FIXTURE_OVERRIDE = "Test fixture: the temperature check is not under test here.";
+/**
+ * The reason test fixtures give when they confirm past the temperature gate and past an unverified
+ * compliance verdict (a state on the route with no reviewed rules).
+ */
+export const FIXTURE_OVERRIDE =
+  "Test fixture: the temperature check and the unreviewed states are not under test here.";
+
+/**
+ * Records a review of the library's rules for each jurisdiction named ("all": every one), as an
+ * administrator would on the coverage screen; null withdraws the reviews. Tests of a "clear"
+ * verdict need every jurisdiction on the route reviewed (and free of demo rules).
+ */
+export async function markReviewed(
+  em: EntityManager,
+  jurisdictions: readonly string[] | "all",
+  reviewedOn: string | null = "2026-12-01",
+): Promise<void> {
+  const reviewer = reviewedOn === null ? null : "Test reviewer";
+  if (jurisdictions === "all") {
+    await em.execute("UPDATE jurisdiction_coverage SET reviewed_on = ?, reviewed_by = ?", [reviewedOn, reviewer]);
+    return;
+  }
+  await em.execute("UPDATE jurisdiction_coverage SET reviewed_on = ?, reviewed_by = ? WHERE jurisdiction IN (?)", [
+    reviewedOn,
+    reviewer,
+    [...jurisdictions],
+  ]);
+}
 
 export type TransferCast = { transfer: Transfer; sender: User; receiver: User; couriers: User[] };
 

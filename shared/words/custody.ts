@@ -145,6 +145,10 @@ function couriersAssigned(payload: Record<string, unknown>): string[] {
   return legs.map((leg, i) => `Leg ${numberOf(leg.sequence) ?? i + 1}: ${textOf(leg.courierName) ?? "a courier"}.`);
 }
 
+/** "Tennessee, Kentucky and Oregon". */
+const inWords = (names: readonly string[]) =>
+  names.length <= 1 ? names.join("") : `${names.slice(0, -1).join(", ")} and ${names.at(-1)}`;
+
 function override(payload: Record<string, unknown>): string[] {
   const gate = payload.gate === "compliance" || payload.gate === "temperature" ? payload.gate : null;
   const verdict =
@@ -153,9 +157,15 @@ function override(payload: Record<string, unknown>): string[] {
       : gate === "temperature" && isOneOf(TEMPERATURE_VERDICTS, payload.verdict)
         ? TEMPERATURE_VERDICT_WORDS[payload.verdict]
         : null;
-  const lines = [
-    gate ? `Went past ${GATE_WORDS[gate]}${verdict ? `, which said “${verdict}”` : ""}.` : "Went past a check.",
-  ];
+  const unverified = listOf(payload.unverified)
+    .map((entry) => textOf(recordOf(entry).name))
+    .filter((n) => n !== null);
+  const lines =
+    payload.acknowledgement === true && gate === "compliance"
+      ? [
+          `Accepted ${GATE_WORDS.compliance}${verdict ? ` as “${verdict}”` : ""}: the rules of ${unverified.length ? inWords(unverified) : "a state on the route"} are not reviewed in Hatchway's library.`,
+        ]
+      : [gate ? `Went past ${GATE_WORDS[gate]}${verdict ? `, which said “${verdict}”` : ""}.` : "Went past a check."];
   if (isOneOf(ADVICE_CODES, payload.advice)) lines.push(`The advice was: ${ADVICE_WORDS[payload.advice]}.`);
   const findings = listOf(payload.findings).length;
   if (findings) lines.push(`${findings} open ${findings === 1 ? "finding" : "findings"} at the time.`);

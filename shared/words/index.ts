@@ -10,6 +10,7 @@ export * from "./custody";
 export * from "./documents";
 export * from "./fields";
 export * from "./mail";
+export * from "./manifest";
 export * from "./packing";
 export * from "./people";
 export * from "./temperature";

@@ -31,6 +31,7 @@ import {
   WEATHER_SCENARIOS,
 } from "../constants";
 import { EXPIRY_STATUSES } from "../compliance/expiry";
+import { ROUTE_ROLES, UNCOVERED_REASONS } from "../compliance/coverage";
 import { GOVERNS, HOLDER_SIDES, ruleEffectSchema } from "../compliance/rule";
 import { SEVERITIES, VERDICTS as COMPLIANCE_VERDICTS } from "../compliance/schemas";
 import { ADVICE_CODES, VERDICTS as TEMPERATURE_VERDICTS } from "../temperature/advice";
@@ -65,11 +66,31 @@ const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]
   ["document kind", DOCUMENT_KINDS, [words.DOCUMENT_KIND_WORDS, words.DOCUMENT_KIND_IN_SENTENCE]],
   ["expiry", EXPIRY_STATUSES, [words.EXPIRY_WORDS]],
   ["holder side", HOLDER_SIDES, [words.HOLDER_SIDE_WORDS]],
-  ["compliance verdict", COMPLIANCE_VERDICTS, [words.COMPLIANCE_VERDICT_WORDS, words.COMPLIANCE_VERDICT_EXPLANATIONS]],
+  [
+    "compliance verdict",
+    COMPLIANCE_VERDICTS,
+    [
+      words.COMPLIANCE_VERDICT_WORDS,
+      words.COMPLIANCE_VERDICT_EXPLANATIONS,
+      words.COMPLIANCE_VERDICT_PRINTED,
+      words.COMPLIANCE_VERDICT_ON_LABEL,
+    ],
+  ],
+  ["place on the route", ROUTE_ROLES, [words.ROUTE_ROLE_WORDS]],
+  ["why a state is not covered", UNCOVERED_REASONS, [words.UNCOVERED_REASON_WORDS]],
   ["severity", SEVERITIES, [words.SEVERITY_WORDS]],
   ["what a rule governs", GOVERNS, [words.GOVERNS_WORDS]],
   ["rule effect", effectKinds, [words.RULE_EFFECT_WORDS]],
-  ["temperature verdict", TEMPERATURE_VERDICTS, [words.TEMPERATURE_VERDICT_WORDS]],
+  [
+    "temperature verdict",
+    TEMPERATURE_VERDICTS,
+    [words.TEMPERATURE_VERDICT_WORDS, words.TEMPERATURE_VERDICT_PRINTED, words.TEMPERATURE_VERDICT_ON_LABEL],
+  ],
+  [
+    "check on the manifest",
+    ["compliance", "temperature"] as const,
+    [words.MANIFEST_CHECK_WORDS, words.LABEL_CHECK_WORDS],
+  ],
   ["advice", ADVICE_CODES, [words.ADVICE_WORDS]],
   ["check mark", CHECK_MARKS, [words.CHECK_MARK_WORDS]],
   ["weather scenario", WEATHER_SCENARIOS, [words.WEATHER_SCENARIO_WORDS]],

@@ -126,3 +126,31 @@ export const ComplianceOverrideSchema = defineEntity({
   },
 });
 export type ComplianceOverride = InferEntity<typeof ComplianceOverrideSchema>;
+
+/**
+ * What the library knows of one jurisdiction's rules: whether they were reviewed (when, by whom)
+ * and the offices to confirm with. One row per jurisdiction, seeded with the offices' published
+ * names and addresses (server/db/seeders/jurisdiction-coverage.data.ts); admins record reviews.
+ */
+export const JurisdictionCoverageSchema = defineEntity({
+  name: "JurisdictionCoverage",
+  tableName: "jurisdiction_coverage",
+  properties: {
+    jurisdiction: p.string().length(2).primary(),
+    wildlifeAgencyName: p.text(),
+    wildlifeAgencyUrl: p.text(),
+    stateVeterinarianName: p.text(),
+    stateVeterinarianUrl: p.text(),
+    /** Where the offices' names and addresses were read ([published] or [memory]). */
+    source: p.text(),
+    notes: p.text().nullable(),
+    reviewedOn: p.date().nullable(),
+    reviewedBy: p.text().nullable(),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
+    updatedBy: () => p.manyToOne(UserSchema).ref().nullable(),
+  },
+});
+export type JurisdictionCoverage = InferEntity<typeof JurisdictionCoverageSchema>;

@@ -20,6 +20,7 @@ import {
   ComplianceOverrideSchema,
   ComplianceRuleSchema,
   DocumentScanSchema,
+  JurisdictionCoverageSchema,
   PermitDocumentSchema,
   TransferDocumentSchema,
 } from "./compliance.entity";
@@ -79,6 +80,7 @@ export const ENTITIES = [
   TransferDocumentSchema,
   ComplianceEvaluationSchema,
   ComplianceOverrideSchema,
+  JurisdictionCoverageSchema,
   ForecastHourSchema,
   TemperatureProfileSchema,
   TemperatureCheckSchema,

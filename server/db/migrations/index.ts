@@ -7,6 +7,7 @@ import { Migration20261201310000_temperature } from "./Migration20261201310000_t
 import { Migration20261202100000_transfer_alerts } from "./Migration20261202100000_transfer_alerts";
 import { Migration20261202130000_least_privilege } from "./Migration20261202130000_least_privilege";
 import { Migration20261202130100_custody_head } from "./Migration20261202130100_custody_head";
+import { Migration20261202130200_jurisdiction_coverage } from "./Migration20261202130200_jurisdiction_coverage";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -16,4 +17,5 @@ export const MIGRATIONS = [
   { name: "Migration20261202100000_transfer_alerts", class: Migration20261202100000_transfer_alerts },
   { name: "Migration20261202130000_least_privilege", class: Migration20261202130000_least_privilege },
   { name: "Migration20261202130100_custody_head", class: Migration20261202130100_custody_head },
+  { name: "Migration20261202130200_jurisdiction_coverage", class: Migration20261202130200_jurisdiction_coverage },
 ];

@@ -9,18 +9,23 @@ import { useToast } from "@/components/ui/toast";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { useTransitionTransfer } from "../api/transition-transfer";
-import { TemperatureOverride } from "./temperature-override";
+import { ConfirmPastBlock, type AnswerableBlock } from "./confirm-past-block";
 import { STEPS, type Step } from "./transition-steps";
 
 const linkButton = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 font-medium";
 
-/** The temperature report behind a refusal the receiver may override with a reason; null otherwise. */
-function overridableBlock(error: unknown): { advice: string | null } | null {
+/**
+ * A refusal the confirming party may answer with a reason: the temperature gate (a planning aid,
+ * not law), or an unverified compliance verdict (a state on the route whose rules Hatchway has not
+ * reviewed). Compliance blocks are not offered here; only an administrator can override those.
+ */
+function answerableBlock(error: unknown): AnswerableBlock | null {
   if (!(error instanceof ApiError) || error.status !== 409) return null;
   const details = (error.body as { error?: Record<string, unknown> } | undefined)?.error;
+  if (details?.acknowledgeUnverified === true) return { kind: "unverified" };
   if (!details || !("temperature" in details) || "compliance" in details) return null;
   const report = details.temperature as { advice?: { message?: string } } | undefined;
-  return { advice: report?.advice?.message ?? null };
+  return { kind: "temperature", advice: report?.advice?.message ?? null };
 }
 
 /** The buttons the caller's abilities allow, and the links to the screens where work is done. */
@@ -32,7 +37,7 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
   const [reasonError, setReasonError] = useState<string | null>(null);
   const steps = STEPS.filter((s) => t.abilities[s.ability]);
   const packingOpen = t.abilities.submit && t.packingFindings.length > 0;
-  const block = transition.variables?.to === "ready" ? overridableBlock(transition.error) : null;
+  const block = transition.variables?.to === "ready" ? answerableBlock(transition.error) : null;
 
   function take(step: Step, why?: string, override = false) {
     transition.mutate(
@@ -82,9 +87,9 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
         </Notice>
       ) : null}
       {block ? (
-        <TemperatureOverride
+        <ConfirmPastBlock
           transfer={t}
-          advice={block.advice}
+          block={block}
           busy={transition.isPending}
           onConfirm={(why) =>
             take(
