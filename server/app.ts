@@ -20,6 +20,7 @@ import { directoryRouter } from "./routes/directory/directory.router";
 import { complianceRouter } from "./routes/compliance/compliance.router";
 import { temperatureRouter } from "./routes/temperature/temperature.router";
 import { isScanUpload, SCAN_UPLOAD_TYPES } from "./routes/documents/scan-upload";
+import { isPhotoUpload, PHOTO_UPLOAD_TYPES } from "./routes/transfers/photo-upload";
 
 /**
  * Builds the Express app (no listen): the API under /api and the built client for everything else.
@@ -50,7 +51,10 @@ export function createApp(input: AppContext | AppBase): Express {
   const json = express.json({ limit: "1mb", type: "application/json" });
   const jsonBody = requireJsonBody();
   const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
-  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : jsonBody)(req, res, next));
+  const photoUploadBody = requireJsonBody(PHOTO_UPLOAD_TYPES);
+  api.use((req, res, next) =>
+    (isScanUpload(req) ? scanUploadBody : isPhotoUpload(req) ? photoUploadBody : jsonBody)(req, res, next),
+  );
   api.use((req, res, next) => (req.method === "GET" || req.method === "HEAD" ? next() : json(req, res, next)));
   api.use(rejectNul);
   // One EntityManager per request (MikroORM's request context), forked on first use only; the

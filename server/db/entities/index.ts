@@ -13,6 +13,7 @@ import {
 } from "./transfer.entity";
 import { CustodyEntrySchema } from "./custody-entry.entity";
 import { TransferAlertSchema } from "./transfer-alert.entity";
+import { DeliveryCodeSchema, TransferPhotoSchema } from "./custody-evidence.entity";
 import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
@@ -50,6 +51,8 @@ export {
   CheckInExtraSchema,
   RegisterEntrySchema,
   IdempotencyKeySchema,
+  TransferPhotoSchema,
+  DeliveryCodeSchema,
 };
 
 /** Every entity the ORM knows; new entities are added here once. */
@@ -83,4 +86,6 @@ export const ENTITIES = [
   TemperatureProfileSchema,
   TemperatureCheckSchema,
   TemperatureAlertSchema,
+  TransferPhotoSchema,
+  DeliveryCodeSchema,
 ];

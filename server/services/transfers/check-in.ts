@@ -34,10 +34,23 @@ function describe(rows: ReturnType<typeof computeDiscrepancies>): string {
   return `${parts.join(", ")}.`;
 }
 
+/** What a register entry says besides its condition: the problem, the line's notes, or for a loss the check-in's notes. */
+function registerNotes(
+  condition: "well" | "problem" | "dead_on_arrival" | "missing",
+  item: CheckInParsed["items"][number],
+  checkInNotes: string | null,
+): string | null {
+  const parts = condition === "problem" ? [item.problem, item.notes] : [item.notes];
+  const text = parts.filter((p): p is string => Boolean(p && p.trim())).join(" — ");
+  if (text) return text;
+  return condition === "dead_on_arrival" || condition === "missing" ? checkInNotes : null;
+}
+
 /**
  * The receiver's signed check-in: an outcome for every animal on the manifest, animals that
- * came but were not listed, and the discrepancy against the manifest. Accepted animals enter
- * the receiver's collection register; the sender is told.
+ * came but were not listed, and the discrepancy against the manifest. Every animal enters the
+ * receiver's collection register: accepted ones as held, dead-on-arrival and missing ones as losses
+ * (with the line's notes and weight); the sender is told.
  */
 export async function checkInTransfer({
   em,
@@ -115,9 +128,13 @@ export async function checkInTransfer({
         weightG: item.weightG ?? null,
         notes: item.notes ?? null,
       });
+      // Accepted animals enter the register; losses go in too, as entries that record the loss,
+      // so the register accounts for every animal on the manifest (CITES Rp/3 1.72, 1.82).
       for (const [condition, count] of [
         ["well", item.arrivedWell],
         ["problem", item.arrivedProblem],
+        ["dead_on_arrival", item.deadOnArrival],
+        ["missing", item.missing],
       ] as const) {
         if (count === 0) continue;
         tx.create(RegisterEntrySchema, {
@@ -133,7 +150,8 @@ export async function checkInTransfer({
           transferNumber: t.number,
           animal,
           condition,
-          notes: condition === "problem" ? (item.problem ?? null) : null,
+          notes: registerNotes(condition, item, input.notes ?? null),
+          weightG: item.weightG ?? null,
         });
       }
     }
@@ -163,7 +181,24 @@ export async function checkInTransfer({
       })),
     );
     const summary = describe(rows);
-    await appendCustody(tx, t.id, actor, "check_in", { signedName: input.signedName, summary, discrepancies: rows });
+    // Each line's own words on the record too: what was wrong, the notes, the weight.
+    const lines = input.items
+      .filter((item) => item.problem || item.notes || item.weightG != null || item.deadOnArrival || item.missing)
+      .map((item) => ({
+        scientificName: byId.get(item.animalId)!.taxon.getEntity().scientificName,
+        deadOnArrival: item.deadOnArrival,
+        missing: item.missing,
+        problem: item.problem ?? null,
+        notes: item.notes ?? null,
+        weightG: item.weightG ?? null,
+      }));
+    await appendCustody(tx, t.id, actor, "check_in", {
+      signedName: input.signedName,
+      summary,
+      discrepancies: rows,
+      lines,
+      notes: input.notes ?? null,
+    });
     await appendCustody(tx, t.id, actor, "status_change", {
       from: "delivered",
       to: "checked_in",
