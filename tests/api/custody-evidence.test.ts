@@ -9,7 +9,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
 import { createTestApp, signIn, type Client, type TestApp } from "../support/app";
-import { buildTransfer, type TransferCast } from "../factories";
+import { buildTransfer } from "../factories";
 import { OutboxMessageSchema } from "../../server/db/entities/outbox-message.entity";
 
 let t: TestApp;
