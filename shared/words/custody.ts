@@ -9,7 +9,6 @@ import {
   type CustodyKind,
   type DeliveryAcknowledgementWay,
   type HandoffKind,
-  type HandoffReasonKey,
   type PhotoSubject,
   type TransferStatus,
 } from "../constants";
@@ -18,7 +17,7 @@ import { VERDICTS as COMPLIANCE_VERDICTS } from "../compliance/schemas";
 import { ADVICE_CODES, VERDICTS as TEMPERATURE_VERDICTS } from "../temperature/advice";
 import { formatDistance, formatTemp, formatWeight, type UnitSystem } from "../units";
 import { ALERT_KIND_WORDS } from "./alerts";
-import { boxName, DELIVERY_WAY_WORDS, handoffMoment, PHOTO_SUBJECT_WORDS } from "./evidence";
+import { boxName, DELIVERY_WAY_WORDS, handoffMoment, PHOTO_SUBJECT_WORDS, REASON_TITLES } from "./evidence";
 import { COMPLIANCE_VERDICT_WORDS } from "./compliance";
 import { ADVICE_WORDS, TEMPERATURE_VERDICT_WORDS } from "./temperature";
 import { HANDOFF_KIND_WORDS, TRANSFER_STATUS_WORDS } from "./transfer";
@@ -99,12 +98,6 @@ function sealLines(payload: Record<string, unknown>): string[] {
   return lines;
 }
 
-const REASON_LINE: Readonly<Record<HandoffReasonKey, string>> = {
-  earlyPickup: "Reason for the early pickup",
-  implausibleSpeed: "Reason for the distance covered",
-  unexpectedParty: "Reason for handing to someone else",
-};
-
 function handoff(payload: Record<string, unknown>, system: UnitSystem): string[] {
   const kind = isOneOf<HandoffKind>(HANDOFF_KINDS, payload.handoffKind) ? payload.handoffKind : null;
   const lines: string[] = [];
@@ -137,7 +130,7 @@ function handoff(payload: Record<string, unknown>, system: UnitSystem): string[]
   const reasons = recordOf(payload.reasons);
   for (const key of HANDOFF_REASON_KEYS) {
     const reason = textOf(reasons[key]);
-    if (reason) lines.push(`${REASON_LINE[key]}: ${reason}`);
+    if (reason) lines.push(`${REASON_TITLES[key]}: ${reason}`);
   }
   for (const line of listOf(plausibility.notChecked)) if (textOf(line)) lines.push(String(line));
   if (payload.receiverAcknowledgement === "pending")

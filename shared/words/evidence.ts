@@ -149,6 +149,13 @@ export const REASON_REQUESTS: Readonly<Record<HandoffReasonKey, string>> = {
   unexpectedParty: "say why the boxes go to someone other than the assigned courier or the receiver",
 };
 
+/** A reason as the record says it: "Reason for the early pickup: …". */
+export const REASON_TITLES: Readonly<Record<HandoffReasonKey, string>> = {
+  earlyPickup: "Reason for the early pickup",
+  implausibleSpeed: "Reason for the distance covered",
+  unexpectedParty: "Reason for handing to someone else",
+};
+
 /** The reason field's label on the phone. */
 export const REASON_LABELS: Readonly<Record<HandoffReasonKey, string>> = {
   earlyPickup: "Why so early?",

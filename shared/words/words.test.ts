@@ -81,7 +81,7 @@ const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]
   ["photo subject", PHOTO_SUBJECTS, [words.PHOTO_SUBJECT_WORDS]],
   ["delivery state", DELIVERY_STATES, [words.DELIVERY_STATE_WORDS]],
   ["delivery acknowledgement", DELIVERY_ACKNOWLEDGEMENT_WAYS, [words.DELIVERY_WAY_WORDS]],
-  ["handoff reason", HANDOFF_REASON_KEYS, [words.REASON_LABELS, words.REASON_REQUESTS]],
+  ["handoff reason", HANDOFF_REASON_KEYS, [words.REASON_LABELS, words.REASON_REQUESTS, words.REASON_TITLES]],
   [
     "temperature profile group",
     PROFILE_GROUPS,

@@ -43,7 +43,11 @@ function AlertItem({ transfer, alert }: { transfer: TransferDto; alert: AlertDto
               hint="Your note stays on the record with the alert; the other party sees it."
               value={note}
               maxLength={1000}
-              onChange={(e) => setNote(e.target.value)}
+              onChange={(e) => {
+                setNote(e.target.value);
+                // A refusal about the old note goes as soon as the note changes.
+                if (acknowledge.error) acknowledge.reset();
+              }}
               error={acknowledge.error instanceof ApiError ? acknowledge.error.message : undefined}
             />
             <div className="flex flex-wrap gap-2">

@@ -1,4 +1,4 @@
-import { useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { FormProvider, useForm, type FieldErrors, type FieldPath, type Resolver } from "react-hook-form";
 import { keeperResolver } from "@/lib/form-resolver";
 import {
@@ -87,6 +87,12 @@ export function TransferForm({
   const [taxa, setTaxa] = useState(initialTaxa);
   const [saveError, setSaveError] = useState<string | null>(null);
   const heading = useRef<HTMLHeadingElement>(null);
+
+  // A refusal from the server goes as soon as the entries change: it may no longer apply.
+  useEffect(() => {
+    const subscription = form.watch(() => setSaveError(null));
+    return () => subscription.unsubscribe();
+  }, [form]);
 
   function go(next: number) {
     setStep(next);
