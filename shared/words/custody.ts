@@ -159,7 +159,7 @@ function checkIn(payload: Record<string, unknown>, system: UnitSystem): string[]
     if (weight !== null) parts.push(`weight ${formatWeight(weight, system)}`);
     const notes = textOf(line.notes);
     if (notes) parts.push(`notes: ${notes}`);
-    if (parts.length) lines.push(`${name}: ${parts.join("; ")}.`);
+    if (parts.length) lines.push(`${name}: ${parts.join("; ")}`.replace(/([^.!?])$/, "$1."));
   }
   const notes = textOf(payload.notes);
   if (notes) lines.push(`Notes: ${notes}`);

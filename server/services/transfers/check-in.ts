@@ -34,16 +34,19 @@ function describe(rows: ReturnType<typeof computeDiscrepancies>): string {
   return `${parts.join(", ")}.`;
 }
 
-/** What a register entry says besides its condition: the problem, the line's notes, or for a loss the check-in's notes. */
+/**
+ * What a register entry says besides its condition: the problem for an animal that arrived with one;
+ * for a loss, the line's notes (or the check-in's when the line has none). An animal that arrived
+ * well carries no note: the line's notes may be about the ones lost.
+ */
 function registerNotes(
   condition: "well" | "problem" | "dead_on_arrival" | "missing",
   item: CheckInParsed["items"][number],
   checkInNotes: string | null,
 ): string | null {
-  const parts = condition === "problem" ? [item.problem, item.notes] : [item.notes];
-  const text = parts.filter((p): p is string => Boolean(p && p.trim())).join(" — ");
-  if (text) return text;
-  return condition === "dead_on_arrival" || condition === "missing" ? checkInNotes : null;
+  if (condition === "well") return null;
+  if (condition === "problem") return item.problem?.trim() || null;
+  return item.notes?.trim() || checkInNotes;
 }
 
 /**

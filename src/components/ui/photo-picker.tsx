@@ -64,7 +64,10 @@ export function PhotoPicker({
             htmlFor={`${id}-${i}`}
             className="inline-flex min-h-12 cursor-pointer items-center gap-2 rounded-md border border-rule bg-paper-card px-4 font-medium text-fern focus-within:ring-2 focus-within:ring-fern hover:bg-paper-deep"
           >
-            <span aria-hidden>＋</span> {slot.label}
+            <span aria-hidden className="text-xl leading-none">
+              +
+            </span>{" "}
+            {slot.label}
             <input
               id={`${id}-${i}`}
               type="file"

@@ -30,14 +30,7 @@ export function PhotoStrip({
               className="block rounded-md border border-rule bg-paper-card p-1 hover:border-fern"
               title={caption}
             >
-              <img
-                src={photo.url}
-                alt={caption}
-                loading="lazy"
-                className="h-20 w-20 rounded object-cover"
-                width={80}
-                height={80}
-              />
+              <img src={photo.url} alt={caption} className="h-20 w-20 rounded object-cover" width={80} height={80} />
               <span className="mt-1 block max-w-20 truncate text-xs text-ink-soft">{what}</span>
             </a>
           </li>

@@ -47,11 +47,13 @@ export function ArrivalRecord({ transfer: t }: { transfer: TransferDto }) {
               );
             })}
           </ul>
-          <p className="mt-1">They are in the receiver&apos;s register as losses, and the sender was told.</p>
+          <p className="mt-1">The register records them as losses, and the sender was told.</p>
         </Notice>
       ) : null}
       <p className="text-sm text-ink-soft">
-        Signed by {c.signedName} ({c.signedBy.displayName}) on {formatInstant(c.signedAt)}.
+        Signed by {c.signedName}
+        {c.signedName.trim() !== c.signedBy.displayName ? ` (account of ${c.signedBy.displayName})` : ""} on{" "}
+        {formatInstant(c.signedAt)}.
       </p>
       <ul className="grid gap-3">
         {c.items.map((item) => {

@@ -51,7 +51,7 @@ function defaults(t: TransferDto, index: number): HandoffInput {
     receivedByName: parties?.receivedBy ?? "",
     notes: "",
     reasons: {},
-    receiverCode: "",
+    receiverCode: null,
     acknowledged: false as unknown as true,
   };
 }
@@ -91,7 +91,9 @@ export function HandoffForm({
   const boxes = useMemo(() => [...t.containers].sort((a, b) => a.position - b.position), [t.containers]);
   const counted = watch("boxesCounted");
   const kind = handoffKind(index, t.legs.length);
-  const fromServer = serverFindings(record.error);
+  // The server's findings when it saw more than the phone (its clock, a newer record); kept while the reasons are typed.
+  const [fromServer, setFromServer] = useState<Finding[] | null>(null);
+  const findings: Finding[] = fromServer ?? review?.findings ?? [];
 
   // A stale refusal never stays on screen: any change to the entries clears it.
   const reset = useRef(record.reset);
@@ -114,6 +116,7 @@ export function HandoffForm({
       return;
     }
     if (!(await form.trigger(ENTRY_FIELDS, { shouldFocus: true }))) return;
+    setFromServer(null);
     setReview(
       reviewHandoff(handoffContextOf(t, viewerName), {
         handoffIndex: index,
@@ -127,35 +130,42 @@ export function HandoffForm({
     );
   }
 
-  const confirm = form.handleSubmit((input) =>
-    record.mutate(
-      { input: { ...input, receiverCode: input.receiverCode || null }, idempotencyKey: key, photos },
-      {
-        onSuccess: ({ failed }) =>
-          onRecorded(
-            `${HANDOFF_KIND_WORDS[kind]} recorded.`,
-            failed.map((f) => `A photo was not sent (${f.message}). Add it again below.`),
-          ),
-        onError: (error) => {
-          // A refusal about one entry: back to it, with the server's words on the field.
-          if (
-            error instanceof ApiError &&
-            error.field &&
-            !error.field.startsWith("reasons") &&
-            error.field !== "receiverCode"
-          ) {
-            setReview(null);
-            form.setError(error.field as FieldPath<HandoffInput>, { message: error.message });
-          } else if (error instanceof ApiError && error.field && error.field !== "body") {
-            form.setError(error.field as FieldPath<HandoffInput>, { message: error.message });
-          }
+  const confirm = form.handleSubmit(
+    (input) =>
+      record.mutate(
+        { input: { ...input, receiverCode: input.receiverCode || null }, idempotencyKey: key, photos },
+        {
+          onSuccess: ({ failed }) =>
+            onRecorded(
+              `${HANDOFF_KIND_WORDS[kind]} recorded.${findings.length ? ` ${findings.length === 1 ? "An alert went" : `${findings.length} alerts went`} to the sender and the receiver.` : ""}`,
+              failed.map((f) => `A photo was not sent (${f.message}). Add it again below.`),
+            ),
+          onError: (error) => {
+            const more = serverFindings(error);
+            if (more) setFromServer(more);
+            // A refusal about one entry: back to it, with the server's words on the field.
+            if (
+              error instanceof ApiError &&
+              error.field &&
+              !error.field.startsWith("reasons") &&
+              error.field !== "receiverCode"
+            ) {
+              setReview(null);
+              setFromServer(null);
+              form.setError(error.field as FieldPath<HandoffInput>, { message: error.message });
+            } else if (error instanceof ApiError && error.field && error.field !== "body") {
+              form.setError(error.field as FieldPath<HandoffInput>, { message: error.message });
+            }
+          },
+          onSettled: (_data, error) => settle(error ?? undefined),
         },
-        onSettled: (_data, error) => settle(error ?? undefined),
-      },
-    ),
+      ),
+    // An entry the review hides is wrong: back to the entries, where its message shows.
+    (errors) => {
+      if (ENTRY_FIELDS.some((field) => field in errors)) setReview(null);
+    },
   );
 
-  const findings: Finding[] = fromServer ?? review?.findings ?? [];
   return (
     <FormProvider {...form}>
       <form
@@ -247,7 +257,7 @@ export function HandoffForm({
           />
         ) : null}
 
-        {record.error && !fromServer ? (
+        {record.error && !serverFindings(record.error) ? (
           <Notice tone="block" role="alert" title="Not recorded">
             {record.error instanceof ApiError
               ? record.error.status === 409

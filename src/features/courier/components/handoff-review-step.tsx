@@ -72,7 +72,7 @@ export function HandoffReviewStep({
           autoComplete="one-time-code"
           hint="Ask the receiver to open the transfer in Hatchway and show a code. Without it, the delivery waits until the receiver confirms from their own account."
           error={e.receiverCode?.message}
-          {...register("receiverCode")}
+          {...register("receiverCode", { setValueAs: (v: string | null) => (v ? v : null) })}
         />
       ) : null}
       <label className="flex min-h-14 cursor-pointer items-start gap-4 rounded-card border-2 border-fern-ring bg-fern-light p-4">

@@ -88,11 +88,14 @@ export function AlertsSection({ transfer }: { transfer: TransferDto }) {
           ? `${open.length} ${open.length === 1 ? "alert needs" : "alerts need"} your attention`
           : "Alerts (all acknowledged)"}
       </h2>
-      <ul className="grid gap-2" role={open.length > 0 ? "alert" : undefined}>
-        {[...open, ...done].map((a) => (
-          <AlertItem key={a.id} transfer={transfer} alert={a} />
-        ))}
-      </ul>
+      {/* The live region wraps the list: role="alert" on the list itself would take its list semantics away. */}
+      <div role={open.length > 0 ? "alert" : undefined}>
+        <ul className="grid gap-2">
+          {[...open, ...done].map((a) => (
+            <AlertItem key={a.id} transfer={transfer} alert={a} />
+          ))}
+        </ul>
+      </div>
     </section>
   );
 }

@@ -57,7 +57,8 @@ export function HandoffRecord({ handoff: h, transfer: t }: { handoff: HandoffDto
         <span className="sr-only">handed to</span> {h.receivedByName}
       </p>
       <p className="text-sm text-ink-soft">
-        {h.boxesCounted} of {h.boxesExpected} boxes counted · box at {formatTemp(h.boxTempF, system)}
+        {h.boxesCounted} of {h.boxesExpected} boxes counted ·{" "}
+        {h.boxTempF === null ? "box temperature not taken" : `box at ${formatTemp(h.boxTempF, system)}`}
         {place ? ` · ${place}` : ""} · recorded by {h.recordedBy.displayName}
       </p>
       {short ? (
