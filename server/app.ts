@@ -20,6 +20,7 @@ import { directoryRouter } from "./routes/directory/directory.router";
 import { complianceRouter } from "./routes/compliance/compliance.router";
 import { temperatureRouter } from "./routes/temperature/temperature.router";
 import { isScanUpload, SCAN_UPLOAD_TYPES } from "./routes/documents/scan-upload";
+import { isPhotoUpload, PHOTO_UPLOAD_TYPES } from "./routes/transfers/photo-upload";
 
 /**
  * Builds the Express app (no listen): the API under /api and the built client for everything else.
@@ -51,7 +52,10 @@ export function createApp(input: AppContext | AppBase): Express {
   const json = jsonBody();
   const onlyJson = requireJsonBody();
   const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
-  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : onlyJson)(req, res, next));
+  const photoUploadBody = requireJsonBody(PHOTO_UPLOAD_TYPES);
+  api.use((req, res, next) =>
+    (isScanUpload(req) ? scanUploadBody : isPhotoUpload(req) ? photoUploadBody : onlyJson)(req, res, next),
+  );
   api.use(json);
   // One EntityManager per request (MikroORM's request context), forked on first use only; the
   // getter lives on this app's request prototype, so a request that needs no ORM pays nothing.

@@ -166,6 +166,10 @@ export const LIMITS = {
   animalsPerTransferMax: 1000,
   containersPerTransferMax: 200,
   uploadBytesMax: 10 * 1024 * 1024,
+  /** A photo from a phone camera (a 12-megapixel JPEG is 2–5 MB). */
+  photoBytesMax: 10 * 1024 * 1024,
+  /** Photos one transfer keeps in all (pickup, handoffs, check-in). */
+  photosPerTransferMax: 200,
 } as const;
 
 /** Where a transfer is in its life, in order. */
@@ -223,6 +227,10 @@ export const CUSTODY_KINDS = [
   "alert_raised",
   /** A party saw an alert and said so, with a note; the alert itself stays. */
   "alert_acknowledged",
+  /** The receiver said "I have the boxes" for a delivery the courier recorded (own account or one-time code). */
+  "delivery_acknowledged",
+  /** A photo taken at a handoff or at the check-in, stored with its SHA-256. */
+  "photo_added",
 ] as const;
 export type CustodyKind = (typeof CUSTODY_KINDS)[number];
 
@@ -266,8 +274,11 @@ export const CHAIN_PROBLEMS = [
 ] as const;
 export type ChainProblem = (typeof CHAIN_PROBLEMS)[number];
 
-/** How an animal accepted into the register arrived. */
-export const REGISTER_CONDITIONS = ["well", "problem"] as const;
+/**
+ * How an animal entered the register at check-in: accepted (well, or with a problem), or a loss
+ * recorded at arrival (dead on arrival, missing), so the register shows every animal sent.
+ */
+export const REGISTER_CONDITIONS = ["well", "problem", "dead_on_arrival", "missing"] as const;
 export type RegisterCondition = (typeof REGISTER_CONDITIONS)[number];
 
 /** Problems with the packing the sender resolves before sending for confirmation. */
@@ -315,3 +326,26 @@ export const WEATHER_SCENARIOS = [
   "redirect",
 ] as const;
 export type WeatherScenario = (typeof WEATHER_SCENARIOS)[number];
+
+/** The plausibility checks of a handoff that need a reason from the person recording it when they fail. */
+export const HANDOFF_REASON_KEYS = ["earlyPickup", "implausibleSpeed", "unexpectedParty"] as const;
+export type HandoffReasonKey = (typeof HANDOFF_REASON_KEYS)[number];
+
+/** When a photo was taken: at a handoff (the pickup is handoff 0) or at the arrival check-in. */
+export const PHOTO_MOMENTS = ["handoff", "check_in"] as const;
+export type PhotoMoment = (typeof PHOTO_MOMENTS)[number];
+
+/** What a photo shows. */
+export const PHOTO_SUBJECTS = ["box_outside", "seal", "animal", "other"] as const;
+export type PhotoSubject = (typeof PHOTO_SUBJECTS)[number];
+
+/**
+ * Where the delivery to the receiver stands. A delivery recorded by the courier alone waits for
+ * the receiver's acknowledgement; the transfer stays "on the road" until it comes (DEVELOPERS.md D18).
+ */
+export const DELIVERY_STATES = ["awaiting_receiver", "acknowledged"] as const;
+export type DeliveryState = (typeof DELIVERY_STATES)[number];
+
+/** How the receiver acknowledged a delivery. */
+export const DELIVERY_ACKNOWLEDGEMENT_WAYS = ["recorded_by_receiver", "receiver_account", "one_time_code"] as const;
+export type DeliveryAcknowledgementWay = (typeof DELIVERY_ACKNOWLEDGEMENT_WAYS)[number];

@@ -119,3 +119,18 @@ export function formatAxisHour(at: string | number | Date, timeZone?: string | n
   }
   return format.format(date).replace(",", "");
 }
+
+/**
+ * A span of time in words, rounded to what matters at that size: "45 s", "12 min", "5 h 20 min",
+ * "12 days 3 h". Negative spans read as their size (the sentence says before or after).
+ */
+export function formatDuration(durationMs: number): string {
+  const seconds = Math.round(Math.abs(durationMs) / 1000);
+  if (seconds < 60) return `${seconds} s`;
+  const minutes = Math.round(seconds / 60);
+  if (minutes < 60) return `${minutes} min`;
+  const hours = Math.floor(minutes / 60);
+  if (hours < 48) return minutes % 60 ? `${hours} h ${minutes % 60} min` : `${hours} h`;
+  const days = Math.floor(hours / 24);
+  return hours % 24 ? `${days} days ${hours % 24} h` : `${days} days`;
+}

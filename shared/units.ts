@@ -232,6 +232,16 @@ export function formatWeightBoth(weightG: number): string {
   return `${Math.round(weightG)} g (${gToOz(weightG).toFixed(1)} oz)`;
 }
 
+/** "2,162 mi (3,480 km)": a distance where the reader's units are not known (alerts, e-mail), miles first. */
+export function formatDistanceBoth(distanceKm: number): string {
+  return `${formatDistance(distanceKm, "imperial")} (${formatDistance(distanceKm, "metric")})`;
+}
+
+/** "80 mph (129 km/h)" for an average speed given in mph, whole units. */
+export function formatSpeedBoth(speedMph: number): string {
+  return `${numberText(speedMph, 0, true)} mph (${numberText(milesToKm(speedMph), 0, true)} km/h)`;
+}
+
 // ---------------------------------------------------------------- inputs
 
 /** The text an input shows for a stored length (mm) in the chosen system; empty for none. */

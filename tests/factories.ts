@@ -219,6 +219,11 @@ export async function buildTransfer(
     mode?: TransferInputParsed["mode"];
     /** The app whose gates and links the steps use; FIXTURE_WIRING when not named. */
     app?: FixtureWiring;
+    /**
+     * Days until the planned departure. By default 3, or 12 hours for a transfer cleared to travel,
+     * so a pickup recorded "now" is not an early pickup (more than 24 h before it needs a reason).
+     */
+    daysAhead?: number;
   } = {},
 ): Promise<TransferCast> {
   const { links, readyGates: gates } = options.app ?? FIXTURE_WIRING;
@@ -235,9 +240,14 @@ export async function buildTransfer(
   await em.populate(receiver, ["organization"]);
   const s = await actorOf(em, sender);
   const r = await actorOf(em, receiver);
-  const input = await transferInput(em, receiver.organization!.id, { animals: options.animals, mode: options.mode });
-  let transfer = await createTransfer({ em: em.fork(), actor: s, input });
   const target = options.status ?? "draft";
+  const cleared = ["ready", "in_transit", "delivered", "checked_in", "closed"].includes(target);
+  const input = await transferInput(em, receiver.organization!.id, {
+    animals: options.animals,
+    mode: options.mode,
+    daysAhead: options.daysAhead ?? (cleared ? 0.5 : 3),
+  });
+  let transfer = await createTransfer({ em: em.fork(), actor: s, input });
   const order: TransferStatus[] = [
     "draft",
     "awaiting_receiver",
@@ -286,14 +296,17 @@ export async function buildTransfer(
     });
   }
   const containers = await em.fork().find(ContainerSchema, { transfer: transfer.id });
+  // Every handoff at the origin's position, between the people assigned: the fixture's handoffs
+  // come seconds apart, and anything else would be an implausible speed or an unexpected party.
+  const names = [sender.displayName, ...couriers.map((c) => c.displayName), receiver.displayName];
   const handoff = (index: number) => ({
     handoffIndex: index,
     boxesCounted: containers.length,
     seals: containers.map((c) => ({ containerId: c.id, sealNumber: c.sealNumber ?? null, intact: true })),
     boxTempF: 72,
-    place: { text: "Test depot" },
-    releasedByName: "Releaser",
-    receivedByName: "Receiver",
+    place: { text: "Test depot", lat: transfer.originLat ?? null, lon: transfer.originLon ?? null, accuracyM: 10 },
+    releasedByName: names[index]!,
+    receivedByName: names[index + 1]!,
     acknowledged: true as const,
   });
   if (reach("in_transit"))

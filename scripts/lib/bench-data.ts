@@ -95,6 +95,7 @@ export async function seedBenchData(
           acknowledged: true,
         } as never,
         links,
+        checks: { loadedAs: "bench" },
       });
     }
     const entries = await em.fork().count(CustodyEntrySchema, { transfer: t.id });

@@ -16,6 +16,7 @@ import { ANIMAL_ORIGIN_WORDS, IDENTIFIER_KIND_WORDS, LENGTH_KIND_WORDS, SEX_WORD
 import { fieldName, fieldWord } from "./fields";
 import { PACK_WORDS, WALL_MATERIAL_WORDS } from "./packing";
 import { PURPOSE_WORDS, TRANSPORT_MODE_WORDS } from "./transfer";
+import { boxName } from "./evidence";
 
 const EMPTY = "nothing";
 
@@ -110,4 +111,46 @@ export function describeChange(
 /** The top-level fields an edit touched, in words: "planned departure, animal lines". */
 export function changedFieldsText(fields: readonly string[]): string {
   return [...new Set(fields)].map(fieldWord).join(", ");
+}
+
+/** Shorter names where the sentence already says which box: "Box A: seal CR-1 → CR-2". */
+const SENTENCE_FIELD_WORDS: Readonly<Record<string, string>> = { sealNumber: "seal" };
+/** Fields whose values are words from a list, read lower-case inside a sentence ("sex not known → female"). */
+const WORD_VALUED: ReadonlySet<string> = new Set([
+  "mode",
+  "purpose",
+  "sex",
+  "origin",
+  "wallMaterial",
+  "pack",
+  "identifierKind",
+  "lengthKind",
+]);
+const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
+
+/**
+ * One entry of the change history as one sentence: "Box Turtles D: seal SEAL-0004 → SEAL-0044",
+ * "How it travels: overnight air carrier → ground courier", "Animal line “Pogona vitticeps”: added
+ * (2 × Pogona vitticeps)". Never a field path, an id or a piece of JSON.
+ */
+export function changeSentence(
+  change: { field: string; oldValue: unknown; newValue: unknown },
+  system: UnitSystem,
+): string {
+  const { what, was, now } = describeChange(change, system);
+  const value = (text: string, key: string | undefined) =>
+    text === EMPTY ? "none" : key && WORD_VALUED.has(key) ? lowerFirst(text) : text;
+  const line = /^(containers|animals)\[(.*)\](?:\.(.+))?$/.exec(change.field);
+  if (line) {
+    const [, list = "", label = "", key] = line;
+    const group = list === "containers" ? boxName(label) : what.split(":")[0]!;
+    if (!key)
+      return change.newValue === null
+        ? `${group}: removed (${was})`
+        : `${group}: ${now.replace(/^added: /, "added (")}${now.startsWith("added: ") ? ")" : ""}`;
+    const name = SENTENCE_FIELD_WORDS[key] ?? fieldWord(key);
+    return `${group}: ${name} ${value(was, key)} → ${value(now, key)}`;
+  }
+  const key = change.field.split(".").at(-1);
+  return `${what}: ${value(was, key)} → ${value(now, key)}`;
 }

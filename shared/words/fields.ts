@@ -88,6 +88,15 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   releasedByName: "name of the person handing over",
   receivedByName: "name of the person taking over",
   acknowledged: "confirmation",
+  reasons: "reasons",
+  earlyPickup: "early pickup",
+  implausibleSpeed: "distance for the time",
+  unexpectedParty: "person taking over",
+  receiverCode: "receiver's one-time code",
+  // photos
+  moment: "moment",
+  subject: "what it shows",
+  caption: "caption",
   // check-in
   items: "outcomes",
   animalId: "listed animal",
@@ -254,6 +263,9 @@ const PAIR_WORDS: Readonly<Record<string, string>> = {
   "citation.text": "citation",
   "citation.url": "citation link",
   "place.text": "place",
+  "reasons.earlyPickup": "reason for the early pickup",
+  "reasons.implausibleSpeed": "reason for the distance covered",
+  "reasons.unexpectedParty": "reason for handing to someone else",
 };
 
 /**

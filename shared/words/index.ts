@@ -16,3 +16,4 @@ export * from "./people";
 export * from "./temperature";
 export * from "./transfer";
 export * from "./changes";
+export * from "./evidence";

@@ -124,11 +124,22 @@ describe("one transfer from draft to check-in", () => {
     for (const kind of ["pickup", "delivery"]) {
       await open(page, legsUrl);
       await page.getByRole("button", { name: /One more: Boxes/ }).click();
-      await page.getByRole("checkbox", { name: /seal/i }).first().check();
+      // The courier types the seal number they read; the number on record is shown beside it.
+      await page
+        .getByLabel(/Seal number you read on/)
+        .first()
+        .fill("E2E-0001");
+      await page.getByRole("checkbox", { name: "The seal is there and unbroken" }).first().check();
       await page.getByLabel(/Temperature in or at the box/).fill(kind === "pickup" ? "72" : "69");
       await page.getByLabel("Place").fill(kind === "pickup" ? "Sender's loading bay" : "Nature centre receiving room");
-      await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
       if (kind === "pickup") await screenshot(page, "story-4-courier-pickup-form");
+      await page.getByRole("button", { name: "Review before confirming" }).click();
+      // Three days before the departure, and minutes apart across the country: the review asks why.
+      const early = page.getByLabel("Why so early?");
+      if (await early.count()) await early.fill("Collected early to ride in our heated depot.");
+      const fast = page.getByLabel("How did the boxes get here so fast?");
+      if (await fast.count()) await fast.fill("A test of the whole story, recorded minutes apart.");
+      await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
       await page.getByRole("button", { name: `Confirm the ${kind}` }).click();
       await expect
         .poll(() =>
@@ -148,6 +159,10 @@ describe("one transfer from draft to check-in", () => {
     const { context, page } = await newPage(browser);
     await signInAs(page, "receiver@demo.hatchway.test");
     await page.waitForURL((u) => u.pathname === "/");
+    // The courier recorded the delivery alone: the receiver confirms having the boxes first.
+    await open(page, transferUrl);
+    await page.getByRole("button", { name: "I have the boxes" }).click();
+    await expect.poll(() => page.getByText("Arrived — check-in due", { exact: true }).count()).toBeGreaterThan(0);
     await open(page, `${transferUrl}/check-in`);
     await page.getByRole("button", { name: "One more: Arrived well" }).click();
     await page.getByRole("button", { name: "One more: Arrived well" }).click();
@@ -161,6 +176,8 @@ describe("one transfer from draft to check-in", () => {
     await screenshot(page, "story-7-receiver-discrepancy");
     await open(page, transferUrl);
     await expect.poll(() => page.getByText("Checked in").count()).toBeGreaterThan(0);
+    // The loss is on the transfer for everyone to see, not only on the check-in page.
+    await expect.poll(() => page.locator("#arrival").textContent()).toContain("1 dead on arrival");
     const log = await page.evaluate(async (url) => (await fetch(`/api${url}/custody`)).json(), transferUrl);
     expect(log.intact).toBe(true);
     expect(log.entries.filter((e: { kind: string }) => e.kind === "handoff")).toHaveLength(2);

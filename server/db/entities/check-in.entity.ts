@@ -1,5 +1,5 @@
 import { defineEntity, p, type InferEntity } from "@mikro-orm/core";
-import { SEXES } from "@shared/constants";
+import { REGISTER_CONDITIONS, SEXES } from "@shared/constants";
 import { createdAtProperty, idProperty } from "./base";
 import { AnimalSchema, TransferSchema } from "./transfer.entity";
 import { UserSchema } from "./user.entity";
@@ -71,8 +71,11 @@ export const RegisterEntrySchema = defineEntity({
     transfer: () => p.manyToOne(TransferSchema).ref(),
     transferNumber: p.string().length(20),
     animal: () => p.manyToOne(AnimalSchema).ref(),
-    condition: p.enum(["well", "problem"]),
+    /** Accepted (well, problem) or a loss recorded at arrival (dead_on_arrival, missing). */
+    condition: p.enum([...REGISTER_CONDITIONS]),
     notes: p.text().nullable(),
+    /** The weight taken at check-in, in grams, when one was. */
+    weightG: double().nullable(),
     createdAt: createdAtProperty(),
   },
 });

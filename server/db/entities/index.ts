@@ -13,6 +13,7 @@ import {
 } from "./transfer.entity";
 import { CustodyEntrySchema } from "./custody-entry.entity";
 import { TransferAlertSchema } from "./transfer-alert.entity";
+import { DeliveryCodeSchema, TransferPhotoSchema } from "./custody-evidence.entity";
 import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
@@ -51,6 +52,8 @@ export {
   CheckInExtraSchema,
   RegisterEntrySchema,
   IdempotencyKeySchema,
+  TransferPhotoSchema,
+  DeliveryCodeSchema,
 };
 
 /** Every entity the ORM knows; new entities are added here once. */
@@ -85,4 +88,6 @@ export const ENTITIES = [
   TemperatureProfileSchema,
   TemperatureCheckSchema,
   TemperatureAlertSchema,
+  TransferPhotoSchema,
+  DeliveryCodeSchema,
 ];

@@ -8,6 +8,7 @@ import { Migration20261202100000_transfer_alerts } from "./Migration202612021000
 import { Migration20261202130000_least_privilege } from "./Migration20261202130000_least_privilege";
 import { Migration20261202130100_custody_head } from "./Migration20261202130100_custody_head";
 import { Migration20261202130200_jurisdiction_coverage } from "./Migration20261202130200_jurisdiction_coverage";
+import { Migration20261202140000_custody_evidence } from "./Migration20261202140000_custody_evidence";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -18,4 +19,5 @@ export const MIGRATIONS = [
   { name: "Migration20261202130000_least_privilege", class: Migration20261202130000_least_privilege },
   { name: "Migration20261202130100_custody_head", class: Migration20261202130100_custody_head },
   { name: "Migration20261202130200_jurisdiction_coverage", class: Migration20261202130200_jurisdiction_coverage },
+  { name: "Migration20261202140000_custody_evidence", class: Migration20261202140000_custody_evidence },
 ];

@@ -1,6 +1,7 @@
 import { Router, type Request } from "express";
 import { stringify } from "csv-stringify/sync";
 import { registerQuerySchema, type RegisterEntryDto } from "@shared/schemas/transfer";
+import { REGISTER_CONDITION_WORDS, SEX_WORDS } from "@shared/words";
 import { RegisterEntrySchema } from "../../db/entities/check-in.entity";
 import { forbidden } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
@@ -50,6 +51,7 @@ async function entriesFor(req: Request): Promise<RegisterEntryDto[]> {
     transferId: r.transfer.id,
     condition: r.condition,
     notes: r.notes ?? null,
+    weightG: r.weightG ?? null,
   }));
 }
 
@@ -76,6 +78,7 @@ export function registerCsvRoute(): Router {
       "Source organisation",
       "Transfer",
       "Condition on arrival",
+      "Weight at check-in (g)",
       "Notes",
     ];
     const rows = entries.map((e) =>
@@ -83,12 +86,13 @@ export function registerCsvRoute(): Router {
         e.dateAcquired,
         e.taxon.scientificName,
         e.taxon.commonName ?? "",
-        e.sex,
+        SEX_WORDS[e.sex],
         String(e.count),
         e.identifier ?? "",
         e.sourceOrganization,
         e.transferNumber,
-        e.condition,
+        REGISTER_CONDITION_WORDS[e.condition],
+        e.weightG === null ? "" : String(e.weightG),
         e.notes ?? "",
       ].map(neutraliseCell),
     );

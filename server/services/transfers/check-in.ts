@@ -35,9 +35,25 @@ function describe(rows: ReturnType<typeof computeDiscrepancies>): string {
 }
 
 /**
+ * What a register entry says besides its condition: the problem for an animal that arrived with one;
+ * for a loss, the line's notes (or the check-in's when the line has none). An animal that arrived
+ * well carries no note: the line's notes may be about the ones lost.
+ */
+function registerNotes(
+  condition: "well" | "problem" | "dead_on_arrival" | "missing",
+  item: CheckInParsed["items"][number],
+  checkInNotes: string | null,
+): string | null {
+  if (condition === "well") return null;
+  if (condition === "problem") return item.problem?.trim() || null;
+  return item.notes?.trim() || checkInNotes;
+}
+
+/**
  * The receiver's signed check-in: an outcome for every animal on the manifest, animals that
- * came but were not listed, and the discrepancy against the manifest. Accepted animals enter
- * the receiver's collection register; the sender is told.
+ * came but were not listed, and the discrepancy against the manifest. Every animal enters the
+ * receiver's collection register: accepted ones as held, dead-on-arrival and missing ones as losses
+ * (with the line's notes and weight); the sender is told.
  */
 export async function checkInTransfer({
   em,
@@ -116,9 +132,13 @@ export async function checkInTransfer({
         weightG: item.weightG ?? null,
         notes: item.notes ?? null,
       });
+      // Accepted animals enter the register; losses go in too, as entries that record the loss,
+      // so the register accounts for every animal on the manifest (CITES Rp/3 1.72, 1.82).
       for (const [condition, count] of [
         ["well", item.arrivedWell],
         ["problem", item.arrivedProblem],
+        ["dead_on_arrival", item.deadOnArrival],
+        ["missing", item.missing],
       ] as const) {
         if (count === 0) continue;
         tx.create(RegisterEntrySchema, {
@@ -134,7 +154,8 @@ export async function checkInTransfer({
           transferNumber: t.number,
           animal,
           condition,
-          notes: condition === "problem" ? (item.problem ?? null) : null,
+          notes: registerNotes(condition, item, input.notes ?? null),
+          weightG: item.weightG ?? null,
         });
       }
     }
@@ -164,7 +185,24 @@ export async function checkInTransfer({
       })),
     );
     const summary = describe(rows);
-    await appendCustody(tx, t.id, actor, "check_in", { signedName: input.signedName, summary, discrepancies: rows });
+    // Each line's own words on the record too: what was wrong, the notes, the weight.
+    const lines = input.items
+      .filter((item) => item.problem || item.notes || item.weightG != null || item.deadOnArrival || item.missing)
+      .map((item) => ({
+        scientificName: byId.get(item.animalId)!.taxon.getEntity().scientificName,
+        deadOnArrival: item.deadOnArrival,
+        missing: item.missing,
+        problem: item.problem ?? null,
+        notes: item.notes ?? null,
+        weightG: item.weightG ?? null,
+      }));
+    await appendCustody(tx, t.id, actor, "check_in", {
+      signedName: input.signedName,
+      summary,
+      discrepancies: rows,
+      lines,
+      notes: input.notes ?? null,
+    });
     await appendCustody(tx, t.id, actor, "status_change", {
       from: "delivered",
       to: "checked_in",

@@ -11,6 +11,8 @@ import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
 import { formatDate } from "@shared/dates";
+import { formatWeight } from "@shared/units";
+import { useUnitSystem } from "@/lib/units-preference";
 import { searchTaxa } from "@/lib/taxa-search";
 import { registerCsvHref, useRegister, type RegisterFilters } from "../api/get-register";
 
@@ -38,6 +40,7 @@ export function RegisterRoute() {
   const [search, setSearch] = useSearchParams();
   const filters = filtersFrom(search);
   const register = useRegister(filters);
+  const [system] = useUnitSystem();
   const [q, setQ] = useState(filters.q ?? "");
   const [taxon, setTaxon] = useState<TaxonBriefDto | null>(null);
 
@@ -165,9 +168,15 @@ export function RegisterRoute() {
                 </Link>
               </Td>
               <Td>
-                <Badge tone={r.condition === "well" ? "ok" : "caution"}>{REGISTER_CONDITION_WORDS[r.condition]}</Badge>
+                <Badge tone={r.condition === "well" ? "ok" : r.condition === "problem" ? "caution" : "block"}>
+                  {REGISTER_CONDITION_WORDS[r.condition]}
+                </Badge>
               </Td>
-              <Td className="whitespace-pre-wrap">{r.notes ?? ""}</Td>
+              <Td className="whitespace-pre-wrap">
+                {[r.notes, r.weightG != null ? `Weight at check-in: ${formatWeight(r.weightG, system)}` : null]
+                  .filter(Boolean)
+                  .join("\n")}
+              </Td>
             </tr>
           ))}
         </Table>

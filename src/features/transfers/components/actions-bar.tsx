@@ -147,7 +147,10 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
             label={asking.reason.label}
             value={reason}
             maxLength={1000}
-            onChange={(e) => setReason(e.target.value)}
+            onChange={(e) => {
+              setReason(e.target.value);
+              setReasonError(null);
+            }}
             error={reasonError ?? undefined}
             autoFocus
           />
