@@ -6,7 +6,13 @@
  * Run standalone: node --import tsx scripts/bench/temperature.ts
  */
 import { pathToFileURL } from "node:url";
-import { ambientFromForecasts, forecastWindow, indexForecasts, type PointForecast } from "@shared/temperature/ambient";
+import {
+  ambientFromForecasts,
+  forecastWindow,
+  indexForecasts,
+  weatherFromForecasts,
+  type PointForecast,
+} from "@shared/temperature/ambient";
 import { assessTransit, type DepartureSearch } from "@shared/temperature/assess";
 import type { BoxSpec } from "@shared/temperature/box-model";
 import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
@@ -64,7 +70,7 @@ function assessTrip(forecasts: readonly PointForecast[]) {
   const index = indexForecasts(forecasts);
   const search: DepartureSearch = {
     timelineFor: (departMs) => buildTransitTimeline({ ...trip, departAt: departMs }),
-    ambientFor: (candidate) => ambientFromForecasts(candidate, index),
+    weatherFor: (candidate) => weatherFromForecasts(candidate, index),
   };
   return assessTransit({
     timeline,

@@ -1,6 +1,7 @@
 import type { PackKind, ProfileGroup } from "../constants";
 import type { AdviceCode, Verdict } from "./advice";
 import type { ProfileData } from "./profile-schema";
+import type { TripAssessment } from "./assess";
 import type { TransitAssessment } from "./schemas";
 import type { TransitWarning } from "./timeline";
 
@@ -39,7 +40,7 @@ export type BoxTemperature = {
  * The answer of both temperature routes: the contract keys of issue 5 (those of the worst box),
  * plus the profile whose safe band the chart shades, the calendar warnings and every box.
  */
-export type TemperatureReport = TransitAssessment & {
+export type TemperatureReport = TripAssessment & {
   profile: ProfileSummary;
   warnings: TransitWarning[];
   boxes: BoxTemperature[];

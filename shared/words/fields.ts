@@ -185,6 +185,12 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   doNotShipAbove: "do not ship above",
   source: "source",
   scenario: "weather scenario",
+  vehicle: "vehicle",
+  vehicleRangeF: "vehicle's set range",
+  stops: "planned stops",
+  durationMin: "length of the stop",
+  parked: "where it waits",
+  legId: "leg",
   // answers the API gives (their schemas are walked too)
   transitOnlyExempt: "exempt when only passing through",
   ruleId: "rule",
@@ -202,6 +208,8 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   hoursOutsideRange: "hours outside the safe range",
   hours: "hours",
   suggestedDeparture: "suggested departure",
+  exposure: "where the box is",
+  aroundBoxF: "air around the box",
   sources: "sources",
   title: "title",
 };
@@ -225,6 +233,7 @@ const ITEM_WORDS: Readonly<Record<string, string>> = {
   synonyms: "older name",
   ambientOverrideF: "outside temperature",
   hours: "hour",
+  stops: "stop",
   documentKinds: "kind of document",
   origins: "origin",
   purposes: "purpose",
@@ -254,6 +263,8 @@ const PAIR_WORDS: Readonly<Record<string, string>> = {
   "citation.text": "citation",
   "citation.url": "citation link",
   "place.text": "place",
+  "vehicleRangeF.min": "lowest temperature of the vehicle's set range",
+  "vehicleRangeF.max": "highest temperature of the vehicle's set range",
 };
 
 /**
