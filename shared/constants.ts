@@ -322,3 +322,7 @@ export type VehicleConditioning = (typeof VEHICLE_CONDITIONINGS)[number];
 /** Where the vehicle waits during a planned stop: in the sun, in shade, or indoors (the box is taken in). */
 export const PARKED_KINDS = ["sun", "shade", "indoors"] as const;
 export type ParkedKind = (typeof PARKED_KINDS)[number];
+
+/** Where a box temperature was read: at a handoff of the custody chain, or at the check-in. */
+export const READING_SOURCES = ["pickup", "handoff", "delivery", "check_in"] as const;
+export type ReadingSource = (typeof READING_SOURCES)[number];

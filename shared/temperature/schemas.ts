@@ -86,6 +86,9 @@ export const tripExposureShape = {
   stops: z.array(plannedStopSchema).max(PLANNED_STOPS_MAX).optional(),
 };
 
+const RANGE_NEEDS_CLIMATE_CONTROL =
+  "a set range goes with a climate-controlled vehicle; choose that vehicle or leave the range out";
+
 type ExposureFields = {
   mode: (typeof TRANSPORT_MODES)[number];
   departAt?: string;
@@ -113,9 +116,7 @@ export function checkExposureFields(input: ExposureFields, ctx: z.RefinementCtx)
     ctx.addIssue({
       code: "custom",
       path: ["vehicleRangeF"],
-      params: {
-        instruction: "a set range goes with a climate-controlled vehicle; choose that vehicle or leave the range out",
-      },
+      params: { instruction: RANGE_NEEDS_CLIMATE_CONTROL },
     });
   const departMs = input.departAt ? Date.parse(input.departAt) : Number.NaN;
   (input.stops ?? []).forEach((stop, i) => {
@@ -188,3 +189,39 @@ export const transitAssessmentSchema = z.strictObject({
 });
 
 export type TransitAssessment = z.infer<typeof transitAssessmentSchema>;
+
+/**
+ * How the box travels on a transfer, as its sender sets it (PUT /api/transfers/:id/temperature/plan):
+ * the vehicle (null: not said), its set range, the driver's planned stops. The whole plan each time.
+ */
+export const tripPlanInputSchema = z
+  .strictObject({
+    vehicle: z.enum(VEHICLE_CONDITIONINGS).nullable(),
+    vehicleRangeF: vehicleRangeSchema.nullable().optional(),
+    stops: z.array(plannedStopSchema).max(PLANNED_STOPS_MAX),
+  })
+  .superRefine((input, ctx) => {
+    if (input.vehicleRangeF != null && input.vehicle !== "climate_controlled")
+      ctx.addIssue({
+        code: "custom",
+        path: ["vehicleRangeF"],
+        params: { instruction: RANGE_NEEDS_CLIMATE_CONTROL },
+      });
+  });
+export type TripPlanInput = z.infer<typeof tripPlanInputSchema>;
+
+/** The vehicle a courier declares for their leg (PUT /api/transfers/:id/legs/:legId/vehicle). */
+export const legVehicleInputSchema = z
+  .strictObject({
+    vehicle: z.enum(VEHICLE_CONDITIONINGS).nullable(),
+    vehicleRangeF: vehicleRangeSchema.nullable().optional(),
+  })
+  .superRefine((input, ctx) => {
+    if (input.vehicleRangeF != null && input.vehicle !== "climate_controlled")
+      ctx.addIssue({
+        code: "custom",
+        path: ["vehicleRangeF"],
+        params: { instruction: RANGE_NEEDS_CLIMATE_CONTROL },
+      });
+  });
+export type LegVehicleInput = z.infer<typeof legVehicleInputSchema>;

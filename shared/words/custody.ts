@@ -90,12 +90,14 @@ function handoff(payload: Record<string, unknown>, system: UnitSystem): string[]
   return lines;
 }
 
-function checkIn(payload: Record<string, unknown>): string[] {
+function checkIn(payload: Record<string, unknown>, system: UnitSystem): string[] {
   const lines: string[] = [];
   const signed = textOf(payload.signedName);
   if (signed) lines.push(`Signed by ${signed}.`);
   const summary = textOf(payload.summary);
   if (summary) lines.push(summary);
+  const temperature = numberOf(payload.boxTempF);
+  if (temperature !== null) lines.push(`Box at ${formatTemp(temperature, system)} on opening.`);
   return lines;
 }
 
@@ -147,7 +149,7 @@ export function describeCustodyEntry(
     case "handoff":
       return { title: CUSTODY_KIND_WORDS.handoff, lines: handoff(payload, system) };
     case "check_in":
-      return { title: CUSTODY_KIND_WORDS.check_in, lines: checkIn(payload) };
+      return { title: CUSTODY_KIND_WORDS.check_in, lines: checkIn(payload, system) };
     case "couriers_assigned":
       return { title: CUSTODY_KIND_WORDS.couriers_assigned, lines: couriersAssigned(payload) };
     case "override":

@@ -3,6 +3,7 @@ import type {
   Exposure,
   ForecastUnavailableReason,
   ParkedKind,
+  ReadingSource,
   VehicleConditioning,
   WeatherScenario,
 } from "../constants";
@@ -98,4 +99,12 @@ export const PARKED_WORDS: Readonly<Record<ParkedKind, string>> = {
   sun: "Parked in the sun",
   shade: "Parked in the shade",
   indoors: "Box taken indoors",
+};
+
+/** Where a box temperature was read, as the reading's place says it when the courier gave none. */
+export const READING_SOURCE_WORDS: Readonly<Record<ReadingSource, string>> = {
+  pickup: "Pickup from the sender",
+  handoff: "Handoff between couriers",
+  delivery: "Delivery to the receiver",
+  check_in: "Check-in at the receiver",
 };

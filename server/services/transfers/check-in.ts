@@ -16,6 +16,7 @@ import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
 import { transferAbilities } from "../../policies/transfer.policy";
+import { checkBoxReading } from "../temperature/readings";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -163,7 +164,13 @@ export async function checkInTransfer({
       })),
     );
     const summary = describe(rows);
-    await appendCustody(tx, t.id, actor, "check_in", { signedName: input.signedName, summary, discrepancies: rows });
+    await appendCustody(tx, t.id, actor, "check_in", {
+      signedName: input.signedName,
+      summary,
+      discrepancies: rows,
+      boxTempF: input.boxTempF ?? null,
+    });
+    await checkBoxReading(tx, links, t, actor, { tempF: input.boxTempF, place: null, source: "check_in" });
     await appendCustody(tx, t.id, actor, "status_change", {
       from: "delivered",
       to: "checked_in",

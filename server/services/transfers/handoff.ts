@@ -10,6 +10,7 @@ import type { Actor } from "../../auth/actor";
 import { ContainerSchema } from "../../db/entities/transfer.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
 import { handoffAllowed } from "../../policies/transfer.policy";
+import { checkBoxReading } from "../temperature/readings";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -90,6 +91,7 @@ export async function recordHandoff({
         acknowledged: true,
       };
       await appendCustody(tx, t.id, actor, "handoff", payload);
+      await checkBoxReading(tx, links, t, actor, { tempF: input.boxTempF, place: input.place.text, source: kind });
 
       const from = t.status;
       const summary = `${input.boxesCounted} of ${containers.length} boxes counted${payload.boxCountMatches ? "" : " (the count differs)"}${input.boxTempF === null ? "" : `, box at ${formatTempBoth(input.boxTempF)}`}${input.place.text ? `, at ${input.place.text}` : ""}.`;
