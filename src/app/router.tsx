@@ -21,6 +21,7 @@ import { CanItTravelRoute } from "@/features/compliance/routes/can-it-travel";
 import { RulesRoute } from "@/features/compliance/routes/rules";
 import { PlanTripRoute } from "@/features/temperature/routes/plan-trip";
 import { TemperatureProfilesRoute } from "@/features/temperature/routes/profiles";
+import { ModelAccuracyRoute } from "@/features/temperature/routes/model-accuracy";
 
 export const router = createBrowserRouter([
   { path: paths.signIn, element: <SignInRoute />, errorElement: <RouteErrorBoundary /> },
@@ -42,6 +43,7 @@ export const router = createBrowserRouter([
       { path: paths.canItTravel, element: <CanItTravelRoute /> },
       { path: paths.admin.rules, element: <RulesRoute /> },
       { path: paths.planTrip, element: <PlanTripRoute /> },
+      { path: paths.modelAccuracy, element: <ModelAccuracyRoute /> },
       { path: paths.admin.temperatureProfiles, element: <TemperatureProfilesRoute /> },
       { path: paths.admin.users, element: <UsersRoute /> },
       { path: paths.admin.organizations, element: <OrganizationsRoute /> },
