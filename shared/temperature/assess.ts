@@ -161,7 +161,8 @@ export function assessTransit(input: AssessmentInput): TripAssessment {
   const weather: TripWeather = { ambient: input.ambientByHour, radiation: input.radiationByHour };
   let shown = evaluate(input, plan, weather, ambientF);
   let other: Evaluation | null = null;
-  if (!carrier && declared === null) {
+  // A brief check wants the verdict only: the worse of the two cannot be worse than "do not ship".
+  if (!carrier && declared === null && !(input.brief && shown.verdict === "do_not_ship")) {
     other = evaluate(
       input,
       { ...plan, vehicle: "climate_controlled", vehicleRangeF: DEFAULT_VEHICLE_RANGE_F },

@@ -47,6 +47,9 @@ export function resolvePlace(input: PlaceInput): TransitPlace | undefined {
 
 /** ZIP centres by 1° cell of latitude and longitude, built on first use (about 42,000 entries). */
 const townGrid: { cells?: Map<string, ZipRecord[]> } = {};
+/** Towns already named, by position to 0.01°: a route's points are named again for every later departure tried. */
+const namedTowns = new Map<string, string | undefined>();
+const NAMED_TOWNS_MAX = 10_000;
 
 const cellKey = (lat: number, lon: number) => `${Math.floor(lat)},${Math.floor(lon)}`;
 
@@ -72,6 +75,15 @@ const NEAR_TOWN_MAX_DEG = 0.75;
  * or undefined (open water, another country). Good enough to say where a stop is; not an address.
  */
 export function townNear(lat: number, lon: number): string | undefined {
+  const key = `${lat.toFixed(2)},${lon.toFixed(2)}`;
+  if (namedTowns.has(key)) return namedTowns.get(key);
+  const town = nearestTown(lat, lon);
+  if (namedTowns.size >= NAMED_TOWNS_MAX) namedTowns.clear();
+  namedTowns.set(key, town);
+  return town;
+}
+
+function nearestTown(lat: number, lon: number): string | undefined {
   const cells = gridOfTowns();
   const cosLat = Math.cos((lat * Math.PI) / 180);
   let best: ZipRecord | undefined;
