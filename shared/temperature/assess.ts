@@ -1,4 +1,4 @@
-import type { Exposure, PackKind, ParkedKind, VehicleConditioning } from "../constants";
+import type { Exposure, PackKind, ParkedKind, TransportMode, VehicleConditioning } from "../constants";
 import { formatInstant, formatTimeSpan } from "../dates";
 import { EXPOSURE_IN_SENTENCE } from "../words/temperature";
 import { adviceMessage, guidelineCall, verdictOf, type AdviceCode, type GuidelineCall, type Verdict } from "./advice";
@@ -367,12 +367,12 @@ function spanDtos(timeline: TransitTimeline, spans: readonly ExposureSpan[], ser
 }
 
 /** "the car reaches about 130 °F" and its kin, for the air in the deciding stretch. */
-function airWords(exposure: Exposure, direction: "hot" | "cold", aroundF: number): string {
+function airWords(exposure: Exposure, direction: "hot" | "cold", aroundF: number, mode: TransportMode): string {
   const verb = direction === "hot" ? "reaches" : "falls to";
   switch (exposure) {
     case "parked_sun":
     case "parked_shade":
-      return `the car ${verb} about ${wholeF(aroundF)}`;
+      return `${mode === "hand_delivery" ? "the car" : "the vehicle"} ${verb} about ${wholeF(aroundF)}`;
     case "vehicle_climate_controlled":
       return `the vehicle holds about ${wholeF(aroundF)}`;
     case "carrier_building":
@@ -384,8 +384,10 @@ function airWords(exposure: Exposure, direction: "hot" | "cold", aroundF: number
 
 /**
  * The stretch that decides: where the box, as packed, comes furthest past (or nearest to) an edge
- * of its safe range. The box lags its air, so the stretch is the one within the 3 h before the
- * box's extreme whose air was most extreme that way. Then the changes that were tried and help.
+ * of its safe range. The box follows its air with a lag (its time constant τ = R·C), so each
+ * stretch before the box's extreme is weighed by how far its air lay beyond that extreme, minute
+ * by minute, discounted by e^(−Δt/τ): the stretch that pushed the box there most. Then the changes
+ * that were tried and help.
  */
 function decidingStretch(
   input: AssessmentInput,
@@ -401,25 +403,34 @@ function decidingStretch(
   const hotBy = cToF(planned.maxC) - safe.max;
   const coldBy = safe.min - cToF(planned.minC);
   const direction = hotBy >= coldBy ? "hot" : "cold";
-  const peakMs = series.startMs + (direction === "hot" ? planned.maxAtS : planned.minAtS) * 1000;
-  const insideF = cToF(direction === "hot" ? planned.maxC : planned.minC);
-  let best = -1;
-  spans.forEach((s, i) => {
-    if (s.startMs > peakMs || s.endMs < peakMs - 3 * S_PER_H * 1000) return;
-    const extremes = series.spanExtremesF[i]!;
-    if (!Number.isFinite(extremes.maxF)) return;
-    const value = direction === "hot" ? extremes.maxF : -extremes.minF;
-    const bestValue =
-      best < 0 ? -Infinity : direction === "hot" ? series.spanExtremesF[best]!.maxF : -series.spanExtremesF[best]!.minF;
-    if (value > bestValue) best = i;
-  });
+  const peakS = direction === "hot" ? planned.maxAtS : planned.minAtS;
+  const peakC = direction === "hot" ? planned.maxC : planned.minC;
+  const peakMs = series.startMs + peakS * 1000;
+  const insideF = cToF(peakC);
+  const { resistanceKPerW, capacitanceJPerK } = boxThermal(input.box);
+  const tauMin = (resistanceKPerW * capacitanceJPerK) / 60;
+  const peakStep = Math.min(series.aroundC.length - 1, Math.round(peakS / series.stepS));
+  const firstStep = Math.max(0, peakStep - Math.ceil(6 * tauMin));
+  const scores = spans.map(() => 0);
+  let k = 0;
+  for (let i = firstStep; i <= peakStep; i++) {
+    const atMs = series.startMs + i * series.stepS * 1000;
+    while (k < spans.length - 1 && spans[k]!.endMs <= atMs) k++;
+    const span = spans[k]!;
+    if (atMs < span.startMs || atMs >= span.endMs) continue;
+    const beyond = direction === "hot" ? series.aroundC[i]! - peakC : peakC - series.aroundC[i]!;
+    if (beyond > 0) scores[k]! += beyond * Math.exp(-(peakStep - i) / tauMin);
+  }
+  let best = scores.reduce((b, score, i) => (score > 0 && (b < 0 || score > scores[b]!) ? i : b), -1);
+  // A box that never went past its air (it only drifted from the packing room): the span it was in.
+  if (best < 0) best = spans.findIndex((s) => peakMs >= s.startMs && peakMs < s.endMs);
   if (best < 0) return null;
   const stretch = spans[best]!;
   const extremes = series.spanExtremesF[best]!;
   const aroundF = direction === "hot" ? extremes.maxF : extremes.minF;
   const zone = timeline.waypoints[stretch.waypoint]?.timeZone;
   const when = formatTimeSpan(stretch.startMs, stretch.endMs, zone);
-  const sentence = `${when} ${EXPOSURE_IN_SENTENCE[stretch.exposure]} ${placeOf(timeline, stretch.waypoint)}: ${airWords(stretch.exposure, direction, aroundF)}; the box inside ${direction === "hot" ? "reaches" : "falls to"} ${wholeF(insideF)}.`;
+  const sentence = `${when} ${EXPOSURE_IN_SENTENCE[stretch.exposure]} ${placeOf(timeline, stretch.waypoint)}: ${airWords(stretch.exposure, direction, aroundF, timeline.mode)}; the box inside ${direction === "hot" ? "reaches" : "falls to"} ${wholeF(insideF)}.`;
   const suggestions =
     shown.verdict === "ship"
       ? []

@@ -194,8 +194,9 @@ function carrierSpans(timeline: TransitTimeline): ExposureSpan[] {
  * Ground courier and hand delivery: the vehicle while driving; the model's own breaks keep a
  * courier's climate-controlled van in its range (its unit runs on its own [practice]) and park any
  * other vehicle, a car with its engine off, in the sun (the cautious case; a driver's own stops
- * say sun, shade or indoors); a night's rest keeps the courier's van as it is and, for a hand
- * delivery, has the box taken indoors with the driver [practice]; loading and unloading outdoors.
+ * say sun, shade or indoors); a night's rest keeps a climate-controlled van as it is, parks an
+ * unconditioned one in the shade and, on a hand delivery, has the box taken indoors with the
+ * driver [practice]; loading and unloading outdoors.
  */
 function drivingSpans(timeline: TransitTimeline, plan: ExposurePlan): ExposureSpan[] {
   const driving: Exposure =
@@ -208,7 +209,8 @@ function drivingSpans(timeline: TransitTimeline, plan: ExposurePlan): ExposureSp
       case "rest_stop":
         return courierVan && plan.vehicle === "climate_controlled" ? driving : "parked_sun";
       case "overnight_rest":
-        if (courierVan) return plan.vehicle === "climate_controlled" ? driving : "parked_sun";
+        // A night's stop is mostly dark and the courier picks the spot: shade, not sun.
+        if (courierVan) return plan.vehicle === "climate_controlled" ? driving : "parked_shade";
         return "indoors";
       default:
         return driving;

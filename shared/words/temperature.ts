@@ -90,7 +90,7 @@ export const EXPOSURE_IN_SENTENCE: Readonly<Record<Exposure, string>> = {
 
 /** How the vehicle's air is held. */
 export const VEHICLE_CONDITIONING_WORDS: Readonly<Record<VehicleConditioning, string>> = {
-  climate_controlled: "Climate-controlled (heated and cooled to a set range)",
+  climate_controlled: "Climate-controlled",
   unconditioned: "Not climate-controlled",
 };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { bandSegments, chartRows, readingPoints, safeBand } from "./chart-rows";
+import { bandSegments, chartRows, hourTicks, readingPoints, safeBand } from "./chart-rows";
 
 const hours = [
   {
@@ -105,5 +105,15 @@ describe("bandSegments", () => {
       ["indoors", 0, 0.25],
       ["parked_sun", 0.25, 0.25 + 20 / 240],
     ]);
+  });
+});
+
+describe("hourTicks", () => {
+  it("puts a few ticks on whole hours across the axis", () => {
+    const fromMs = Date.parse("2027-03-09T15:00:00Z");
+    expect(hourTicks({ fromMs, toMs: fromMs + 4 * 3_600_000 })).toHaveLength(5);
+    const long = hourTicks({ fromMs, toMs: fromMs + 96 * 3_600_000 });
+    expect(long.length).toBeLessThanOrEqual(7);
+    expect(long.every((t) => t % 3_600_000 === 0)).toBe(true);
   });
 });

@@ -82,3 +82,16 @@ export function bandSegments(
     }))
     .filter((s) => s.toShare > s.fromShare);
 }
+
+const HOUR_MS = 3_600_000;
+const TICK_STEPS_H = [1, 2, 3, 6, 12, 24, 48];
+
+/** Ticks on whole hours of the axis, as few steps as keep them to `most` (the chart's own ticks skip a time axis). */
+export function hourTicks(axis: { fromMs: number; toMs: number }, most = 7): number[] {
+  const hours = (axis.toMs - axis.fromMs) / HOUR_MS;
+  const step = TICK_STEPS_H.find((h) => hours / h <= most) ?? Math.ceil(hours / most);
+  const first = Math.ceil(axis.fromMs / HOUR_MS) * HOUR_MS;
+  const ticks: number[] = [];
+  for (let at = first; at <= axis.toMs; at += step * HOUR_MS) ticks.push(at);
+  return ticks;
+}

@@ -61,17 +61,16 @@ export function StopsEditor({
         <p className="text-sm text-ink-soft">No stops planned: the model adds its own breaks.</p>
       ) : null}
       {rows.map((row, i) => (
-        <div
-          key={row.key}
-          className="grid gap-3 rounded-md border border-rule p-3 sm:grid-cols-[2fr_1fr_2fr_auto] sm:items-end"
-        >
-          <TextField
-            label={`Stop ${i + 1}: from`}
-            type="datetime-local"
-            value={row.atLocal}
-            onChange={(e) => update(i, { atLocal: e.target.value })}
-            error={errorFor(`stops.${i}.at`)}
-          />
+        <div key={row.key} className="grid grid-cols-2 gap-3 rounded-md border border-rule p-3">
+          <div className="col-span-2">
+            <TextField
+              label={`Stop ${i + 1}: from`}
+              type="datetime-local"
+              value={row.atLocal}
+              onChange={(e) => update(i, { atLocal: e.target.value })}
+              error={errorFor(`stops.${i}.at`)}
+            />
+          </div>
           <TextField
             label="Minutes"
             inputMode="numeric"
@@ -86,9 +85,11 @@ export function StopsEditor({
             onChange={(e) => update(i, { parked: e.target.value as ParkedKind })}
             error={errorFor(`stops.${i}.parked`)}
           />
-          <Button type="button" variant="ghost" onClick={() => onChange(rows.filter((_, j) => j !== i))}>
-            Remove
-          </Button>
+          <div className="col-span-2">
+            <Button type="button" variant="ghost" onClick={() => onChange(rows.filter((_, j) => j !== i))}>
+              Remove stop {i + 1}
+            </Button>
+          </div>
         </div>
       ))}
       <div>

@@ -14,7 +14,7 @@ import { formatAxisHour, formatInstant } from "@shared/dates";
 import type { BoxReadingDto, TemperatureReport } from "@shared/temperature/report";
 import { tempUnit } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
-import { bandSegments, chartRows, readingPoints, safeBand } from "./chart-rows";
+import { bandSegments, chartRows, hourTicks, readingPoints, safeBand } from "./chart-rows";
 import { ExposureBand } from "./exposure-band";
 import { HoursTable } from "./hours-table";
 
@@ -64,6 +64,7 @@ export function TemperatureChart({ report, readings = [] }: { report: Temperatur
               type="number"
               scale="time"
               domain={[axis.fromMs, axis.toMs]}
+              ticks={hourTicks(axis)}
               allowDataOverflow
               tickFormatter={(ms: number) => formatAxisHour(ms)}
               minTickGap={24}

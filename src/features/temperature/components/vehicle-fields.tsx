@@ -39,12 +39,13 @@ export function VehicleFields({
         <SelectField
           label={label}
           options={[
-            { value: "", label: "Not said (modelled as not climate-controlled)" },
+            { value: "", label: "Not said" },
             ...VEHICLE_CONDITIONINGS.map((v) => ({ value: v, label: VEHICLE_CONDITIONING_WORDS[v] })),
           ]}
           value={value.vehicle}
           onChange={(e) => onChange({ ...value, vehicle: e.target.value as VehicleForm["vehicle"] })}
           error={errorFor("vehicle")}
+          hint="Not said: modelled as not climate-controlled, and the verdict says what a climate-controlled vehicle would change."
         />
       </div>
       {value.vehicle === "climate_controlled" ? (
