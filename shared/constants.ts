@@ -349,3 +349,31 @@ export type DeliveryState = (typeof DELIVERY_STATES)[number];
 /** How the receiver acknowledged a delivery. */
 export const DELIVERY_ACKNOWLEDGEMENT_WAYS = ["recorded_by_receiver", "receiver_account", "one_time_code"] as const;
 export type DeliveryAcknowledgementWay = (typeof DELIVERY_ACKNOWLEDGEMENT_WAYS)[number];
+
+/**
+ * What surrounds the box in an hour of the trip: the outside air (loading, a doorstep), a
+ * vehicle held in its set range, an unconditioned vehicle on the move, a closed vehicle parked in
+ * sun or shade, a carrier's building (sort hub, station, the aircraft hold), or a home or facility.
+ */
+export const EXPOSURES = [
+  "outdoors",
+  "vehicle_climate_controlled",
+  "vehicle_unconditioned",
+  "parked_sun",
+  "parked_shade",
+  "carrier_building",
+  "indoors",
+] as const;
+export type Exposure = (typeof EXPOSURES)[number];
+
+/** How a vehicle's air is held: in a set range, or not at all. */
+export const VEHICLE_CONDITIONINGS = ["climate_controlled", "unconditioned"] as const;
+export type VehicleConditioning = (typeof VEHICLE_CONDITIONINGS)[number];
+
+/** Where the vehicle waits during a planned stop: in the sun, in shade, or indoors (the box is taken in). */
+export const PARKED_KINDS = ["sun", "shade", "indoors"] as const;
+export type ParkedKind = (typeof PARKED_KINDS)[number];
+
+/** Where a box temperature was read: at a handoff of the custody chain, or at the check-in. */
+export const READING_SOURCES = ["pickup", "handoff", "delivery", "check_in"] as const;
+export type ReadingSource = (typeof READING_SOURCES)[number];

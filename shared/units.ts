@@ -98,10 +98,20 @@ export function tempUnit(system: UnitSystem): "°F" | "°C" {
 // Inches need two decimals to stay within a quarter of a millimetre; mm and degrees one.
 const digits = { in: 2, mm: 1, "°F": 1, "°C": 1 } as const;
 
+// Building an Intl formatter costs far more than using one (a trip's labels format dozens of
+// distances per assessment): one per setting, kept.
+const numberFormats = new Map<string, Intl.NumberFormat>();
+
 function numberText(value: number, maxDigits: number, grouping: boolean): string {
   // "-0" reads as a mistake; a value that rounds to zero is zero.
   const shown = Object.is(Math.round(value * 10 ** maxDigits), -0) ? 0 : value;
-  return new Intl.NumberFormat("en-US", { maximumFractionDigits: maxDigits, useGrouping: grouping }).format(shown);
+  const key = `${maxDigits}:${grouping}`;
+  let format = numberFormats.get(key);
+  if (!format) {
+    format = new Intl.NumberFormat("en-US", { maximumFractionDigits: maxDigits, useGrouping: grouping });
+    numberFormats.set(key, format);
+  }
+  return format.format(shown);
 }
 
 /** A stored length (mm) as the number shown in the chosen system, rounded for display. */

@@ -300,6 +300,8 @@ export const checkInInputSchema = z.strictObject({
     )
     .max(100),
   notes: optionalText(LIMITS.textMax),
+  /** The box temperature read on opening, °F (issue 13): drawn beside the model, checked against the safe range. */
+  boxTempF: measure("temperature", { min: -40, max: 160 }).nullable().optional(),
   signedName: requiredText(120),
   acknowledged: z.literal(true, { message: "Confirm that every container was opened and checked." }),
 });

@@ -7,14 +7,16 @@ import {
   SEXES,
   TRANSPORT_MODES,
   US_STATES,
+  VEHICLE_CONDITIONINGS,
   WALL_MATERIALS,
 } from "../constants";
 import { jurisdictionName } from "../compliance/jurisdiction";
 import { formatDate, formatInstant } from "../dates";
-import { formatLength, formatWeight, type UnitSystem } from "../units";
+import { formatLength, formatTemp, formatWeight, tempInUnit, tempUnit, type UnitSystem } from "../units";
 import { ANIMAL_ORIGIN_WORDS, IDENTIFIER_KIND_WORDS, LENGTH_KIND_WORDS, SEX_WORDS } from "./animals";
 import { fieldName, fieldWord } from "./fields";
 import { PACK_WORDS, WALL_MATERIAL_WORDS } from "./packing";
+import { VEHICLE_CONDITIONING_WORDS } from "./temperature";
 import { PURPOSE_WORDS, TRANSPORT_MODE_WORDS } from "./transfer";
 import { boxName } from "./evidence";
 
@@ -48,6 +50,19 @@ const VALUE_WORDS: Readonly<Record<string, (value: unknown, system: UnitSystem) 
   // Ids mean nothing to a person; the transfer's page names the parties as they are now.
   receiverOrganizationId: () => "another organisation",
   receiverContactId: () => "another contact",
+  vehicle: wordsOf(VEHICLE_CONDITIONINGS, VEHICLE_CONDITIONING_WORDS),
+  vehicleRangeF: (value, system) => {
+    const range = value as { min?: unknown; max?: unknown };
+    if (typeof range?.min !== "number" || typeof range.max !== "number") return null;
+    if (range.min === range.max) return formatTemp(range.min, system);
+    return `${Math.round(tempInUnit(range.min, system))}–${Math.round(tempInUnit(range.max, system))} ${tempUnit(system)}`;
+  },
+  stops: (value) =>
+    Array.isArray(value)
+      ? value.length === 0
+        ? "no stops"
+        : `${value.length} ${value.length === 1 ? "stop" : "stops"}`
+      : null,
 };
 
 /** A line added or removed whole: "2 × Pogona vitticeps" or the box's label. */
@@ -73,7 +88,7 @@ function valueText(key: string, value: unknown, system: UnitSystem, list: string
   return "changed";
 }
 
-const LINE_WORDS: Readonly<Record<string, string>> = { containers: "Box", animals: "Animal line" };
+const LINE_WORDS: Readonly<Record<string, string>> = { containers: "Box", animals: "Animal line", legs: "Leg" };
 
 /**
  * One entry of a transfer's change history, as a person reads it: which field, what it was, what it
@@ -84,7 +99,7 @@ export function describeChange(
   change: { field: string; oldValue: unknown; newValue: unknown },
   system: UnitSystem,
 ): { what: string; was: string; now: string } {
-  const line = /^(containers|animals)\[(.*)\](?:\.(.+))?$/.exec(change.field);
+  const line = /^(containers|animals|legs)\[(.*)\](?:\.(.+))?$/.exec(change.field);
   if (line) {
     const [, list = "", label = "", key] = line;
     const group = `${LINE_WORDS[list] ?? "Line"} “${label}”`;

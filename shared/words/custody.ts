@@ -186,6 +186,8 @@ function checkIn(payload: Record<string, unknown>, system: UnitSystem): string[]
   if (signed) lines.push(`Signed by ${signed}.`);
   const summary = textOf(payload.summary);
   if (summary) lines.push(summary);
+  const temperature = numberOf(payload.boxTempF);
+  if (temperature !== null) lines.push(`Box at ${formatTemp(temperature, system)} on opening.`);
   for (const line of listOf(payload.lines).map(recordOf)) {
     const name = textOf(line.scientificName) ?? "An animal line";
     const parts: string[] = [];

@@ -194,6 +194,12 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   doNotShipAbove: "do not ship above",
   source: "source",
   scenario: "weather scenario",
+  vehicle: "vehicle",
+  vehicleRangeF: "vehicle's set range",
+  stops: "planned stops",
+  durationMin: "length of the stop",
+  parked: "where it waits",
+  legId: "leg",
   // answers the API gives (their schemas are walked too)
   transitOnlyExempt: "exempt when only passing through",
   ruleId: "rule",
@@ -211,6 +217,8 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   hoursOutsideRange: "hours outside the safe range",
   hours: "hours",
   suggestedDeparture: "suggested departure",
+  exposure: "where the box is",
+  aroundBoxF: "air around the box",
   sources: "sources",
   title: "title",
 };
@@ -234,6 +242,7 @@ const ITEM_WORDS: Readonly<Record<string, string>> = {
   synonyms: "older name",
   ambientOverrideF: "outside temperature",
   hours: "hour",
+  stops: "stop",
   documentKinds: "kind of document",
   origins: "origin",
   purposes: "purpose",
@@ -266,6 +275,8 @@ const PAIR_WORDS: Readonly<Record<string, string>> = {
   "reasons.earlyPickup": "reason for the early pickup",
   "reasons.implausibleSpeed": "reason for the distance covered",
   "reasons.unexpectedParty": "reason for handing to someone else",
+  "vehicleRangeF.min": "lowest temperature of the vehicle's set range",
+  "vehicleRangeF.max": "highest temperature of the vehicle's set range",
 };
 
 /**

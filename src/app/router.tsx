@@ -97,6 +97,10 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: screen(() => import("@/features/temperature/routes/plan-trip"), "PlanTripRoute"),
         },
         {
+          path: paths.modelAccuracy,
+          lazy: screen(() => import("@/features/temperature/routes/model-accuracy"), "ModelAccuracyRoute"),
+        },
+        {
           path: paths.admin.temperatureProfiles,
           lazy: screen(() => import("@/features/temperature/routes/profiles"), "TemperatureProfilesRoute"),
         },

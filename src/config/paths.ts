@@ -29,6 +29,8 @@ export const paths = {
   permits: "/permits",
   canItTravel: "/can-it-travel",
   planTrip: "/plan-trip",
+  /** How far the model has been from the box readings across the organisation's transfers. */
+  modelAccuracy: "/model-accuracy",
   admin: {
     users: "/admin/users",
     organizations: "/admin/organizations",

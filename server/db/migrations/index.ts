@@ -9,6 +9,7 @@ import { Migration20261202130000_least_privilege } from "./Migration202612021300
 import { Migration20261202130100_custody_head } from "./Migration20261202130100_custody_head";
 import { Migration20261202130200_jurisdiction_coverage } from "./Migration20261202130200_jurisdiction_coverage";
 import { Migration20261202140000_custody_evidence } from "./Migration20261202140000_custody_evidence";
+import { Migration20261203100000_exposure } from "./Migration20261203100000_exposure";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -20,4 +21,5 @@ export const MIGRATIONS = [
   { name: "Migration20261202130100_custody_head", class: Migration20261202130100_custody_head },
   { name: "Migration20261202130200_jurisdiction_coverage", class: Migration20261202130200_jurisdiction_coverage },
   { name: "Migration20261202140000_custody_evidence", class: Migration20261202140000_custody_evidence },
+  { name: "Migration20261203100000_exposure", class: Migration20261203100000_exposure },
 ];

@@ -16,6 +16,7 @@ import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
 import { mayCheckIn, transferAbilities } from "../../policies/transfer.policy";
+import { checkBoxReading } from "../temperature/readings";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -202,7 +203,9 @@ export async function checkInTransfer({
       discrepancies: rows,
       lines,
       notes: input.notes ?? null,
+      boxTempF: input.boxTempF ?? null,
     });
+    await checkBoxReading(tx, links, t, actor, { tempF: input.boxTempF, place: null, source: "check_in" });
     await appendCustody(tx, t.id, actor, "status_change", {
       from: "delivered",
       to: "checked_in",

@@ -9,6 +9,7 @@ import type { Actor } from "../../auth/actor";
 import { conflict, forbidden } from "../../http/errors";
 import { handoffAllowed, takesPartInHandoff } from "../../policies/transfer.policy";
 import { raiseAlerts } from "./alerts";
+import { checkBoxReading } from "../temperature/readings";
 import { appendCustody } from "./custody";
 import { completeDelivery, countingWrongCodes, useDeliveryCode } from "./delivery";
 import { reviewHandoffAgainstRecord, type HandoffChecks } from "./handoff-evidence";
@@ -147,6 +148,7 @@ export async function recordHandoff({
           acknowledged: true,
         };
         await appendCustody(tx, t.id, actor, "handoff", payload);
+        await checkBoxReading(tx, links, t, actor, { tempF: input.boxTempF, place: input.place.text, source: kind });
         // Every finding at once: one e-mail per party names them all (and a later check can add its own here).
         await raiseAlerts(
           tx,

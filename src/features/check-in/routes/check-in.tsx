@@ -9,6 +9,7 @@ import { checkInInputSchema, type CheckInInput, type TaxonBriefDto, type Transfe
 import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { TextAreaField, TextField } from "@/components/ui/field";
+import { MeasureField } from "@/components/ui/measure-field";
 import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { TaxonName } from "@/components/ui/taxon-name";
@@ -61,6 +62,7 @@ function CheckInForm({
       })),
       extras: [],
       notes: "",
+      boxTempF: null,
       signedName: signer,
       acknowledged: false as unknown as true,
     },
@@ -143,6 +145,21 @@ function CheckInForm({
           <h2 id="sign-title" className="text-xl font-semibold">
             Sign
           </h2>
+          <Controller
+            control={form.control}
+            name="boxTempF"
+            render={({ field }) => (
+              <MeasureField
+                kind="temperature"
+                label="Box temperature on opening (optional)"
+                value={field.value}
+                onChange={field.onChange}
+                onBlur={field.onBlur}
+                error={e.boxTempF?.message}
+                hint="Read it inside the box before taking the animals out; it is set beside the model's prediction."
+              />
+            )}
+          />
           <TextAreaField label="Notes on the arrival (optional)" error={e.notes?.message} {...form.register("notes")} />
           <PhotoPicker
             slots={[{ subject: "box_outside", label: "Photo of the boxes as they arrived" }]}
