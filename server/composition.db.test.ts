@@ -4,6 +4,7 @@ import { buildTransfer, buildUser } from "../tests/factories";
 import type { Storage } from "./adapters/storage";
 import { READY_GATE_ORDER } from "./composition";
 import type { ReadyGate } from "./services/transfers/transition";
+import { pdfWithPages } from "../tests/support/scan-files";
 
 // Two apps in one process, built one after the other with different public URLs, gates and
 // storage. Before the composition root, building the second app overwrote the first one's link
@@ -143,7 +144,8 @@ describe("two apps built in one process", () => {
   });
 
   it("each app stores files through its own storage adapter", async () => {
-    const pdf = Buffer.from("%PDF-1.7\n%\xe2\xe3\xcf\xd3\n1 0 obj\n<< /Type /Catalog >>\nendobj\n%%EOF\n", "latin1");
+    // A real one-page PDF: the server opens every scan (D21).
+    const pdf = await pdfWithPages(1);
     const user = await buildUser(a.orm.em.fork());
     const permit = {
       kind: "state_import_permit",

@@ -187,6 +187,14 @@ export const transitionSchema = z.strictObject({
   reason: optionalText(1000),
   /** Set with a reason to ship despite a compliance or temperature block (logged). */
   override: z.boolean().optional(),
+  /**
+   * Which blocks the override answers: the ones the confirming party was shown ("compliance" for
+   * an unverified rules check, "temperature"). Without it, an override answers every block.
+   */
+  overrideGates: z
+    .array(z.enum(["compliance", "temperature"]))
+    .max(2)
+    .optional(),
 });
 export type TransitionInput = z.input<typeof transitionSchema>;
 

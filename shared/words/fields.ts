@@ -42,6 +42,7 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   to: "next state",
   reason: "reason",
   override: "override",
+  overrideGates: "blocks the override answers",
   body: "message",
   // boxes
   key: "reference",
@@ -277,6 +278,12 @@ const PAIR_WORDS: Readonly<Record<string, string>> = {
   "reasons.unexpectedParty": "reason for handing to someone else",
   "vehicleRangeF.min": "lowest temperature of the vehicle's set range",
   "vehicleRangeF.max": "highest temperature of the vehicle's set range",
+  coverage: "rule coverage of the route",
+  covered: "whether the rules were reviewed",
+  agency: "wildlife agency",
+  veterinarian: "state veterinarian",
+  uncoveredBecause: "why the rules are not counted as reviewed",
+  shipmentFindings: "findings for the whole shipment",
 };
 
 /**

@@ -11,7 +11,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
 import { startS3Fake, type S3Fake } from "../../fakes/s3/s3-fake";
-import { createTestApp, signIn, type Client, type TestApp } from "../support/app";
+import { createTestApp, signIn, withDatabaseAs, type Client, type TestApp } from "../support/app";
 import { TINY_JPEG, TINY_PNG } from "../support/images";
 import { buildTransfer, buildUser, type TransferCast } from "../factories";
 import { LIMITS } from "@shared/constants";
@@ -183,11 +183,20 @@ describe("photos of the custody", () => {
     const { rows } = await t.ctx.pool.query("SELECT id FROM transfer_photo WHERE transfer_id = $1 LIMIT 1", [
       cast.transfer.id,
     ]);
-    await expect(
-      t.ctx.pool.query("UPDATE transfer_photo SET sha256 = 'x' WHERE id = $1", [rows[0].id]),
-    ).rejects.toThrow(/append-only/);
-    await expect(t.ctx.pool.query("DELETE FROM transfer_photo WHERE id = $1", [rows[0].id])).rejects.toThrow(
-      /append-only/,
+    const id = rows[0].id as string;
+    // The app's login may neither rewrite nor remove a photo's row (D18) …
+    await expect(t.ctx.pool.query("UPDATE transfer_photo SET sha256 = 'x' WHERE id = $1", [id])).rejects.toThrow(
+      /permission denied/,
     );
+    await expect(t.ctx.pool.query("DELETE FROM transfer_photo WHERE id = $1", [id])).rejects.toThrow(
+      /permission denied/,
+    );
+    // … and the table's owner is stopped by the triggers.
+    await withDatabaseAs("owner", async (owner) => {
+      await expect(owner.query("UPDATE transfer_photo SET sha256 = 'x' WHERE id = $1", [id])).rejects.toThrow(
+        /append-only/,
+      );
+      await expect(owner.query("DELETE FROM transfer_photo WHERE id = $1", [id])).rejects.toThrow(/append-only/);
+    });
   });
 });

@@ -238,9 +238,11 @@ describe("life cycle through the API", () => {
     ]);
     expect(mail.rows[0]!.to_address).toBe(cast.receiver.email);
     expect(mail.rows[1]!.to_address).toBe(cast.sender.email);
+    // Two overrides with the one reason: the unverified rules check (no state on the route reviewed, D27), then the temperature.
     expect(log.body.entries.map((e: { kind: string }) => e.kind)).toEqual([
       "created",
       "status_change",
+      "override",
       "override",
       "status_change",
       "couriers_assigned",

@@ -97,7 +97,12 @@ export function transfersRouter(): Router {
       em: req.em,
       actor: currentUser(req),
       transferId: id,
-      input: { to: input.to, reason: input.reason ?? null, override: input.override },
+      input: {
+        to: input.to,
+        reason: input.reason ?? null,
+        override: input.override,
+        overrideGates: input.overrideGates,
+      },
       gates: req.ctx.readyGates,
       links: req.ctx.links,
     });

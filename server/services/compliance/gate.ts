@@ -5,7 +5,7 @@ import { ComplianceEvaluationSchema, ComplianceOverrideSchema } from "../../db/e
 import type { Transfer } from "../../db/entities/transfer.entity";
 import { conflict, invalidField } from "../../http/errors";
 import { appendCustody } from "../transfers/custody";
-import type { ReadyGate } from "../transfers/transition";
+import { overrides, type ReadyGate } from "../transfers/transition";
 import { evaluateTransfer } from "./evaluation";
 
 /** Records an evaluation in the caller's unit of work, against the transfer version it judged. */
@@ -77,7 +77,7 @@ export const complianceGate: ReadyGate = Object.freeze({
     }
     const open = uncovered(result.coverage);
     if (open.length > 0) {
-      if (input.override !== true) {
+      if (!overrides(input, "compliance")) {
         throw conflict(unverifiedMessage(open), { compliance: result, acknowledgeUnverified: true });
       }
       if (!input.reason)

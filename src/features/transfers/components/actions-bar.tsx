@@ -19,6 +19,18 @@ const linkButton = "inline-flex min-h-11 items-center justify-center rounded-md 
  * not law), or an unverified compliance verdict (a state on the route whose rules Hatchway has not
  * reviewed). Compliance blocks are not offered here; only an administrator can override those.
  */
+type Answer = { gate: "compliance" | "temperature"; reason: string };
+
+/** One reason for the custody log when the receiver answered both blocks: each said in its own words. */
+function reasonFor(answers: readonly Answer[]): string {
+  if (answers.length === 1) return answers[0]!.reason;
+  return answers
+    .map(
+      (a) => `${a.gate === "compliance" ? "Rules of the route" : "Temperature"}: ${a.reason.replace(/[.!?]?$/, ".")}`,
+    )
+    .join(" ");
+}
+
 function answerableBlock(error: unknown): AnswerableBlock | null {
   if (!(error instanceof ApiError) || error.status !== 409) return null;
   const details = (error.body as { error?: Record<string, unknown> } | undefined)?.error;
@@ -39,9 +51,17 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
   const packingOpen = t.abilities.submit && t.packingFindings.length > 0;
   const block = transition.variables?.to === "ready" ? answerableBlock(transition.error) : null;
 
-  function take(step: Step, why?: string, override = false) {
+  // The blocks the receiver has answered on this attempt, each with its reason: an override names
+  // only the blocks shown, so answering one never answers another nobody saw.
+  const [answered, setAnswered] = useState<Answer[]>([]);
+
+  function take(step: Step, why?: string, answers: Answer[] = []) {
     transition.mutate(
-      { to: step.to, reason: why, ...(override ? { override: true } : {}) },
+      {
+        to: step.to,
+        reason: answers.length ? reasonFor(answers) : why,
+        ...(answers.length ? { override: true, overrideGates: answers.map((a) => a.gate) } : {}),
+      },
       {
         onSuccess: (updated) => {
           setAsking(null);
@@ -56,6 +76,7 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
 
   function start(step: Step) {
     transition.reset();
+    setAnswered([]);
     setReasonError(null);
     if (step.ask) setAsking(step);
     else take(step);
@@ -88,16 +109,20 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
       ) : null}
       {block ? (
         <ConfirmPastBlock
+          key={block.kind}
           transfer={t}
           block={block}
           busy={transition.isPending}
-          onConfirm={(why) =>
+          onConfirm={(why) => {
+            const gate: Answer["gate"] = block.kind === "unverified" ? "compliance" : "temperature";
+            const answers: Answer[] = [...answered.filter((a) => a.gate !== gate), { gate, reason: why }];
+            setAnswered(answers);
             take(
               STEPS.find((x) => x.ability === "confirm")!,
               why,
-              true,
-            )
-          }
+              answers,
+            );
+          }}
         />
       ) : null}
       {packingOpen ? (

@@ -48,7 +48,7 @@ export function ConfirmPastBlock({ transfer: t, block, busy, onConfirm }: Props)
       }}
     >
       <p className="text-sm">{words.text}</p>
-      <TextAreaField label={words.label} value={reason} maxLength={1000} onChange={(e) => setReason(e.target.value)} />
+      <TextAreaField label={words.label} value={reason} maxLength={480} onChange={(e) => setReason(e.target.value)} />
       <div>
         <Button type="submit" variant="danger" disabled={!reason.trim()} busy={busy && !asking}>
           Confirm anyway, with this reason
@@ -69,8 +69,8 @@ export function ConfirmPastBlock({ transfer: t, block, busy, onConfirm }: Props)
       >
         {block.kind === "temperature" && block.advice ? <p>The temperature check advises: {block.advice}</p> : null}
         <p>
-          If you confirm anyway, {t.number} is cleared to travel and the sender is told. {words.logged}, where everyone
-          on the transfer can read them.
+          If you confirm anyway and nothing else blocks it, {t.number} is cleared to travel and the sender is told.{" "}
+          {words.logged}, where everyone on the transfer can read them.
         </p>
         <p className="rounded-md bg-paper-deep px-3 py-2 text-sm">Your reason: {reason.trim()}</p>
       </ConfirmDialog>
