@@ -222,6 +222,12 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   aroundBoxF: "air around the box",
   sources: "sources",
   title: "title",
+  coverage: "rule coverage of the route",
+  covered: "whether the rules were reviewed",
+  agency: "wildlife agency",
+  veterinarian: "state veterinarian",
+  uncoveredBecause: "why the rules are not counted as reviewed",
+  shipmentFindings: "findings for the whole shipment",
 };
 
 /** How a list's item is named: "Box 2", "Animal line 3". */
@@ -278,12 +284,6 @@ const PAIR_WORDS: Readonly<Record<string, string>> = {
   "reasons.unexpectedParty": "reason for handing to someone else",
   "vehicleRangeF.min": "lowest temperature of the vehicle's set range",
   "vehicleRangeF.max": "highest temperature of the vehicle's set range",
-  coverage: "rule coverage of the route",
-  covered: "whether the rules were reviewed",
-  agency: "wildlife agency",
-  veterinarian: "state veterinarian",
-  uncoveredBecause: "why the rules are not counted as reviewed",
-  shipmentFindings: "findings for the whole shipment",
 };
 
 /**

@@ -143,18 +143,26 @@ describe("one transfer from draft to check-in", () => {
       await page.getByLabel("Place").fill(kind === "pickup" ? "Sender's loading bay" : "Nature centre receiving room");
       if (kind === "pickup") await screenshot(page, "story-4-courier-pickup-form");
       await page.getByRole("button", { name: "Review before confirming" }).click();
+      const confirm = page.getByRole("button", { name: `Confirm the ${kind}` });
+      await confirm.waitFor({ timeout: 10_000 }).catch(async (error: unknown) => {
+        await screenshot(page, `story-failed-${kind}-review`);
+        throw error;
+      });
       // Three days before the departure, and minutes apart across the country: the review asks why.
       const early = page.getByLabel("Why so early?");
       if (await early.count()) await early.fill("Collected early to ride in our heated depot.");
       const fast = page.getByLabel("How did the boxes get here so fast?");
       if (await fast.count()) await fast.fill("A test of the whole story, recorded minutes apart.");
       await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
-      await page.getByRole("button", { name: `Confirm the ${kind}` }).click();
+      await confirm.click();
       await expect
         .poll(() =>
           page
             .getByRole("status")
-            .filter({ hasText: /recorded/i })
+            // The notice of this step (the review's own text says "recorded … before" too).
+            .filter({
+              hasText: kind === "pickup" ? "Pickup from the sender recorded." : "Delivery to the receiver recorded.",
+            })
             .count(),
         )
         .toBeGreaterThan(0);
