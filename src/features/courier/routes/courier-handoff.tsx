@@ -1,3 +1,4 @@
+import { TRANSFER_STATUS_WORDS } from "@shared/words";
 import { DELIVERY_STATE_WORDS, HANDOFF_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
@@ -143,7 +144,9 @@ export function CourierHandoffRoute() {
         <Notice tone="info" title="Nothing for you to record right now">
           {t.handoffs.length === t.handoffsPlanned && t.handoffsPlanned > 0
             ? "Every handoff of this transfer is recorded."
-            : "The next handoff is someone else's, or the transfer is not cleared to travel yet."}
+            : t.status === "ready" || t.status === "in_transit"
+              ? "The next handoff is someone else's to record: the courier of the next leg, or the receiver."
+              : `The transfer is “${TRANSFER_STATUS_WORDS[t.status]}”: handoffs are recorded once it is cleared to travel.`}
         </Notice>
       )}
       {t.abilities.addPhotos && t.handoffs.length > 0 && next === null ? <AddPhotos transfer={t} /> : null}
