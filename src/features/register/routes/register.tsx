@@ -2,7 +2,8 @@ import { REGISTER_CONDITION_WORDS, SEX_WORDS } from "@shared/words";
 import { useEffect, useState } from "react";
 import { Link, useSearchParams } from "react-router";
 import { SEXES } from "@shared/constants";
-import { registerQuerySchema, type TaxonBriefDto } from "@shared/schemas/transfer";
+import type { TaxonBriefDto } from "@shared/schemas/transfer";
+import { registerQuerySchema } from "@shared/schemas/register";
 import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { SelectField, TextField } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page";
@@ -129,7 +130,7 @@ export function RegisterRoute() {
         <Notice tone="block" role="alert">
           {(register.error as Error).message}
         </Notice>
-      ) : register.data.length === 0 ? (
+      ) : register.data.entries.length === 0 ? (
         <EmptyState title="Nothing in the register yet">
           {Object.keys(filters).length
             ? "No entry matches these filters."
@@ -152,7 +153,7 @@ export function RegisterRoute() {
             </tr>
           }
         >
-          {register.data.map((r) => (
+          {register.data.entries.map((r) => (
             <tr key={r.id}>
               <Td>
                 <TaxonName taxon={r.taxon} />
@@ -163,13 +164,17 @@ export function RegisterRoute() {
               <Td className="whitespace-nowrap">{formatDate(r.dateAcquired)}</Td>
               <Td>{r.sourceOrganization}</Td>
               <Td>
-                <Link className="text-fern underline" to={paths.transfers.detail.href(r.transferId)}>
-                  {r.transferNumber}
-                </Link>
+                {r.transferId ? (
+                  <Link className="text-fern underline" to={paths.transfers.detail.href(r.transferId)}>
+                    {r.transferNumber}
+                  </Link>
+                ) : (
+                  "—"
+                )}
               </Td>
               <Td>
                 <Badge tone={r.condition === "well" ? "ok" : r.condition === "problem" ? "caution" : "block"}>
-                  {REGISTER_CONDITION_WORDS[r.condition]}
+                  {r.condition ? REGISTER_CONDITION_WORDS[r.condition] : "—"}
                 </Badge>
               </Td>
               <Td className="whitespace-pre-wrap">

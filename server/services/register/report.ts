@@ -1,0 +1,106 @@
+import type pg from "pg";
+import { todayUtc } from "@shared/compliance/expiry";
+import { buildReport, type LedgerEvent } from "@shared/register/ledger";
+import { lastEndedPeriod } from "@shared/register/reporting";
+import type { RegisterReportDto } from "@shared/schemas/register";
+import type { RegisterEventKind } from "@shared/constants";
+import { notFound } from "../../http/errors";
+
+type PermitRow = {
+  id: string;
+  number: string;
+  jurisdiction: string;
+  kind: string;
+  holder_name: string;
+  species_covered: string[];
+  report_start_month: number | null;
+  report_due_month: number | null;
+  report_due_day: number | null;
+};
+
+type EventRow = LedgerEvent & {
+  scientific_name: string;
+  identifier: string | null;
+  counterparty_name: string | null;
+  counterparty_address: string | null;
+  counterparty_permit_number: string | null;
+  transfer_number: string | null;
+  note: string | null;
+};
+
+/**
+ * The yearly report for one of the organisation's permits over `from`..`to` (defaults: the
+ * permit's last reporting year that has ended, a calendar year when the permit names none).
+ * A permit covers the entries linked to it, and every entry of a species it lists (all the
+ * organisation's entries when it lists none). Two statements: the permit, then the events.
+ */
+export async function permitReport(
+  pool: pg.Pool,
+  organizationId: string,
+  permitId: string,
+  period: { from?: string; to?: string },
+  today = todayUtc(),
+): Promise<RegisterReportDto> {
+  const { rows: permits } = await pool.query<PermitRow>(
+    `SELECT id, number, jurisdiction, kind, holder_name, species_covered, report_start_month, report_due_month, report_due_day
+       FROM permit_document WHERE id = $1 AND organization_id = $2`,
+    [permitId, organizationId],
+  );
+  const permit = permits[0];
+  if (!permit) throw notFound("That permit");
+  const plan = {
+    startMonth: permit.report_start_month ?? 1,
+    dueMonth: permit.report_due_month ?? permit.report_start_month ?? 1,
+    dueDay: permit.report_due_day ?? 31,
+  };
+  const fallback = lastEndedPeriod(plan, today);
+  const from = period.from ?? (period.to ? `${period.to.slice(0, 4)}-01-01` : fallback.from);
+  const to = period.to ?? (period.from ? today : fallback.to);
+  const { rows } = await pool.query<EventRow>(
+    `SELECT v.id, v.entry_id AS "entryId", v.kind, to_char(v."on", 'YYYY-MM-DD') AS "on", v.count,
+            v.corrects_event_id AS "correctsEventId", t.scientific_name, e.identifier, v.counterparty_name,
+            v.counterparty_address, v.counterparty_permit_number, e.transfer_number, v.note
+       FROM register_event v
+       JOIN register_entry e ON e.id = v.entry_id
+       JOIN taxon t ON t.id = e.taxon_id
+      WHERE v.organization_id = $1 AND v."on" <= $2::date
+        AND ($3::uuid = ANY(e.permit_ids) OR cardinality($4::text[]) = 0 OR t.scientific_name = ANY($4::text[]))`,
+    [organizationId, to, permit.id, permit.species_covered ?? []],
+  );
+  const entries = new Map(rows.map((row) => [row.entryId, { scientificName: row.scientific_name }]));
+  const species = buildReport(entries, rows, from, to).map((row) => ({
+    ...row,
+    events: row.events.map((event) => ({
+      on: event.on,
+      kind: event.kind as RegisterEventKind,
+      column: event.column,
+      count: event.count,
+      identifier: event.identifier,
+      counterparty:
+        event.counterparty_name || event.counterparty_address || event.counterparty_permit_number
+          ? {
+              name: event.counterparty_name,
+              address: event.counterparty_address,
+              permitNumber: event.counterparty_permit_number,
+            }
+          : null,
+      transferNumber: event.transfer_number,
+      note: event.note,
+    })),
+  }));
+  const hasPlan =
+    permit.report_start_month !== null && permit.report_due_month !== null && permit.report_due_day !== null;
+  return {
+    permit: {
+      id: permit.id,
+      number: permit.number,
+      jurisdiction: permit.jurisdiction,
+      kind: permit.kind,
+      holderName: permit.holder_name,
+    },
+    from,
+    to,
+    dueOn: hasPlan && from === fallback.from && to === fallback.to ? fallback.dueOn : null,
+    species,
+  };
+}
