@@ -68,6 +68,8 @@ export class Migration20261204100000_register_ledger extends Migration {
       `create index "register_entry_org_page_index" on "register_entry" ("organization_id", "date_acquired" desc, "id" desc);`,
     );
 
+    // A permit's report looks entries up by species within the organisation.
+    this.addSql(`create index "register_entry_org_taxon_index" on "register_entry" ("organization_id", "taxon_id");`);
     this.addSql(`create table "register_event" (
       "id" uuid not null,
       "entry_id" uuid not null,

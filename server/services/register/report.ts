@@ -56,15 +56,18 @@ export async function permitReport(
   const fallback = lastEndedPeriod(plan, today);
   const from = period.from ?? (period.to ? `${period.to.slice(0, 4)}-01-01` : fallback.from);
   const to = period.to ?? (period.from ? today : fallback.to);
+  // The permit's entries first (by link or species, within the organisation), then their events by entry.
   const { rows } = await pool.query<EventRow>(
-    `SELECT v.id, v.entry_id AS "entryId", v.kind, to_char(v."on", 'YYYY-MM-DD') AS "on", v.count,
-            v.corrects_event_id AS "correctsEventId", t.scientific_name, e.identifier, v.counterparty_name,
-            v.counterparty_address, v.counterparty_permit_number, e.transfer_number, v.note
-       FROM register_event v
-       JOIN register_entry e ON e.id = v.entry_id
-       JOIN taxon t ON t.id = e.taxon_id
-      WHERE v.organization_id = $1 AND v."on" <= $2::date
-        AND ($3::uuid = ANY(e.permit_ids) OR cardinality($4::text[]) = 0 OR t.scientific_name = ANY($4::text[]))`,
+    `WITH covered AS (
+       SELECT e.id, e.identifier, e.transfer_number, t.scientific_name
+         FROM register_entry e JOIN taxon t ON t.id = e.taxon_id
+        WHERE e.organization_id = $1
+          AND ($3::uuid = ANY(e.permit_ids) OR cardinality($4::text[]) = 0 OR t.scientific_name = ANY($4::text[])))
+     SELECT v.id, v.entry_id AS "entryId", v.kind, to_char(v."on", 'YYYY-MM-DD') AS "on", v.count,
+            v.corrects_event_id AS "correctsEventId", c.scientific_name, c.identifier, v.counterparty_name,
+            v.counterparty_address, v.counterparty_permit_number, c.transfer_number, v.note
+       FROM covered c JOIN register_event v ON v.entry_id = c.id
+      WHERE v."on" <= $2::date`,
     [organizationId, to, permit.id, permit.species_covered ?? []],
   );
   const entries = new Map(rows.map((row) => [row.entryId, { scientificName: row.scientific_name }]));
