@@ -149,6 +149,8 @@ export function buildReport<E extends LedgerEvent>(
   events: readonly E[],
   from: string,
   to: string,
+  /** Counts per species already added up from standing events before `from` (a database may sum them). */
+  opening: ReadonlyMap<string, number> = new Map(),
 ): SpeciesReport<E>[] {
   const bySpecies = new Map<string, SpeciesReport<E>>();
   const row = (scientificName: string) => {
@@ -169,6 +171,7 @@ export function buildReport<E extends LedgerEvent>(
     }
     return found;
   };
+  for (const [scientificName, count] of opening) row(scientificName).start += count;
   for (const event of standingEvents(events)) {
     const entry = entries.get(event.entryId);
     if (!entry || event.on > to) continue;

@@ -275,6 +275,9 @@ describe("the yearly report", () => {
     expect(
       (await post({ kind: "acquired", on: `${year}-06-01`, count: 3, counterparty: { name: "Demo Breeder" } })).status,
     ).toBe(201);
+    // A death recorded in error and withdrawn counts for nothing; a wrong count corrected counts as corrected.
+    const mistaken = await post({ kind: "died", on: `${year}-08-01`, count: 1 });
+    expect((await post({ kind: "voided", on: `${year}-08-01`, corrects: mistaken.body.event.id })).status).toBe(201);
     const hatch = await client.post(
       "/api/register/entries",
       clutch({

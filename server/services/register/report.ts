@@ -1,6 +1,6 @@
 import type pg from "pg";
 import { todayUtc } from "@shared/compliance/expiry";
-import { buildReport, type LedgerEvent } from "@shared/register/ledger";
+import { buildReport, EVENT_EFFECT, type LedgerEvent } from "@shared/register/ledger";
 import { lastEndedPeriod } from "@shared/register/reporting";
 import type { RegisterReportDto } from "@shared/schemas/register";
 import type { RegisterEventKind } from "@shared/constants";
@@ -56,22 +56,40 @@ export async function permitReport(
   const fallback = lastEndedPeriod(plan, today);
   const from = period.from ?? (period.to ? `${period.to.slice(0, 4)}-01-01` : fallback.from);
   const to = period.to ?? (period.from ? today : fallback.to);
-  // The permit's entries first (by link or species, within the organisation), then their events by entry.
-  const { rows } = await pool.query<EventRow>(
-    `WITH covered AS (
+  // The permit's entries (by link or species, within the organisation), then their standing events
+  // (not replaced by a correction, not withdrawn): summed per species before the period, one by
+  // one within it. The signs come from the shared EVENT_EFFECT table.
+  const covered = `covered AS (
        SELECT e.id, e.identifier, e.transfer_number, t.scientific_name
          FROM register_entry e JOIN taxon t ON t.id = e.taxon_id
         WHERE e.organization_id = $1
-          AND ($3::uuid = ANY(e.permit_ids) OR cardinality($4::text[]) = 0 OR t.scientific_name = ANY($4::text[])))
-     SELECT v.id, v.entry_id AS "entryId", v.kind, to_char(v."on", 'YYYY-MM-DD') AS "on", v.count,
-            v.corrects_event_id AS "correctsEventId", c.scientific_name, c.identifier, v.counterparty_name,
-            v.counterparty_address, v.counterparty_permit_number, c.transfer_number, v.note
-       FROM covered c JOIN register_event v ON v.entry_id = c.id
-      WHERE v."on" <= $2::date`,
-    [organizationId, to, permit.id, permit.species_covered ?? []],
-  );
+          AND ($2::uuid = ANY(e.permit_ids) OR cardinality($3::text[]) = 0 OR t.scientific_name = ANY($3::text[])))`;
+  const standing = `v.kind <> 'voided' AND NOT EXISTS (SELECT 1 FROM register_event r WHERE r.corrects_event_id = v.id)`;
+  const signs = Object.entries(EVENT_EFFECT);
+  const ins = signs.filter(([, effect]) => effect.sign > 0).map(([kind]) => kind);
+  const outs = signs.filter(([, effect]) => effect.sign < 0).map(([kind]) => kind);
+  const [openingRows, { rows }] = await Promise.all([
+    pool.query<{ scientific_name: string; count: string }>(
+      `WITH ${covered}
+       SELECT c.scientific_name, sum(CASE WHEN v.kind = ANY($5::text[]) THEN v.count WHEN v.kind = ANY($6::text[]) THEN -v.count ELSE 0 END) AS count
+         FROM covered c JOIN register_event v ON v.entry_id = c.id
+        WHERE v."on" < $4::date AND ${standing}
+        GROUP BY c.scientific_name`,
+      [organizationId, permit.id, permit.species_covered ?? [], from, ins, outs],
+    ),
+    pool.query<EventRow>(
+      `WITH ${covered}
+       SELECT v.id, v.entry_id AS "entryId", v.kind, v."on"::text AS "on", v.count, NULL AS "correctsEventId",
+              c.scientific_name, c.identifier, v.counterparty_name, v.counterparty_address, v.counterparty_permit_number,
+              c.transfer_number, v.note
+         FROM covered c JOIN register_event v ON v.entry_id = c.id
+        WHERE v."on" BETWEEN $4::date AND $5::date AND ${standing} AND v.kind = ANY($6::text[])`,
+      [organizationId, permit.id, permit.species_covered ?? [], from, to, [...ins, ...outs]],
+    ),
+  ]);
+  const opening = new Map(openingRows.rows.map((row) => [row.scientific_name, Number(row.count)]));
   const entries = new Map(rows.map((row) => [row.entryId, { scientificName: row.scientific_name }]));
-  const species = buildReport(entries, rows, from, to).map((row) => ({
+  const species = buildReport(entries, rows, from, to, opening).map((row) => ({
     ...row,
     events: row.events.map((event) => ({
       on: event.on,
