@@ -22,6 +22,8 @@ import type { AppContext } from "../../context";
 import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { CheckInSchema } from "../../db/entities/check-in.entity";
+import { TaxonSchema } from "../../db/entities/taxon.entity";
+import { presentTaxon } from "../../presenters/taxon.presenter";
 import { HttpError, notFound } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { parse, pathId } from "../../http/validate";
@@ -262,7 +264,8 @@ export function registerRouter(ctx: AppContext): Router {
         quarantine: entry.quarantine,
       });
     }
-    res.json({ animals });
+    const taxa = await req.em.find(TaxonSchema, { id: { $in: [...new Set(animals.map((a) => a.taxonId))] } });
+    res.json({ animals, taxa: taxa.map(presentTaxon) });
   });
 
   // Permits with their reporting year and the report due next.
