@@ -121,7 +121,11 @@ export async function seedBenchData(
        SELECT gen_random_uuid(), id, 0, ?, 1 + (random() * 4)::int, 'unknown', 'captive_bred' FROM transfer WHERE number LIKE 'HW-BENCH-%'`,
       [taxon.id],
     );
-    const reportPermitId = await seedRegister(conn, sender.organization!.id, sender.id, species);
+    // The register grows with the bulk rows: 100,000 entries and 500 report animals for the benchmark, a few for tests.
+    const reportPermitId = await seedRegister(conn, sender.organization!.id, sender.id, species, {
+      listEntries: bulkTransfers,
+      reportAnimals: Math.min(500, bulkTransfers),
+    });
     await conn.execute("ANALYZE");
     return { detailId: t.id, reportPermitId };
   } finally {
@@ -143,6 +147,7 @@ async function seedRegister(
   organizationId: string,
   userId: string,
   species: string[],
+  sizes: { listEntries: number; reportAnimals: number },
 ): Promise<string> {
   const [listTaxon, reportTaxon] = await Promise.all(
     [species[0]!, species[1]!].map(
@@ -155,8 +160,8 @@ async function seedRegister(
         count_in_care, status, created_at)
      SELECT gen_random_uuid(), ?, 'group', ?, 'unknown', 1 + g % 5, date '2026-06-01' - (g % 3000), 'purchase', 'Bench source ' || (g % 97),
         1 + g % 5, 'in_care', now()
-       FROM generate_series(1, 100000) g`,
-    [organizationId, listTaxon],
+       FROM generate_series(1, ?) g`,
+    [organizationId, listTaxon, sizes.listEntries],
   );
   await conn.execute(
     `INSERT INTO register_event (id, entry_id, organization_id, kind, "on", count, acquired_how, counterparty_name, recorded_by_name, created_at)
@@ -176,8 +181,8 @@ async function seedRegister(
         identifier, count_in_care, status, permit_ids, created_at)
      SELECT gen_random_uuid(), ?, 'group', ?, 'unknown', 100, date '2024-01-01' + (g % 200), 'purchase', 'Bench breeder', 'BENCH-' || g,
         100, 'in_care', ARRAY[?]::uuid[], now()
-       FROM generate_series(1, 500) g`,
-    [organizationId, reportTaxon, permitId],
+       FROM generate_series(1, ?) g`,
+    [organizationId, reportTaxon, permitId, sizes.reportAnimals],
   );
   await conn.execute(
     `INSERT INTO register_event (id, entry_id, organization_id, kind, "on", count, counterparty_name, counterparty_permit_number, recorded_by_name, created_at)
