@@ -15,7 +15,12 @@ import { queryCounter } from "./http/query-count";
 import { clientFiles } from "./http/client-files";
 import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
-import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
+import {
+  isRegisterImport,
+  REGISTER_IMPORT_TYPES,
+  registerCsvRoute,
+  registerRouter,
+} from "./routes/register/register.router";
 import { directoryRouter } from "./routes/directory/directory.router";
 import { complianceRouter } from "./routes/compliance/compliance.router";
 import { temperatureRouter } from "./routes/temperature/temperature.router";
@@ -53,8 +58,15 @@ export function createApp(input: AppContext | AppBase): Express {
   const onlyJson = requireJsonBody();
   const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
   const photoUploadBody = requireJsonBody(PHOTO_UPLOAD_TYPES);
+  const registerImportBody = requireJsonBody(REGISTER_IMPORT_TYPES);
   api.use((req, res, next) =>
-    (isScanUpload(req) ? scanUploadBody : isPhotoUpload(req) ? photoUploadBody : onlyJson)(req, res, next),
+    (isScanUpload(req)
+      ? scanUploadBody
+      : isPhotoUpload(req)
+        ? photoUploadBody
+        : isRegisterImport(req)
+          ? registerImportBody
+          : onlyJson)(req, res, next),
   );
   api.use(json);
   // One EntityManager per request (MikroORM's request context), forked on first use only; the
@@ -82,7 +94,7 @@ export function createApp(input: AppContext | AppBase): Express {
   api.use("/taxa", taxaRouter(ctx));
   api.use("/transfers", transfersRouter());
   api.use(registerCsvRoute());
-  api.use("/register", registerRouter());
+  api.use("/register", registerRouter(ctx));
   api.use("/directory", directoryRouter());
   api.use(complianceRouter(ctx));
   api.use(temperatureRouter(ctx));

@@ -281,6 +281,55 @@ export type ChainProblem = (typeof CHAIN_PROBLEMS)[number];
 export const REGISTER_CONDITIONS = ["well", "problem", "dead_on_arrival", "missing"] as const;
 export type RegisterCondition = (typeof REGISTER_CONDITIONS)[number];
 
+/** A register entry is one animal with its own identifiers, or a group counted together (a clutch). */
+export const REGISTER_ENTRY_KINDS = ["individual", "group"] as const;
+export type RegisterEntryKind = (typeof REGISTER_ENTRY_KINDS)[number];
+
+/**
+ * What can happen to animals in the register (issue 15 §1). Events are append-only: a correction
+ * is a new event that names the one it replaces (`voided` replaces it with nothing).
+ */
+export const REGISTER_EVENT_KINDS = [
+  "acquired",
+  "hatched",
+  "measured",
+  "died",
+  "euthanised",
+  "sold",
+  "given",
+  "transferred_out",
+  "loaned_out",
+  "loan_returned",
+  "escaped",
+  "released",
+  "missing_on_arrival",
+  "split_off",
+  "split_from",
+  "note",
+  "voided",
+] as const;
+export type RegisterEventKind = (typeof REGISTER_EVENT_KINDS)[number];
+
+/** How an acquired animal came to the keeper. */
+export const ACQUISITION_WAYS = ["transfer", "purchase", "gift", "loan_in", "rescue", "other"] as const;
+export type AcquisitionWay = (typeof ACQUISITION_WAYS)[number];
+
+/** Where an entry stands now, from its count and its last event that took animals out. */
+export const REGISTER_STATUSES = [
+  "in_care",
+  "died",
+  "transferred_out",
+  "on_loan",
+  "escaped_or_released",
+  "never_arrived",
+  "split",
+] as const;
+export type RegisterStatus = (typeof REGISTER_STATUSES)[number];
+
+/** The columns of a permit's yearly report, in the order a report reads them. */
+export const REPORT_COLUMNS = ["acquired", "hatched", "died", "transferredOut", "escapedOrReleased"] as const;
+export type ReportColumn = (typeof REPORT_COLUMNS)[number];
+
 /** Problems with the packing the sender resolves before sending for confirmation. */
 export const PACKING_FINDING_CODES = [
   "mixed_species",

@@ -158,3 +158,34 @@ export function documentExpiryMail(p: {
     ].join("\n"),
   };
 }
+
+/** A permit's yearly report is due soon (issue 15 §3): 30 and 7 days before. */
+export function permitReportDueMail(p: {
+  to: string;
+  name: string;
+  organization: string;
+  kind: string;
+  number: string;
+  from: string;
+  to_: string;
+  dueOn: string;
+  daysLeft: number;
+  link: string;
+}): MailDraft {
+  const due = formatDate(p.dueOn);
+  return {
+    to: p.to,
+    topic: "register.report-due",
+    subject: `Yearly report for ${p.kind.toLowerCase()} ${p.number} due ${due}`,
+    text: [
+      `Hello ${p.name},`,
+      "",
+      `The yearly report for the ${p.kind.toLowerCase()} no. ${p.number} held by ${p.organization} is due on ${due}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}.`,
+      `It covers ${formatDate(p.from)} to ${formatDate(p.to_)}. Hatchway prepares it from your register; check it against your own records and file it with the issuing agency, whose rules decide what it must hold.`,
+      "",
+      `The report: ${p.link}`,
+      "",
+      "— Hatchway",
+    ].join("\n"),
+  };
+}

@@ -39,7 +39,6 @@ import {
   PHOTO_SUBJECTS,
   type HandoffKind,
   type PackingFindingCode,
-  type RegisterCondition,
   type ViewerRole,
 } from "../constants";
 import type { ChainBreak, ChainHead, SealedEntry } from "../custody/hash-chain";
@@ -90,6 +89,8 @@ export const animalInputSchema = z.strictObject({
   notes: optionalText(2000),
   /** The `key` of the box it travels in; null until it is packed. */
   containerKey: text(64).nullable(),
+  /** The sender's register entry the line was started from (issue 15 §2); left out: unchanged. */
+  registerEntryId: idSchema.nullable().optional(),
 });
 export type AnimalInput = z.input<typeof animalInputSchema>;
 
@@ -327,14 +328,6 @@ export const transferListQuerySchema = z.strictObject({
   limit: z.coerce.number<string | number>().int().min(1).max(100).default(50),
 });
 export type TransferListQuery = z.input<typeof transferListQuerySchema>;
-
-export const registerQuerySchema = z.strictObject({
-  q: text(100).optional(),
-  taxonId: idSchema.optional(),
-  sex: z.enum(SEXES).optional(),
-  from: dateSchema.optional(),
-  to: dateSchema.optional(),
-});
 
 // ---------------------------------------------------------------- responses
 
@@ -680,22 +673,6 @@ export type TaxonSearchHitDto = TaxonBriefDto & {
   commonNames: string[];
   synonyms: string[];
   matched: { name: string; kind: "scientific" | "common" | "synonym" };
-};
-
-export type RegisterEntryDto = {
-  id: string;
-  taxon: TaxonBriefDto;
-  sex: Sex;
-  count: number;
-  identifier: string | null;
-  dateAcquired: string;
-  sourceOrganization: string;
-  transferNumber: string;
-  transferId: string;
-  condition: RegisterCondition;
-  notes: string | null;
-  /** The weight taken at check-in, in grams. */
-  weightG: number | null;
 };
 
 export type DirectoryOrganizationDto = {

@@ -6,6 +6,33 @@
 
 /** A field's own name, lower-case, as it reads after a group ("box 2 …") or at the start of a sentence. */
 export const FIELD_WORDS: Readonly<Record<string, string>> = {
+  // compliance responses walked by the vocabulary test (missing on main)
+  covered: "covered",
+  agency: "agency",
+  veterinarian: "veterinarian",
+  uncoveredBecause: "why it is not covered",
+  shipmentFindings: "findings for the whole shipment",
+  coverage: "rule coverage",
+  // the keeper's register (issue 15)
+  ids: "chosen animals",
+  registerEntryId: "register entry",
+  acquiredOn: "day acquired",
+  acquiredHow: "how it was acquired",
+  permitIds: "permits",
+  startQuarantine: "quarantine",
+  counterparty: "to or from whom",
+  permitNumber: "permit number",
+  cause: "cause",
+  corrects: "event corrected",
+  on: "date",
+  reportStartMonth: "first month of the reporting year",
+  reportDueMonth: "month the report is due",
+  reportDueDay: "day the report is due",
+  quarantineDays: "quarantine length in days",
+  species: "species",
+  permitId: "permit",
+  quarantine: "in quarantine",
+  format: "format",
   // people and organisations
   name: "name",
   kind: "kind",

@@ -17,3 +17,4 @@ export * from "./temperature";
 export * from "./transfer";
 export * from "./changes";
 export * from "./evidence";
+export * from "./register";

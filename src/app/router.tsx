@@ -86,6 +86,22 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: screen(() => import("@/features/courier/routes/courier-handoff"), "CourierHandoffRoute"),
         },
         { path: paths.register, lazy: screen(() => import("@/features/register/routes/register"), "RegisterRoute") },
+        {
+          path: paths.registerEntry.pattern,
+          lazy: screen(() => import("@/features/register/routes/register-entry"), "RegisterEntryRoute"),
+        },
+        {
+          path: paths.registerAdd,
+          lazy: screen(() => import("@/features/register/routes/register-add"), "RegisterAddRoute"),
+        },
+        {
+          path: paths.registerImport,
+          lazy: screen(() => import("@/features/register/routes/register-import"), "RegisterImportRoute"),
+        },
+        {
+          path: paths.registerReport,
+          lazy: screen(() => import("@/features/register/routes/register-report"), "RegisterReportRoute"),
+        },
         { path: paths.permits, lazy: screen(() => import("@/features/compliance/routes/documents"), "DocumentsRoute") },
         {
           path: paths.canItTravel,

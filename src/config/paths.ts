@@ -25,6 +25,13 @@ export const paths = {
     },
   },
   register: "/register",
+  registerEntry: {
+    pattern: "/register/entries/:entryId",
+    href: (entryId: string) => `/register/entries/${encodeURIComponent(entryId)}`,
+  },
+  registerAdd: "/register/add",
+  registerImport: "/register/import",
+  registerReport: "/register/report",
   /** The organisation's permits and certificates (the expiry e-mail links here). */
   permits: "/permits",
   canItTravel: "/can-it-travel",

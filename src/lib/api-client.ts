@@ -36,6 +36,8 @@ type Options = {
   body?: unknown;
   headers?: Record<string, string>;
   signal?: AbortSignal;
+  /** Send `body` (a string) as-is with this type instead of as JSON (the register's CSV import). */
+  contentType?: string;
 };
 
 export async function api<T>(path: string, options: Options = {}, retried = false): Promise<T> {
@@ -47,14 +49,19 @@ export async function api<T>(path: string, options: Options = {}, retried = fals
     ...options.headers,
   };
   if (method !== "GET") headers["X-CSRF-Token"] = await csrf();
-  if (options.body !== undefined) headers["Content-Type"] = "application/json";
+  if (options.body !== undefined) headers["Content-Type"] = options.contentType ?? "application/json";
   let response: Response;
   try {
     response = await fetch(path, {
       method,
       headers,
       credentials: "same-origin",
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body:
+        options.body === undefined
+          ? undefined
+          : options.contentType && typeof options.body === "string"
+            ? options.body
+            : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch {

@@ -61,6 +61,13 @@ export const PermitDocumentSchema = defineEntity({
       .onUpdate(() => new Date()),
     /** When the holder was told the document expires soon; cleared when validTo changes. */
     reminderSentAt: p.datetime().nullable(),
+    /** The first month of the permit's reporting year (1 = a calendar year); null: no yearly report. */
+    reportStartMonth: p.integer().nullable(),
+    reportDueMonth: p.integer().nullable(),
+    reportDueDay: p.integer().nullable(),
+    /** The due date the 30-day (7-day) reminder was sent for. */
+    reportReminded30For: p.date().nullable().fieldName("report_reminded_30_for"),
+    reportReminded7For: p.date().nullable().fieldName("report_reminded_7_for"),
   },
 });
 export type PermitDocument = InferEntity<typeof PermitDocumentSchema>;

@@ -14,7 +14,13 @@ import {
 import { CustodyEntrySchema } from "./custody-entry.entity";
 import { TransferAlertSchema } from "./transfer-alert.entity";
 import { DeliveryCodeSchema, TransferPhotoSchema } from "./custody-evidence.entity";
-import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
+import {
+  CheckInExtraSchema,
+  CheckInItemSchema,
+  CheckInSchema,
+  RegisterEntrySchema,
+  RegisterEventSchema,
+} from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
   ComplianceEvaluationSchema,
@@ -51,6 +57,7 @@ export {
   CheckInItemSchema,
   CheckInExtraSchema,
   RegisterEntrySchema,
+  RegisterEventSchema,
   IdempotencyKeySchema,
   TransferPhotoSchema,
   DeliveryCodeSchema,
@@ -76,6 +83,7 @@ export const ENTITIES = [
   CheckInItemSchema,
   CheckInExtraSchema,
   RegisterEntrySchema,
+  RegisterEventSchema,
   IdempotencyKeySchema,
   ComplianceRuleSchema,
   PermitDocumentSchema,

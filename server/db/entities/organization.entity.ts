@@ -15,6 +15,8 @@ export const OrganizationSchema = defineEntity({
     zip: p.string().length(10),
     phone: p.string().length(40),
     email: p.string().length(254),
+    /** Days new arrivals stay in quarantine (issue 15 §4; 60 by default [practice]). */
+    quarantineDays: p.integer().default(60),
     createdAt: createdAtProperty(),
   },
 });

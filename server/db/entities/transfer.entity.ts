@@ -118,6 +118,8 @@ export const AnimalSchema = defineEntity({
     weightG: double().nullable(),
     hatchDate: p.date().nullable(),
     notes: p.text().nullable(),
+    /** The sender's register entry this line was started from (issue 15 §2). */
+    registerEntryId: p.uuid().nullable(),
   },
 });
 export type Animal = InferEntity<typeof AnimalSchema>;

@@ -10,6 +10,7 @@ import { Migration20261202130100_custody_head } from "./Migration20261202130100_
 import { Migration20261202130200_jurisdiction_coverage } from "./Migration20261202130200_jurisdiction_coverage";
 import { Migration20261202140000_custody_evidence } from "./Migration20261202140000_custody_evidence";
 import { Migration20261203100000_exposure } from "./Migration20261203100000_exposure";
+import { Migration20261204100000_register_ledger } from "./Migration20261204100000_register_ledger";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -22,4 +23,5 @@ export const MIGRATIONS = [
   { name: "Migration20261202130200_jurisdiction_coverage", class: Migration20261202130200_jurisdiction_coverage },
   { name: "Migration20261202140000_custody_evidence", class: Migration20261202140000_custody_evidence },
   { name: "Migration20261203100000_exposure", class: Migration20261203100000_exposure },
+  { name: "Migration20261204100000_register_ledger", class: Migration20261204100000_register_ledger },
 ];

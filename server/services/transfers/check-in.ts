@@ -5,12 +5,8 @@ import type { checkInInputSchema } from "@shared/schemas/transfer";
 import { computeDiscrepancies, outcomeTotal } from "@shared/checkin/discrepancy";
 import type { Actor } from "../../auth/actor";
 import { AnimalSchema } from "../../db/entities/transfer.entity";
-import {
-  CheckInExtraSchema,
-  CheckInItemSchema,
-  CheckInSchema,
-  RegisterEntrySchema,
-} from "../../db/entities/check-in.entity";
+import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema } from "../../db/entities/check-in.entity";
+import { recordArrivals } from "../register/arrivals";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
@@ -118,8 +114,8 @@ export async function checkInTransfer({
       notes: input.notes ?? null,
     });
     const sender = await tx.findOneOrFail(OrganizationSchema, { id: t.senderOrganization.id });
-    const receiverOrg = tx.getReference(OrganizationSchema, t.receiverOrganization.id);
-    const dateAcquired = signedAt.toISOString().slice(0, 10);
+    const receiverOrg = await tx.findOneOrFail(OrganizationSchema, { id: t.receiverOrganization.id });
+    const arrivedOn = signedAt.toISOString().slice(0, 10);
     for (const item of input.items) {
       const animal = byId.get(item.animalId)!;
       tx.create(CheckInItemSchema, {
@@ -133,33 +129,38 @@ export async function checkInTransfer({
         weightG: item.weightG ?? null,
         notes: item.notes ?? null,
       });
-      // Accepted animals enter the register; losses go in too, as entries that record the loss,
-      // so the register accounts for every animal on the manifest (CITES Rp/3 1.72, 1.82).
-      for (const [condition, count] of [
-        ["well", item.arrivedWell],
-        ["problem", item.arrivedProblem],
-        ["dead_on_arrival", item.deadOnArrival],
-        ["missing", item.missing],
-      ] as const) {
-        if (count === 0) continue;
-        tx.create(RegisterEntrySchema, {
-          organization: receiverOrg,
-          taxon: animal.taxon,
-          sex: animal.sex,
-          count,
-          identifier: animal.identifier ?? null,
-          dateAcquired,
-          sourceOrganization: sender,
-          sourceOrganizationName: sender.name,
-          transfer: t,
-          transferNumber: t.number,
-          animal,
-          condition,
-          notes: registerNotes(condition, item, input.notes ?? null),
-          weightG: item.weightG ?? null,
-        });
-      }
     }
+    // Every animal enters the register, losses too, so it accounts for every animal on the
+    // manifest (CITES Rp/3 1.72, 1.82); lines started from the sender's register continue it.
+    const departed = await tx.getConnection().execute<{ on: string }[]>(
+      `SELECT to_char(at AT TIME ZONE 'UTC', 'YYYY-MM-DD') AS "on" FROM custody_entry
+        WHERE transfer_id = ? AND kind = 'status_change' AND payload->>'to' = 'in_transit' ORDER BY seq LIMIT 1`,
+      [t.id],
+    );
+    await recordArrivals(tx, {
+      actor,
+      transfer: t,
+      sender,
+      receiver: receiverOrg,
+      arrivedOn,
+      departedOn: departed[0]?.on ?? null,
+      lines: input.items.map((item) => ({
+        animal: byId.get(item.animalId)!,
+        counts: {
+          well: item.arrivedWell,
+          problem: item.arrivedProblem,
+          dead_on_arrival: item.deadOnArrival,
+          missing: item.missing,
+        },
+        notes: {
+          well: registerNotes("well", item, input.notes ?? null),
+          problem: registerNotes("problem", item, input.notes ?? null),
+          dead_on_arrival: registerNotes("dead_on_arrival", item, input.notes ?? null),
+          missing: registerNotes("missing", item, input.notes ?? null),
+        },
+        weightG: item.weightG ?? null,
+      })),
+    });
     for (const e of input.extras)
       tx.create(CheckInExtraSchema, {
         checkIn,

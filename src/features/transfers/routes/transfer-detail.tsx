@@ -20,6 +20,7 @@ import { HistorySection } from "../components/history-section";
 import { LegsSection } from "../components/legs-section";
 import { OverviewSection } from "../components/overview-section";
 import { PackingSection } from "../components/packing-section";
+import { StateNoticesSection } from "../components/state-notices-section";
 
 type Props = {
   /**
@@ -108,6 +109,7 @@ export function TransferDetailRoute({ checks, arrival }: Props) {
         </Notice>
       ) : null}
       <AlertsSection transfer={t} />
+      <StateNoticesSection transfer={t} />
       <DeliverySection transfer={t} />
       <ActionsBar transfer={t} />
       <PaperworkLinks transferId={t.id} />
