@@ -6,13 +6,6 @@
 
 /** A field's own name, lower-case, as it reads after a group ("box 2 …") or at the start of a sentence. */
 export const FIELD_WORDS: Readonly<Record<string, string>> = {
-  // compliance responses walked by the vocabulary test (missing on main)
-  covered: "covered",
-  agency: "agency",
-  veterinarian: "veterinarian",
-  uncoveredBecause: "why it is not covered",
-  shipmentFindings: "findings for the whole shipment",
-  coverage: "rule coverage",
   // the keeper's register (issue 15)
   ids: "chosen animals",
   registerEntryId: "register entry",
