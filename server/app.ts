@@ -17,11 +17,17 @@ import { queryCounter } from "./http/query-count";
 import { clientFiles } from "./http/client-files";
 import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
-import { registerCsvRoute, registerRouter } from "./routes/register/register.router";
+import {
+  isRegisterImport,
+  REGISTER_IMPORT_TYPES,
+  registerCsvRoute,
+  registerRouter,
+} from "./routes/register/register.router";
 import { directoryRouter } from "./routes/directory/directory.router";
 import { complianceRouter } from "./routes/compliance/compliance.router";
 import { temperatureRouter } from "./routes/temperature/temperature.router";
 import { isScanUpload, SCAN_UPLOAD_TYPES } from "./routes/documents/scan-upload";
+import { isPhotoUpload, PHOTO_UPLOAD_TYPES } from "./routes/transfers/photo-upload";
 
 /**
  * Builds the Express app (no listen): the API under /api and the built client for everything else.
@@ -53,7 +59,17 @@ export function createApp(input: AppContext | AppBase): Express {
   const json = jsonBody();
   const onlyJson = requireJsonBody();
   const scanUploadBody = requireJsonBody(SCAN_UPLOAD_TYPES);
-  api.use((req, res, next) => (isScanUpload(req) ? scanUploadBody : onlyJson)(req, res, next));
+  const photoUploadBody = requireJsonBody(PHOTO_UPLOAD_TYPES);
+  const registerImportBody = requireJsonBody(REGISTER_IMPORT_TYPES);
+  api.use((req, res, next) =>
+    (isScanUpload(req)
+      ? scanUploadBody
+      : isPhotoUpload(req)
+        ? photoUploadBody
+        : isRegisterImport(req)
+          ? registerImportBody
+          : onlyJson)(req, res, next),
+  );
   api.use(json);
   // One EntityManager per request (MikroORM's request context), forked on first use only; the
   // getter lives on this app's request prototype, so a request that needs no ORM pays nothing.
@@ -82,7 +98,7 @@ export function createApp(input: AppContext | AppBase): Express {
   api.use("/taxa", taxaRouter(ctx));
   api.use("/transfers", transfersRouter());
   api.use(registerCsvRoute());
-  api.use("/register", registerRouter());
+  api.use("/register", registerRouter(ctx));
   api.use("/directory", directoryRouter());
   api.use(complianceRouter(ctx));
   api.use(temperatureRouter(ctx));

@@ -108,7 +108,11 @@ describe("two apps built in one process", () => {
     expect(await countRows(a, "temperature_check", cast.transfer.id)).toBe(1);
     const custody = (await (await signIn(a.app, cast.receiver.email)).get(`/api/transfers/${cast.transfer.id}/custody`))
       .body.entries as { kind: string; payload: Record<string, unknown> }[];
-    expect(custody.filter((e) => e.kind === "override").map((e) => e.payload.gate)).toEqual(["temperature"]);
+    // In gate order: the acknowledged "unverified" rules check (no state on the route is reviewed), then the temperature.
+    expect(custody.filter((e) => e.kind === "override").map((e) => e.payload.gate)).toEqual([
+      "compliance",
+      "temperature",
+    ]);
     expect(custody.some((e) => e.kind === "checks_skipped")).toBe(false);
     // B's gates never saw A's transfer.
     expect(seenByB.filter((s) => s.endsWith(cast.transfer.id))).toEqual([]);
@@ -140,7 +144,7 @@ describe("two apps built in one process", () => {
   });
 
   it("each app stores files through its own storage adapter", async () => {
-    // A real one-page PDF: the upload opens every scan (D21), so a bare header is refused.
+    // A real one-page PDF: the server opens every scan (D21).
     const pdf = await pdfWithPages(1);
     const user = await buildUser(a.orm.em.fork());
     const permit = {

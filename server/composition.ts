@@ -14,6 +14,7 @@ import type { Adapters, AppBase, AppContext } from "./context";
 import { createLinks } from "./mail/links";
 import { complianceGate } from "./services/compliance/gate";
 import { expiryReminderTask } from "./services/compliance/expiry-reminders";
+import { reportReminderTask } from "./services/register/report-reminders";
 import { manifestDocuments } from "./services/compliance/manifest-documents";
 import { createOutboxWorker } from "./services/outbox";
 import type { ScheduledTask } from "./services/scheduler";
@@ -61,6 +62,7 @@ export function composeApp(base: AppBase, options: CompositionOptions = {}): App
   const manifestExtras: readonly ManifestExtrasProvider[] = Object.freeze([manifestDocuments, manifestTemperature]);
   const scheduledTasks: readonly ScheduledTask[] = Object.freeze([
     expiryReminderTask,
+    reportReminderTask,
     TEMPERATURE_RECHECK_TASK,
     FORECAST_PRUNE_TASK,
   ]);

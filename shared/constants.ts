@@ -195,6 +195,10 @@ export const LIMITS = {
   animalsPerTransferMax: 1000,
   containersPerTransferMax: 200,
   uploadBytesMax: 10 * 1024 * 1024,
+  /** A photo from a phone camera (a 12-megapixel JPEG is 2–5 MB). */
+  photoBytesMax: 10 * 1024 * 1024,
+  /** Photos one transfer keeps in all (pickup, handoffs, check-in). */
+  photosPerTransferMax: 200,
 } as const;
 
 /** Where a transfer is in its life, in order. */
@@ -252,6 +256,10 @@ export const CUSTODY_KINDS = [
   "alert_raised",
   /** A party saw an alert and said so, with a note; the alert itself stays. */
   "alert_acknowledged",
+  /** The receiver said "I have the boxes" for a delivery the courier recorded (own account or one-time code). */
+  "delivery_acknowledged",
+  /** A photo taken at a handoff or at the check-in, stored with its SHA-256. */
+  "photo_added",
 ] as const;
 export type CustodyKind = (typeof CUSTODY_KINDS)[number];
 
@@ -295,9 +303,61 @@ export const CHAIN_PROBLEMS = [
 ] as const;
 export type ChainProblem = (typeof CHAIN_PROBLEMS)[number];
 
-/** How an animal accepted into the register arrived. */
-export const REGISTER_CONDITIONS = ["well", "problem"] as const;
+/**
+ * How an animal entered the register at check-in: accepted (well, or with a problem), or a loss
+ * recorded at arrival (dead on arrival, missing), so the register shows every animal sent.
+ */
+export const REGISTER_CONDITIONS = ["well", "problem", "dead_on_arrival", "missing"] as const;
 export type RegisterCondition = (typeof REGISTER_CONDITIONS)[number];
+
+/** A register entry is one animal with its own identifiers, or a group counted together (a clutch). */
+export const REGISTER_ENTRY_KINDS = ["individual", "group"] as const;
+export type RegisterEntryKind = (typeof REGISTER_ENTRY_KINDS)[number];
+
+/**
+ * What can happen to animals in the register (issue 15 §1). Events are append-only: a correction
+ * is a new event that names the one it replaces (`voided` replaces it with nothing).
+ */
+export const REGISTER_EVENT_KINDS = [
+  "acquired",
+  "hatched",
+  "measured",
+  "died",
+  "euthanised",
+  "sold",
+  "given",
+  "transferred_out",
+  "loaned_out",
+  "loan_returned",
+  "escaped",
+  "released",
+  "missing_on_arrival",
+  "split_off",
+  "split_from",
+  "note",
+  "voided",
+] as const;
+export type RegisterEventKind = (typeof REGISTER_EVENT_KINDS)[number];
+
+/** How an acquired animal came to the keeper. */
+export const ACQUISITION_WAYS = ["transfer", "purchase", "gift", "loan_in", "rescue", "other"] as const;
+export type AcquisitionWay = (typeof ACQUISITION_WAYS)[number];
+
+/** Where an entry stands now, from its count and its last event that took animals out. */
+export const REGISTER_STATUSES = [
+  "in_care",
+  "died",
+  "transferred_out",
+  "on_loan",
+  "escaped_or_released",
+  "never_arrived",
+  "split",
+] as const;
+export type RegisterStatus = (typeof REGISTER_STATUSES)[number];
+
+/** The columns of a permit's yearly report, in the order a report reads them. */
+export const REPORT_COLUMNS = ["acquired", "hatched", "died", "transferredOut", "escapedOrReleased"] as const;
+export type ReportColumn = (typeof REPORT_COLUMNS)[number];
 
 /** Problems with the packing the sender resolves before sending for confirmation. */
 export const PACKING_FINDING_CODES = [
@@ -344,3 +404,54 @@ export const WEATHER_SCENARIOS = [
   "redirect",
 ] as const;
 export type WeatherScenario = (typeof WEATHER_SCENARIOS)[number];
+
+/** The plausibility checks of a handoff that need a reason from the person recording it when they fail. */
+export const HANDOFF_REASON_KEYS = ["earlyPickup", "implausibleSpeed", "unexpectedParty"] as const;
+export type HandoffReasonKey = (typeof HANDOFF_REASON_KEYS)[number];
+
+/** When a photo was taken: at a handoff (the pickup is handoff 0) or at the arrival check-in. */
+export const PHOTO_MOMENTS = ["handoff", "check_in"] as const;
+export type PhotoMoment = (typeof PHOTO_MOMENTS)[number];
+
+/** What a photo shows. */
+export const PHOTO_SUBJECTS = ["box_outside", "seal", "animal", "other"] as const;
+export type PhotoSubject = (typeof PHOTO_SUBJECTS)[number];
+
+/**
+ * Where the delivery to the receiver stands. A delivery recorded by the courier alone waits for
+ * the receiver's acknowledgement; the transfer stays "on the road" until it comes (DEVELOPERS.md D18).
+ */
+export const DELIVERY_STATES = ["awaiting_receiver", "acknowledged"] as const;
+export type DeliveryState = (typeof DELIVERY_STATES)[number];
+
+/** How the receiver acknowledged a delivery. */
+export const DELIVERY_ACKNOWLEDGEMENT_WAYS = ["recorded_by_receiver", "receiver_account", "one_time_code"] as const;
+export type DeliveryAcknowledgementWay = (typeof DELIVERY_ACKNOWLEDGEMENT_WAYS)[number];
+
+/**
+ * What surrounds the box in an hour of the trip: the outside air (loading, a doorstep), a
+ * vehicle held in its set range, an unconditioned vehicle on the move, a closed vehicle parked in
+ * sun or shade, a carrier's building (sort hub, station, the aircraft hold), or a home or facility.
+ */
+export const EXPOSURES = [
+  "outdoors",
+  "vehicle_climate_controlled",
+  "vehicle_unconditioned",
+  "parked_sun",
+  "parked_shade",
+  "carrier_building",
+  "indoors",
+] as const;
+export type Exposure = (typeof EXPOSURES)[number];
+
+/** How a vehicle's air is held: in a set range, or not at all. */
+export const VEHICLE_CONDITIONINGS = ["climate_controlled", "unconditioned"] as const;
+export type VehicleConditioning = (typeof VEHICLE_CONDITIONINGS)[number];
+
+/** Where the vehicle waits during a planned stop: in the sun, in shade, or indoors (the box is taken in). */
+export const PARKED_KINDS = ["sun", "shade", "indoors"] as const;
+export type ParkedKind = (typeof PARKED_KINDS)[number];
+
+/** Where a box temperature was read: at a handoff of the custody chain, or at the check-in. */
+export const READING_SOURCES = ["pickup", "handoff", "delivery", "check_in"] as const;
+export type ReadingSource = (typeof READING_SOURCES)[number];

@@ -119,3 +119,61 @@ export function formatAxisHour(at: string | number | Date, timeZone?: string | n
   }
   return format.format(date).replace(",", "");
 }
+
+/**
+ * A span of time in words, rounded to what matters at that size: "45 s", "12 min", "5 h 20 min",
+ * "12 days 3 h". Negative spans read as their size (the sentence says before or after).
+ */
+export function formatDuration(durationMs: number): string {
+  const seconds = Math.round(Math.abs(durationMs) / 1000);
+  if (seconds < 60) return `${seconds} s`;
+  const minutes = Math.round(seconds / 60);
+  if (minutes < 60) return `${minutes} min`;
+  const hours = Math.floor(minutes / 60);
+  if (hours < 48) return minutes % 60 ? `${hours} h ${minutes % 60} min` : `${hours} h`;
+  const days = Math.floor(hours / 24);
+  return hours % 24 ? `${days} days ${hours % 24} h` : `${days} days`;
+}
+
+const clockFormats = new Map<string, Intl.DateTimeFormat>();
+
+function clockFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = clockFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      hour: "2-digit",
+      minute: "2-digit",
+      hourCycle: "h23",
+      timeZoneName: "short",
+    });
+    clockFormats.set(timeZone, format);
+  }
+  return format;
+}
+
+/**
+ * A stretch of time in one zone: "Tue, Jun 2, 2026, 12:30–13:30 EDT" within a day, else both ends
+ * in full ("Tue, Jun 2, 2026, 22:00 EDT – Wed, Jun 3, 2026, 06:00 EDT").
+ */
+export function formatTimeSpan(
+  from: string | number | Date,
+  to: string | number | Date,
+  timeZone?: string | null,
+): string {
+  const start = toDate(from);
+  const end = toDate(to);
+  if (!start || !end) return "—";
+  const zone = knownZone(timeZone) ?? runtimeZone();
+  if (formatInstantDate(start, zone) !== formatInstantDate(end, zone))
+    return `${formatInstant(start, zone)} – ${formatInstant(end, zone)}`;
+  const endParts = clockFormat(zone).formatToParts(end);
+  const clock = (parts: Intl.DateTimeFormatPart[]) =>
+    parts
+      .filter((p) => p.type === "hour" || p.type === "minute" || p.type === "literal")
+      .map((p) => p.value)
+      .join("")
+      .trim();
+  const zoneName = endParts.find((p) => p.type === "timeZoneName")?.value ?? "";
+  return `${formatInstantDate(start, zone)}, ${clock(clockFormat(zone).formatToParts(start))}–${clock(endParts)} ${zoneName}`.trim();
+}

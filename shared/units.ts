@@ -98,10 +98,20 @@ export function tempUnit(system: UnitSystem): "°F" | "°C" {
 // Inches need two decimals to stay within a quarter of a millimetre; mm and degrees one.
 const digits = { in: 2, mm: 1, "°F": 1, "°C": 1 } as const;
 
+// Building an Intl formatter costs far more than using one (a trip's labels format dozens of
+// distances per assessment): one per setting, kept.
+const numberFormats = new Map<string, Intl.NumberFormat>();
+
 function numberText(value: number, maxDigits: number, grouping: boolean): string {
   // "-0" reads as a mistake; a value that rounds to zero is zero.
   const shown = Object.is(Math.round(value * 10 ** maxDigits), -0) ? 0 : value;
-  return new Intl.NumberFormat("en-US", { maximumFractionDigits: maxDigits, useGrouping: grouping }).format(shown);
+  const key = `${maxDigits}:${grouping}`;
+  let format = numberFormats.get(key);
+  if (!format) {
+    format = new Intl.NumberFormat("en-US", { maximumFractionDigits: maxDigits, useGrouping: grouping });
+    numberFormats.set(key, format);
+  }
+  return format.format(shown);
 }
 
 /** A stored length (mm) as the number shown in the chosen system, rounded for display. */
@@ -230,6 +240,16 @@ export function formatDimensionsBoth(lengthMm: number, widthMm: number, heightMm
 /** "350 g (12.3 oz)". */
 export function formatWeightBoth(weightG: number): string {
   return `${Math.round(weightG)} g (${gToOz(weightG).toFixed(1)} oz)`;
+}
+
+/** "2,162 mi (3,480 km)": a distance where the reader's units are not known (alerts, e-mail), miles first. */
+export function formatDistanceBoth(distanceKm: number): string {
+  return `${formatDistance(distanceKm, "imperial")} (${formatDistance(distanceKm, "metric")})`;
+}
+
+/** "80 mph (129 km/h)" for an average speed given in mph, whole units. */
+export function formatSpeedBoth(speedMph: number): string {
+  return `${numberText(speedMph, 0, true)} mph (${numberText(milesToKm(speedMph), 0, true)} km/h)`;
 }
 
 // ---------------------------------------------------------------- inputs

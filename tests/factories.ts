@@ -159,8 +159,34 @@ export async function transferInput(
   };
 }
 
-/** The reason test fixtures give when they confirm past the temperature gate. */
-export const FIXTURE_OVERRIDE = "Test fixture: the temperature check is not under test here.";
+/**
+ * The reason test fixtures give when they confirm past the temperature gate and past an unverified
+ * compliance verdict (a state on the route with no reviewed rules).
+ */
+export const FIXTURE_OVERRIDE =
+  "Test fixture: the temperature check and the unreviewed states are not under test here.";
+
+/**
+ * Records a review of the library's rules for each jurisdiction named ("all": every one), as an
+ * administrator would on the coverage screen; null withdraws the reviews. Tests of a "clear"
+ * verdict need every jurisdiction on the route reviewed (and free of demo rules).
+ */
+export async function markReviewed(
+  em: EntityManager,
+  jurisdictions: readonly string[] | "all",
+  reviewedOn: string | null = "2026-12-01",
+): Promise<void> {
+  const reviewer = reviewedOn === null ? null : "Test reviewer";
+  if (jurisdictions === "all") {
+    await em.execute("UPDATE jurisdiction_coverage SET reviewed_on = ?, reviewed_by = ?", [reviewedOn, reviewer]);
+    return;
+  }
+  await em.execute("UPDATE jurisdiction_coverage SET reviewed_on = ?, reviewed_by = ? WHERE jurisdiction IN (?)", [
+    reviewedOn,
+    reviewer,
+    [...jurisdictions],
+  ]);
+}
 
 export type TransferCast = { transfer: Transfer; sender: User; receiver: User; couriers: User[] };
 
@@ -193,6 +219,11 @@ export async function buildTransfer(
     mode?: TransferInputParsed["mode"];
     /** The app whose gates and links the steps use; FIXTURE_WIRING when not named. */
     app?: FixtureWiring;
+    /**
+     * Days until the planned departure. By default 3, or 12 hours for a transfer cleared to travel,
+     * so a pickup recorded "now" is not an early pickup (more than 24 h before it needs a reason).
+     */
+    daysAhead?: number;
   } = {},
 ): Promise<TransferCast> {
   const { links, readyGates: gates } = options.app ?? FIXTURE_WIRING;
@@ -209,9 +240,14 @@ export async function buildTransfer(
   await em.populate(receiver, ["organization"]);
   const s = await actorOf(em, sender);
   const r = await actorOf(em, receiver);
-  const input = await transferInput(em, receiver.organization!.id, { animals: options.animals, mode: options.mode });
-  let transfer = await createTransfer({ em: em.fork(), actor: s, input });
   const target = options.status ?? "draft";
+  const cleared = ["ready", "in_transit", "delivered", "checked_in", "closed"].includes(target);
+  const input = await transferInput(em, receiver.organization!.id, {
+    animals: options.animals,
+    mode: options.mode,
+    daysAhead: options.daysAhead ?? (cleared ? 0.5 : 3),
+  });
+  let transfer = await createTransfer({ em: em.fork(), actor: s, input });
   const order: TransferStatus[] = [
     "draft",
     "awaiting_receiver",
@@ -261,14 +297,17 @@ export async function buildTransfer(
     });
   }
   const containers = await em.fork().find(ContainerSchema, { transfer: transfer.id });
+  // Every handoff at the origin's position, between the people assigned: the fixture's handoffs
+  // come seconds apart, and anything else would be an implausible speed or an unexpected party.
+  const names = [sender.displayName, ...couriers.map((c) => c.displayName), receiver.displayName];
   const handoff = (index: number) => ({
     handoffIndex: index,
     boxesCounted: containers.length,
     seals: containers.map((c) => ({ containerId: c.id, sealNumber: c.sealNumber ?? null, intact: true })),
     boxTempF: 72,
-    place: { text: "Test depot" },
-    releasedByName: "Releaser",
-    receivedByName: "Receiver",
+    place: { text: "Test depot", lat: transfer.originLat ?? null, lon: transfer.originLon ?? null, accuracyM: 10 },
+    releasedByName: names[index]!,
+    receivedByName: names[index + 1]!,
     acknowledged: true as const,
   });
   if (reach("in_transit"))

@@ -1,3 +1,5 @@
+import { clearSkyHourMeanWm2 } from "../../shared/temperature/solar";
+
 /**
  * Deterministic, plausible air temperatures for the Open-Meteo fake: a seasonal mean by
  * latitude, a daily cycle by local solar time and a slow "weather" wobble, all in °C.
@@ -39,4 +41,25 @@ export function fakeTemperatureC(latDeg: number, lonDeg: number, unixS: number, 
   const wobble =
     2.5 * Math.sin((2 * Math.PI * days) / 5.3 + phase) + 1.2 * Math.sin((2 * Math.PI * days) / 2.9 + 2 * phase);
   return meanC + season + daily + wobble + shiftC;
+}
+
+/**
+ * Shortwave radiation (global horizontal, W/m²) as the mean of the hour that ends at `hourEndS`
+ * (Unix s), the way Open-Meteo reports `shortwave_radiation`: the clear-sky value for the sun's
+ * position at that place and season (Haurwitz; see shared/temperature/solar.ts), dimmed by a
+ * slow, deterministic cloudiness between 45 % and 100 % of clear sky. Zero at night. Fake data.
+ * `clearSkies` (a heat wave's high pressure) keeps the cloudiness at its thinnest.
+ */
+export function fakeShortwaveRadiationWm2(
+  latDeg: number,
+  lonDeg: number,
+  hourEndS: number,
+  clearSkies = false,
+): number {
+  const clear = clearSkyHourMeanWm2(latDeg, lonDeg, hourEndS * 1000);
+  if (clear === 0) return 0;
+  const days = hourEndS / DAY_S;
+  const phase = latDeg * 0.53 + lonDeg * 0.17;
+  const cloudiness = clearSkies ? 0 : 0.5 + 0.5 * Math.sin((2 * Math.PI * days) / 3.7 + phase);
+  return Math.round(clear * (1 - 0.55 * cloudiness) * 10) / 10;
 }

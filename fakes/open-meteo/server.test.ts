@@ -110,8 +110,34 @@ describe("the Open-Meteo fake, read by the real openmeteo client", () => {
       /Latitude must be in range/,
     );
     await expect(fetchWeatherApi(forecastUrl(), { ...params, hourly: "wind_speed_10m" }, 1)).rejects.toThrow(
-      /temperature_2m only/,
+      /temperature_2m and shortwave_radiation only/,
     );
+  });
+
+  it("serves shortwave_radiation beside the temperature, in W/m², zero at night and highest near solar noon", async () => {
+    const responses = await fetchWeatherApi(
+      forecastUrl(),
+      { ...params, hourly: "temperature_2m,shortwave_radiation" },
+      1,
+    );
+    const hourly = responses[0]!.hourly()!;
+    expect(hourly.variablesLength()).toBe(2);
+    // the service answers the variables in the order asked (Open-Meteo API documentation) [memory]
+    expect(hourly.variables(0)!.variable()).toBe(Variable.temperature);
+    const radiation = hourly.variables(1)!;
+    expect(radiation.variable()).toBe(Variable.shortwave_radiation);
+    expect(radiation.unit()).toBe(Unit.watt_per_square_metre);
+    const values = Array.from(radiation.valuesArray()!);
+    expect(values).toHaveLength(24);
+    // Nashville (86.67° W) in mid-July: solar noon near 18:55 UTC, night from about 01:00 to
+    // 11:00 UTC (NOAA solar calculator for 36° N in July: sunrise ≈ 05:45, sunset ≈ 20:00 local
+    // solar time) [memory]; the value at an hour is the mean of the hour before it
+    for (const hour of [3, 6, 9]) expect(values[hour]).toBe(0);
+    const brightest = values.indexOf(Math.max(...values));
+    expect([18, 19, 20]).toContain(brightest);
+    // at most the clear-sky value, which is about 1,000 W/m² at a high summer sun (Haurwitz 1945) [published]
+    expect(Math.max(...values)).toBeGreaterThan(400);
+    expect(Math.max(...values)).toBeLessThan(1100);
   });
 });
 

@@ -1,7 +1,8 @@
 /**
  * A local stand-in for the Open-Meteo forecast API: a real HTTP server that answers
  * GET /v1/forecast in the FlatBuffers format the `openmeteo` client asks for, with
- * deterministic, plausible hourly temperature_2m values (fake data: see climate.ts).
+ * deterministic, plausible hourly temperature_2m and shortwave_radiation values (fake data: see
+ * climate.ts).
  * Scenarios let a test or the demo choose a heat wave, a cold snap or a failure. It records
  * every request it receives. Standalone: node --import tsx fakes/open-meteo/server.ts --port 4102
  */
@@ -13,7 +14,7 @@ import { Unit } from "@openmeteo/sdk/unit.js";
 import { Variable } from "@openmeteo/sdk/variable.js";
 import { WEATHER_SCENARIOS, type WeatherScenario } from "../../shared/constants";
 import { cToF } from "../../shared/units";
-import { SCENARIO_SHIFT_C, fakeTemperatureC } from "./climate";
+import { SCENARIO_SHIFT_C, fakeShortwaveRadiationWm2, fakeTemperatureC } from "./climate";
 import { encodeLocation, encodeResponse, type LocationResponse } from "./flatbuffers-response";
 
 export { WEATHER_SCENARIOS, type WeatherScenario };
@@ -116,15 +117,21 @@ function parseHours(query: URLSearchParams): { startS: number; endS: number } {
   return range;
 }
 
-function hourlyVariables(query: URLSearchParams): void {
+/** Hourly variables the fake serves, in the order the real service answers them: the order asked. */
+const SERVED_VARIABLES = ["temperature_2m", "shortwave_radiation"] as const;
+type ServedVariable = (typeof SERVED_VARIABLES)[number];
+
+function hourlyVariables(query: URLSearchParams): ServedVariable[] {
   const hourly = (query.get("hourly") ?? "").split(",").filter(Boolean);
-  if (hourly.length !== 1 || hourly[0] !== "temperature_2m")
-    throw new RequestError("The fake serves hourly=temperature_2m only");
+  const served = (name: string): name is ServedVariable => (SERVED_VARIABLES as readonly string[]).includes(name);
+  if (hourly.length === 0 || !hourly.every(served) || new Set(hourly).size !== hourly.length)
+    throw new RequestError("The fake serves hourly=temperature_2m and shortwave_radiation only");
+  return hourly;
 }
 
 /** Builds the locations of a forecast answer; `spoil` lets the garbage scenario bend the values. */
 function forecastLocations(query: URLSearchParams, shiftC: number, spoil?: GarbageKind): LocationResponse[] {
-  hourlyVariables(query);
+  const asked = hourlyVariables(query);
   const coordinates = parseCoordinates(query);
   const { startS, endS } = parseHours(query);
   const fahrenheit = query.get("temperature_unit") === "fahrenheit";
@@ -132,13 +139,27 @@ function forecastLocations(query: URLSearchParams, shiftC: number, spoil?: Garba
   return coordinates.map(({ lat, lon }, locationId) => {
     const gridLat = Math.round(lat / GRID_DEG) * GRID_DEG;
     const gridLon = Math.round(lon / GRID_DEG) * GRID_DEG;
-    const values = Array.from({ length: hours }, (_, i) => {
-      if (spoil === "nan_values") return Number.NaN;
-      if (spoil === "absurd_values") return 999;
+    const spoilt = (value: number) => (spoil === "nan_values" ? Number.NaN : spoil === "absurd_values" ? 999 : value);
+    const temperatures = Array.from({ length: hours }, (_, i) => {
       const tempC = fakeTemperatureC(gridLat, gridLon, startS + i * HOUR_S, shiftC);
-      return fahrenheit ? cToF(tempC) : tempC;
+      return spoilt(fahrenheit ? cToF(tempC) : tempC);
     });
     const unit = fahrenheit !== (spoil === "wrong_unit") ? Unit.fahrenheit : Unit.celsius;
+    // The value at an hour is the mean of the hour before it, as the service reports it.
+    const radiation = () =>
+      Array.from({ length: hours }, (_, i) =>
+        spoilt(fakeShortwaveRadiationWm2(gridLat, gridLon, startS + i * HOUR_S, shiftC > 0)),
+      );
+    const variables = asked.map((name) =>
+      name === "temperature_2m"
+        ? { variable: Variable.temperature, unit, altitude: 2, values: temperatures }
+        : {
+            variable: Variable.shortwave_radiation,
+            unit: Unit.watt_per_square_metre,
+            altitude: 0,
+            values: radiation(),
+          },
+    );
     return {
       latitude: gridLat,
       longitude: gridLon,
@@ -151,7 +172,7 @@ function forecastLocations(query: URLSearchParams, shiftC: number, spoil?: Garba
         timeS: startS,
         timeEndS: startS + hours * HOUR_S,
         intervalS: HOUR_S,
-        variables: [{ variable: Variable.temperature, unit, altitude: 2, values }],
+        variables,
       },
     };
   });

@@ -23,7 +23,7 @@ export async function seedBenchData(
   databaseUrl: string,
   publicUrl: string,
   bulkTransfers = 100_000,
-): Promise<{ detailId: string }> {
+): Promise<{ detailId: string; reportPermitId: string }> {
   const orm = await initORM(databaseUrl, { poolMax: 4 });
   const links = createLinks(publicUrl);
   const gates = gatesForLoadedData("bench");
@@ -97,6 +97,7 @@ export async function seedBenchData(
           acknowledged: true,
         } as never,
         links,
+        checks: { loadedAs: "bench" },
       });
     }
     const entries = await em.fork().count(CustodyEntrySchema, { transfer: t.id });
@@ -122,9 +123,77 @@ export async function seedBenchData(
        SELECT gen_random_uuid(), id, 0, ?, 1 + (random() * 4)::int, 'unknown', 'captive_bred' FROM transfer WHERE number LIKE 'HW-BENCH-%'`,
       [taxon.id],
     );
+    // The register grows with the bulk rows: 100,000 entries and 500 report animals for the benchmark, a few for tests.
+    const reportPermitId = await seedRegister(conn, sender.organization!.id, sender.id, species, {
+      listEntries: bulkTransfers,
+      reportAnimals: Math.min(500, bulkTransfers),
+    });
     await conn.execute("ANALYZE");
-    return { detailId: t.id };
+    return { detailId: t.id, reportPermitId };
   } finally {
     await orm.close();
   }
+}
+
+/** The period the register benchmark's yearly report covers. */
+export const BENCH_REPORT_PERIOD = { from: "2025-01-01", to: "2025-12-31" };
+
+/**
+ * The sender's register (issue 15 §6): 100,000 entries of one species, each with its acquired
+ * event, for the register's first page; and 500 animals of another species under one permit with
+ * 20,000 events between them (a group of 100 acquired, then 39 ins and outs of one animal each,
+ * spread over 2024–2026), for the yearly report.
+ */
+async function seedRegister(
+  conn: ReturnType<ReturnType<Awaited<ReturnType<typeof initORM>>["em"]["fork"]>["getConnection"]>,
+  organizationId: string,
+  userId: string,
+  species: string[],
+  sizes: { listEntries: number; reportAnimals: number },
+): Promise<string> {
+  const [listTaxon, reportTaxon] = await Promise.all(
+    [species[0]!, species[1]!].map(
+      async (name) =>
+        ((await conn.execute("SELECT id FROM taxon WHERE scientific_name = ?", [name])) as { id: string }[])[0]!.id,
+    ),
+  );
+  await conn.execute(
+    `INSERT INTO register_entry (id, organization_id, kind, taxon_id, sex, count, date_acquired, acquired_how, source_organization_name,
+        count_in_care, status, created_at)
+     SELECT gen_random_uuid(), ?, 'group', ?, 'unknown', 1 + g % 5, date '2026-06-01' - (g % 3000), 'purchase', 'Bench source ' || (g % 97),
+        1 + g % 5, 'in_care', now()
+       FROM generate_series(1, ?) g`,
+    [organizationId, listTaxon, sizes.listEntries],
+  );
+  await conn.execute(
+    `INSERT INTO register_event (id, entry_id, organization_id, kind, "on", count, acquired_how, counterparty_name, recorded_by_name, created_at)
+     SELECT gen_random_uuid(), id, organization_id, 'acquired', date_acquired, count, 'purchase', source_organization_name, 'Bench loader', now()
+       FROM register_entry WHERE organization_id = ? AND taxon_id = ?`,
+    [organizationId, listTaxon],
+  );
+  const permitId = crypto.randomUUID();
+  await conn.execute(
+    `INSERT INTO permit_document (id, organization_id, kind, jurisdiction, number, holder_name, species_covered, created_by_id, created_at, updated_at,
+        report_start_month, report_due_month, report_due_day)
+     VALUES (?, ?, 'possession_permit', 'IL', 'BENCH-IL-1', 'Bench keeper', ARRAY[?]::text[], ?, now(), now(), 1, 1, 31)`,
+    [permitId, organizationId, species[1]!, userId],
+  );
+  await conn.execute(
+    `INSERT INTO register_entry (id, organization_id, kind, taxon_id, sex, count, date_acquired, acquired_how, source_organization_name,
+        identifier, count_in_care, status, permit_ids, created_at)
+     SELECT gen_random_uuid(), ?, 'group', ?, 'unknown', 100, date '2024-01-01' + (g % 200), 'purchase', 'Bench breeder', 'BENCH-' || g,
+        100, 'in_care', ARRAY[?]::uuid[], now()
+       FROM generate_series(1, ?) g`,
+    [organizationId, reportTaxon, permitId, sizes.reportAnimals],
+  );
+  await conn.execute(
+    `INSERT INTO register_event (id, entry_id, organization_id, kind, "on", count, counterparty_name, counterparty_permit_number, recorded_by_name, created_at)
+     SELECT gen_random_uuid(), e.id, e.organization_id,
+            CASE WHEN k = 0 THEN 'acquired' ELSE (ARRAY['sold','died','hatched','given','escaped','acquired','transferred_out','released'])[1 + k % 8] END,
+            e.date_acquired + k * 18, CASE WHEN k = 0 THEN 100 ELSE 1 END, 'Bench counterparty ' || (k % 13), 'BENCH-P-' || (k % 13), 'Bench loader', now()
+       FROM register_entry e CROSS JOIN generate_series(0, 39) k
+      WHERE e.organization_id = ? AND e.taxon_id = ?`,
+    [organizationId, reportTaxon],
+  );
+  return permitId;
 }

@@ -5,7 +5,7 @@ import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
 import { buildTransitTimeline } from "@shared/temperature/timeline";
 import { GARBAGE_KINDS, startOpenMeteoFake, type OpenMeteoFake } from "../../fakes/open-meteo/server";
 import { cToF } from "@shared/units";
-import { fakeTemperatureC } from "../../fakes/open-meteo/climate";
+import { fakeShortwaveRadiationWm2, fakeTemperatureC } from "../../fakes/open-meteo/climate";
 import { WEATHER_TIMEOUT_MS, fetchHourlyForecastsF, type ForecastRequest } from "./weather";
 
 let fake: OpenMeteoFake;
@@ -48,13 +48,29 @@ describe("fetchHourlyForecastsF against the fake", () => {
     for (const { tempF } of nashville!.hours) expect(tempF).toBeGreaterThan(55);
   });
 
+  it("decodes the solar radiation of each hour with the real client", async () => {
+    const result = await fetchHourlyForecastsF(request());
+    if (!result.ok) throw new Error(`unavailable: ${result.reason} ${result.detail}`);
+    const nashville = result.forecasts[0]!;
+    // the fake's value at its grid cell, as float32 on the wire
+    const expected = fakeShortwaveRadiationWm2(36.1, -86.65, Date.parse("2026-07-15T19:00:00Z") / 1000);
+    expect(nashville.hours[19]!.radiationWm2).toBeCloseTo(expected, 0);
+    // night in Tennessee at 06:00 UTC (00:00 local solar time) [practice]
+    expect(nashville.hours[6]!.radiationWm2).toBe(0);
+    for (const { radiationWm2 } of nashville.hours) {
+      expect(radiationWm2).toBeGreaterThanOrEqual(0);
+      // never above the solar constant, about 1361 W/m² (Kopp and Lean 2011) [memory]
+      expect(radiationWm2).toBeLessThan(1361);
+    }
+  });
+
   it("asks for FlatBuffers, °F, GMT and exactly the hours wanted", async () => {
     await fetchHourlyForecastsF(request({ fromHour: "2026-07-15T00:20:00Z", toHour: "2026-07-15T05:40:00Z" }));
     expect(fake.requests).toHaveLength(1);
     expect(fake.requests[0]!.query).toEqual({
       latitude: "36.1200,33.9400",
       longitude: "-86.6700,-118.4000",
-      hourly: "temperature_2m",
+      hourly: "temperature_2m,shortwave_radiation",
       temperature_unit: "fahrenheit",
       timezone: "GMT",
       start_hour: "2026-07-15T00:00",

@@ -1,6 +1,6 @@
 /**
- * The one module that talks to the weather service: hourly temperature_2m in °F for a set of
- * points, through the real `openmeteo` client, from a base URL the caller gives (Open-Meteo or
+ * The one module that talks to the weather service: hourly temperature_2m in °F and
+ * shortwave_radiation in W/m² (the mean of the hour before each value) for a set of points, through the real `openmeteo` client, from a base URL the caller gives (Open-Meteo or
  * the fake in fakes/open-meteo), run in a worker thread (see weather-client.worker.mjs for why).
  * The whole call (worker start, request, one retry, decoding) ends within the timeout, follows
  * no redirect, and the status, the framing and every value are checked; anything else is a
@@ -9,7 +9,7 @@
 import { Worker } from "node:worker_threads";
 import { Unit } from "@openmeteo/sdk/unit.js";
 import { Variable } from "@openmeteo/sdk/variable.js";
-import { isPlausibleAmbientF, type PointForecast } from "@shared/temperature/ambient";
+import { isPlausibleAmbientF, isPlausibleRadiationWm2, type PointForecast } from "@shared/temperature/ambient";
 import type { LatLon } from "@shared/temperature/geo";
 import { FORECAST_POINTS_MAX } from "@shared/temperature/limits";
 
@@ -25,6 +25,8 @@ const HOUR_MS = 3_600_000;
 const CLIENT_TRIES = 2;
 /** Room per location beyond its float32 values: header, strings, tables. */
 const LOCATION_OVERHEAD_BYTES = 1024;
+/** Hourly variables asked for: temperature and solar radiation. */
+const VARIABLES_ASKED = 2;
 
 export type WeatherUnavailableReason = "timeout" | "network" | "redirect" | "upstream_error" | "invalid_response";
 
@@ -96,7 +98,7 @@ function planRequest(request: ForecastRequest): Plan {
     params: {
       latitude: points.map((p) => p.lat.toFixed(4)).join(","),
       longitude: points.map((p) => p.lon.toFixed(4)).join(","),
-      hourly: "temperature_2m",
+      hourly: "temperature_2m,shortwave_radiation",
       temperature_unit: "fahrenheit",
       timezone: "GMT",
       start_hour: hour(fromMs),
@@ -121,7 +123,7 @@ function runClient(plan: Plan, timeoutMs: number): Promise<WorkerMessage | Unava
         retries: CLIENT_TRIES,
         maxLocations: plan.points.length,
         maxValues: plan.hours,
-        maxBodyBytes: plan.points.length * (plan.hours * 4 + LOCATION_OVERHEAD_BYTES),
+        maxBodyBytes: plan.points.length * (VARIABLES_ASKED * plan.hours * 4 + LOCATION_OVERHEAD_BYTES),
       },
       // No loader in the worker: it is plain JavaScript, and starting tsx there would eat the budget.
       execArgv: [],
@@ -175,12 +177,14 @@ function checkedForecasts(locations: readonly DecodedLocation[], plan: Plan): Fo
     const problem = locationProblem(location, point, plan);
     if (problem) return invalid(`point ${i}: ${problem}`);
     const values = temperatureSeries(location)!.values;
+    const radiation = radiationSeries(location)!.values;
     forecasts.push({
       lat: point.lat,
       lon: point.lon,
       hours: values.map((tempF, h) => ({
         at: new Date((plan.fromS + h * 3600) * 1000).toISOString(),
         tempF: Math.round(tempF * 100) / 100,
+        radiationWm2: Math.round(radiation[h]! * 10) / 10,
       })),
     });
   }
@@ -189,6 +193,10 @@ function checkedForecasts(locations: readonly DecodedLocation[], plan: Plan): Fo
 
 function temperatureSeries(location: DecodedLocation): DecodedVariable | undefined {
   return location.hourly?.variables.find((v) => v.variable === Variable.temperature && v.altitude === 2);
+}
+
+function radiationSeries(location: DecodedLocation): DecodedVariable | undefined {
+  return location.hourly?.variables.find((v) => v.variable === Variable.shortwave_radiation);
 }
 
 /** Why one location's answer cannot be used, or undefined when it can. */
@@ -211,5 +219,12 @@ function locationProblem(location: DecodedLocation, point: LatLon, plan: Plan): 
     return `${series.length} values for ${plan.hours} hours`;
   const bad = series.values.findIndex((v) => !isPlausibleAmbientF(v));
   if (bad >= 0) return `implausible value ${series.values[bad]} at hour ${bad}`;
+  const radiation = radiationSeries(location);
+  if (!radiation) return "no shortwave_radiation";
+  if (radiation.unit !== Unit.watt_per_square_metre) return "shortwave_radiation not in W/m²";
+  if (radiation.length !== plan.hours || radiation.values.length !== plan.hours)
+    return `${radiation.length} radiation values for ${plan.hours} hours`;
+  const dark = radiation.values.findIndex((v) => !isPlausibleRadiationWm2(v));
+  if (dark >= 0) return `implausible radiation ${radiation.values[dark]} at hour ${dark}`;
   return undefined;
 }

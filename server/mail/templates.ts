@@ -34,6 +34,7 @@ export type TransferMailTopic =
   | "cancelled"
   | "picked_up"
   | "delivered"
+  | "delivery_awaiting_acknowledgement"
   | "checked_in"
   | "temperature_changed"
   | "alert";
@@ -62,6 +63,8 @@ const SUBJECTS: Record<TransferMailTopic, (n: string, f: TransferMailFacts) => s
   cancelled: (n) => `Transfer ${n} was cancelled`,
   picked_up: (n) => `Transfer ${n} is on the road`,
   delivered: (n) => `Transfer ${n} was delivered`,
+  delivery_awaiting_acknowledgement: (n) =>
+    `Transfer ${n}: the courier recorded the delivery — please confirm you have the boxes`,
   checked_in: (n) => `Transfer ${n} was checked in`,
   temperature_changed: (n) => `Transfer ${n}: the temperature advice changed`,
   alert: (n, f) => `Alert on transfer ${n}: ${f.alertTitle ?? "please look"}`,
@@ -79,6 +82,12 @@ const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
   cancelled: (f) => `${f.actor} cancelled transfer ${f.number}.${f.reason ? ` Reason: ${f.reason}` : ""}`,
   picked_up: (f) => `The courier took custody of transfer ${f.number}. ${f.summary ?? ""}`,
   delivered: (f) => `Transfer ${f.number} was handed to the receiver. ${f.summary ?? ""}`,
+  delivery_awaiting_acknowledgement: (f) =>
+    [
+      `${f.actor} recorded the delivery of transfer ${f.number} to ${f.organization}. ${f.summary ?? ""}`,
+      "",
+      "A delivery is not on the record on the courier's word alone: open the transfer and confirm “I have the boxes”, or show the courier a one-time code from the transfer page. If you do not have the boxes, say so to the sender and the courier now.",
+    ].join("\n"),
   checked_in: (f) => `${f.actor} checked in transfer ${f.number}. ${f.summary ?? ""}`,
   temperature_changed: (f) =>
     [
@@ -306,6 +315,37 @@ export function legAssignmentMail(p: {
         : `${p.actor} took you off transfer ${p.number}: you no longer carry it, and it has left your list of legs.`,
       p.link,
       ...SIGNATURE,
+    ].join("\n"),
+  };
+}
+
+/** A permit's yearly report is due soon (issue 15 §3): 30 and 7 days before. */
+export function permitReportDueMail(p: {
+  to: string;
+  name: string;
+  organization: string;
+  kind: string;
+  number: string;
+  from: string;
+  to_: string;
+  dueOn: string;
+  daysLeft: number;
+  link: string;
+}): MailDraft {
+  const due = formatDate(p.dueOn);
+  return {
+    to: p.to,
+    topic: "register.report-due",
+    subject: `Yearly report for ${p.kind.toLowerCase()} ${p.number} due ${due}`,
+    text: [
+      `Hello ${p.name},`,
+      "",
+      `The yearly report for the ${p.kind.toLowerCase()} no. ${p.number} held by ${p.organization} is due on ${due}, in ${p.daysLeft} day${p.daysLeft === 1 ? "" : "s"}.`,
+      `It covers ${formatDate(p.from)} to ${formatDate(p.to_)}. Hatchway prepares it from your register; check it against your own records and file it with the issuing agency, whose rules decide what it must hold.`,
+      "",
+      `The report: ${p.link}`,
+      "",
+      "— Hatchway",
     ].join("\n"),
   };
 }

@@ -1,6 +1,6 @@
 import { PDFDocument } from "pdf-lib";
 import { beforeAll, describe, expect, it } from "vitest";
-import { REPLACEMENT_CHAR, embedFonts, fitSize, fitText, safeText, wrapText, type PdfFonts } from "./fonts";
+import { PLACEHOLDER, embedFonts, fitSize, fitText, safeText, wrapText, type PdfFonts } from "./fonts";
 
 let fonts: PdfFonts;
 
@@ -25,11 +25,20 @@ describe("safeText", () => {
     expect(safeText(fonts.regular, "a\u0000b\u0007c\td\ne\r\nf")).toBe("abc d e f");
   });
 
-  it("replaces each emoji grapheme, including ZWJ sequences and flags, by one U+FFFD", () => {
+  it("writes each emoji grapheme, including ZWJ sequences and flags, as readable words, never “�”", () => {
     // Roboto Slab has no emoji glyphs [practice: the font covers Latin, Greek and Cyrillic];
-    // UAX #29: a ZWJ sequence and a regional-indicator pair are single grapheme clusters [published]
+    // UAX #29: a ZWJ sequence and a regional-indicator pair are single grapheme clusters [published];
+    // the names are Unicode's CLDR short names as the any-ascii library spells them [published]
     const out = safeText(fonts.regular, "snake 🐍 family 👨‍👩‍👧 flag 🇺🇸 ok");
-    expect(out).toBe(`snake ${REPLACEMENT_CHAR} family ${REPLACEMENT_CHAR} flag ${REPLACEMENT_CHAR} ok`);
+    expect(out).toBe("snake [snake] family [man][woman][girl] flag US ok");
+    expect(out).not.toContain("\uFFFD");
+  });
+
+  it("transliterates letters the font lacks, and marks what has no Latin form with [?]", () => {
+    // [published] Hanyu Pinyin of 你好 is "nǐ hǎo"; the any-ascii transliteration drops the tones
+    expect(safeText(fonts.regular, "Keeper 你好")).toBe("Keeper NiHao");
+    // A replacement character typed by the user is no readable text either.
+    expect(safeText(fonts.regular, "a \uFFFD b")).toBe(`a ${PLACEHOLDER} b`);
   });
 
   it("keeps the unit and typographic characters the documents use", () => {

@@ -1,6 +1,7 @@
 import { readFile } from "node:fs/promises";
 import { createRequire } from "node:module";
 import fontkit from "@pdf-lib/fontkit";
+import anyAscii from "any-ascii";
 import type { PDFDocument, PDFFont } from "pdf-lib";
 import { computedOnce } from "../computed-once";
 
@@ -9,8 +10,11 @@ export interface PdfFonts {
   bold: PDFFont;
 }
 
-/** Drawn in place of a character the font cannot show, so nothing renders as an empty box. */
-export const REPLACEMENT_CHAR = "\uFFFD";
+/**
+ * Drawn in place of a character the font cannot show and that has no readable Latin form, so
+ * nothing renders as an empty box or as "�".
+ */
+export const PLACEHOLDER = "[?]";
 
 const require = createRequire(import.meta.url);
 const FONT_FILES = {
@@ -103,9 +107,23 @@ const INVISIBLE = /[\p{Cc}\p{Cf}\p{Zl}\p{Zp}]/gu;
 const LINE_BREAKS = /\r\n|[\n\r\u2028\u2029\u0085\v\f]/;
 
 /**
+ * A grapheme the font has no glyph for, in a form it can draw: its Latin transliteration
+ * (any-ascii: "Ł" → "L", "你" → "Ni", an emoji → "[snake]"), or PLACEHOLDER when there is none.
+ */
+function readableForm(grapheme: string, chars: ReadonlySet<number>): string {
+  const drawable = (text: string) => text !== "" && [...text].every((ch) => chars.has(ch.codePointAt(0) ?? -1));
+  // Emoji come out as ":name:" (several for a ZWJ sequence); "[name]" reads better on paper.
+  const latin = anyAscii(grapheme)
+    .replace(/:([a-z0-9_+-]+):/gi, (_, name: string) => `[${name.replace(/_/g, " ")}]`)
+    .trim();
+  return latin !== "?" && drawable(latin) ? latin : PLACEHOLDER;
+}
+
+/**
  * One line of user text made safe to draw with `font`: NFC-normalised, line breaks and tabs
  * turned into spaces, control and bidi-format characters removed, and every character (grapheme)
- * the font has no glyph for replaced by U+FFFD (unsupported spaces become plain spaces).
+ * the font has no glyph for written in Latin letters, or as "[?]" when it has no Latin form
+ * (unsupported spaces become plain spaces). Never "�", never an empty box.
  */
 export function safeText(font: PDFFont, text: string): string {
   const chars = charSetOf(font);
@@ -114,8 +132,8 @@ export function safeText(font: PDFFont, text: string): string {
   for (const { segment } of graphemes.segment(flat)) {
     const visible = segment.replace(INVISIBLE, "");
     if (visible === "") continue;
-    if ([...visible].every((ch) => chars.has(ch.codePointAt(0) ?? -1))) out += visible;
-    else out += /^\s+$/u.test(visible) ? " " : REPLACEMENT_CHAR;
+    if (visible !== "\uFFFD" && [...visible].every((ch) => chars.has(ch.codePointAt(0) ?? -1))) out += visible;
+    else out += /^\s+$/u.test(visible) ? " " : readableForm(visible, chars);
   }
   return out;
 }

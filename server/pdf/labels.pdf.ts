@@ -1,6 +1,8 @@
 import { PDFDocument, type Color, type PDFPage } from "pdf-lib";
 import { embedFonts, fitSize, fitText, safeText, textWidthPt, wrapText, type PdfFonts } from "./fonts";
 import { tempRangeParts } from "@shared/units";
+import { formatInstant } from "@shared/dates";
+import { LABEL_CHECK_WORDS } from "@shared/words";
 import { COLORS } from "./layout";
 import type { ManifestBox, ManifestInput, PartyBlock } from "./manifest-input";
 import { drawQrCode } from "./qr";
@@ -47,7 +49,8 @@ function drawLabel(ctx: Ctx, input: ManifestInput, box: ManifestBox): void {
     box.animals.some((a) => a.venomous),
   );
   y = drawBoxLine(ctx, y - 6, input, box);
-  y = drawParty(ctx, y - 4, "FROM (SHIPPER)", input.sender, 8);
+  y = drawChecks(ctx, y - 2, input);
+  y = drawParty(ctx, y - 3, "FROM (SHIPPER)", input.sender, 7);
   y = drawParty(ctx, y - 4, "TO (CONSIGNEE)", input.receiver, 10);
   const bottomTop = M + QR_SIZE_PT + 8;
   drawContents(ctx, y - 4, bottomTop + 4, box);
@@ -95,7 +98,7 @@ function drawUpArrows(page: PDFPage, x: number, topY: number, heightPt: number):
 function drawOrientation(ctx: Ctx, topY: number): number {
   const centreX = LABEL_SIZE_PT[0] / 2;
   const textW = INNER_W - 2 * (ARROW_W + 8);
-  const size = fitSize(ctx.fonts.bold, "LIVE ANIMALS", 30, 16, textW);
+  const size = fitSize(ctx.fonts.bold, "LIVE ANIMALS", 27, 16, textW);
   centred(ctx, "LIVE ANIMALS", centreX, topY - size * 0.78, size, true);
   centred(ctx, "THIS SIDE UP", centreX, topY - size * 0.78 - 22, 15, true, COLORS.green);
   const heightPt = size * 0.78 + 22;
@@ -134,6 +137,52 @@ function drawBoxLine(ctx: Ctx, topY: number, input: ManifestInput, box: Manifest
     color: COLORS.rule,
   });
   return topY - 25;
+}
+
+const TONE_INK = { ok: COLORS.green, caution: COLORS.amber, block: COLORS.brick } as const;
+const TONE_FILL = { ok: COLORS.greenTint, caution: COLORS.amberTint, block: COLORS.brickTint } as const;
+
+/**
+ * The transfer's verdicts as checked when the labels were printed, on one line in the page's
+ * words and colours ("Rules: UNVERIFIED · Temperature: DO NOT SHIP"), on a band tinted by the
+ * worst of them, with the time of the check.
+ */
+function drawChecks(ctx: Ctx, topY: number, input: ManifestInput): number {
+  const verdicts = input.verdicts;
+  const h = 19;
+  const worst = verdicts.some((v) => v.tone === "block")
+    ? "block"
+    : verdicts.some((v) => v.tone === "caution") || verdicts.length === 0
+      ? "caution"
+      : "ok";
+  ctx.page.drawRectangle({
+    x: M,
+    y: topY - h,
+    width: INNER_W,
+    height: h,
+    color: TONE_FILL[worst],
+    borderColor: TONE_INK[worst],
+    borderWidth: 1.2,
+  });
+  if (verdicts.length === 0) {
+    line(ctx, "CHECKS NOT MADE: see the transfer page", M + 5, topY - 10, 8, true, COLORS.brick);
+    return topY - h;
+  }
+  let x = M + 5;
+  const room = M + INNER_W - 5;
+  verdicts.forEach((v, i) => {
+    const label = `${i > 0 ? "  ·  " : ""}${LABEL_CHECK_WORDS[v.check]}: `;
+    const labelW = textWidthPt(ctx.fonts.regular, label, 7);
+    line(ctx, label, x, topY - 10, 7, false, COLORS.ink);
+    x += labelW;
+    const word = fitText(ctx.fonts.bold, v.short, 8, Math.max(10, room - x));
+    line(ctx, word, x, topY - 10, 8, true, TONE_INK[v.tone]);
+    x += textWidthPt(ctx.fonts.bold, word, 8);
+  });
+  const latest = verdicts.reduce((a, b) => (a.checkedAt > b.checkedAt ? a : b));
+  const when = `Checked ${formatInstant(latest.checkedAt, latest.tz)}; details on the manifest`;
+  line(ctx, fitText(ctx.fonts.regular, when, 6, INNER_W - 10), M + 5, topY - h + 3.5, 6, false, COLORS.muted);
+  return topY - h;
 }
 
 function drawParty(ctx: Ctx, topY: number, title: string, party: PartyBlock, sizePt: number): number {

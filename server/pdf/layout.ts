@@ -16,6 +16,7 @@ export const COLORS = {
   amber: hex("#a86a12"),
   amberTint: hex("#fcf3e3"),
   brick: hex("#a3392b"),
+  brickTint: hex("#f8e9e6"),
   rule: hex("#c5cfc8"),
   white: rgb(1, 1, 1),
 } as const;

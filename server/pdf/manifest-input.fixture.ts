@@ -109,6 +109,27 @@ export function buildManifestInput(overrides: Partial<ManifestInput> = {}): Mani
       safeRangeF: { minF: 65, maxF: 85 },
       packingNotes: "Each animal in its own deli cup or cloth bag; crumpled paper fills the gaps.",
     },
+    verdicts: [
+      {
+        check: "compliance",
+        headline: "UNVERIFIED",
+        short: "UNVERIFIED",
+        tone: "caution",
+        detail:
+          "No rule in Hatchway's library stops these animals, but the rules of Ohio and North Carolina have not been reviewed.",
+        checkedAt: "2026-04-13T19:05:00Z",
+        tz: "America/New_York",
+      },
+      {
+        check: "temperature",
+        headline: "Forecast checked: ship with the packing advised",
+        short: "pack as advised",
+        tone: "ok",
+        detail: "Add one 40-hour heat pack taped to the lid.",
+        checkedAt: "2026-04-13T18:00:00Z",
+        tz: "America/New_York",
+      },
+    ],
     handlingNotes: "Venomous animals are double-contained in locked inner boxes.",
     emergencyContacts: [{ name: "Dr. L. Farrow (demo)", role: "Sender's veterinarian", phone: "(937) 555-0188" }],
     handoffUrl: "https://hatchway.example/handoff/HW-2026-0042?k=7f3a9c2e",

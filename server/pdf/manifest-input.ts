@@ -28,6 +28,12 @@ export interface ManifestInput {
   boxes: ManifestBox[];
   documents: ManifestDocument[];
   temperature: ManifestTemperature | null;
+  /**
+   * The transfer's current verdicts, compliance then temperature, as checked when the PDF is made
+   * (or the last stored check that still matches the transfer): printed at the top of the
+   * manifest and on every label, in words and colour.
+   */
+  verdicts: ManifestVerdict[];
   handlingNotes: string | null;
   emergencyContacts: EmergencyContact[];
   /** Absolute URL of the transfer's handoff page; encoded in every QR code. */
@@ -122,4 +128,20 @@ export interface EmergencyContact {
   name: string;
   role: string;
   phone: string;
+}
+
+/** One check's verdict as the manifest prints it. */
+export interface ManifestVerdict {
+  check: "compliance" | "temperature";
+  /** What the transfer page says, in the printed words ("UNVERIFIED", "DO NOT SHIP", …). */
+  headline: string;
+  /** The same in a word or two, for the box labels. */
+  short: string;
+  /** ok: green; caution: amber; block: brick red. */
+  tone: "ok" | "caution" | "block";
+  /** Why, and whom to ask or what to do, in a sentence or two. */
+  detail: string;
+  /** When the check was made (ISO 8601), printed in `tz` (the origin's zone). */
+  checkedAt: string;
+  tz: string;
 }

@@ -196,10 +196,14 @@ describe("renderManifestPdf totals", () => {
       " ",
     );
     const totals = text.slice(text.indexOf("Totals by species (50 CFR 14.81)"));
-    expect(totals).toContain("Ambystoma mexicanum Axolotl 2 No 6");
-    expect(totals).toContain("Crotalus atrox Western diamondback rattlesnake 1, 3 VENOMOUS 3");
-    expect(totals).toContain("Python regius Ball python 1, 2 No 5");
-    expect(totals).toContain("All species 3 species 3 boxes 14");
+    // Columns in the order the issue names them: species, number of animals, boxes by label (then venomous).
+    expect(totals).toContain("Species (scientific / common) Number of animals Boxes (by label) Venomous");
+    expect(totals).toContain("Ambystoma mexicanum Axolotl 6 Shipping box B (box 2) No");
+    expect(totals).toContain(
+      "Crotalus atrox Western diamondback rattlesnake 3 Shipping box A (box 1) Shipping box C (box 3) VENOMOUS",
+    );
+    expect(totals).toContain("Python regius Ball python 5 Shipping box A (box 1) Shipping box B (box 2) No");
+    expect(totals).toContain("All species (3) 14 3 boxes");
     expect(text).toContain("ANIMALS 14 (3 species)");
   });
 });
@@ -274,9 +278,11 @@ describe("renderManifestPdf with hostile text", () => {
     expect(all).toContain("evil Marcus");
   });
 
-  it("replaces emoji with U+FFFD and draws no missing-glyph boxes", async () => {
+  it("writes emoji as readable words, never “�”, and draws no missing-glyph boxes", async () => {
     const all = (await extractPageTexts(bytes)).join(" ");
-    expect(all).toContain("calm \uFFFD snake \uFFFD ok");
+    // the names are Unicode's CLDR short names as the any-ascii library spells them [published]
+    expect(all).toContain("calm [snake] snake [man][woman][girl] ok");
+    expect(all).not.toContain("\uFFFD");
     const ids = await drawnGlyphIds(bytes);
     expect(ids.length).toBeGreaterThan(0);
     expect(ids).not.toContain(0);

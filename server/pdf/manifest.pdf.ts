@@ -1,4 +1,5 @@
 import {
+  MANIFEST_CHECK_WORDS,
   ANIMAL_ORIGIN_WORDS,
   DOCUMENT_KIND_WORDS,
   PACK_WORDS,
@@ -12,7 +13,7 @@ import { embedFonts, fitText, safeText, textWidthPt, wrapText } from "./fonts";
 import { formatDateRange, formatInstant } from "@shared/dates";
 import { formatDimensionsBoth, formatLengthBoth, formatTempRangeBoth, formatWeightBoth } from "@shared/units";
 import { COLORS, PageFlow, drawNoteBox, drawTable, type Cell, type TableRow } from "./layout";
-import type { ManifestAnimal, ManifestBox, ManifestInput, PartyBlock } from "./manifest-input";
+import type { ManifestAnimal, ManifestBox, ManifestInput, ManifestVerdict, PartyBlock } from "./manifest-input";
 import { drawQrCode } from "./qr";
 import { animalsInBox, speciesTotals } from "./species-totals";
 
@@ -47,6 +48,8 @@ export async function renderManifestPdf(input: ManifestInput): Promise<Uint8Arra
   const flow = new PageFlow(doc, fonts, MARGINS, (f) => runningHeader(f, input));
 
   drawTitleBlock(flow, input);
+  drawVerdicts(flow, input.verdicts);
+  flow.gap(4);
   drawParties(flow, input.sender, input.receiver);
   drawCouriers(flow, input);
   flow.gap(8);
@@ -129,6 +132,74 @@ function drawTitleBlock(flow: PageFlow, input: ManifestInput): void {
     color: COLORS.muted,
   });
   flow.y = topY - QR_SIZE_PT - 28;
+}
+
+/** The colours of a verdict on paper: green, amber, brick red, as on the transfer page. */
+export const VERDICT_COLOURS = {
+  ok: { ink: COLORS.green, fill: COLORS.greenTint },
+  caution: { ink: COLORS.amber, fill: COLORS.amberTint },
+  block: { ink: COLORS.brick, fill: COLORS.brickTint },
+} as const;
+
+/**
+ * The transfer's current verdicts side by side, under the title: what was checked, what it says in
+ * the page's words and colours ("DO NOT SHIP", "UNVERIFIED"), why, and when (in the origin's zone).
+ */
+function drawVerdicts(flow: PageFlow, verdicts: readonly ManifestVerdict[]): void {
+  if (verdicts.length === 0) {
+    flow.paragraph("No check of the rules or the temperature could be made for this manifest.", {
+      bold: true,
+      color: COLORS.brick,
+    });
+    return;
+  }
+  const gapPt = 12;
+  const colW = (flow.width - gapPt * (verdicts.length - 1)) / verdicts.length;
+  const innerW = colW - 16;
+  const laid = verdicts.map((v) => ({
+    v,
+    headline: wrapText(flow.fonts.bold, v.headline, 12, innerW),
+    detail: wrapText(flow.fonts.regular, v.detail, 7.5, innerW),
+    when: wrapText(flow.fonts.regular, `Checked ${formatInstant(v.checkedAt, v.tz)}`, 7, innerW),
+  }));
+  const heightPt = Math.max(
+    ...laid.map((l) => 22 + l.headline.length * 14 + l.detail.length * 9.5 + l.when.length * 9 + 8),
+  );
+  flow.ensure(heightPt + 8);
+  const topY = flow.y;
+  laid.forEach(({ v, headline, detail, when }, i) => {
+    const x = flow.left + i * (colW + gapPt);
+    const colours = VERDICT_COLOURS[v.tone];
+    flow.page.drawRectangle({
+      x,
+      y: topY - heightPt,
+      width: colW,
+      height: heightPt,
+      color: colours.fill,
+      borderColor: colours.ink,
+      borderWidth: 1.5,
+    });
+    flow.drawLine(MANIFEST_CHECK_WORDS[v.check].toUpperCase(), x + 8, topY - 13, {
+      bold: true,
+      sizePt: 7,
+      color: colours.ink,
+    });
+    let y = topY - 18;
+    for (const line of headline) {
+      y -= 14;
+      flow.page.drawText(line, { x: x + 8, y: y + 2, size: 12, font: flow.fonts.bold, color: colours.ink });
+    }
+    y -= 2;
+    for (const line of detail) {
+      y -= 9.5;
+      flow.page.drawText(line, { x: x + 8, y, size: 7.5, font: flow.fonts.regular, color: COLORS.ink });
+    }
+    for (const line of when) {
+      y -= 9;
+      flow.page.drawText(line, { x: x + 8, y, size: 7, font: flow.fonts.regular, color: COLORS.muted });
+    }
+  });
+  flow.y = topY - heightPt - 4;
 }
 
 function partyLines(party: PartyBlock): { text: string; bold: boolean }[] {
@@ -267,7 +338,7 @@ function animalRows(animal: ManifestAnimal, lineNo: number): TableRow[] {
 }
 
 function drawBoxes(flow: PageFlow, boxes: ManifestBox[]): void {
-  flow.heading("Contents by box", 80);
+  flow.heading("Contents by box", 120);
   let lineNo = 0;
   for (const box of boxes) {
     // The label is one line of the user's text; its own line breaks would split the title.
@@ -291,6 +362,13 @@ function drawBoxes(flow: PageFlow, boxes: ManifestBox[]): void {
   }
 }
 
+/** "Box A — tortoises (box 1)": the sender's label, with the number printed on the box label. */
+const boxByLabel = (box: { index: number; label: string }) => `${box.label} (box ${box.index})`;
+
+/**
+ * The list 50 CFR 14.81 wants with the shipment: each species with its number of animals, the
+ * boxes that hold it by their labels, and whether it is venomous; then the grand total.
+ */
 function drawTotals(flow: PageFlow, boxes: ManifestBox[]): void {
   const totals = speciesTotals(boxes);
   flow.heading("Totals by species (50 CFR 14.81)", 70);
@@ -298,32 +376,29 @@ function drawTotals(flow: PageFlow, boxes: ManifestBox[]): void {
     // the last species stays on the page of the grand total
     keepWithNext: i === totals.length - 1,
     cells: [
-      { text: t.scientificName, bold: true },
-      t.commonName,
-      t.boxIndexes.join(", "),
-      t.venomous ? { text: "VENOMOUS", bold: true, color: COLORS.brick } : "No",
+      { text: t.scientificName, bold: true, sub: t.commonName },
       { text: String(t.count), bold: true },
+      t.boxes.map(boxByLabel).join("\n"),
+      t.venomous ? { text: "VENOMOUS", bold: true, color: COLORS.brick } : "No",
     ],
   }));
   const all = totals.reduce((n, t) => n + t.count, 0);
   rows.push({
     cells: [
-      "All species",
-      `${totals.length} species`,
+      `All species (${totals.length})`,
+      String(all),
       `${boxes.length} ${boxes.length === 1 ? "box" : "boxes"}`,
       "",
-      String(all),
     ],
     bold: true,
     fill: COLORS.greenTint,
   });
   drawTable(flow, {
     columns: [
-      { header: "Scientific name", widthPt: 166 },
-      { header: "Common name", widthPt: 140 },
-      { header: "Boxes", widthPt: 96 },
-      { header: "Venomous", widthPt: 64 },
-      { header: "Number", widthPt: 66, align: "right" },
+      { header: "Species (scientific / common)", widthPt: 196 },
+      { header: "Number of animals", widthPt: 70, align: "right" },
+      { header: "Boxes (by label)", widthPt: 198 },
+      { header: "Venomous", widthPt: 68 },
     ],
     rows,
     continuedTitle: "Totals by species",
@@ -401,32 +476,49 @@ function drawHandling(flow: PageFlow, input: ManifestInput): void {
   for (const step of HANDLING_STEPS) flow.bullet(step);
   if (input.handlingNotes?.trim()) labelled(flow, "Sender's handling notes", input.handlingNotes);
   flow.gap(6);
-  const partyRow = (party: PartyBlock, role: string): TableRow => ({
-    cells: [
-      { text: party.contactName, bold: true, sub: party.organisation },
-      role,
-      { text: party.phone24h, bold: true },
-    ],
-  });
   drawTable(flow, {
     columns: [
       { header: "Emergency contact", widthPt: 220 },
       { header: "Role", widthPt: 172 },
       { header: "Phone (24 hours)", widthPt: 140 },
     ],
-    rows: [
-      partyRow(input.sender, "Sender"),
-      partyRow(input.receiver, "Receiver"),
-      ...input.emergencyContacts.map((c) => ({
-        cells: [{ text: c.name, bold: true }, c.role, { text: c.phone, bold: true }],
-      })),
-    ],
+    rows: contactsOnce(input).map((c) => ({
+      cells: [
+        { text: c.name, bold: true, ...(c.organisation ? { sub: c.organisation } : {}) },
+        c.roles.join("; "),
+        { text: c.phone, bold: true },
+      ],
+    })),
     continuedTitle: "Emergency contacts",
   });
 }
 
+type ContactRow = { name: string; organisation: string | null; roles: string[]; phone: string };
+
+const contactKey = (name: string, phone: string) =>
+  `${name.normalize("NFC").trim().replace(/\s+/g, " ").toLowerCase()}|${phone.replace(/\D/g, "")}`;
+
+/**
+ * Sender, receiver, then the other emergency contacts, each person once: a contact with the same
+ * name and number as one listed before adds its role to that row instead of repeating it.
+ */
+export function contactsOnce(input: Pick<ManifestInput, "sender" | "receiver" | "emergencyContacts">): ContactRow[] {
+  const rows = new Map<string, ContactRow>();
+  const add = (name: string, organisation: string | null, role: string, phone: string) => {
+    const key = contactKey(name, phone);
+    const row = rows.get(key);
+    if (!row) rows.set(key, { name, organisation, roles: [role], phone });
+    else if (!row.roles.some((r) => role.startsWith(r) || r.startsWith(role))) row.roles.push(role);
+  };
+  add(input.sender.contactName, input.sender.organisation, "Sender", input.sender.phone24h);
+  add(input.receiver.contactName, input.receiver.organisation, "Receiver", input.receiver.phone24h);
+  for (const c of input.emergencyContacts) add(c.name, null, c.role, c.phone);
+  return [...rows.values()];
+}
+
 function drawCustody(flow: PageFlow): void {
-  flow.heading("Chain of custody", 150);
+  // Heading, text and all eight rows on one page: a sign-by-hand table is not split.
+  flow.heading("Chain of custody", 40 + 30 + 20 + CUSTODY_ROWS * 34);
   flow.paragraph(
     "Record every handoff in Hatchway by scanning the QR code. Without a device, fill in a row here: the person releasing and the person receiving both print and sign, and the receiver of one leg releases the next.",
     { sizePt: 8.5 },

@@ -32,6 +32,11 @@ describe("speciesTotals", () => {
     ]);
   });
 
+  it("names the boxes that hold each species by their labels, in box order", () => {
+    expect(speciesTotals(boxes).map((t) => t.boxes.map((b) => b.index))).toEqual([[2], [1, 3], [1, 2]]);
+    expect(speciesTotals(boxes)[0]?.boxes[0]?.label).toBe(boxes[1]?.label);
+  });
+
   it("counts every animal once", () => {
     // hand count: 2 + 1 + 3 + 6 + 2 = 14
     expect(speciesTotals(boxes).reduce((n, t) => n + t.count, 0)).toBe(14);

@@ -8,6 +8,8 @@ export interface SpeciesTotal {
   venomous: boolean;
   /** 1-based indexes of the boxes that hold the species, ascending. */
   boxIndexes: number[];
+  /** The boxes that hold the species, by their index and the sender's label, in box order. */
+  boxes: { index: number; label: string }[];
 }
 
 const keyOf = (scientificName: string): string => scientificName.trim().replace(/\s+/g, " ").toLowerCase();
@@ -28,15 +30,23 @@ export function speciesTotals(boxes: ManifestBox[]): SpeciesTotal[] {
         count: 0,
         venomous: false,
         boxIndexes: [],
+        boxes: [],
       };
       total.count += animal.count;
       total.venomous ||= animal.venomous;
-      if (!total.boxIndexes.includes(box.index)) total.boxIndexes.push(box.index);
+      if (!total.boxIndexes.includes(box.index)) {
+        total.boxIndexes.push(box.index);
+        total.boxes.push({ index: box.index, label: box.label });
+      }
       totals.set(key, total);
     }
   }
   return [...totals.values()]
-    .map((t) => ({ ...t, boxIndexes: [...t.boxIndexes].sort((a, b) => a - b) }))
+    .map((t) => ({
+      ...t,
+      boxIndexes: [...t.boxIndexes].sort((a, b) => a - b),
+      boxes: [...t.boxes].sort((a, b) => a.index - b.index),
+    }))
     .sort((a, b) => a.scientificName.localeCompare(b.scientificName, "en"));
 }
 

@@ -114,6 +114,25 @@ describe("transfer policy", () => {
       false,
     );
   });
+
+  it("a delivery the courier recorded alone waits for the receiver: only the receiver, or the last courier with a code, acknowledges", () => {
+    // NIST CNSSI 4009 / ASTM D4840: the receiver acknowledges each transfer of custody [published].
+    const awaiting = facts({ status: "in_transit", handoffsDone: 3 });
+    const r = transferAbilities(member("r", "R"), "receiver", awaiting);
+    expect(r).toMatchObject({ acknowledgeDelivery: true, showDeliveryCode: true, checkIn: false });
+    expect(transferAbilities(courier("c2"), "courier", awaiting)).toMatchObject({
+      acknowledgeDelivery: false,
+      enterDeliveryCode: true,
+    });
+    expect(transferAbilities(courier("c1"), "courier", awaiting).enterDeliveryCode).toBe(false);
+    expect(transferAbilities(member("s", "S"), "sender", awaiting).acknowledgeDelivery).toBe(false);
+    const onTheWay = facts({ status: "in_transit", handoffsDone: 2 });
+    expect(transferAbilities(member("r", "R"), "receiver", onTheWay)).toMatchObject({
+      acknowledgeDelivery: false,
+      showDeliveryCode: true,
+    });
+    expect(transferAbilities(courier("c2"), "courier", onTheWay).enterDeliveryCode).toBe(false);
+  });
 });
 
 // Denials before state checks: what a role may ever do does not depend on the state (SECURITY.md, Access).

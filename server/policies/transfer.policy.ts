@@ -105,9 +105,23 @@ export function handoffAllowed(actor: Actor, role: ViewerRole, t: TransferFacts)
   return releasing || receiving ? next : null;
 }
 
+/**
+ * The delivery is recorded but the receiver has not acknowledged it: every handoff is in and the
+ * transfer is still on the road (a delivery the receiver acknowledges makes it "delivered", D20).
+ */
+export function deliveryAwaitingReceiver(t: TransferFacts): boolean {
+  const legs = t.legCourierIds.length;
+  return t.status === "in_transit" && legs > 0 && t.handoffsDone > legs;
+}
+
+/** Photos belong to recorded handoffs and the check-in: from the pickup until the transfer is closed. */
+const PHOTO_STATUSES: readonly TransferStatus[] = ["in_transit", "delivered", "checked_in"];
+
 export function transferAbilities(actor: Actor, role: ViewerRole, t: TransferFacts): TransferAbilitiesDto {
   const sender = role === "sender";
   const receiver = role === "receiver";
+  const courier = role === "courier";
+  const awaiting = deliveryAwaitingReceiver(t);
   return {
     edit: sender && EDITABLE.includes(t.status),
     submit: sender && t.status === "draft",
@@ -122,6 +136,11 @@ export function transferAbilities(actor: Actor, role: ViewerRole, t: TransferFac
     discuss: sender || receiver,
     readCustody: true,
     readPrivateNotes: sender || receiver,
-    acknowledgeAlerts: sender || receiver || role === "courier",
+    acknowledgeAlerts: sender || receiver || courier,
+    acknowledgeDelivery: receiver && awaiting,
+    showDeliveryCode: receiver && t.status === "in_transit",
+    enterDeliveryCode: courier && awaiting && t.legCourierIds.at(-1) === actor.id,
+    addPhotos: (sender || receiver || courier) && PHOTO_STATUSES.includes(t.status),
+    readPhotos: sender || receiver || courier,
   };
 }

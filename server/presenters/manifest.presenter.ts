@@ -76,10 +76,10 @@ export function presentManifestInput(
     })),
     documents: extras.documents,
     temperature: extras.temperature,
+    verdicts: extras.verdicts,
     handlingNotes: t.handling_notes,
+    // The sender and the receiver head the contacts from their own blocks; these are the others.
     emergencyContacts: [
-      { name: sender.contactName, role: `Sender — ${v.sender.name}`, phone: v.sender.phone },
-      { name: receiver.contactName, role: `Receiver — ${v.receiver.name}`, phone: v.receiver.phone },
       ...v.legs
         .filter((l) => l.org_phone)
         .map((l) => ({

@@ -3,13 +3,20 @@ import type { ProfileGroup } from "@shared/constants";
 import { profileDataOf } from "@shared/temperature/profile-schema";
 import { DEFAULT_PROFILES, type TemperatureProfile } from "@shared/temperature/profiles";
 import type {
+  BoxReadingDto,
   TemperatureCheckDto,
   TemperatureProfileDto,
   TemperatureReport,
   TransferTemperatureDto,
+  TripPlanDto,
 } from "@shared/temperature/report";
+import type { ViewerRole } from "@shared/constants";
+import type { Actor } from "../auth/actor";
 import type { TemperatureAlert, TemperatureCheck, TemperatureProfileRow } from "../db/entities/temperature.entity";
-import type { Transfer } from "../db/entities/transfer.entity";
+import type { Leg, Transfer } from "../db/entities/transfer.entity";
+import type { User } from "../db/entities/user.entity";
+import { canDeclareLegVehicle, canEditTripPlan } from "../policies/temperature.policy";
+import { legVehicle, transferVehicle } from "../services/temperature/trip-plan";
 
 export function presentCheck(c: TemperatureCheck): TemperatureCheckDto {
   return {
@@ -32,18 +39,53 @@ function presentAlert(a: TemperatureAlert): TransferTemperatureDto["alert"] {
   };
 }
 
-/** The transfer's temperature answer, its latest advice-change flag and its stored checks. */
+/** How the box travels, with what the caller may change (the policies decide). */
+export function presentTripPlan(
+  transfer: Transfer,
+  legs: readonly (Leg & { courier: { getEntity(): User } })[],
+  viewer: { actor: Actor; role: ViewerRole },
+  pickedUpAt: Date | null,
+): TripPlanDto {
+  const applies = transfer.mode !== "overnight_air";
+  const own = transferVehicle(transfer);
+  return {
+    applies,
+    vehicle: own.vehicle,
+    vehicleRangeF: own.rangeF,
+    stops: (transfer.plannedStops ?? []).map((s) => ({ at: s.at, durationMin: s.durationMin, parked: s.parked })),
+    legs: legs.map((leg) => {
+      const declared = legVehicle(leg);
+      return {
+        id: leg.id,
+        sequence: leg.sequence,
+        courierName: leg.courier.getEntity().displayName,
+        vehicle: declared.vehicle,
+        vehicleRangeF: declared.rangeF,
+        canDeclare:
+          applies && canDeclareLegVehicle(viewer.actor, viewer.role, leg.courier.getEntity().id, transfer.status),
+      };
+    }),
+    canEdit: applies && canEditTripPlan(viewer.role, transfer.status),
+    followingPickupAt: pickedUpAt ? pickedUpAt.toISOString() : null,
+  };
+}
+
+/** The transfer's temperature answer, its latest advice-change flag, its stored checks, the readings and the plan. */
 export function presentTransferTemperature(
   transfer: Transfer,
   report: TemperatureReport,
   alert: TemperatureAlert | null,
   checks: TemperatureCheck[],
+  readings: BoxReadingDto[],
+  plan: TripPlanDto,
 ): TransferTemperatureDto {
   return {
     ...report,
     transferVersion: transfer.version,
     alert: alert ? presentAlert(alert) : null,
     checks: checks.map(presentCheck),
+    readings,
+    plan,
   };
 }
 

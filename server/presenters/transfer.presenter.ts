@@ -3,18 +3,26 @@ import type {
   AnimalDto,
   CheckInDto,
   ContainerDto,
+  DeliveryDto,
   HandoffDto,
   LegDto,
   LoadedWithoutChecksDto,
   OrgBriefDto,
   PersonDto,
+  PhotoDto,
   PlaceDto,
   TaxonBriefDto,
   TransferAbilitiesDto,
   TransferDto,
   ViewerRole,
 } from "@shared/schemas/transfer";
-import type { UsState } from "@shared/constants";
+import {
+  HANDOFF_REASON_KEYS,
+  type DeliveryAcknowledgementWay,
+  type HandoffReasonKey,
+  type UsState,
+} from "@shared/constants";
+import { sealNumbersMatch } from "@shared/custody/plausibility";
 import { handoffKind, handoffsPlanned } from "@shared/transfer/lifecycle";
 import { packingFindings } from "@shared/transfer/packing";
 import { allAccountedFor, computeDiscrepancies } from "@shared/checkin/discrepancy";
@@ -133,32 +141,8 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     toLabel: l.to_label,
     courier: { id: l.courier_id, displayName: l.courier_name, organizationName: l.org_name, phone: l.org_phone },
   }));
-  const expectedSeals = new Map(containers.map((c) => [c.id, c.sealNumber]));
-  const handoffs: HandoffDto[] = v.handoffs.map((h) => {
-    const p = h.payload as Record<string, unknown> & {
-      seals?: { containerId: string; sealNumber: string | null; intact: boolean }[];
-    };
-    const index = Number(p.handoffIndex);
-    return {
-      handoffIndex: index,
-      kind: handoffKind(index, legs.length),
-      at: iso(h.at),
-      recordedBy: { id: h.actor_id ?? "", displayName: h.actor_name },
-      releasedByName: String(p.releasedByName ?? ""),
-      receivedByName: String(p.receivedByName ?? ""),
-      boxesExpected: Number(p.boxesExpected ?? 0),
-      boxesCounted: Number(p.boxesCounted ?? 0),
-      seals: (p.seals ?? []).map((s) => ({
-        containerId: s.containerId,
-        sealNumber: s.sealNumber,
-        intact: s.intact,
-        expected: expectedSeals.get(s.containerId) ?? null,
-      })),
-      boxTempF: (p.boxTempF as number | null) ?? null,
-      place: (p.place as HandoffDto["place"]) ?? { text: null, lat: null, lon: null, accuracyM: null },
-      notes: (p.notes as string | null) ?? null,
-    };
-  });
+  const handoffs: HandoffDto[] = v.handoffs.map((h) => presentHandoff(h, legs.length));
+  const delivery = presentDelivery(v, legs.length);
 
   let checkIn: CheckInDto | null = null;
   if (v.checkIn) {
@@ -237,6 +221,8 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     reconfirmationReason: t.reconfirmation_reason,
     loadedWithoutChecks: presentChecksSkipped(v.checksSkipped),
     alerts: v.alerts.map(presentAlert),
+    delivery,
+    photos: abilities.readPhotos ? v.photos.map((p) => presentPhoto(t.id, p)) : [],
     abilities,
     createdAt: iso(t.created_at),
     updatedAt: iso(t.updated_at),
@@ -251,5 +237,112 @@ function presentChecksSkipped(entry: TransferView["checksSkipped"]): LoadedWitho
     loadedAs: loadedAs === "bench" ? "bench" : "demo",
     checksNotRun: Array.isArray(checksNotRun) ? checksNotRun.map(String) : [],
     at: iso(entry.at),
+  };
+}
+
+type HandoffPayload = Record<string, unknown> & {
+  seals?: {
+    containerId: string;
+    sealNumber: string | null;
+    expected?: string | null;
+    matches?: boolean;
+    intact: boolean;
+  }[];
+  sealsUnchecked?: string[];
+  reasons?: Record<string, unknown>;
+  plausibility?: { notChecked?: unknown };
+};
+
+/** A recorded handoff as it was recorded: the seal numbers on record then, not the box's number now. */
+function presentHandoff(h: TransferView["handoffs"][number], legCount: number): HandoffDto {
+  const p = h.payload as HandoffPayload;
+  const index = Number(p.handoffIndex);
+  const reasons: Partial<Record<HandoffReasonKey, string>> = {};
+  for (const key of HANDOFF_REASON_KEYS) {
+    const reason = p.reasons?.[key];
+    if (typeof reason === "string" && reason) reasons[key] = reason;
+  }
+  const notChecked = p.plausibility?.notChecked;
+  return {
+    handoffIndex: index,
+    kind: handoffKind(index, legCount),
+    at: iso(h.at),
+    recordedBy: { id: h.actor_id ?? "", displayName: h.actor_name },
+    releasedByName: String(p.releasedByName ?? ""),
+    receivedByName: String(p.receivedByName ?? ""),
+    boxesExpected: Number(p.boxesExpected ?? 0),
+    boxesCounted: Number(p.boxesCounted ?? 0),
+    seals: (p.seals ?? []).map((s) => {
+      const expected = s.expected ?? null;
+      return {
+        containerId: s.containerId,
+        sealNumber: s.sealNumber,
+        expected,
+        matches: typeof s.matches === "boolean" ? s.matches : sealNumbersMatch(expected, s.sealNumber),
+        intact: s.intact,
+      };
+    }),
+    sealsUnchecked: Array.isArray(p.sealsUnchecked) ? p.sealsUnchecked.map(String) : [],
+    boxTempF: (p.boxTempF as number | null) ?? null,
+    place: (p.place as HandoffDto["place"]) ?? { text: null, lat: null, lon: null, accuracyM: null },
+    notes: (p.notes as string | null) ?? null,
+    reasons,
+    notChecked: Array.isArray(notChecked) ? notChecked.map(String) : [],
+  };
+}
+
+const WAYS: readonly DeliveryAcknowledgementWay[] = ["recorded_by_receiver", "receiver_account", "one_time_code"];
+
+/**
+ * The delivery to the receiver once recorded. Recorded by the courier alone it waits for the
+ * receiver's acknowledgement (a custody entry); recorded by the receiver it is acknowledged then.
+ */
+function presentDelivery(v: TransferView, legCount: number): DeliveryDto | null {
+  if (legCount === 0) return null;
+  const recorded = v.handoffs.find((h) => Number(h.payload.handoffIndex) === legCount);
+  if (!recorded) return null;
+  const base = {
+    recordedAt: iso(recorded.at),
+    recordedBy: { id: recorded.actor_id, displayName: recorded.actor_name },
+  };
+  const ack = v.deliveryAcknowledged;
+  if (ack) {
+    const way = WAYS.find((w) => w === ack.payload.way) ?? null;
+    const name = typeof ack.payload.receiverName === "string" ? ack.payload.receiverName : ack.actor_name;
+    return {
+      ...base,
+      state: "acknowledged",
+      acknowledgedAt: iso(ack.at),
+      acknowledgedBy: { id: way === "receiver_account" ? ack.actor_id : null, displayName: name },
+      way,
+    };
+  }
+  if (recorded.payload.receiverAcknowledgement === "pending")
+    return { ...base, state: "awaiting_receiver", acknowledgedAt: null, acknowledgedBy: null, way: null };
+  // Recorded by the receiver (or before acknowledgements were kept): the recording is the acknowledgement.
+  return {
+    ...base,
+    state: "acknowledged",
+    acknowledgedAt: base.recordedAt,
+    acknowledgedBy: base.recordedBy,
+    way: recorded.payload.receiverAcknowledgement === "recorded_by_receiver" ? "recorded_by_receiver" : null,
+  };
+}
+
+function presentPhoto(transferId: string, p: TransferView["photos"][number]): PhotoDto {
+  return {
+    id: p.id,
+    moment: p.moment,
+    handoffIndex: p.handoff_index,
+    subject: p.subject,
+    containerId: p.container_id,
+    animalId: p.animal_id,
+    caption: p.caption,
+    contentType: p.content_type,
+    sizeBytes: p.size_bytes,
+    sha256: p.sha256,
+    uploadedBy: { id: p.uploaded_by_id, displayName: p.uploaded_by_name },
+    at: iso(p.created_at),
+    url: `/api/transfers/${transferId}/photos/${p.id}`,
   };
 }

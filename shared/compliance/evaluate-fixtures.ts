@@ -2,6 +2,21 @@ import type { EvaluationAnimal, EvaluationDocument, EvaluationInput, TransferFac
 import { FEDERAL_RULES } from "./federal-rules";
 import { STATE_RULES, STATE_TRANSIT_POLICIES } from "./state-rules.demo";
 import type { ResolvedTaxon } from "./taxon";
+import type { EvaluateResponse, Finding } from "./schemas";
+import type { CoverageRecord } from "./coverage";
+import { JURISDICTIONS } from "./jurisdiction";
+
+/**
+ * Every jurisdiction marked reviewed, with invented agency names: for tests of the rules
+ * themselves, where coverage is not what is being checked.
+ */
+export const EVERY_JURISDICTION_REVIEWED: readonly CoverageRecord[] = JURISDICTIONS.map((jurisdiction) => ({
+  jurisdiction,
+  reviewedOn: "2026-12-01",
+  reviewedBy: "test fixture",
+  wildlifeAgency: { name: `Test wildlife agency of ${jurisdiction}`, url: "https://example.test/wildlife" },
+  stateVeterinarian: { name: `Test state veterinarian of ${jurisdiction}`, url: "https://example.test/vet" },
+}));
 
 /** A demo transfer: Tennessee to Ohio, overnight, private keeping, no sale, on 2026-05-12. */
 export function buildFacts(overrides: Partial<TransferFacts> = {}): TransferFacts {
@@ -51,6 +66,12 @@ export function buildInput(overrides: Partial<EvaluationInput> = {}): Evaluation
     documents: [],
     rules: [...FEDERAL_RULES, ...STATE_RULES],
     transitPolicies: STATE_TRANSIT_POLICIES,
+    coverage: EVERY_JURISDICTION_REVIEWED,
     ...overrides,
   };
+}
+
+/** Every finding that applies to one line: the shipment-wide ones, then the line's own. */
+export function findingsForLine(result: EvaluateResponse, index = 0): Finding[] {
+  return [...result.shipmentFindings, ...(result.animals[index]?.findings ?? [])];
 }

@@ -4,6 +4,14 @@ import { DOCUMENT_KIND_IN_SENTENCE, HOLDER_SIDE_WORDS } from "../words/documents
 import { FEDERAL, jurisdictionName, leavesContinentalUs, type Jurisdiction } from "./jurisdiction";
 import type { PermitRequirement, Rule, RuleConditions, RuleEffect, StateTransitPolicy } from "./rule";
 import type { EvaluateDocument, EvaluateResponse, Finding, Severity, Verdict } from "./schemas";
+import {
+  coverageForRoute,
+  demoRuleJurisdictions,
+  uncovered,
+  type CoverageEntry,
+  type CoverageRecord,
+} from "./coverage";
+import { groupShipmentFindings } from "./grouping";
 import { indexBySelector, itemsForTaxon, normalizeTaxonName, taxonMatchKeys, type ResolvedTaxon } from "./taxon";
 
 /** The facts of a transfer that rules read. Dates are ISO calendar dates (YYYY-MM-DD). */
@@ -38,6 +46,11 @@ export interface EvaluationInput {
   rules: readonly Rule[];
   /** States whose import rules spare a shipment that only passes through; others do not. */
   transitPolicies?: readonly StateTransitPolicy[];
+  /**
+   * What the library knows of each jurisdiction's rules. A jurisdiction on the route with no
+   * reviewed record is not covered, so leaving this out makes every verdict at best "unverified".
+   */
+  coverage?: readonly CoverageRecord[];
 }
 
 type RouteRole = "federal" | "origin" | "destination" | "transit";
@@ -96,6 +109,11 @@ const SEVERITY_ORDER: Record<Severity, number> = { blocks: 0, needs_document: 1,
  * so with a 30-day limit a certificate issued 30 days before passes and one issued 31 days
  * before fails. Validity and effective windows include both end dates. Lines of the same taxon
  * share frozen finding objects: treat the result as read-only.
+ *
+ * Coverage: every jurisdiction on the route (federal, origin, transit, destination) is reported
+ * with whether its rules were reviewed; a verdict that would be "clear" is "unverified" while one
+ * of them is not covered. Findings every line shares word for word are reported once, in
+ * `shipmentFindings`, and left out of the lines.
  */
 export function evaluateCompliance(input: EvaluationInput): EvaluateResponse {
   const route = describeRoute(input.facts, input.transitPolicies ?? []);
@@ -114,7 +132,24 @@ export function evaluateCompliance(input: EvaluationInput): EvaluateResponse {
     }
     return { scientificName: animal.scientificName, findings: findingsFor(animal, taxonWork, route, documents, used) };
   });
-  return { verdict: verdictOf(animals), animals, rulesUsed: rulesUsedBy(used) };
+  const coverage = coverageForRoute(
+    input.facts,
+    input.coverage ?? [],
+    demoRuleJurisdictions(rulesInForce(input.rules, input.facts.shipDate)),
+  );
+  const grouped = groupShipmentFindings(animals);
+  return {
+    verdict: withCoverage(verdictOf(animals), coverage),
+    shipmentFindings: grouped.shipmentFindings,
+    animals: grouped.animals,
+    rulesUsed: rulesUsedBy(used),
+    coverage,
+  };
+}
+
+/** Nothing is "clear" that was not checked: a clear verdict on a route with an uncovered jurisdiction is unverified. */
+function withCoverage(verdict: Verdict, coverage: readonly CoverageEntry[]): Verdict {
+  return verdict === "clear" && uncovered(coverage).length > 0 ? "unverified" : verdict;
 }
 
 /** Equal for equal taxa, so lines resolved separately still share their work. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { DEMO_TAXA as T } from "./demo-taxa";
 import { evaluateCompliance, type EvaluationAnimal, type EvaluationDocument, type TransferFacts } from "./evaluate";
-import { buildAnimal, buildCvi, buildFacts, buildInput } from "./evaluate-fixtures";
+import { buildAnimal, buildCvi, buildFacts, buildInput, findingsForLine } from "./evaluate-fixtures";
 import { FEDERAL_RULES } from "./federal-rules";
 import { ruleSchema, type Rule } from "./rule";
 
@@ -23,7 +23,7 @@ function evaluate(
 }
 
 function finding(result: ReturnType<typeof evaluate>, ruleId: string) {
-  return result.animals[0]?.findings.find((f) => f.ruleId === ruleId);
+  return findingsForLine(result).find((f) => f.ruleId === ruleId);
 }
 
 describe("seed federal rules", () => {
@@ -279,7 +279,7 @@ describe("advisories: 50 CFR 14.81, the Lacey Act and 9 CFR 1.1", () => {
   it("reminds of box marking and the Lacey Act across state lines, and of the missing transport standard always", () => {
     // [published] 50 CFR 14.81 and 16 U.S.C. 3372(a)(2)(A) concern interstate commerce
     const across = evaluate(buildAnimal(T.beardedDragon));
-    expect(across.animals[0]?.findings.map((f) => [f.ruleId, f.severity])).toEqual([
+    expect(findingsForLine(across).map((f) => [f.ruleId, f.severity])).toEqual([
       ["us-16usc3372-lacey-act", "advisory"],
       ["us-50cfr14.81-container-marking", "advisory"],
       ["us-9cfr1.1-no-transport-standard", "advisory"],
@@ -287,6 +287,6 @@ describe("advisories: 50 CFR 14.81, the Lacey Act and 9 CFR 1.1", () => {
     expect(across.verdict).toBe("clear");
     // [published] 9 CFR 1.1: "animal" means warm-blooded animals only, within a state or across
     const within = evaluate(buildAnimal(T.beardedDragon), { destinationState: "TN" });
-    expect(within.animals[0]?.findings.map((f) => f.ruleId)).toEqual(["us-9cfr1.1-no-transport-standard"]);
+    expect(findingsForLine(within).map((f) => f.ruleId)).toEqual(["us-9cfr1.1-no-transport-standard"]);
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { LIMITS } from "@shared/constants";
 import { DEMO_TAXA as T } from "./demo-taxa";
 import { evaluateCompliance, type EvaluationDocument } from "./evaluate";
-import { buildAnimal, buildCvi, buildFacts, buildInput } from "./evaluate-fixtures";
+import { buildAnimal, buildCvi, buildFacts, buildInput, findingsForLine } from "./evaluate-fixtures";
 import { documentRecordSchema, evaluateRequestSchema, evaluateResponseSchema, type EvaluateRequest } from "./schemas";
 
 /** The request body of issue 4, filled with invented demo values. */
@@ -75,7 +75,7 @@ describe("evaluateRequestSchema", () => {
       }),
     );
     // [published] 9 CFR 74.1: 11-day-old certificate naming Geochelone pardalis, stating free of ticks
-    expect(result.animals[0]?.findings.find((f) => f.ruleId === "us-9cfr74.1-land-tortoises")?.satisfiedBy).toEqual({
+    expect(findingsForLine(result).find((f) => f.ruleId === "us-9cfr74.1-land-tortoises")?.satisfiedBy).toEqual({
       kind: "cvi",
       jurisdiction: "TN",
     });

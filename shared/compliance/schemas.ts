@@ -3,6 +3,7 @@ import { JURISDICTIONS } from "./jurisdiction";
 import { z } from "../validation/zod";
 import { NO_CONTROL_CHARACTERS } from "../schemas/common";
 import { citationSchema, HOLDER_SIDES } from "./rule";
+import { coverageEntrySchema } from "./coverage";
 
 const text = (max: number) =>
   z
@@ -75,7 +76,11 @@ export type EvaluateDocument = z.infer<typeof evaluateDocumentSchema>;
 export const SEVERITIES = ["blocks", "needs_document", "advisory"] as const;
 export type Severity = (typeof SEVERITIES)[number];
 
-export const VERDICTS = ["clear", "needs_documents", "blocked"] as const;
+/**
+ * The compliance verdict, from best to worst. "unverified": no rule in the library stops the
+ * move, but a jurisdiction on the route has no reviewed rules, so nothing says it is clear.
+ */
+export const VERDICTS = ["clear", "unverified", "needs_documents", "blocked"] as const;
 export type Verdict = (typeof VERDICTS)[number];
 
 export const findingSchema = z.strictObject({
@@ -101,8 +106,13 @@ export type Finding = z.infer<typeof findingSchema>;
 
 export const evaluateResponseSchema = z.strictObject({
   verdict: z.enum(VERDICTS),
+  /** Findings that apply to every animal line, word for word (said once, above the lines). */
+  shipmentFindings: z.array(findingSchema),
+  /** Per line, the findings that differ from line to line (shipment-wide ones are left out). */
   animals: z.array(z.strictObject({ scientificName: z.string(), findings: z.array(findingSchema) })),
   rulesUsed: z.array(z.strictObject({ ruleId: z.string(), version: z.int().min(1) })),
+  /** Every jurisdiction on the route: federal, origin, transit states, destination. */
+  coverage: z.array(coverageEntrySchema),
 });
 export type EvaluateResponse = z.infer<typeof evaluateResponseSchema>;
 

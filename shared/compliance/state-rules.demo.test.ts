@@ -7,7 +7,7 @@ import {
   type EvaluationInput,
   type TransferFacts,
 } from "./evaluate";
-import { buildAnimal, buildCvi, buildFacts, buildInput } from "./evaluate-fixtures";
+import { buildAnimal, buildCvi, buildFacts, buildInput, findingsForLine } from "./evaluate-fixtures";
 import { DEMO_RULE_NOTICE, ruleSchema, stateTransitPolicySchema } from "./rule";
 import { STATE_RULES, STATE_TRANSIT_POLICIES } from "./state-rules.demo";
 
@@ -26,7 +26,7 @@ function evaluate(
 }
 
 function finding(result: ReturnType<typeof evaluate>, ruleId: string) {
-  return result.animals[0]?.findings.find((f) => f.ruleId === ruleId);
+  return findingsForLine(result).find((f) => f.ruleId === ruleId);
 }
 
 function permit(
@@ -54,6 +54,7 @@ describe("seed state rules", () => {
     expect(new Set(demo.map((rule) => rule.jurisdiction)).size).toBeGreaterThanOrEqual(8);
     for (const rule of demo) expect(rule.citation.text).toContain(DEMO_RULE_NOTICE);
     expect(STATE_RULES.find((rule) => rule.id === HAWAII_SNAKES)?.demo).toBe(false);
+    expect(STATE_RULES.find((rule) => rule.id === "hi-hrs150a-6-gila-monster")?.demo).toBe(false);
     for (const policy of STATE_TRANSIT_POLICIES)
       expect(stateTransitPolicySchema.safeParse(policy).error).toBeUndefined();
   });
@@ -88,6 +89,16 @@ describe("HRS 150A-6: no live snake into Hawaii", () => {
     );
   });
 
+  it("forbids a Gila monster going to Hawaii, and no other lizard", () => {
+    // [published] HRS 150A-6(3): "Any live snake, flying fox, fruit bat, Gila monster …" may not be transported to the State
+    const gila = evaluate(buildAnimal(T.gilaMonster), { originState: "AZ", destinationState: "HI" });
+    expect(finding(gila, "hi-hrs150a-6-gila-monster")?.severity).toBe("blocks");
+    expect(gila.verdict).toBe("blocked");
+    expect(
+      finding(evaluate(buildAnimal(T.beardedDragon), { destinationState: "HI" }), "hi-hrs150a-6-gila-monster"),
+    ).toBeUndefined();
+  });
+
   it("does not reach a snake leaving Hawaii", () => {
     // [published] HRS 150A-6: transport "to the State"
     expect(
@@ -103,7 +114,8 @@ describe("transit-only states (Ohio Rev. Code 1533.31)", () => {
     // [published] Ohio Rev. Code 1533.31: merely passing through by carrier is not an import
     const result = evaluate(buildAnimal(T.westernDiamondback), throughOhio);
     expect(finding(result, OHIO_VENOMOUS)).toBeUndefined();
-    expect(result.verdict).toBe("clear");
+    // source: issue 12 §1 (product requirement): a state whose rules in the library are demo rules is never covered, so at best "unverified"
+    expect(result.verdict).toBe("unverified");
   });
 
   it("applies the same rule in transit where the state is not marked exempt, and at the destination", () => {
@@ -161,7 +173,8 @@ describe("demo state rules by effect", () => {
     const held = evaluate(buildAnimal(T.gilaMonster), facts, [
       permit("export_permit", "AZ", { speciesCovered: ["Heloderma suspectum"], holderSide: "sender" }),
     ]);
-    expect(held.verdict).toBe("clear");
+    // source: issue 12 §1 (product requirement): a state whose rules in the library are demo rules is never covered, so at best "unverified"
+    expect(held.verdict).toBe("unverified");
     // [practice] a move within the state is no export
     expect(
       finding(
@@ -203,7 +216,8 @@ describe("demo state rules by effect", () => {
     expect(
       evaluate(buildAnimal(T.easternBoxTurtle, { origin: "wild_caught" }), { destinationState: "PA" }).verdict,
     ).toBe("blocked");
-    expect(evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "PA" }).verdict).toBe("clear");
+    // source: issue 12 §1 (product requirement): a state whose rules in the library are demo rules is never covered, so at best "unverified"
+    expect(evaluate(buildAnimal(T.easternBoxTurtle), { destinationState: "PA" }).verdict).toBe("unverified");
   });
 
   it("certificate above a count: 25 is not above 25, 26 is", () => {
@@ -234,11 +248,12 @@ describe("demo state rules by effect", () => {
       permit("state_import_permit", "NY", { speciesCovered: ["Alligator mississippiensis"] }),
     ]);
     expect(finding(permitted, rule)?.message).toContain("on file allows it");
-    expect(permitted.verdict).toBe("clear");
+    // source: issue 12 §1 (product requirement): a state whose rules in the library are demo rules is never covered, so at best "unverified"
+    expect(permitted.verdict).toBe("unverified");
     const advisory = evaluate(buildAnimal(T.dyeingDartFrog), { destinationState: "CA" });
     expect([finding(advisory, "demo-ca-import-amphibian-advisory")?.severity, advisory.verdict]).toEqual([
       "advisory",
-      "clear",
+      "unverified",
     ]);
   });
 });

@@ -56,8 +56,9 @@ const SNAKES = [
 ];
 
 /**
- * Demo state rules (one of each effect kind, over ten states) and Hawaii's published ban on live
- * snakes. Everything marked demo is invented and says so in its citation.
+ * Demo state rules (one of each effect kind, over ten states) and Hawaii's published bans on live
+ * snakes and Gila monsters (HRS 150A-6(3), read in a stored copy of the statute [published]).
+ * Everything marked demo is invented and says so in its citation.
  */
 export const STATE_RULES: readonly Rule[] = [
   {
@@ -76,6 +77,24 @@ export const STATE_RULES: readonly Rule[] = [
     },
     ...IN_FORCE,
     reviewedOn: "2026-12-01",
+    reviewedBy: "Hatchway seed",
+    demo: false,
+  },
+  {
+    id: "hi-hrs150a-6-gila-monster",
+    version: 1,
+    jurisdiction: "HI",
+    governs: "import",
+    selector: { taxa: ["Heloderma suspectum"] },
+    conditions: {},
+    effect: { kind: "prohibited" },
+    summary: "Hawaii forbids bringing a live Gila monster into the state.",
+    citation: {
+      text: "Hawaii Revised Statutes 150A-6(3): importation of any live snake, flying fox, fruit bat, Gila monster … prohibited",
+      url: "https://www.capitol.hawaii.gov/hrscurrent/Vol03_Ch0121-0200D/HRS0150A/HRS_0150A-0006.htm",
+    },
+    ...IN_FORCE,
+    reviewedOn: "2026-12-02",
     reviewedBy: "Hatchway seed",
     demo: false,
   },

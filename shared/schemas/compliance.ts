@@ -6,6 +6,7 @@ import { documentRecordSchema, type DocumentRecord, type EvaluateResponse } from
 import type { ScanContentType } from "@shared/compliance/scan-type";
 import { z } from "../validation/zod";
 import { idSchema, optionalText, requiredText, text } from "./common";
+import type { Agency } from "@shared/compliance/coverage";
 
 // ---------------------------------------------------------------- rule library
 
@@ -119,4 +120,41 @@ export type TransferComplianceDto = EvaluateResponse & {
   override: ComplianceOverrideDto | null;
   /** readDocuments: the documents list of the transfer (its parties and couriers, not admins). */
   abilities: { override: boolean; attachDocuments: boolean; readDocuments: boolean };
+};
+
+// ---------------------------------------------------------------- rule coverage
+
+/**
+ * An administrator's review of a jurisdiction's rules in the library: the day it was done and by
+ * whom, or both null to withdraw the review. Notes say what was read and what is missing.
+ */
+export const coverageReviewInputSchema = z
+  .strictObject({
+    reviewedOn: z.iso.date().nullable(),
+    reviewedBy: requiredText(200).nullable(),
+    notes: optionalText(2000),
+  })
+  .refine((input) => (input.reviewedOn === null) === (input.reviewedBy === null), {
+    params: { instruction: "give both the day of the review and who made it, or neither" },
+    path: ["reviewedBy"],
+  });
+export type CoverageReviewInput = z.output<typeof coverageReviewInputSchema>;
+
+/** A jurisdiction's coverage record as the coverage screen shows it. */
+export type JurisdictionCoverageDto = {
+  jurisdiction: Jurisdiction;
+  name: string;
+  /** Reviewed, and no demo rule stands for it. */
+  covered: boolean;
+  reviewedOn: string | null;
+  reviewedBy: string | null;
+  notes: string | null;
+  wildlifeAgency: Agency;
+  stateVeterinarian: Agency;
+  /** Where the offices' names and addresses were read. */
+  source: string;
+  /** Rules in force in the library for it (not retired), published and demo. */
+  rules: { published: number; demo: number };
+  updatedAt: string;
+  updatedBy: { id: string; displayName: string } | null;
 };

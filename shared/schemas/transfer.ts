@@ -30,9 +30,15 @@ import {
   TRANSFER_SORT_KEYS,
   type AlertKind,
   type CustodyKind,
+  type DeliveryAcknowledgementWay,
+  type DeliveryState,
+  type HandoffReasonKey,
+  type PhotoMoment,
+  type PhotoSubject,
+  PHOTO_MOMENTS,
+  PHOTO_SUBJECTS,
   type HandoffKind,
   type PackingFindingCode,
-  type RegisterCondition,
   type ViewerRole,
 } from "../constants";
 import type { ChainBreak, ChainHead, SealedEntry } from "../custody/hash-chain";
@@ -83,6 +89,8 @@ export const animalInputSchema = z.strictObject({
   notes: optionalText(2000),
   /** The `key` of the box it travels in; null until it is packed. */
   containerKey: text(64).nullable(),
+  /** The sender's register entry the line was started from (issue 15 §2); left out: unchanged. */
+  registerEntryId: idSchema.nullable().optional(),
 });
 export type AnimalInput = z.input<typeof animalInputSchema>;
 
@@ -180,6 +188,14 @@ export const transitionSchema = z.strictObject({
   reason: optionalText(1000),
   /** Set with a reason to ship despite a compliance or temperature block (logged). */
   override: z.boolean().optional(),
+  /**
+   * Which blocks the override answers: the ones the confirming party was shown ("compliance" for
+   * an unverified rules check, "temperature"). Without it, an override answers every block.
+   */
+  overrideGates: z
+    .array(z.enum(["compliance", "temperature"]))
+    .max(2)
+    .optional(),
 });
 export type TransitionInput = z.input<typeof transitionSchema>;
 
@@ -195,6 +211,13 @@ export const messageInputSchema = z.strictObject({ body: requiredText(4000) });
 
 /** A party saying they have seen an alert: what they did or will do about it. */
 export const alertAcknowledgeSchema = z.strictObject({ note: requiredText(1000) });
+
+/** A delivery code as the receiver reads it out: six digits (spaces typed between them do not count). */
+export const deliveryCodeSchema = z
+  .string()
+  .max(20)
+  .transform((value) => value.replace(/\s+/g, ""))
+  .pipe(z.string().regex(/^\d{6}$/, { error: instruction("type the six digits shown in the receiver's account") }));
 
 /** What the person taking custody checks and records at a pickup or handoff. */
 export const handoffInputSchema = z.strictObject({
@@ -214,9 +237,50 @@ export const handoffInputSchema = z.strictObject({
   releasedByName: requiredText(120),
   receivedByName: requiredText(120),
   notes: optionalText(2000),
+  /**
+   * Why a handoff that fails a plausibility check is right all the same: a pickup long before the
+   * departure, a speed the mode cannot reach, custody to someone not assigned. The server refuses
+   * such a handoff without the reason (400 naming the field) and raises an alert with it.
+   */
+  reasons: z
+    .strictObject({
+      earlyPickup: optionalText(1000),
+      implausibleSpeed: optionalText(1000),
+      unexpectedParty: optionalText(1000),
+    })
+    .optional(),
+  /** At the delivery: the one-time code the receiver shows in their own account, so the receiver acknowledges on this phone. */
+  receiverCode: deliveryCodeSchema.nullable().optional(),
   acknowledged: z.literal(true, { message: "Confirm that you have checked the boxes and taken custody." }),
 });
 export type HandoffInput = z.input<typeof handoffInputSchema>;
+
+/**
+ * The receiver says "I have the boxes" for a delivery the courier recorded: from their own account
+ * (no code), or on the courier's phone with the one-time code shown in their account.
+ */
+export const deliveryAcknowledgeSchema = z.strictObject({ code: deliveryCodeSchema.optional() });
+export type DeliveryAcknowledgeInput = z.input<typeof deliveryAcknowledgeSchema>;
+
+/** What a photo shows and when it was taken; the file itself is the request body. */
+export const photoUploadQuerySchema = z
+  .strictObject({
+    moment: z.enum(PHOTO_MOMENTS),
+    handoffIndex: z.coerce.number<string | number>().int().min(0).max(20).optional(),
+    subject: z.enum(PHOTO_SUBJECTS),
+    containerId: idSchema.optional(),
+    animalId: idSchema.optional(),
+    caption: text(200).optional(),
+  })
+  .superRefine((value, ctx) => {
+    if (value.moment === "handoff" && value.handoffIndex === undefined)
+      ctx.addIssue({
+        code: "custom",
+        path: ["handoffIndex"],
+        params: { instruction: "say which handoff the photo is of" },
+      });
+  });
+export type PhotoUploadQuery = z.input<typeof photoUploadQuerySchema>;
 
 /** A count per outcome for one animal line; they must add up to the line's count. */
 export const checkInItemSchema = z.strictObject({
@@ -245,6 +309,8 @@ export const checkInInputSchema = z.strictObject({
     )
     .max(100),
   notes: optionalText(LIMITS.textMax),
+  /** The box temperature read on opening, °F (issue 13): drawn beside the model, checked against the safe range. */
+  boxTempF: measure("temperature", { min: -40, max: 160 }).nullable().optional(),
   signedName: requiredText(120),
   acknowledged: z.literal(true, { message: "Confirm that every container was opened and checked." }),
 });
@@ -262,14 +328,6 @@ export const transferListQuerySchema = z.strictObject({
   limit: z.coerce.number<string | number>().int().min(1).max(100).default(50),
 });
 export type TransferListQuery = z.input<typeof transferListQuerySchema>;
-
-export const registerQuerySchema = z.strictObject({
-  q: text(100).optional(),
-  taxonId: idSchema.optional(),
-  sex: z.enum(SEXES).optional(),
-  from: dateSchema.optional(),
-  to: dateSchema.optional(),
-});
 
 // ---------------------------------------------------------------- responses
 
@@ -349,11 +407,54 @@ export type HandoffDto = {
   receivedByName: string;
   boxesExpected: number;
   boxesCounted: number;
-  seals: { containerId: string; sealNumber: string | null; expected: string | null; intact: boolean }[];
+  /** `expected` is the number on record when the handoff was recorded; `matches` compares them as read. */
+  seals: {
+    containerId: string;
+    sealNumber: string | null;
+    expected: string | null;
+    matches: boolean;
+    intact: boolean;
+  }[];
+  /** Boxes whose seals the record says nothing about. */
+  sealsUnchecked: string[];
   boxTempF: number | null;
   place: { text: string | null; lat: number | null; lon: number | null; accuracyM: number | null };
   notes: string | null;
+  /** The reasons given for failed plausibility checks. */
+  reasons: Partial<Record<HandoffReasonKey, string>>;
+  /** What could not be checked at this handoff, in words. */
+  notChecked: string[];
 };
+
+/** The delivery to the receiver, once recorded: acknowledged by the receiver, or waiting for it. */
+export type DeliveryDto = {
+  state: DeliveryState;
+  recordedAt: string;
+  recordedBy: { id: string | null; displayName: string };
+  acknowledgedAt: string | null;
+  acknowledgedBy: { id: string | null; displayName: string } | null;
+  way: DeliveryAcknowledgementWay | null;
+};
+
+/** A photo taken at a handoff or at the check-in; `url` serves it to the parties and assigned couriers. */
+export type PhotoDto = {
+  id: string;
+  moment: PhotoMoment;
+  handoffIndex: number | null;
+  subject: PhotoSubject;
+  containerId: string | null;
+  animalId: string | null;
+  caption: string | null;
+  contentType: string;
+  sizeBytes: number;
+  sha256: string;
+  uploadedBy: { id: string; displayName: string };
+  at: string;
+  url: string;
+};
+
+/** A fresh one-time delivery code, shown once to the receiver. */
+export type DeliveryCodeDto = { code: string; expiresAt: string };
 
 /** A problem with the packing the sender must resolve before sending for confirmation. */
 export type PackingFindingDto = {
@@ -415,6 +516,16 @@ export type TransferAbilitiesDto = {
   readPrivateNotes: boolean;
   /** May say they have seen an alert (a party of the transfer or an assigned courier). */
   acknowledgeAlerts: boolean;
+  /** The receiver may say "I have the boxes" for a delivery the courier recorded. */
+  acknowledgeDelivery: boolean;
+  /** The receiver may show a one-time code for the courier's phone. */
+  showDeliveryCode: boolean;
+  /** The delivering courier may enter the receiver's code for a delivery already recorded. */
+  enterDeliveryCode: boolean;
+  /** May add photos to a recorded handoff or the check-in. */
+  addPhotos: boolean;
+  /** May see the photos (the parties and assigned couriers). */
+  readPhotos: boolean;
 };
 
 /** Something on the record a party must see; kept for good, acknowledged with a note. */
@@ -478,6 +589,10 @@ export type TransferDto = {
   loadedWithoutChecks: LoadedWithoutChecksDto | null;
   /** Every alert raised on this transfer, oldest first; acknowledged ones stay. */
   alerts: AlertDto[];
+  /** The delivery to the receiver, once recorded; null before. */
+  delivery: DeliveryDto | null;
+  /** Photos at the handoffs and the check-in, oldest first (empty for those who may not see them). */
+  photos: PhotoDto[];
   abilities: TransferAbilitiesDto;
   createdAt: string;
   updatedAt: string;
@@ -558,20 +673,6 @@ export type TaxonSearchHitDto = TaxonBriefDto & {
   commonNames: string[];
   synonyms: string[];
   matched: { name: string; kind: "scientific" | "common" | "synonym" };
-};
-
-export type RegisterEntryDto = {
-  id: string;
-  taxon: TaxonBriefDto;
-  sex: Sex;
-  count: number;
-  identifier: string | null;
-  dateAcquired: string;
-  sourceOrganization: string;
-  transferNumber: string;
-  transferId: string;
-  condition: RegisterCondition;
-  notes: string | null;
 };
 
 export type DirectoryOrganizationDto = {

@@ -1,16 +1,32 @@
 import { haversineKm } from "./geo";
-import { PLAUSIBLE_AMBIENT_F, SAFER_DEPARTURE_SEARCH_DAYS } from "./limits";
+import { PLAUSIBLE_AMBIENT_F, PLAUSIBLE_RADIATION_WM2, SAFER_DEPARTURE_SEARCH_DAYS } from "./limits";
 import type { TransitTimeline } from "./timeline";
 import { MS_PER_DAY, MS_PER_HOUR } from "./zoned-time";
 
-/** One hourly outside temperature, °F, at an ISO 8601 instant. */
-export type HourlyTempF = { at: string; tempF: number };
+/**
+ * One hourly outside temperature, °F, at an ISO 8601 instant; with a forecast, also the solar
+ * radiation on the ground (W/m², the mean of the hour that ends at `at`, as Open-Meteo reports it).
+ */
+export type HourlyTempF = { at: string; tempF: number; radiationWm2?: number };
 
 /** The hourly forecast at one position, as the weather adapter returns it. */
 export type PointForecast = { lat: number; lon: number; hours: readonly HourlyTempF[] };
 
 /** Outside temperature (°F) for the hours of a timeline, keyed by the hour's ISO UTC string. */
 export type AmbientByHour = ReadonlyMap<string, number>;
+
+/** Solar radiation on the ground (W/m², mean of the hour ending then) for the hours of a timeline. */
+export type RadiationByHour = ReadonlyMap<string, number>;
+
+/** Whether a value can be global horizontal radiation at the ground, W/m². */
+export function isPlausibleRadiationWm2(value: unknown): value is number {
+  return (
+    typeof value === "number" &&
+    Number.isFinite(value) &&
+    value >= PLAUSIBLE_RADIATION_WM2.min &&
+    value <= PLAUSIBLE_RADIATION_WM2.max
+  );
+}
 
 /** Whether a value can be an outside air temperature in °F (finite and within the recorded extremes). */
 export function isPlausibleAmbientF(tempF: unknown): tempF is number {
@@ -38,7 +54,14 @@ export function forecastWindow(
 }
 
 /** Forecasts prepared for repeated lookups by position and hour (ISO UTC key, as timeline points carry). */
-export type ForecastIndex = { points: { lat: number; lon: number; byHour: ReadonlyMap<string, number> }[] };
+export type ForecastIndex = {
+  points: {
+    lat: number;
+    lon: number;
+    byHour: ReadonlyMap<string, number>;
+    radiationByHour: ReadonlyMap<string, number>;
+  }[];
+};
 
 /** `toISOString` form of an instant; strings already in that form (the adapter's) pass as they are. */
 function isoKey(at: string): string | undefined {
@@ -52,11 +75,14 @@ export function indexForecasts(forecasts: readonly PointForecast[]): ForecastInd
   return {
     points: forecasts.map((f) => {
       const byHour = new Map<string, number>();
+      const radiationByHour = new Map<string, number>();
       for (const h of f.hours) {
         const key = isoKey(h.at);
-        if (key !== undefined) byHour.set(key, h.tempF);
+        if (key === undefined) continue;
+        byHour.set(key, h.tempF);
+        if (isPlausibleRadiationWm2(h.radiationWm2)) radiationByHour.set(key, h.radiationWm2);
       }
-      return { lat: f.lat, lon: f.lon, byHour };
+      return { lat: f.lat, lon: f.lon, byHour, radiationByHour };
     }),
   };
 }
@@ -67,6 +93,19 @@ export function indexForecasts(forecasts: readonly PointForecast[]): ForecastInd
  * Hours without a forecast are left out, and the assessment reports them as unavailable.
  */
 export function ambientFromForecasts(timeline: TransitTimeline, index: ForecastIndex, maxMatchKm = 25): AmbientByHour {
+  return weatherFromForecasts(timeline, index, maxMatchKm).ambient;
+}
+
+/**
+ * Outside temperature and solar radiation for each hour of the timeline, from the forecast
+ * nearest each hour's waypoint (see ambientFromForecasts). Hours without radiation are left out:
+ * the exposure model then takes a clear sky (see exposure.ts).
+ */
+export function weatherFromForecasts(
+  timeline: TransitTimeline,
+  index: ForecastIndex,
+  maxMatchKm = 25,
+): { ambient: AmbientByHour; radiation: RadiationByHour } {
   const matched = timeline.waypoints.map((w) => {
     let best: ForecastIndex["points"][number] | undefined;
     let bestKm = maxMatchKm;
@@ -77,11 +116,15 @@ export function ambientFromForecasts(timeline: TransitTimeline, index: ForecastI
     return best;
   });
   const ambient = new Map<string, number>();
+  const radiation = new Map<string, number>();
   for (const point of timeline.points) {
-    const tempF = matched[point.waypoint]?.byHour.get(point.at);
+    const forecast = matched[point.waypoint];
+    const tempF = forecast?.byHour.get(point.at);
     if (tempF !== undefined) ambient.set(point.at, tempF);
+    const wm2 = forecast?.radiationByHour.get(point.at);
+    if (wm2 !== undefined) radiation.set(point.at, wm2);
   }
-  return ambient;
+  return { ambient, radiation };
 }
 
 /**

@@ -15,8 +15,17 @@ const losAngeles: TransitPlace = { label: "Los Angeles, CA", lat: 33.94, lon: -1
 const airTrip = (departAt: string | number) =>
   buildTransitTimeline({ mode: "overnight_air", origin: newYork, destination: losAngeles, departAt });
 
-// Tuesday 2 June 2026: a departure with no calendar warnings.
-const tuesday = airTrip("2026-06-02T10:00:00-04:00");
+// Tuesday 2 June 2026: a departure with no calendar warnings, handed to the carrier at its 18:00
+// pickup (so the box spends no hours in the sender's room before it).
+const tuesday = airTrip("2026-06-02T18:00:00-04:00");
+
+/** The keys of the public contract (issue 5); the exposure model's extras are checked apart. */
+const contractOf = (result: Record<string, unknown>) =>
+  Object.fromEntries(
+    ["verdict", "advice", "ambientF", "insideF", "hoursOutsideRange", "hours", "suggestedDeparture", "sources"].map(
+      (key) => [key, result[key]],
+    ),
+  );
 
 const box: BoxSpec = {
   wall: "eps",
@@ -57,7 +66,7 @@ const assess = (overrides: Partial<AssessmentInput> & { tempF?: number }) => {
 describe("assessTransit: verdicts", () => {
   it("ships a mild day as planned, in the exact API shape", () => {
     const result = assess({ tempF: 75 });
-    expect(transitAssessmentSchema.parse(result)).toEqual(result);
+    expect(transitAssessmentSchema.parse(contractOf(result))).toEqual(contractOf(result));
     expect(result).toMatchObject({
       verdict: "ship",
       advice: { code: "ship_as_planned", pack: "none" },
@@ -66,7 +75,7 @@ describe("assessTransit: verdicts", () => {
     expect(result.ambientF).toEqual({ min: 75, max: 75 });
     expect(result.hours).toHaveLength(tuesday.points.length);
     expect(result.hours[0]).toMatchObject({ at: tuesday.points[0]!.at, place: "New York, NY", ambientF: 75 });
-    expect(result.sources.map((s) => s.id)).toEqual(["guideline", "profile", "forecast", "box-model"]);
+    expect(result.sources.map((s) => s.id)).toEqual(["guideline", "profile", "forecast", "box-model", "exposure"]);
   });
 
   it("adds a heat pack on a 45 °F day and shows the box as planned going cold", () => {
@@ -77,8 +86,9 @@ describe("assessTransit: verdicts", () => {
     expect(result.insideF!.min).toBeLessThan(55);
     expect(result.insideF!.min).toBeGreaterThanOrEqual(45);
     expect(result.hoursOutsideRange).toBeGreaterThan(10);
+    // it never warms above the packing room: the carrier's buildings and vans are all colder
     const inside = result.hours.map((h) => h.insideF!);
-    expect(inside).toEqual([...inside].sort((a, b) => b - a));
+    expect(Math.max(...inside.slice(1))).toBeLessThan(72);
   });
 
   it("keeps a planned heat pack that already does the job", () => {
@@ -98,7 +108,16 @@ describe("assessTransit: verdicts", () => {
       departAt: "2026-06-01T06:00:00-05:00",
     });
     expect(long.durationH).toBeGreaterThan(40);
-    expect(assess({ timeline: long, tempF: 45 }).advice).toMatchObject({ code: "add_heat_pack", pack: "heat_72h" });
+    // a courier's van held at the outside temperature: the air around the box is 45 °F throughout
+    const held = assessTransit({
+      timeline: long,
+      ambientByHour: constantF(long, 45),
+      box,
+      profile: DEFAULT_PROFILES.temperate_snake,
+      packs: strongPacks,
+      exposure: { vehicle: "climate_controlled", vehicleRangeF: { min: 45, max: 45 } },
+    });
+    expect(held.advice).toMatchObject({ code: "add_heat_pack", pack: "heat_72h" });
   });
 
   it("takes a heat pack out when it would overheat a mild-weather box", () => {
@@ -169,7 +188,7 @@ describe("assessTransit: forecast unavailable", () => {
     const ambient = new Map(complete);
     spoil(ambient);
     const result = assess({ ambientByHour: ambient });
-    expect(transitAssessmentSchema.parse(result)).toEqual(result);
+    expect(transitAssessmentSchema.parse(contractOf(result))).toEqual(contractOf(result));
     expect(result).toMatchObject({
       verdict: "forecast_unavailable",
       advice: { code: "retry_when_forecast_available", pack: null },
@@ -191,7 +210,10 @@ describe("safer departure", () => {
   /** Outside temperature by the local departure date, 97 °F unless named. */
   const weather = (mildDates: readonly string[]) => (timeline: TransitTimeline) =>
     constantF(timeline, mildDates.some((d) => timeline.points[0]!.localTime.startsWith(d)) ? 75 : 97);
-  const search = (mildDates: readonly string[]) => ({ timelineFor: airTrip, ambientFor: weather(mildDates) });
+  const search = (mildDates: readonly string[]) => ({
+    timelineFor: airTrip,
+    weatherFor: (timeline: TransitTimeline) => ({ ambient: weather(mildDates)(timeline) }),
+  });
   const monday = airTrip("2026-06-01T10:00:00-04:00");
 
   it("suggests the first mild weekday at the same local time", () => {
@@ -253,5 +275,98 @@ describe("default packs", () => {
     const gainF = heated.hours.map((h, i) => h.insideF! - plain.hours[i]!.insideF!);
     expect(Math.max(...gainF)).toBeGreaterThan(8);
     expect(Math.max(...gainF)).toBeLessThan(4 * 1.69 * 1.8 + 0.5);
+  });
+});
+
+describe("where the box really is (issue 13)", () => {
+  const atlanta: TransitPlace = { label: "Atlanta, GA", lat: 33.75, lon: -84.39, timeZone: "America/New_York" };
+  const macon: TransitPlace = { label: "Macon, GA", lat: 32.84, lon: -83.63, timeZone: "America/New_York" };
+  const nashville: TransitPlace = { label: "Nashville, TN", lat: 36.12, lon: -86.67, timeZone: "America/Chicago" };
+  const handDelivery = (parked: "sun" | "shade" | "indoors") => {
+    const timeline = buildTransitTimeline({
+      mode: "hand_delivery",
+      origin: atlanta,
+      destination: macon,
+      departAt: "2026-07-14T11:30:00-04:00",
+      options: { driving: { plannedStops: [{ afterDepartMin: 60, durationMin: 60 }] } },
+    });
+    return assessTransit({
+      timeline,
+      ambientByHour: constantF(timeline, 90),
+      box,
+      profile: DEFAULT_PROFILES.temperate_snake,
+      exposure: { vehicle: "climate_controlled", stopParking: [parked] },
+    });
+  };
+
+  it("flags a lunch stop in a car parked in the sun on a 90 °F day, naming the stretch", () => {
+    // McLaren 2005: a closed car in the sun gains about 40 °F in an hour [published]
+    const result = handDelivery("sun");
+    expect(["ship"]).not.toContain(result.verdict);
+    expect(result.decidingStretch).toMatchObject({ exposure: "parked_sun", direction: "hot" });
+    expect(result.decidingStretch!.aroundF).toBeGreaterThan(120);
+    expect(result.advice.message).toContain("12:30–13:30");
+    expect(result.advice.message).toContain("parked in the sun");
+    expect(result.advice.message).toMatch(/the car reaches about 1\d\d °F; the box inside reaches \d+ °F/);
+    expect(result.advice.message).toMatch(/shade|indoors/);
+    const stopHour = result.hours.find((h) => h.at === "2026-07-14T17:00:00.000Z")!;
+    expect(stopHour.exposure).toBe("parked_sun");
+    expect(stopHour.aroundBoxF!).toBeGreaterThan(stopHour.ambientF! + 20);
+  });
+
+  it("clears the same stop taken indoors", () => {
+    const result = handDelivery("indoors");
+    expect(result.verdict).toBe("ship");
+    expect(result.decidingStretch?.suggestions).toEqual([]);
+  });
+
+  it("lets a December ground trip go in a heated van while saying what an unconditioned one does", () => {
+    // issue 13: couriers who carry reptiles drive heated vans all winter [practice]
+    const timeline = buildTransitTimeline({
+      mode: "ground_courier",
+      origin: nashville,
+      destination: losAngeles,
+      departAt: "2026-12-08T06:00:00-06:00",
+    });
+    const input = {
+      timeline,
+      ambientByHour: constantF(timeline, 30),
+      box,
+      profile: DEFAULT_PROFILES.temperate_snake,
+    };
+    const heated = assessTransit({ ...input, exposure: { vehicle: "climate_controlled" } });
+    expect(["ship", "pack"]).toContain(heated.verdict);
+    expect(heated.vehicle).toMatchObject({ conditioning: "climate_controlled", declared: true, note: null });
+
+    const unsaid = assessTransit(input);
+    expect(unsaid.verdict).toBe("do_not_ship");
+    expect(unsaid.vehicle).toMatchObject({ conditioning: "unconditioned", declared: false });
+    expect(unsaid.vehicle.note).toContain("not climate-controlled");
+    expect(unsaid.vehicle.ifClimateControlled?.verdict).toBe(heated.verdict);
+    expect(unsaid.advice.message).toContain("A climate-controlled vehicle");
+  });
+
+  it("never turns a verdict green on an assumption", () => {
+    // issue 13: where nobody said how the vehicle is held, the verdict is never better than either case
+    const order = ["forecast_unavailable", "do_not_ship", "hold", "pack", "ship"];
+    for (const tempF of [20, 45, 62, 75, 88, 93]) {
+      const timeline = buildTransitTimeline({
+        mode: "hand_delivery",
+        origin: atlanta,
+        destination: macon,
+        departAt: "2026-07-14T09:00:00-04:00",
+      });
+      const common = {
+        timeline,
+        ambientByHour: constantF(timeline, tempF),
+        box,
+        profile: DEFAULT_PROFILES.tropical_snake,
+      };
+      const unsaid = assessTransit(common).verdict;
+      for (const vehicle of ["climate_controlled", "unconditioned"] as const) {
+        const said = assessTransit({ ...common, exposure: { vehicle } }).verdict;
+        expect(order.indexOf(unsaid), `${tempF} °F vs ${vehicle}`).toBeLessThanOrEqual(order.indexOf(said));
+      }
+    }
   });
 });

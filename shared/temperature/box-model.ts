@@ -169,6 +169,9 @@ export type SimulationResult = {
   insideC: number[];
   minC: number;
   maxC: number;
+  /** When the inside was coldest and warmest, s after the start. */
+  minAtS: number;
+  maxAtS: number;
   secondsOutsideRange: number;
   /** When the cold pack's last ice melted, s after the start; null if it lasted (or no cold pack). */
   iceMeltedAtS: number | null;
@@ -207,6 +210,8 @@ export function simulateInterior(input: SimulationInput): SimulationResult {
     insideC: [inside],
     minC: inside,
     maxC: inside,
+    minAtS: 0,
+    maxAtS: 0,
     secondsOutsideRange: 0,
     iceMeltedAtS: null,
   };
@@ -221,8 +226,8 @@ export function simulateInterior(input: SimulationInput): SimulationResult {
       const meltShare = ice.absorb(conductance * (meanInside - packC) * dt);
       if (meltShare !== null && result.iceMeltedAtS === null) result.iceMeltedAtS = step * dt + meltShare * dt;
     }
-    result.minC = Math.min(result.minC, inside);
-    result.maxC = Math.max(result.maxC, inside);
+    if (inside < result.minC) [result.minC, result.minAtS] = [inside, (step + 1) * dt];
+    if (inside > result.maxC) [result.maxC, result.maxAtS] = [inside, (step + 1) * dt];
     if (range && (inside < range.min || inside > range.max)) result.secondsOutsideRange += dt;
     if ((step + 1) % stepsPerSample === 0) result.insideC.push(inside);
   }

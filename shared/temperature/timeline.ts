@@ -16,8 +16,9 @@ import {
   weekdayOf,
 } from "./zoned-time";
 
-/** Where the box is during an hour of the trip. */
-export type TimelineSegment = "origin" | "hub" | "en_route" | "rest_stop" | "overnight_rest" | "destination";
+/** Where the box is during an hour of the trip. "planned_stop": a stop the driver named. */
+export type TimelineSegment =
+  "origin" | "hub" | "en_route" | "rest_stop" | "overnight_rest" | "planned_stop" | "destination";
 
 /** One hour of the trip: where the box is, in that place's own time zone. */
 export type TimelinePoint = {
@@ -51,6 +52,17 @@ export type TransitWarning = {
   message: string;
 };
 
+/** A stretch of the trip in one state, as scheduled (ms since the epoch, UTC). */
+export type TimelineStay = {
+  startMs: number;
+  endMs: number;
+  segment: TimelineSegment;
+  /** The waypoint nearest the stretch's middle. */
+  waypoint: number;
+  /** For a driver's planned stop: its index in the request's `plannedStops`. */
+  plannedStop?: number;
+};
+
 export type TransitTimeline = {
   mode: TransportMode;
   departAt: string;
@@ -62,8 +74,18 @@ export type TransitTimeline = {
   /** The forecast points: origin, hub or points along the way, destination. */
   waypoints: TransitPlace[];
   points: TimelinePoint[];
+  /** The schedule behind the points: departure to delivery, stretch by stretch. */
+  stays: TimelineStay[];
+  /** Indexes of planned stops that fall after the modelled arrival, so are not in the trip. */
+  skippedStops: number[];
   warnings: TransitWarning[];
 };
+
+/**
+ * A stop the driver plans, timed from the departure: it interrupts the driving wherever the car
+ * is then, and counts as the break the hours-of-service plan would otherwise add.
+ */
+export type PlannedStop = { afterDepartMin: number; durationMin: number };
 
 /** Overnight air carrier schedule, as local clock times `HH:MM`. */
 export type AirOptions = {
@@ -90,6 +112,10 @@ export type DrivingOptions = {
   overnightRestH: number;
   /** The driver's own stops; when given they replace the automatic breaks and overnight rests. */
   stops?: readonly DrivingStop[];
+  /** Stops at given times, added into the hours-of-service plan (see PlannedStop). */
+  plannedStops?: readonly PlannedStop[];
+  /** Names the town nearest a position ("Macon, GA"), for the points along the way. */
+  nameNear?: (lat: number, lon: number) => string | undefined;
 };
 
 export type TimelineOptions = { air?: Partial<AirOptions>; driving?: Partial<DrivingOptions> };
@@ -141,9 +167,16 @@ type Stay = {
   waypoint?: number;
   fromKm?: number;
   toKm?: number;
+  plannedStop?: number;
 };
 
-type Schedule = { stays: Stay[]; waypoints: TransitPlace[]; roadKm: number | null; warnings: TransitWarning[] };
+type Schedule = {
+  stays: Stay[];
+  waypoints: TransitPlace[];
+  roadKm: number | null;
+  warnings: TransitWarning[];
+  skippedStops?: number[];
+};
 
 /**
  * Hour-by-hour positions of the box from departure to delivery, with warnings for weekends and
@@ -164,6 +197,14 @@ export function buildTransitTimeline(request: TimelineRequest): TransitTimeline 
     throw new RangeError(`the trip would last more than ${MAX_TRANSIT_H} h`);
   }
   const points = hourlyPoints(schedule, departMs, arriveMs);
+  // Whole milliseconds, as the ISO times of the departure and arrival hold them (Date truncates).
+  const stays: TimelineStay[] = schedule.stays.map((stay) => ({
+    startMs: Math.trunc(stay.startMs),
+    endMs: Math.trunc(stay.endMs),
+    segment: stay.segment,
+    waypoint: locate(stay, (stay.startMs + stay.endMs) / 2, schedule).waypoint,
+    ...(stay.plannedStop === undefined ? {} : { plannedStop: stay.plannedStop }),
+  }));
   return {
     mode: request.mode,
     departAt: new Date(departMs).toISOString(),
@@ -173,6 +214,8 @@ export function buildTransitTimeline(request: TimelineRequest): TransitTimeline 
     roadKm: schedule.roadKm,
     waypoints: schedule.waypoints,
     points,
+    stays,
+    skippedStops: schedule.skippedStops ?? [],
     warnings: [...schedule.warnings, ...calendarWarnings(points, departMs, arriveMs, request)],
   };
 }
@@ -252,6 +295,10 @@ function checkedDriving(options: DrivingOptions): DrivingOptions {
     if (!(stop.afterDrivingH >= 0) || !(stop.durationH > 0))
       throw new RangeError("stops need afterDrivingH ≥ 0 and durationH > 0");
   }
+  for (const stop of options.plannedStops ?? []) {
+    if (!(stop.afterDepartMin >= 0) || !(stop.durationMin > 0))
+      throw new RangeError("planned stops need afterDepartMin ≥ 0 and durationMin > 0");
+  }
   return options;
 }
 
@@ -259,26 +306,28 @@ function drivingWaypoints(
   origin: TransitPlace,
   destination: TransitPlace,
   roadKm: number,
-  spacingKm: number,
+  options: Pick<DrivingOptions, "waypointSpacingKm" | "nameNear">,
 ): TransitPlace[] {
-  const segments = Math.max(1, Math.round(haversineKm(origin, destination) / spacingKm));
+  const segments = Math.max(1, Math.round(haversineKm(origin, destination) / options.waypointSpacingKm));
   return Array.from({ length: segments + 1 }, (_, i) => {
     if (i === 0) return origin;
     if (i === segments) return destination;
     const { lat, lon } = interpolateGreatCircle(origin, destination, i / segments);
     const km = (roadKm * i) / segments;
-    const label = `en route, ${formatDistance(km, "imperial")} (${formatDistance(km, "metric")}) from ${origin.label}`;
-    return { label, lat, lon, timeZone: timeZoneAt(lat, lon) };
+    const town = options.nameNear?.(lat, lon);
+    const distance = `${formatDistance(km, "imperial")} (${formatDistance(km, "metric")}) from ${origin.label}`;
+    const label = town ? `near ${town}, ${distance}` : `en route, ${distance}`;
+    return { label, lat, lon, timeZone: timeZoneAt(lat, lon), ...(town ? { near: `near ${town}` } : {}) };
   });
 }
 
 function drivingSchedule(request: TimelineRequest, departMs: number, options: DrivingOptions): Schedule {
   const roadKm = haversineKm(request.origin, request.destination) * options.circuityFactor;
-  const waypoints = drivingWaypoints(request.origin, request.destination, roadKm, options.waypointSpacingKm);
-  const stays = options.stops
-    ? stopsPlan(departMs, roadKm, options, options.stops)
-    : hoursOfServicePlan(departMs, roadKm, options);
-  return { stays, waypoints, roadKm, warnings: [] };
+  const waypoints = drivingWaypoints(request.origin, request.destination, roadKm, options);
+  if (options.stops)
+    return { stays: stopsPlan(departMs, roadKm, options, options.stops), waypoints, roadKm, warnings: [] };
+  const { stays, skippedStops } = hoursOfServicePlan(departMs, roadKm, options);
+  return { stays, waypoints, roadKm, warnings: [], skippedStops };
 }
 
 /** A tiny remainder left by floating-point sums; no leg is this short. */
@@ -298,30 +347,71 @@ function restStay(startMs: number, hours: number, km: number, segment: TimelineS
   return { startMs, endMs: startMs + hours * MS_PER_HOUR, segment, fromKm: km, toKm: km };
 }
 
-function hoursOfServicePlan(departMs: number, roadKm: number, o: DrivingOptions): Stay[] {
+/**
+ * Driving within the hours-of-service limits: a break after so many hours at the wheel, a night's
+ * rest when the day's driving is used up. The driver's planned stops interrupt the driving at
+ * their time; one at least as long as a break counts as the break (and one as long as a night's
+ * rest threshold as the night). A planned stop that starts during a rest splits it. Stops after
+ * the arrival are left out and reported.
+ */
+function hoursOfServicePlan(
+  departMs: number,
+  roadKm: number,
+  o: DrivingOptions,
+): { stays: Stay[]; skippedStops: number[] } {
+  const planned = (o.plannedStops ?? [])
+    .map((stop, index) => ({
+      index,
+      startMs: departMs + stop.afterDepartMin * 60_000,
+      durationMs: stop.durationMin * 60_000,
+    }))
+    .sort((a, b) => a.startMs - b.startMs || a.index - b.index);
   const stays: Stay[] = [];
   let t = departMs;
   let km = 0;
   let todayH = 0;
-  // Every stint ends in a break or a night's rest, so each starts with a full break allowance.
-  while (roadKm - km > EPSILON_H * o.averageSpeedKmh) {
-    const hours = Math.min((roadKm - km) / o.averageSpeedKmh, o.breakEveryDrivingH, o.maxDrivingHPerDay - todayH);
-    const drive = driveStay(t, hours, km, o.averageSpeedKmh);
-    stays.push(drive);
-    [t, km, todayH] = [drive.endMs, drive.toKm!, todayH + hours];
-    if (roadKm - km <= EPSILON_H * o.averageSpeedKmh) break;
+  let sinceBreakH = 0;
+  let next = 0;
+  const remainingH = () => (roadKm - km) / o.averageSpeedKmh;
+  const due = () => next < planned.length && planned[next]!.startMs <= t + EPSILON_H * MS_PER_HOUR;
+  const placePlanned = () => {
+    const stop = planned[next++]!;
+    const start = Math.max(t, stop.startMs);
+    stays.push({ ...restStay(start, stop.durationMs / MS_PER_HOUR, km, "planned_stop"), plannedStop: stop.index });
+    t = start + stop.durationMs;
+    const hours = stop.durationMs / MS_PER_HOUR;
+    if (hours >= o.breakDurationH) sinceBreakH = 0;
+    if (hours >= OVERNIGHT_STOP_MIN_H) todayH = 0;
+  };
+  while (remainingH() > EPSILON_H) {
+    while (due()) placePlanned();
+    const untilStopH = next < planned.length ? (planned[next]!.startMs - t) / MS_PER_HOUR : Infinity;
+    const hours = Math.min(remainingH(), o.breakEveryDrivingH - sinceBreakH, o.maxDrivingHPerDay - todayH, untilStopH);
+    if (hours > EPSILON_H) {
+      const drive = driveStay(t, hours, km, o.averageSpeedKmh);
+      stays.push(drive);
+      [t, km, todayH, sinceBreakH] = [drive.endMs, drive.toKm!, todayH + hours, sinceBreakH + hours];
+    }
+    if (remainingH() <= EPSILON_H) break;
+    if (due()) continue;
     const overnight = todayH >= o.maxDrivingHPerDay - EPSILON_H;
-    const rest = restStay(
-      t,
-      overnight ? o.overnightRestH : o.breakDurationH,
-      km,
-      overnight ? "overnight_rest" : "rest_stop",
-    );
-    stays.push(rest);
-    [t, todayH] = [rest.endMs, overnight ? 0 : todayH];
+    if (overnight || sinceBreakH >= o.breakEveryDrivingH - EPSILON_H) {
+      const segment = overnight ? "overnight_rest" : "rest_stop";
+      const restEndMs = t + (overnight ? o.overnightRestH : o.breakDurationH) * MS_PER_HOUR;
+      while (next < planned.length && planned[next]!.startMs < restEndMs) {
+        const splitMs = Math.max(t, planned[next]!.startMs);
+        if (splitMs > t) stays.push(restStay(t, (splitMs - t) / MS_PER_HOUR, km, segment));
+        t = splitMs;
+        placePlanned();
+      }
+      if (restEndMs > t) stays.push(restStay(t, (restEndMs - t) / MS_PER_HOUR, km, segment));
+      t = Math.max(t, restEndMs);
+      sinceBreakH = 0;
+      if (overnight) todayH = 0;
+    }
     if (t - departMs > MAX_TRANSIT_H * MS_PER_HOUR) break;
   }
-  return stays;
+  return { stays, skippedStops: planned.slice(next).map((stop) => stop.index) };
 }
 
 function stopsPlan(departMs: number, roadKm: number, o: DrivingOptions, stops: readonly DrivingStop[]): Stay[] {

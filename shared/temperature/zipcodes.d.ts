@@ -1,4 +1,4 @@
-// The zipcodes package ships no types; this covers the one call the places module makes.
+// The zipcodes package ships no types; this covers what the places module uses.
 declare module "zipcodes" {
   export type ZipRecord = {
     zip: string;
@@ -9,4 +9,5 @@ declare module "zipcodes" {
     country: string;
   };
   export function lookup(zip: string | number): ZipRecord | undefined;
+  export const codes: Readonly<Record<string, ZipRecord>>;
 }

@@ -34,10 +34,22 @@ export function timeZoneAt(lat: number, lon: number): string {
   return tzLookup(lat, lon);
 }
 
+// Offsets already read, by zone and quarter hour: every zone changes its offset on a quarter hour
+// of UTC, and a trip's hours are read again for each later departure the search tries.
+const knownOffsets = new Map<string, number>();
+const KNOWN_OFFSETS_MAX = 50_000;
+const MS_PER_QUARTER_HOUR = 15 * MS_PER_MIN;
+
 /** UTC offset of `timeZone` at `utcMs`, in minutes (negative west of Greenwich). */
 export function utcOffsetMin(utcMs: number, timeZone: string): number {
+  const key = `${timeZone}|${Math.floor(utcMs / MS_PER_QUARTER_HOUR)}`;
+  const known = knownOffsets.get(key);
+  if (known !== undefined) return known;
   const offset = /GMT([+-])(\d{2}):(\d{2})/.exec(offsetFormatterFor(timeZone).format(utcMs));
-  return offset ? (offset[1] === "-" ? -1 : 1) * (Number(offset[2]) * 60 + Number(offset[3])) : 0;
+  const minutes = offset ? (offset[1] === "-" ? -1 : 1) * (Number(offset[2]) * 60 + Number(offset[3])) : 0;
+  if (knownOffsets.size >= KNOWN_OFFSETS_MAX) knownOffsets.clear();
+  knownOffsets.set(key, minutes);
+  return minutes;
 }
 
 /** The wall-clock date, time, weekday and UTC offset (minutes) of `utcMs` in `timeZone`. */

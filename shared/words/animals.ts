@@ -46,10 +46,12 @@ export const CHECK_IN_OUTCOME_WORDS: Readonly<Record<CheckInOutcome, string>> = 
   missing: "Missing",
 };
 
-/** How an animal in the register arrived. */
+/** How an animal in the register arrived; the last two are losses recorded at arrival. */
 export const REGISTER_CONDITION_WORDS: Readonly<Record<RegisterCondition, string>> = {
   well: "Well",
   problem: "With a problem",
+  dead_on_arrival: "Lost: dead on arrival",
+  missing: "Lost: missing at arrival",
 };
 
 /** A taxon's rank, as it reads in "choose a species, not a genus". */

@@ -6,6 +6,26 @@
 
 /** A field's own name, lower-case, as it reads after a group ("box 2 …") or at the start of a sentence. */
 export const FIELD_WORDS: Readonly<Record<string, string>> = {
+  // the keeper's register (issue 15)
+  ids: "chosen animals",
+  registerEntryId: "register entry",
+  acquiredOn: "day acquired",
+  acquiredHow: "how it was acquired",
+  permitIds: "permits",
+  startQuarantine: "quarantine",
+  counterparty: "to or from whom",
+  permitNumber: "permit number",
+  cause: "cause",
+  corrects: "event corrected",
+  on: "date",
+  reportStartMonth: "first month of the reporting year",
+  reportDueMonth: "month the report is due",
+  reportDueDay: "day the report is due",
+  quarantineDays: "quarantine length in days",
+  species: "species",
+  permitId: "permit",
+  quarantine: "in quarantine",
+  format: "format",
   // people and organisations
   name: "name",
   kind: "kind",
@@ -50,6 +70,7 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   to: "next state",
   reason: "reason",
   override: "override",
+  overrideGates: "blocks the override answers",
   body: "message",
   // boxes
   key: "reference",
@@ -96,6 +117,15 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   releasedByName: "name of the person handing over",
   receivedByName: "name of the person taking over",
   acknowledged: "confirmation",
+  reasons: "reasons",
+  earlyPickup: "early pickup",
+  implausibleSpeed: "distance for the time",
+  unexpectedParty: "person taking over",
+  receiverCode: "receiver's one-time code",
+  // photos
+  moment: "moment",
+  subject: "what it shows",
+  caption: "caption",
   // check-in
   items: "outcomes",
   animalId: "listed animal",
@@ -193,6 +223,12 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   doNotShipAbove: "do not ship above",
   source: "source",
   scenario: "weather scenario",
+  vehicle: "vehicle",
+  vehicleRangeF: "vehicle's set range",
+  stops: "planned stops",
+  durationMin: "length of the stop",
+  parked: "where it waits",
+  legId: "leg",
   // answers the API gives (their schemas are walked too)
   transitOnlyExempt: "exempt when only passing through",
   ruleId: "rule",
@@ -210,8 +246,16 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   hoursOutsideRange: "hours outside the safe range",
   hours: "hours",
   suggestedDeparture: "suggested departure",
+  exposure: "where the box is",
+  aroundBoxF: "air around the box",
   sources: "sources",
   title: "title",
+  coverage: "rule coverage of the route",
+  covered: "whether the rules were reviewed",
+  agency: "wildlife agency",
+  veterinarian: "state veterinarian",
+  uncoveredBecause: "why the rules are not counted as reviewed",
+  shipmentFindings: "findings for the whole shipment",
 };
 
 /** How a list's item is named: "Box 2", "Animal line 3". */
@@ -233,6 +277,7 @@ const ITEM_WORDS: Readonly<Record<string, string>> = {
   synonyms: "older name",
   ambientOverrideF: "outside temperature",
   hours: "hour",
+  stops: "stop",
   documentKinds: "kind of document",
   origins: "origin",
   purposes: "purpose",
@@ -262,6 +307,11 @@ const PAIR_WORDS: Readonly<Record<string, string>> = {
   "citation.text": "citation",
   "citation.url": "citation link",
   "place.text": "place",
+  "reasons.earlyPickup": "reason for the early pickup",
+  "reasons.implausibleSpeed": "reason for the distance covered",
+  "reasons.unexpectedParty": "reason for handing to someone else",
+  "vehicleRangeF.min": "lowest temperature of the vehicle's set range",
+  "vehicleRangeF.max": "highest temperature of the vehicle's set range",
 };
 
 /**

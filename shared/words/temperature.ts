@@ -1,4 +1,12 @@
-import type { CheckMark, ForecastUnavailableReason, WeatherScenario } from "../constants";
+import type {
+  CheckMark,
+  Exposure,
+  ForecastUnavailableReason,
+  ParkedKind,
+  ReadingSource,
+  VehicleConditioning,
+  WeatherScenario,
+} from "../constants";
 import type { AdviceCode, Verdict } from "../temperature/advice";
 
 /** Temperature verdicts in plain words. "Forecast unavailable" is never a kind of "ship". */
@@ -56,4 +64,47 @@ export const WEATHER_SCENARIO_WORDS: Readonly<Record<WeatherScenario, string>> =
   slow: "Too slow to answer",
   reset: "Connection dropped",
   redirect: "Redirected",
+};
+
+/** Where the box is, as a label (the chart's band, the hour-by-hour table). */
+export const EXPOSURE_WORDS: Readonly<Record<Exposure, string>> = {
+  outdoors: "Outdoors",
+  vehicle_climate_controlled: "Climate-controlled vehicle",
+  vehicle_unconditioned: "Unconditioned vehicle, moving",
+  parked_sun: "Parked vehicle, sun",
+  parked_shade: "Parked vehicle, shade",
+  carrier_building: "Carrier's building",
+  indoors: "Home or facility",
+};
+
+/** Where the box is, as it reads inside a sentence ("12:30–13:30 parked in the sun near Macon, GA"). */
+export const EXPOSURE_IN_SENTENCE: Readonly<Record<Exposure, string>> = {
+  outdoors: "outdoors",
+  vehicle_climate_controlled: "in the climate-controlled vehicle",
+  vehicle_unconditioned: "in the unconditioned vehicle",
+  parked_sun: "parked in the sun",
+  parked_shade: "parked in the shade",
+  carrier_building: "in the carrier's building",
+  indoors: "indoors",
+};
+
+/** How the vehicle's air is held. */
+export const VEHICLE_CONDITIONING_WORDS: Readonly<Record<VehicleConditioning, string>> = {
+  climate_controlled: "Climate-controlled",
+  unconditioned: "Not climate-controlled",
+};
+
+/** Where the vehicle waits during a stop. */
+export const PARKED_WORDS: Readonly<Record<ParkedKind, string>> = {
+  sun: "Parked in the sun",
+  shade: "Parked in the shade",
+  indoors: "Box taken indoors",
+};
+
+/** Where a box temperature was read, as the reading's place says it when the courier gave none. */
+export const READING_SOURCE_WORDS: Readonly<Record<ReadingSource, string>> = {
+  pickup: "Pickup from the sender",
+  handoff: "Handoff between couriers",
+  delivery: "Delivery to the receiver",
+  check_in: "Check-in at the receiver",
 };

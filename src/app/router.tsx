@@ -116,6 +116,22 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: screen(() => import("@/features/courier/routes/courier-handoff"), "CourierHandoffRoute"),
         },
         { path: paths.register, lazy: screen(() => import("@/features/register/routes/register"), "RegisterRoute") },
+        {
+          path: paths.registerEntry.pattern,
+          lazy: screen(() => import("@/features/register/routes/register-entry"), "RegisterEntryRoute"),
+        },
+        {
+          path: paths.registerAdd,
+          lazy: screen(() => import("@/features/register/routes/register-add"), "RegisterAddRoute"),
+        },
+        {
+          path: paths.registerImport,
+          lazy: screen(() => import("@/features/register/routes/register-import"), "RegisterImportRoute"),
+        },
+        {
+          path: paths.registerReport,
+          lazy: screen(() => import("@/features/register/routes/register-report"), "RegisterReportRoute"),
+        },
         { path: paths.permits, lazy: screen(() => import("@/features/compliance/routes/documents"), "DocumentsRoute") },
         {
           path: paths.canItTravel,
@@ -125,6 +141,10 @@ export function createAppRouter(queryClient: QueryClient) {
         {
           path: paths.planTrip,
           lazy: screen(() => import("@/features/temperature/routes/plan-trip"), "PlanTripRoute"),
+        },
+        {
+          path: paths.modelAccuracy,
+          lazy: screen(() => import("@/features/temperature/routes/model-accuracy"), "ModelAccuracyRoute"),
         },
         {
           path: paths.admin.temperatureProfiles,

@@ -32,10 +32,19 @@ export const paths = {
     },
   },
   register: "/register",
+  registerEntry: {
+    pattern: "/register/entries/:entryId",
+    href: (entryId: string) => `/register/entries/${encodeURIComponent(entryId)}`,
+  },
+  registerAdd: "/register/add",
+  registerImport: "/register/import",
+  registerReport: "/register/report",
   /** The organisation's permits and certificates (the expiry e-mail links here). */
   permits: "/permits",
   canItTravel: "/can-it-travel",
   planTrip: "/plan-trip",
+  /** How far the model has been from the box readings across the organisation's transfers. */
+  modelAccuracy: "/model-accuracy",
   admin: {
     users: "/admin/users",
     organizations: "/admin/organizations",

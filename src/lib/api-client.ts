@@ -36,6 +36,8 @@ type Options = {
   body?: unknown;
   headers?: Record<string, string>;
   signal?: AbortSignal;
+  /** Send `body` (a string) as-is with this type instead of as JSON (the register's CSV import). */
+  contentType?: string;
 };
 
 export async function api<T>(path: string, options: Options = {}, retried = false): Promise<T> {
@@ -47,14 +49,19 @@ export async function api<T>(path: string, options: Options = {}, retried = fals
     ...options.headers,
   };
   if (method !== "GET") headers["X-CSRF-Token"] = await csrf();
-  if (options.body !== undefined) headers["Content-Type"] = "application/json";
+  if (options.body !== undefined) headers["Content-Type"] = options.contentType ?? "application/json";
   let response: Response;
   try {
     response = await fetch(path, {
       method,
       headers,
       credentials: "same-origin",
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body:
+        options.body === undefined
+          ? undefined
+          : options.contentType && typeof options.body === "string"
+            ? options.body
+            : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch {
@@ -75,6 +82,45 @@ export async function api<T>(path: string, options: Options = {}, retried = fals
       error?.code ?? "error",
       error?.message ?? `The request failed (${response.status}).`,
       error?.field,
+      body as Record<string, unknown>,
+    );
+  }
+  return body as T;
+}
+
+/**
+ * Sends a file itself as the body (photos): the CSRF token as for every write, the type declared
+ * as octet-stream (the server reads the real type from the bytes), errors as ApiError.
+ */
+export async function apiFile<T>(path: string, file: Blob, retried = false): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(path, {
+      method: "POST",
+      credentials: "same-origin",
+      headers: {
+        Accept: "application/json",
+        "Content-Type": "application/octet-stream",
+        "X-CSRF-Token": await csrf(),
+      },
+      body: file,
+    });
+  } catch {
+    throw new ApiError(0, "network", "Hatchway cannot be reached. Check your connection and try again.");
+  }
+  const body = (await response.json().catch(() => null)) as {
+    error?: { code: string; message: string; field?: string };
+  } | null;
+  if (!response.ok) {
+    if (response.status === 403 && body?.error?.code === "csrf" && !retried) {
+      resetCsrf();
+      return apiFile<T>(path, file, true);
+    }
+    throw new ApiError(
+      response.status,
+      body?.error?.code ?? "error",
+      body?.error?.message ?? `The request failed (${response.status}).`,
+      body?.error?.field,
       body as Record<string, unknown>,
     );
   }

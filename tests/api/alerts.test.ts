@@ -5,7 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { LockMode } from "@mikro-orm/core";
-import { createTestApp, signIn, type TestApp } from "../support/app";
+import { createTestApp, signIn, withDatabaseAs, type TestApp } from "../support/app";
 import { buildTransfer, buildUser, type TransferCast } from "../factories";
 import { TransferSchema } from "../../server/db/entities/transfer.entity";
 import { OutboxMessageSchema } from "../../server/db/entities/outbox-message.entity";
@@ -103,14 +103,22 @@ describe("alerts on the transfer", () => {
   it("the database keeps alerts: no delete, no truncate, no rewrite, one acknowledgement", async () => {
     const { rows } = await t.ctx.pool.query("SELECT id FROM transfer_alert WHERE transfer_id = $1", [cast.transfer.id]);
     const id = rows[0].id as string;
-    // The app's login may not even try (D18: "permission denied"); the owner's triggers say "append-only".
+    // The app's login may not remove or rewrite an alert at all (D18) …
     await expect(t.ctx.pool.query("DELETE FROM transfer_alert WHERE id = $1", [id])).rejects.toThrow(
-      /append-only|permission denied/,
+      /permission denied/,
     );
-    await expect(t.ctx.pool.query("TRUNCATE transfer_alert")).rejects.toThrow(/append-only|permission denied/);
+    await expect(t.ctx.pool.query("TRUNCATE transfer_alert")).rejects.toThrow(/permission denied/);
     await expect(
       t.ctx.pool.query("UPDATE transfer_alert SET message = 'all fine' WHERE id = $1", [id]),
-    ).rejects.toThrow(/append-only|permission denied/);
+    ).rejects.toThrow(/permission denied/);
+    // … and the table's owner is stopped by the triggers.
+    await withDatabaseAs("owner", async (owner) => {
+      await expect(owner.query("DELETE FROM transfer_alert WHERE id = $1", [id])).rejects.toThrow(/append-only/);
+      await expect(owner.query("TRUNCATE transfer_alert")).rejects.toThrow(/append-only/);
+      await expect(owner.query("UPDATE transfer_alert SET message = 'all fine' WHERE id = $1", [id])).rejects.toThrow(
+        /append-only/,
+      );
+    });
     await expect(
       t.ctx.pool.query(
         "UPDATE transfer_alert SET acknowledged_at = now(), acknowledgement_note = 'rewritten' WHERE id = $1",

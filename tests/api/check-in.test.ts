@@ -125,7 +125,7 @@ describe("check-in", () => {
     expect(again.status).toBe(409);
   });
 
-  it("puts the accepted animals, and only those, in the receiver's register", async () => {
+  it("puts the accepted animals in the receiver's register, and the losses as entries that record them", async () => {
     const reg = (await receiver.get("/api/register")).body.entries.filter(
       (e: { transferId: string }) => e.transferId === cast.transfer.id,
     );
@@ -137,8 +137,10 @@ describe("check-in", () => {
     );
     expect(byKey).toEqual({
       "Agalychnis callidryas/well": 4,
+      "Agalychnis callidryas/dead_on_arrival": 1,
       "Ambystoma mexicanum/well": 2,
       "Ambystoma mexicanum/problem": 1,
+      "Ambystoma mexicanum/missing": 1,
     });
     expect(reg[0].transferNumber).toBe(cast.transfer.number);
     const sender = await signIn(t.app, cast.sender.email);
@@ -161,7 +163,7 @@ describe("check-in", () => {
     expect(csv.headers["content-disposition"]).toMatch(/attachment; filename="collection-register-/);
     const lines = csv.text.trim().split("\n");
     expect(lines[0]).toBe(
-      "Date acquired,Scientific name,Common name,Sex,Count,Identifier,Source organisation,Transfer,Condition on arrival,Notes",
+      "Date acquired,Scientific name,Common name,Sex,Count,Identifier,Source organisation,Transfer,Condition on arrival,Weight at check-in (g),Notes",
     );
     expect(lines.some((l) => l.includes("Agalychnis callidryas") && l.includes(cast.transfer.number))).toBe(true);
   });

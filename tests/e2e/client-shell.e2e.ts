@@ -65,7 +65,7 @@ describe("what each page fetches", () => {
     const scan = await context.newPage();
     const pending = collectScripts(scan);
     await scan.goto(legUrl);
-    await scan.getByRole("button", { name: /^Confirm the/ }).waitFor();
+    await scan.getByRole("button", { name: "Review before confirming" }).waitFor();
     const scripts = await settle(pending);
     expect(scripts.some((s) => s.text.includes(HEAVY.forms))).toBe(true);
     expect(scripts.filter((s) => s.text.includes(HEAVY.charts) || s.text.includes(HEAVY.table))).toEqual([]);

@@ -29,7 +29,17 @@ describe("compliance screens", () => {
     await page.getByLabel("Number").fill("DEMO-CVI-E2E-0001");
     await page.getByLabel("Valid to (last valid day)").fill(day(20));
     await page.getByLabel("Issued on").fill(day(0));
-    await page.getByLabel("Species covered, one per line").fill("Stigmochelys pardalis");
+    // Species come from the catalogue: the older name finds the accepted one.
+    await page.getByRole("combobox", { name: "Species covered" }).fill("Geochelone pardalis");
+    await page
+      .getByRole("option", { name: /Stigmochelys pardalis/ })
+      .first()
+      .click();
+    await expect
+      .poll(() =>
+        page.getByRole("list", { name: "Species covered: chosen" }).getByText("Stigmochelys pardalis").count(),
+      )
+      .toBe(1);
     await page.getByLabel("Veterinarian", { exact: true }).fill("Dr. Demo Vet");
     await page.getByLabel("Accredited veterinarian").selectOption("true");
     await page.getByLabel("Statements, one per line").fill("Examined and found free of ticks");
@@ -100,6 +110,80 @@ describe("compliance screens", () => {
     expect(await versions.getByRole("listitem").first().textContent()).toContain("by E2E reviewer");
     await expectAccessible(page);
     await screenshot(page, "compliance-rules");
+    await context.close();
+  });
+
+  it("a transfer on a route with no reviewed rules is “Unverified”, naming the states and the agencies to ask", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, "sender@demo.hatchway.test");
+    await page.waitForURL((u) => u.pathname === "/");
+    await page.getByRole("link", { name: /^HW-/ }).first().click();
+    const section = page.getByRole("region", { name: "Rules and permits" });
+    // source: issue 12 §1: never "clear" while a state on the route is not reviewed; the seed reviews none
+    await expect.poll(() => section.getByRole("status").filter({ hasText: "Unverified" }).count()).toBe(1);
+    expect(await section.getByText("Clear to travel", { exact: true }).count()).toBe(0);
+    expect(await section.getByRole("link", { name: "Oregon Department of Fish and Wildlife" }).count()).toBeGreaterThan(
+      0,
+    );
+    expect(await section.getByRole("heading", { name: "Whose rules apply on this route" }).count()).toBe(1);
+    await expectAccessible(page);
+    await screenshot(page, "compliance-unverified");
+    await context.close();
+  });
+
+  it("an admin writes a new rule with fields, retires it, and records a review of a state", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, "admin@demo.hatchway.test");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Rules" }).click();
+    await page.getByRole("button", { name: "New rule" }).click();
+    const form = page.getByRole("form", { name: "New rule" });
+    await form.getByLabel("Reference").fill("demo-e2e-or-small-sliders");
+    await form.getByLabel("Jurisdiction").selectOption("OR");
+    await form.getByLabel("Governs").selectOption("import");
+    await form.getByLabel("What the rule says, in plain words").fill("Demo rule: no slider under 4 in into Oregon.");
+    await form.getByRole("combobox", { name: "Taxa covered" }).fill("Trachemys scripta");
+    await page
+      .getByRole("option", { name: /Trachemys scripta/ })
+      .first()
+      .click();
+    // A length in the unit the person chose (inches by default), kept in mm by the form.
+    await form.getByLabel(/Applies below this length/).fill("4");
+    await form.getByLabel("Effect").selectOption("prohibited");
+    await form.getByLabel("Citation").fill("Written in the e2e test: demo rule, not a statement of that state's law");
+    expect(await page.getByRole("textbox", { name: /JSON/ }).count()).toBe(0);
+    const [created] = await Promise.all([
+      page.waitForResponse((r) => r.url().endsWith("/api/compliance/rules") && r.request().method() === "POST"),
+      form.getByRole("button", { name: "Add the rule" }).click(),
+    ]);
+    expect(created.status()).toBe(201);
+    // [published] 1 in = 25.4 mm exactly: 4 in is 101.6 mm
+    expect(
+      ((await created.json()) as { version: { rule: { conditions: { lengthBelowMm: number } } } }).version.rule
+        .conditions.lengthBelowMm,
+    ).toBeCloseTo(101.6, 6);
+    await screenshot(page, "compliance-rule-created");
+
+    await page.getByLabel("State").selectOption("OR");
+    await page.getByRole("button", { name: "Filter" }).click();
+    await page
+      .getByRole("row", { name: /no slider under 4 in/ })
+      .getByRole("button", { name: "Versions" })
+      .click();
+    await page.getByRole("button", { name: "Retire" }).click();
+    await expect.poll(() => page.getByRole("button", { name: "Put back in force" }).count()).toBe(1);
+
+    await page.getByRole("button", { name: "Coverage by state" }).click();
+    const tennessee = page.getByRole("listitem", { name: "Tennessee" });
+    await tennessee.getByRole("button", { name: "Record a review" }).click();
+    await tennessee.getByLabel("What was read, and what is missing").fill("E2E: read the state's rules.");
+    await tennessee.getByRole("button", { name: "Record the review" }).click();
+    await expect.poll(() => tennessee.getByText(/^Reviewed /).count()).toBeGreaterThan(0);
+    await expectAccessible(page);
+    await screenshot(page, "compliance-coverage");
+    // Leave the demo as it was: withdraw the review.
+    await tennessee.getByRole("button", { name: "Change the review" }).click();
+    await tennessee.getByRole("button", { name: "Withdraw the review" }).click();
+    await expect.poll(() => tennessee.getByText("Not reviewed").count()).toBe(1);
     await context.close();
   });
 });

@@ -186,6 +186,15 @@ describe("steps that ask before they act", () => {
       await page.waitForURL((u) => u.pathname === "/");
       await page.goto(transferUrl);
       await page.getByRole("button", { name: "Confirm and clear to travel" }).click();
+      // The demo route's rules were never reviewed: the rules check speaks first, and its answer
+      // does not answer the temperature block, which is asked about on its own.
+      await page.getByLabel("What the agencies told you").fill("Both agencies confirmed by phone.");
+      await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
+      await page
+        .getByRole("dialog", { name: "Confirm although the rules of the route are not verified?" })
+        .getByRole("button", { name: "Confirm anyway" })
+        .click();
+
       await page.getByLabel("Why it is safe to confirm anyway").fill("We collect at the depot in a heated van.");
       await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
       const ask = page.getByRole("dialog", { name: "Confirm past the temperature block?" });
@@ -201,12 +210,14 @@ describe("steps that ask before they act", () => {
       await expect.poll(() => notice(page, /is cleared to travel/).count()).toBe(1);
       await expect.poll(() => page.getByText("Cleared to travel", { exact: true }).count()).toBeGreaterThan(0);
       const log = await page.evaluate(async (url) => (await fetch(`/api${url}/custody`)).json(), transferUrl);
-      expect(
-        log.entries.some(
-          (e: { kind: string; payload: { gate?: string } }) =>
-            e.kind === "override" && e.payload.gate === "temperature",
-        ),
-      ).toBe(true);
+      const overrides = log.entries.filter((e: { kind: string }) => e.kind === "override") as {
+        payload: { gate: string; reason: string };
+      }[];
+      expect(overrides.map((e) => e.payload.gate)).toEqual(["compliance", "temperature"]);
+      // Each answer in its own words, in both entries.
+      expect(overrides[1]!.payload.reason).toBe(
+        "Rules of the route: Both agencies confirmed by phone. Temperature: We collect at the depot in a heated van.",
+      );
       await context.close();
     } finally {
       await apiFromPage(admin.page, "POST", "/api/dev/weather-scenario", { scenario: "normal" });

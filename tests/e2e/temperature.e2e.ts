@@ -27,7 +27,8 @@ describe("temperature screens", () => {
     await steady.fill("");
     await page.getByRole("button", { name: "Check the trip" }).click();
     await expect.poll(() => page.getByText("Outside (forecast)").count()).toBeGreaterThan(0);
-    expect(await page.locator(".recharts-line").count()).toBe(2);
+    // Three lines: the outside forecast, the air around the box, and inside the box (issue 13 §4).
+    expect(await page.locator(".recharts-line").count()).toBe(3);
     expect(await page.getByText(/Shaded: the safe range in transit for temperate snakes/).count()).toBe(1);
     await expectAccessible(page);
     await screenshot(page, "temperature-plan-trip");

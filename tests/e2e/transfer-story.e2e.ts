@@ -87,28 +87,38 @@ describe("one transfer from draft to check-in", () => {
     await page.waitForURL((u) => u.pathname === "/");
     await open(page, transferUrl);
     await page.getByRole("button", { name: "Confirm and clear to travel" }).click();
-    // The weather fake's December forecast may block: the receiver then confirms with a reason.
-    const status = await Promise.race([
-      page
-        .getByText("Cleared to travel", { exact: true })
-        .first()
-        .waitFor()
-        .then(() => "cleared"),
-      page
-        .getByRole("button", { name: "Confirm anyway, with this reason" })
-        .waitFor()
-        .then(() => "blocked"),
-    ]);
-    if (status === "blocked") {
-      await screenshot(page, "story-3a-receiver-temperature-block");
+    // No state on the demo route has reviewed rules (the verdict is "Unverified"), and the weather
+    // fake's December forecast may block: the receiver then answers each block with a reason.
+    // Each block is answered on its own (the rules check first, then the temperature if it blocks).
+    for (let answered = 0; answered < 2; answered++) {
+      const status = await Promise.race([
+        page
+          .getByText("Cleared to travel", { exact: true })
+          .first()
+          .waitFor()
+          .then(() => "cleared"),
+        page
+          .getByRole("button", { name: "Confirm anyway, with this reason" })
+          .waitFor()
+          .then(() => "blocked"),
+      ]);
+      if (status === "cleared") break;
+      await screenshot(page, `story-3${answered ? "b" : "a"}-receiver-block`);
       await page
-        .getByLabel("Why it is safe to confirm anyway")
-        .fill("Heated van door to door; we collect at the depot ourselves.");
+        .getByRole("textbox", { name: /Why it is safe to confirm anyway|What the agencies told you/ })
+        .fill("Both wildlife agencies confirmed by phone; heated van door to door.");
       await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
       await page
-        .getByRole("dialog", { name: "Confirm past the temperature block?" })
+        .getByRole("dialog", {
+          name: /^Confirm (past the temperature block|although the rules of the route are not verified)\?$/,
+        })
         .getByRole("button", { name: "Confirm anyway" })
         .click();
+      await page
+        .getByRole("dialog")
+        .waitFor({ state: "detached" })
+        .catch(() => undefined);
+      await page.waitForLoadState("networkidle");
     }
     await expect.poll(() => page.getByText("Cleared to travel", { exact: true }).count()).toBeGreaterThan(0);
     await screenshot(page, "story-3-receiver-confirmed");
@@ -123,17 +133,36 @@ describe("one transfer from draft to check-in", () => {
     for (const kind of ["pickup", "delivery"]) {
       await open(page, legsUrl);
       await page.getByRole("button", { name: /One more: Boxes/ }).click();
-      await page.getByRole("checkbox", { name: /seal/i }).first().check();
+      // The courier types the seal number they read; the number on record is shown beside it.
+      await page
+        .getByLabel(/Seal number you read on/)
+        .first()
+        .fill("E2E-0001");
+      await page.getByRole("checkbox", { name: "The seal is there and unbroken" }).first().check();
       await page.getByLabel(/Temperature in or at the box/).fill(kind === "pickup" ? "72" : "69");
       await page.getByLabel("Place").fill(kind === "pickup" ? "Sender's loading bay" : "Nature centre receiving room");
-      await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
       if (kind === "pickup") await screenshot(page, "story-4-courier-pickup-form");
-      await page.getByRole("button", { name: `Confirm the ${kind}` }).click();
+      await page.getByRole("button", { name: "Review before confirming" }).click();
+      const confirm = page.getByRole("button", { name: `Confirm the ${kind}` });
+      await confirm.waitFor({ timeout: 10_000 }).catch(async (error: unknown) => {
+        await screenshot(page, `story-failed-${kind}-review`);
+        throw error;
+      });
+      // Three days before the departure, and minutes apart across the country: the review asks why.
+      const early = page.getByLabel("Why so early?");
+      if (await early.count()) await early.fill("Collected early to ride in our heated depot.");
+      const fast = page.getByLabel("How did the boxes get here so fast?");
+      if (await fast.count()) await fast.fill("A test of the whole story, recorded minutes apart.");
+      await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
+      await confirm.click();
       await expect
         .poll(() =>
           page
             .getByRole("status")
-            .filter({ hasText: /recorded/i })
+            // The notice of this step (the review's own text says "recorded … before" too).
+            .filter({
+              hasText: kind === "pickup" ? "Pickup from the sender recorded." : "Delivery to the receiver recorded.",
+            })
             .count(),
         )
         .toBeGreaterThan(0);
@@ -147,6 +176,10 @@ describe("one transfer from draft to check-in", () => {
     const { context, page } = await newPage(browser);
     await signInAs(page, "receiver@demo.hatchway.test");
     await page.waitForURL((u) => u.pathname === "/");
+    // The courier recorded the delivery alone: the receiver confirms having the boxes first.
+    await open(page, transferUrl);
+    await page.getByRole("button", { name: "I have the boxes" }).click();
+    await expect.poll(() => page.getByText("Arrived — check-in due", { exact: true }).count()).toBeGreaterThan(0);
     await open(page, `${transferUrl}/check-in`);
     await page.getByRole("button", { name: "One more: Arrived well" }).click();
     await page.getByRole("button", { name: "One more: Arrived well" }).click();
@@ -160,6 +193,8 @@ describe("one transfer from draft to check-in", () => {
     await screenshot(page, "story-7-receiver-discrepancy");
     await open(page, transferUrl);
     await expect.poll(() => page.getByText("Checked in").count()).toBeGreaterThan(0);
+    // The loss is on the transfer for everyone to see, not only on the check-in page.
+    await expect.poll(() => page.locator("#arrival").textContent()).toContain("1 dead on arrival");
     const log = await page.evaluate(async (url) => (await fetch(`/api${url}/custody`)).json(), transferUrl);
     expect(log.intact).toBe(true);
     expect(log.entries.filter((e: { kind: string }) => e.kind === "handoff")).toHaveLength(2);

@@ -85,6 +85,7 @@ export type Client = {
   get(path: string): request.Test;
   post(path: string, body?: unknown): request.Test;
   patch(path: string, body?: unknown): request.Test;
+  put(path: string, body?: unknown): request.Test;
   del(path: string): request.Test;
 };
 
@@ -99,6 +100,7 @@ export async function anonymousClient(app: Express): Promise<Client> {
     post: (path, body) =>
       body === undefined ? withToken(agent.post(path)) : withToken(agent.post(path)).send(body as object),
     patch: (path, body) => withToken(agent.patch(path)).send(body as object),
+    put: (path, body) => withToken(agent.put(path)).send(body as object),
     del: (path) => withToken(agent.delete(path)),
   };
 }

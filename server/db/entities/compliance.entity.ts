@@ -61,6 +61,13 @@ export const PermitDocumentSchema = defineEntity({
       .onUpdate(() => new Date()),
     /** When the holder was told the document expires soon; cleared when validTo changes. */
     reminderSentAt: p.datetime().nullable(),
+    /** The first month of the permit's reporting year (1 = a calendar year); null: no yearly report. */
+    reportStartMonth: p.integer().nullable(),
+    reportDueMonth: p.integer().nullable(),
+    reportDueDay: p.integer().nullable(),
+    /** The due date the 30-day (7-day) reminder was sent for. */
+    reportReminded30For: p.date().nullable().fieldName("report_reminded_30_for"),
+    reportReminded7For: p.date().nullable().fieldName("report_reminded_7_for"),
   },
 });
 export type PermitDocument = InferEntity<typeof PermitDocumentSchema>;
@@ -126,3 +133,31 @@ export const ComplianceOverrideSchema = defineEntity({
   },
 });
 export type ComplianceOverride = InferEntity<typeof ComplianceOverrideSchema>;
+
+/**
+ * What the library knows of one jurisdiction's rules: whether they were reviewed (when, by whom)
+ * and the offices to confirm with. One row per jurisdiction, seeded with the offices' published
+ * names and addresses (server/db/seeders/jurisdiction-coverage.data.ts); admins record reviews.
+ */
+export const JurisdictionCoverageSchema = defineEntity({
+  name: "JurisdictionCoverage",
+  tableName: "jurisdiction_coverage",
+  properties: {
+    jurisdiction: p.string().length(2).primary(),
+    wildlifeAgencyName: p.text(),
+    wildlifeAgencyUrl: p.text(),
+    stateVeterinarianName: p.text(),
+    stateVeterinarianUrl: p.text(),
+    /** Where the offices' names and addresses were read ([published] or [memory]). */
+    source: p.text(),
+    notes: p.text().nullable(),
+    reviewedOn: p.date().nullable(),
+    reviewedBy: p.text().nullable(),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
+    updatedBy: () => p.manyToOne(UserSchema).ref().nullable(),
+  },
+});
+export type JurisdictionCoverage = InferEntity<typeof JurisdictionCoverageSchema>;

@@ -13,13 +13,21 @@ import {
 } from "./transfer.entity";
 import { CustodyEntrySchema } from "./custody-entry.entity";
 import { TransferAlertSchema } from "./transfer-alert.entity";
-import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema, RegisterEntrySchema } from "./check-in.entity";
+import { DeliveryCodeSchema, TransferPhotoSchema } from "./custody-evidence.entity";
+import {
+  CheckInExtraSchema,
+  CheckInItemSchema,
+  CheckInSchema,
+  RegisterEntrySchema,
+  RegisterEventSchema,
+} from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
 import {
   ComplianceEvaluationSchema,
   ComplianceOverrideSchema,
   ComplianceRuleSchema,
   DocumentScanSchema,
+  JurisdictionCoverageSchema,
   PermitDocumentSchema,
   TransferDocumentSchema,
 } from "./compliance.entity";
@@ -49,7 +57,10 @@ export {
   CheckInItemSchema,
   CheckInExtraSchema,
   RegisterEntrySchema,
+  RegisterEventSchema,
   IdempotencyKeySchema,
+  TransferPhotoSchema,
+  DeliveryCodeSchema,
 };
 
 /** Every entity the ORM knows; new entities are added here once. */
@@ -72,6 +83,7 @@ export const ENTITIES = [
   CheckInItemSchema,
   CheckInExtraSchema,
   RegisterEntrySchema,
+  RegisterEventSchema,
   IdempotencyKeySchema,
   ComplianceRuleSchema,
   PermitDocumentSchema,
@@ -79,8 +91,11 @@ export const ENTITIES = [
   TransferDocumentSchema,
   ComplianceEvaluationSchema,
   ComplianceOverrideSchema,
+  JurisdictionCoverageSchema,
   ForecastHourSchema,
   TemperatureProfileSchema,
   TemperatureCheckSchema,
   TemperatureAlertSchema,
+  TransferPhotoSchema,
+  DeliveryCodeSchema,
 ];

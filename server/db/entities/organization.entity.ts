@@ -24,6 +24,8 @@ export const OrganizationSchema = defineEntity({
     listed: p.boolean().default(false),
     /** The organisation whose person invited this one, if it came by invitation. */
     invitedBy: () => p.manyToOne(OrganizationSchema).ref().nullable(),
+    /** Days new arrivals stay in quarantine (issue 15 §4; 60 by default [practice]). */
+    quarantineDays: p.integer().default(60),
     createdAt: createdAtProperty(),
   },
 });

@@ -24,6 +24,8 @@ export const ForecastHourSchema = defineEntity({
     lonE2: p.integer().primary(),
     hour: p.datetime().primary(),
     tempF: p.float().columnType("double precision"),
+    /** Mean solar radiation of the hour ending at `hour`, W/m²; null in rows cached before it was asked for. */
+    radiationWm2: p.float().columnType("double precision").nullable(),
     fetchedAt: p.datetime(),
   },
 });

@@ -8,7 +8,9 @@ import {
   SEXES,
   TRANSFER_STATUSES,
   TRANSPORT_MODES,
+  VEHICLE_CONDITIONINGS,
   WALL_MATERIALS,
+  type ParkedKind,
 } from "@shared/constants";
 import { createdAtProperty, idProperty } from "./base";
 import { OrganizationSchema } from "./organization.entity";
@@ -16,6 +18,9 @@ import { UserSchema } from "./user.entity";
 import { TaxonSchema } from "./taxon.entity";
 
 const double = () => p.float().columnType("double precision");
+
+/** A planned stop as stored on the transfer (the what-if's shape). */
+export type StoredStop = { at: string; durationMin: number; parked: ParkedKind };
 
 /** The shared record of one move of animals from a sender to a receiver. */
 export const TransferSchema = defineEntity({
@@ -62,6 +67,12 @@ export const TransferSchema = defineEntity({
     confirmedBy: () => p.manyToOne(UserSchema).ref().nullable(),
     cancelledReason: p.text().nullable(),
     reconfirmationReason: p.text().nullable(),
+    /** How the vehicle is held on a ground trip; null: nobody said (modelled unconditioned). Issue 13. */
+    vehicle: p.enum([...VEHICLE_CONDITIONINGS]).nullable(),
+    vehicleMinF: double().nullable(),
+    vehicleMaxF: double().nullable(),
+    /** The driver's planned stops: when, how long, where the vehicle waits. */
+    plannedStops: p.json<StoredStop[]>().default([]),
     createdBy: () => p.manyToOne(UserSchema).ref(),
     createdAt: createdAtProperty(),
     updatedAt: p
@@ -111,6 +122,8 @@ export const AnimalSchema = defineEntity({
     weightG: double().nullable(),
     hatchDate: p.date().nullable(),
     notes: p.text().nullable(),
+    /** The sender's register entry this line was started from (issue 15 §2). */
+    registerEntryId: p.uuid().nullable(),
   },
 });
 export type Animal = InferEntity<typeof AnimalSchema>;
@@ -126,6 +139,10 @@ export const LegSchema = defineEntity({
     courier: () => p.manyToOne(UserSchema).ref().index(),
     fromLabel: p.string().length(120).nullable(),
     toLabel: p.string().length(120).nullable(),
+    /** The vehicle the courier declared for this leg; null: not said. Issue 13. */
+    vehicle: p.enum([...VEHICLE_CONDITIONINGS]).nullable(),
+    vehicleMinF: double().nullable(),
+    vehicleMaxF: double().nullable(),
   },
 });
 export type Leg = InferEntity<typeof LegSchema>;

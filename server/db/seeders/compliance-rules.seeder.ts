@@ -6,13 +6,16 @@ import { newId } from "../entities/base";
 
 /**
  * Loads the seed rule library (reference data: the federal rules with their citations, Hawaii's
- * snake ban and the labelled demo state rules) as version 1 of each rule, when the table is empty.
+ * published bans and the labelled demo state rules) as version 1 of each rule the library does not
+ * hold yet. A rule already there, in whatever version an admin made it, is left alone.
  */
 export async function seedComplianceRules(client: pg.Pool | pg.Client): Promise<number> {
-  const { rows } = await client.query<{ n: number }>("SELECT count(*)::int AS n FROM compliance_rule");
-  if ((rows[0]?.n ?? 0) > 0) return 0;
+  const { rows } = await client.query<{ rule_key: string }>("SELECT DISTINCT rule_key FROM compliance_rule");
+  const held = new Set(rows.map((row) => row.rule_key));
   const now = new Date().toISOString();
-  const records = [...FEDERAL_RULES, ...STATE_RULES].map((candidate) => {
+  const missing = [...FEDERAL_RULES, ...STATE_RULES].filter((rule) => !held.has(rule.id));
+  if (missing.length === 0) return 0;
+  const records = missing.map((candidate) => {
     const rule = ruleSchema.parse(candidate);
     return {
       id: newId(),

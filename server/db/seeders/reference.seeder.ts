@@ -1,6 +1,7 @@
 import pg from "pg";
 import { seedTaxa } from "./taxa.seeder";
 import { seedComplianceRules } from "./compliance-rules.seeder";
+import { seedJurisdictionCoverage } from "./jurisdiction-coverage.seeder";
 import { seedTemperatureProfiles } from "./temperature-profiles.seeder";
 
 /** Reference data every installation needs (not demo data); each part loads only when empty. */
@@ -10,6 +11,7 @@ export async function seedReferenceData(databaseUrl: string): Promise<void> {
   try {
     await seedTaxa(client);
     await seedComplianceRules(client);
+    await seedJurisdictionCoverage(client);
     await seedTemperatureProfiles(client);
   } finally {
     await client.end();

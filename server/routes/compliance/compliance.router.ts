@@ -8,6 +8,7 @@ import { parse } from "../../http/validate";
 import { evaluateWhatIf } from "../../services/compliance/evaluation";
 import { documentsRouter } from "../documents/documents.router";
 import { searchTaxa } from "../taxa/taxa.router";
+import { coverageRouter } from "./coverage.router";
 import { rulesRouter } from "./rules.router";
 import { transferComplianceRouter } from "./transfer-compliance.router";
 
@@ -50,5 +51,6 @@ function whatIfRouter(ctx: AppContext): Router {
   });
 
   router.use("/rules", rulesRouter());
+  router.use("/coverage", coverageRouter());
   return router;
 }

@@ -21,14 +21,11 @@ async function complianceFor(req: Request, transferId: string) {
   const actor = currentUser(req);
   const { transfer, role } = await loadTransferForActor(em, transferId, actor);
   const { result, facts } = await evaluateTransfer(em, transfer);
-  // An override answers a verdict that is not clear; once clear, there is nothing to show.
-  const override = result.verdict === "clear" ? null : await currentOverride(em, transfer);
+  // An override answers a blocked or documents-needed verdict; otherwise there is nothing to show.
+  const overridable = result.verdict === "blocked" || result.verdict === "needs_documents";
+  const override = overridable ? await currentOverride(em, transfer) : null;
   const abilities = {
-    override:
-      canOverrideCompliance(actor, role) &&
-      transfer.status === "awaiting_receiver" &&
-      result.verdict !== "clear" &&
-      !override,
+    override: canOverrideCompliance(actor, role) && transfer.status === "awaiting_receiver" && overridable && !override,
     attachDocuments: canAttachDocuments(role, transfer.status as TransferStatus),
     readDocuments: canReadTransferDocuments(role),
   };

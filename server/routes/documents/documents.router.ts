@@ -18,6 +18,8 @@ import {
 } from "../../services/compliance/documents";
 import { scanBody } from "./scan-upload";
 import { SANDBOX_CSP } from "../../http/security";
+import { withCatalogueNames, type SuggestNames } from "../../services/compliance/species-names";
+import { searchTaxa } from "../taxa/taxa.router";
 
 const idParam = (req: Request, name: "id" | "scanId" = "id") => pathId(req, name, name === "id" ? "document" : "scan");
 
@@ -25,6 +27,11 @@ const idParam = (req: Request, name: "id" | "scanId" = "id") => pathId(req, name
 export function documentsRouter(ctx: AppContext): Router {
   const router = Router();
   router.use(requireUser);
+  // Species lists take the catalogue's names; an unknown name is refused with close matches.
+  const suggest: SuggestNames = (name) =>
+    searchTaxa(ctx, name, 5).then((hits) =>
+      hits.map((h) => ({ scientificName: h.scientificName, commonName: h.commonName })),
+    );
 
   router.get("/", async (req, res) => {
     const { transferId } = parse(documentListQuerySchema, req.query);
@@ -44,7 +51,7 @@ export function documentsRouter(ctx: AppContext): Router {
   });
 
   router.post("/", async (req, res) => {
-    const input = parse(documentInputSchema, req.body);
+    const input = await withCatalogueNames(req.em, suggest, parse(documentInputSchema, req.body));
     const doc = await createDocument({ em: req.em, actor: currentUser(req), input });
     await req.em.populate(doc, ["organization"]);
     res.status(201).json({ document: presentDocument(doc, "holder", []) });
@@ -61,7 +68,10 @@ export function documentsRouter(ctx: AppContext): Router {
       em: req.em,
       actor: currentUser(req),
       documentId: idParam(req),
-      patch: req.body,
+      patch:
+        req.body && typeof req.body === "object" && !Array.isArray(req.body)
+          ? await withCatalogueNames(req.em, suggest, req.body as Record<string, unknown>)
+          : req.body,
     });
     await req.em.populate(doc, ["organization"]);
     res.json({ document: presentDocument(doc, "holder", (await scansOf(req.em, [doc])).get(doc.id) ?? []) });

@@ -1,12 +1,46 @@
-import { isKeeper } from "../../auth/actor";
-import { Router, type Request } from "express";
+import express, { Router, type Request } from "express";
+import { isUtf8 } from "node:buffer";
 import { stringify } from "csv-stringify/sync";
-import { registerQuerySchema, type RegisterEntryDto } from "@shared/schemas/transfer";
-import { RegisterEntrySchema } from "../../db/entities/check-in.entity";
-import { forbidden } from "../../http/errors";
-import { currentUser, requireUser } from "../../http/guards";
-import { parse } from "../../http/validate";
+import { todayUtc } from "@shared/compliance/expiry";
+import { nextDueReport } from "@shared/register/reporting";
+import { noticesForMove } from "@shared/register/state-notices";
+import {
+  permitReportingSchema,
+  quarantineSettingsSchema,
+  registerEntryInputSchema,
+  registerEventInputSchema,
+  registerQuerySchema,
+  registerReportQuerySchema,
+  registerSplitInputSchema,
+  transferLinesQuerySchema,
+  type RegisterEntryDto,
+  type RegisterReportDto,
+} from "@shared/schemas/register";
+import { REGISTER_CONDITION_WORDS, REGISTER_EVENT_KIND_WORDS, REPORT_COLUMN_WORDS, SEX_WORDS } from "@shared/words";
+import type { RegisterEventKind } from "@shared/constants";
+import type { AppContext } from "../../context";
+import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
+import { OrganizationSchema } from "../../db/entities/organization.entity";
+import { CheckInSchema } from "../../db/entities/check-in.entity";
+import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { presentTaxon } from "../../presenters/taxon.presenter";
+import { HttpError, notFound } from "../../http/errors";
+import { currentUser, requireUser } from "../../http/guards";
+import { parse, pathId } from "../../http/validate";
+import { presentRegisterEntry, presentRegisterEvents } from "../../presenters/register.presenter";
+import { renderRegisterReportPdf } from "../../pdf/register-report.pdf";
+import {
+  createEntry,
+  recordEvent,
+  registerOwner,
+  splitEntry,
+  type SuggestSpecies,
+} from "../../services/register/ledger";
+import { importRegisterCsv } from "../../services/register/import";
+import { readRegisterEntry, readRegisterEvents, readRegisterPage } from "../../services/register/read";
+import { permitReport } from "../../services/register/report";
+import { loadTransferForActor } from "../../services/transfers/load";
+import { searchTaxa } from "../taxa/taxa.router";
 
 /**
  * A spreadsheet cell that begins with = + - @ (or a tab or carriage return) is read as a
@@ -16,57 +50,319 @@ export function neutraliseCell(value: string): string {
   return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
 }
 
-async function entriesFor(req: Request): Promise<RegisterEntryDto[]> {
-  const actor = currentUser(req);
-  if (!isKeeper(actor) || !actor.organization)
-    throw forbidden("The collection register belongs to a keeper organisation.");
-  const q = parse(registerQuerySchema, req.query);
-  const where: Record<string, unknown> = { organization: actor.organization.id };
-  if (q.taxonId) where.taxon = q.taxonId;
-  if (q.sex) where.sex = q.sex;
-  if (q.from || q.to) where.dateAcquired = { ...(q.from ? { $gte: q.from } : {}), ...(q.to ? { $lte: q.to } : {}) };
-  if (q.q) {
-    const like = `%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    where.$or = [
-      { transferNumber: { $ilike: like } },
-      { sourceOrganizationName: { $ilike: like } },
-      { identifier: { $ilike: like } },
-      { taxon: { scientificName: { $ilike: like } } },
-    ];
-  }
-  const rows = await req.em.find(RegisterEntrySchema, where, {
-    populate: ["taxon"],
-    orderBy: { dateAcquired: "desc", createdAt: "desc" },
-    limit: 5000,
-  });
-  return rows.map((r) => ({
-    id: r.id,
-    taxon: presentTaxon(r.taxon.getEntity()),
-    sex: r.sex,
-    count: r.count,
-    identifier: r.identifier ?? null,
-    dateAcquired: String(r.dateAcquired),
-    sourceOrganization: r.sourceOrganizationName,
-    transferNumber: r.transferNumber,
-    transferId: r.transfer.id,
-    condition: r.condition,
-    notes: r.notes ?? null,
-  }));
+/** A CSV download: every cell neutralised, sent as an attachment that is never sniffed. */
+function sendCsv(res: express.Response, filename: string, rows: string[][]) {
+  res.setHeader("Content-Type", "text/csv; charset=utf-8");
+  res.setHeader("Content-Disposition", `attachment; filename="${filename}"`);
+  res.setHeader("X-Content-Type-Options", "nosniff");
+  res.send(stringify(rows.map((row) => row.map(neutraliseCell))));
 }
 
-export function registerRouter(): Router {
+/** The one API route that takes CSV instead of JSON: `POST /api/register/import`. */
+export function isRegisterImport(req: Request): boolean {
+  return req.method === "POST" && /^\/register\/import\/?$/.test(req.path);
+}
+export const REGISTER_IMPORT_TYPES = ["text/csv"];
+const csvBody = express.raw({ type: REGISTER_IMPORT_TYPES, limit: "2mb" });
+
+async function pageFor(req: Request, overrides: { limit?: number } = {}) {
+  const organizationId = registerOwner(currentUser(req));
+  const query = { ...parse(registerQuerySchema, req.query), ...overrides };
+  const today = todayUtc();
+  const page = await readRegisterPage(req.ctx.pool, organizationId, query, today);
+  return { entries: page.rows.map((row) => presentRegisterEntry(row, today)), nextCursor: page.nextCursor };
+}
+
+const entryId = (req: Request) => pathId(req, "id", "register entry");
+
+async function entryView(req: Request, id: string) {
+  const actor = currentUser(req);
+  const organizationId = registerOwner(actor);
+  const today = todayUtc();
+  const row = await readRegisterEntry(req.ctx.pool, organizationId, id);
+  if (!row) throw notFound("That register entry");
+  const events = presentRegisterEvents(await readRegisterEvents(req.ctx.pool, id));
+  // The animal's life before it came here: the sender's entries it continues, as far back as they go.
+  const earlier: { entry: RegisterEntryDto; events: ReturnType<typeof presentRegisterEvents> }[] = [];
+  let previousId = row.previous_entry_id;
+  while (previousId && earlier.length < 20) {
+    const previous = await readRegisterEntry(req.ctx.pool, null, previousId);
+    if (!previous) break;
+    earlier.push({
+      entry: presentRegisterEntry(previous, today),
+      events: presentRegisterEvents(await readRegisterEvents(req.ctx.pool, previous.id)),
+    });
+    previousId = previous.previous_entry_id;
+  }
+  return { entry: presentRegisterEntry(row, today), events, earlier };
+}
+
+function reportCsv(report: RegisterReportDto): string[][] {
+  const columns = ["acquired", "hatched", "died", "transferredOut", "escapedOrReleased"] as const;
+  const rows: string[][] = [
+    ["Permit", report.permit.number, "Jurisdiction", report.permit.jurisdiction, "From", report.from, "To", report.to],
+    [],
+    ["Scientific name", "At the start", ...columns.map((c) => REPORT_COLUMN_WORDS[c]), "At the end"],
+    ...report.species.map((s) => [
+      s.scientificName,
+      String(s.start),
+      ...columns.map((c) => String(s[c])),
+      String(s.end),
+    ]),
+    [],
+    [
+      "Scientific name",
+      "Date",
+      "What happened",
+      "Number",
+      "Identifier",
+      "Name",
+      "Address",
+      "Permit number",
+      "Transfer",
+    ],
+  ];
+  for (const s of report.species)
+    for (const e of s.events)
+      rows.push([
+        s.scientificName,
+        e.on,
+        REGISTER_EVENT_KIND_WORDS[e.kind as RegisterEventKind],
+        String(e.count),
+        e.identifier ?? "",
+        e.counterparty?.name ?? "",
+        e.counterparty?.address ?? "",
+        e.counterparty?.permitNumber ?? "",
+        e.transferNumber ?? "",
+      ]);
+  return rows;
+}
+
+/** The keeper's register: entries, their events, the import, the yearly report, permits' reporting plans. */
+export function registerRouter(ctx: AppContext): Router {
   const router = Router();
   router.use(requireUser);
+  const suggest: SuggestSpecies = (name) =>
+    searchTaxa(ctx, name, 5).then((hits) =>
+      hits.map((h) => ({ scientificName: h.scientificName, commonName: h.commonName })),
+    );
+
   router.get("/", async (req, res) => {
-    res.json({ entries: await entriesFor(req) });
+    res.json(await pageFor(req));
   });
+
+  router.post("/entries", async (req, res) => {
+    const actor = currentUser(req);
+    registerOwner(actor);
+    const input = parse(registerEntryInputSchema, req.body);
+    const entry = await req.em.transactional(async (tx) => {
+      const created = await createEntry({ em: tx, actor, input, suggest });
+      await tx.flush();
+      return created;
+    });
+    res.status(201).json(await entryView(req, entry.id));
+  });
+
+  router.get("/entries/:id", async (req, res) => {
+    res.json(await entryView(req, entryId(req)));
+  });
+
+  router.post("/entries/:id/events", async (req, res) => {
+    const actor = currentUser(req);
+    const id = entryId(req);
+    registerOwner(actor);
+    const input = parse(registerEventInputSchema, req.body);
+    const { event } = await recordEvent({ em: req.em, actor, entryId: id, input });
+    const view = await entryView(req, id);
+    res.status(201).json({ event: view.events.find((candidate) => candidate.id === event.id), entry: view.entry });
+  });
+
+  router.post("/entries/:id/split", async (req, res) => {
+    const actor = currentUser(req);
+    const id = entryId(req);
+    registerOwner(actor);
+    const input = parse(registerSplitInputSchema, req.body);
+    const child = await splitEntry({ em: req.em, actor, entryId: id, input });
+    res.status(201).json(await entryView(req, child.id));
+  });
+
+  router.post("/import", csvBody, async (req, res) => {
+    const actor = currentUser(req);
+    registerOwner(actor);
+    if (!req.is("text/csv") || !Buffer.isBuffer(req.body))
+      throw new HttpError(415, "unsupported_media_type", "Send the register as a CSV file (text/csv).");
+    const bytes: Buffer = req.body;
+    if (!isUtf8(bytes))
+      throw new HttpError(
+        400,
+        "invalid_encoding",
+        "The file is not UTF-8 text: save it from the spreadsheet as “CSV UTF-8”.",
+        {
+          field: "body",
+        },
+      );
+    const result = await importRegisterCsv({ em: req.em, actor, csv: bytes.toString("utf8"), suggest });
+    if ("rows" in result)
+      res.status(400).json({
+        error: {
+          code: "invalid_rows",
+          message: `${result.rows.length} row${result.rows.length === 1 ? "" : "s"} cannot be imported; nothing was imported. Correct ${result.rows.length === 1 ? "it" : "them"} and send the file again.`,
+        },
+        rows: result.rows,
+      });
+    else res.json(result);
+  });
+
+  const report = async (req: Request) => {
+    const organizationId = registerOwner(currentUser(req));
+    const query = parse(registerReportQuerySchema, req.query);
+    return { query, report: await permitReport(req.ctx.pool, organizationId, query.permitId, query) };
+  };
+  router.get("/report", async (req, res) => {
+    const { query, report: body } = await report(req);
+    if (query.format === "csv")
+      return sendCsv(res, `yearly-report-${body.permit.number}-${body.from}-${body.to}.csv`, reportCsv(body));
+    if (query.format === "pdf") {
+      const pdf = await renderRegisterReportPdf(body, new Date());
+      res.setHeader("Content-Type", "application/pdf");
+      res.setHeader("Content-Disposition", `attachment; filename="yearly-report-${body.from}-${body.to}.pdf"`);
+      return res.send(Buffer.from(pdf));
+    }
+    res.json(body);
+  });
+
+  // A new transfer started from the register (issue 15 §2): one prefilled animal line per chosen entry.
+  router.get("/transfer-lines", async (req, res) => {
+    const organizationId = registerOwner(currentUser(req));
+    const { ids } = parse(transferLinesQuerySchema, req.query);
+    const today = todayUtc();
+    const animals = [];
+    for (const [index, id] of ids.entries()) {
+      const row = await readRegisterEntry(req.ctx.pool, organizationId, id);
+      if (!row) throw notFound("That register entry");
+      if (row.count_in_care === 0)
+        throw new HttpError(
+          400,
+          "invalid",
+          `Entry ${index + 1} (${row.scientific_name}) has no animals in your care.`,
+          { field: "ids" },
+        );
+      const entry = presentRegisterEntry(row, today);
+      animals.push({
+        registerEntryId: entry.id,
+        taxonId: entry.taxon.id,
+        scientificName: entry.taxon.scientificName,
+        count: entry.countInCare,
+        sex: entry.sex,
+        identifier: entry.identifier,
+        identifierKind: entry.identifierKind,
+        origin: entry.origin ?? "captive_bred",
+        originKnown: entry.origin !== null,
+        hatchDate: entry.hatchDate,
+        weightG: entry.weightG,
+        lengthMm: entry.lengthMm,
+        quarantine: entry.quarantine,
+      });
+    }
+    const taxa = await req.em.find(TaxonSchema, { id: { $in: [...new Set(animals.map((a) => a.taxonId))] } });
+    res.json({ animals, taxa: taxa.map(presentTaxon) });
+  });
+
+  // Permits with their reporting year and the report due next.
+  router.get("/permits", async (req, res) => {
+    const organizationId = registerOwner(currentUser(req));
+    const permits = await req.em.find(
+      PermitDocumentSchema,
+      { organization: organizationId },
+      { orderBy: { number: "asc" } },
+    );
+    const today = todayUtc();
+    res.json({
+      permits: permits.map((permit) => {
+        const planned =
+          permit.reportStartMonth != null && permit.reportDueMonth != null && permit.reportDueDay != null
+            ? { startMonth: permit.reportStartMonth, dueMonth: permit.reportDueMonth, dueDay: permit.reportDueDay }
+            : null;
+        return {
+          id: permit.id,
+          kind: permit.kind,
+          jurisdiction: permit.jurisdiction,
+          number: permit.number,
+          reportStartMonth: permit.reportStartMonth ?? null,
+          reportDueMonth: permit.reportDueMonth ?? null,
+          reportDueDay: permit.reportDueDay ?? null,
+          nextReport: planned ? nextDueReport(planned, today) : null,
+        };
+      }),
+    });
+  });
+
+  router.put("/permits/:id/reporting", async (req, res) => {
+    const organizationId = registerOwner(currentUser(req));
+    const id = pathId(req, "id", "permit");
+    const input = parse(permitReportingSchema, req.body);
+    const permit = await req.em.findOne(PermitDocumentSchema, { id, organization: organizationId });
+    if (!permit) throw notFound("That permit");
+    const all = [input.reportStartMonth, input.reportDueMonth, input.reportDueDay];
+    if (all.some((v) => v === null) && all.some((v) => v !== null))
+      throw new HttpError(
+        400,
+        "invalid",
+        "Give the first month of the reporting year, the due month and the due day, or none of them.",
+        {
+          field: "reportStartMonth",
+        },
+      );
+    permit.reportStartMonth = input.reportStartMonth;
+    permit.reportDueMonth = input.reportDueMonth;
+    permit.reportDueDay = input.reportDueDay;
+    await req.em.flush();
+    res.json({ id: permit.id, ...input });
+  });
+
+  router.get("/settings", async (req, res) => {
+    const organizationId = registerOwner(currentUser(req));
+    const organization = await req.em.findOneOrFail(OrganizationSchema, { id: organizationId });
+    res.json({ quarantineDays: organization.quarantineDays });
+  });
+
+  router.put("/settings", async (req, res) => {
+    const organizationId = registerOwner(currentUser(req));
+    const input = parse(quarantineSettingsSchema, req.body);
+    const organization = await req.em.findOneOrFail(OrganizationSchema, { id: organizationId });
+    organization.quarantineDays = input.quarantineDays;
+    await req.em.flush();
+    res.json({ quarantineDays: organization.quarantineDays });
+  });
+
+  // State notices due after a move, for the caller's side of it, once the animals have arrived.
+  router.get("/transfers/:transferId/notices", async (req, res) => {
+    const actor = currentUser(req);
+    const transferId = pathId(req, "transferId", "transfer");
+    const { transfer, role } = await loadTransferForActor(req.em, transferId, actor);
+    const checkIn = await req.em.findOne(CheckInSchema, { transfer: transfer.id });
+    if (!checkIn) return res.json({ arrived: false, notices: [] });
+    const { rows } = await req.ctx.pool.query<{ at: Date }>(
+      `SELECT at FROM custody_entry WHERE transfer_id = $1 AND kind = 'status_change' AND payload->>'to' = 'in_transit' ORDER BY seq LIMIT 1`,
+      [transfer.id],
+    );
+    const notices = noticesForMove({
+      fromState: transfer.originState,
+      toState: transfer.destinationState,
+      departedAt: rows[0] ? new Date(rows[0].at).toISOString() : null,
+      arrivedAt: checkIn.signedAt.toISOString(),
+    }).filter((notice) => role === "admin" || notice.side === role);
+    res.json({ arrived: true, notices });
+  });
+
   return router;
 }
 
+/** The register as CSV, with the filters of the page (up to 5,000 rows). */
 export function registerCsvRoute(): Router {
   const router = Router();
   router.get("/register.csv", requireUser, async (req, res) => {
-    const entries = await entriesFor(req);
+    const { entries } = await pageFor(req, { limit: 5000 });
     const header = [
       "Date acquired",
       "Scientific name",
@@ -77,29 +373,23 @@ export function registerCsvRoute(): Router {
       "Source organisation",
       "Transfer",
       "Condition on arrival",
+      "Weight at check-in (g)",
       "Notes",
     ];
-    const rows = entries.map((e) =>
-      [
-        e.dateAcquired,
-        e.taxon.scientificName,
-        e.taxon.commonName ?? "",
-        e.sex,
-        String(e.count),
-        e.identifier ?? "",
-        e.sourceOrganization,
-        e.transferNumber,
-        e.condition,
-        e.notes ?? "",
-      ].map(neutraliseCell),
-    );
-    res.setHeader("Content-Type", "text/csv; charset=utf-8");
-    res.setHeader(
-      "Content-Disposition",
-      `attachment; filename="collection-register-${new Date().toISOString().slice(0, 10)}.csv"`,
-    );
-    res.setHeader("X-Content-Type-Options", "nosniff");
-    res.send(stringify([header, ...rows]));
+    const rows = entries.map((e) => [
+      e.dateAcquired,
+      e.taxon.scientificName,
+      e.taxon.commonName ?? "",
+      SEX_WORDS[e.sex],
+      String(e.count),
+      e.identifier ?? "",
+      e.sourceOrganization ?? "",
+      e.transferNumber ?? "",
+      e.condition ? REGISTER_CONDITION_WORDS[e.condition] : "",
+      e.weightG === null ? "" : String(e.weightG),
+      e.notes ?? "",
+    ]);
+    sendCsv(res, `collection-register-${todayUtc()}.csv`, [header, ...rows]);
   });
   return router;
 }

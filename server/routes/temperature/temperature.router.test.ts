@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { transitAssessmentSchema } from "@shared/temperature/schemas";
 import { createTestApp, anonymousClient, signIn, type Client, type TestApp } from "../../../tests/support/app";
-import { buildTransfer, buildUser } from "../../../tests/factories";
+import { buildTransfer, buildUser, markReviewed } from "../../../tests/factories";
 import { startOpenMeteoFake, type OpenMeteoFake } from "../../../fakes/open-meteo/server";
 import { cToF } from "@shared/units";
 import { SCENARIO_SHIFT_C, fakeTemperatureC } from "../../../fakes/open-meteo/climate";
@@ -285,6 +285,9 @@ describe("the ready-to-ship gate", () => {
     const receiver = await signIn(t.app, cast.receiver.email);
     const path = `/api/transfers/${cast.transfer.id}/transition`;
     fake.setScenario("outage");
+    // The rules of the route (by air: federal, TN, OR) reviewed, so the compliance gate, which runs
+    // first, lets the temperature gate speak (D25, D27).
+    await markReviewed(em(), ["US", "TN", "OR"]);
 
     const refused = await receiver.post(path, { to: "ready" });
     expect(refused.status).toBe(409);
@@ -325,6 +328,57 @@ describe("the ready-to-ship gate", () => {
     ]);
     const shown = (await receiver.get(`/api/transfers/${cast.transfer.id}/temperature`)).body;
     expect(shown.checks).toMatchObject([{ mark: "gate", verdict: "forecast_unavailable" }]);
+  });
+
+  it("acknowledging the unverified rules never answers a temperature block the receiver was not shown", async () => {
+    const cast = await buildTransfer(em(), { status: "awaiting_receiver" });
+    const receiver = await signIn(t.app, cast.receiver.email);
+    const path = `/api/transfers/${cast.transfer.id}/transition`;
+    fake.setScenario("outage");
+    // No review for the route: the rules check is "unverified" (D25) and speaks first.
+    await markReviewed(em(), ["US", "TN", "OR"], null);
+
+    const first = await receiver.post(path, { to: "ready" });
+    expect(first.status).toBe(409);
+    expect(first.body.error.acknowledgeUnverified).toBe(true);
+
+    const rules = "Both wildlife agencies confirmed by phone.";
+    const second = await receiver.post(path, {
+      to: "ready",
+      override: true,
+      overrideGates: ["compliance"],
+      reason: rules,
+    });
+    expect(second.status).toBe(409);
+    expect(second.body.error.temperature).toMatchObject({ verdict: "forecast_unavailable" });
+    const kindsOf = async () =>
+      ((await receiver.get(`/api/transfers/${cast.transfer.id}/custody`)).body.entries as { kind: string }[]).map(
+        (e) => e.kind,
+      );
+    // The refused step rolled back: the acknowledgement waits for the step that clears.
+    expect(await kindsOf()).not.toContain("override");
+
+    const both = await receiver.post(path, {
+      to: "ready",
+      override: true,
+      overrideGates: ["compliance", "temperature"],
+      reason: `${rules} Heated car, box thermometer read hourly.`,
+    });
+    expect(both.status, JSON.stringify(both.body)).toBe(200);
+    const log = (await receiver.get(`/api/transfers/${cast.transfer.id}/custody`)).body;
+    expect(
+      log.entries
+        .filter((e: { kind: string }) => e.kind === "override")
+        .map((e: { payload: { gate: string } }) => e.payload.gate),
+    ).toEqual(["compliance", "temperature"]);
+
+    const unknown = await receiver.post(path, {
+      to: "ready",
+      override: true,
+      overrideGates: ["weather"],
+      reason: rules,
+    });
+    expect(unknown.status).toBe(400);
   });
 });
 

@@ -3,16 +3,23 @@ import { excerpt } from "@shared/validation/text";
 import { z } from "zod";
 import { PROFILE_GROUPS } from "@shared/constants";
 import { profileDataSchema } from "@shared/temperature/profile-schema";
-import { whatIfInputSchema } from "@shared/temperature/schemas";
+import { legVehicleInputSchema, tripPlanInputSchema, whatIfInputSchema } from "@shared/temperature/schemas";
 import type { AppContext } from "../../context";
 import { HttpError, invalidField, unavailable } from "../../http/errors";
 import { currentUser, requirePolicy, requireUser } from "../../http/guards";
 import { parse, pathId, pathParam } from "../../http/validate";
-import { canEditTemperatureProfiles, canPlanTrips, canSwitchWeatherScenario } from "../../policies/temperature.policy";
-import { presentProfile, presentTransferTemperature } from "../../presenters/temperature.presenter";
+import {
+  canEditTemperatureProfiles,
+  canPlanTrips,
+  canReadModelAccuracy,
+  canSwitchWeatherScenario,
+} from "../../policies/temperature.policy";
+import { presentProfile, presentTransferTemperature, presentTripPlan } from "../../presenters/temperature.presenter";
 import { latestAlert, recentChecks } from "../../services/temperature/checks";
 import { loadProfileRows, loadProfiles, saveProfile } from "../../services/temperature/profiles";
+import { modelAccuracy, pickupAt, readingsAgainstReport, transferReadings } from "../../services/temperature/readings";
 import { assessTransferTemperature } from "../../services/temperature/transfer-temperature";
+import { declareLegVehicle, legsWithCouriers, updateTripPlan } from "../../services/temperature/trip-plan";
 import { assessWhatIf, findTaxonByName } from "../../services/temperature/what-if";
 import { loadTransferForActor } from "../../services/transfers/load";
 import { searchTaxa } from "../taxa/taxa.router";
@@ -51,12 +58,54 @@ export function temperatureRouter(ctx: AppContext): Router {
   const source = ctx.forecastSource;
   const router = Router();
 
-  router.get("/transfers/:id/temperature", requireUser, async (req: Request, res) => {
-    const { transfer } = await loadTransferForActor(req.em, pathId(req, "id", "transfer"), currentUser(req));
+  /** The transfer's verdict, its readings against the model, and how its box travels. */
+  async function presentFor(req: Request, transferId: string) {
+    const actor = currentUser(req);
+    const { transfer, role } = await loadTransferForActor(req.em, transferId, actor);
     const report = await assessTransferTemperature({ em: req.em, source, transfer, nowMs: Date.now() });
-    const [alert, checks] = await Promise.all([latestAlert(req.em, transfer.id), recentChecks(req.em, transfer.id)]);
-    res.json(presentTransferTemperature(transfer, report, alert, checks));
+    const [alert, checks, readings, legs, pickedUp] = await Promise.all([
+      latestAlert(req.em, transfer.id),
+      recentChecks(req.em, transfer.id),
+      transferReadings(req.em, transfer.id),
+      legsWithCouriers(req.em, transfer.id),
+      pickupAt(req.em, transfer.id),
+    ]);
+    const plan = presentTripPlan(transfer, legs, { actor, role }, pickedUp);
+    return presentTransferTemperature(transfer, report, alert, checks, readingsAgainstReport(readings, report), plan);
+  }
+
+  router.get("/transfers/:id/temperature", requireUser, async (req: Request, res) => {
+    res.json(await presentFor(req, pathId(req, "id", "transfer")));
   });
+
+  router.put("/transfers/:id/temperature/plan", requireUser, async (req: Request, res) => {
+    const transferId = pathId(req, "id", "transfer");
+    const input = parse(tripPlanInputSchema, req.body);
+    await updateTripPlan({ em: req.em, actor: currentUser(req), transferId, input });
+    req.em.clear();
+    res.json(await presentFor(req, transferId));
+  });
+
+  router.put("/transfers/:id/legs/:legId/vehicle", requireUser, async (req: Request, res) => {
+    const transferId = pathId(req, "id", "transfer");
+    const legId = pathId(req, "legId", "leg");
+    const input = parse(legVehicleInputSchema, req.body);
+    await declareLegVehicle({ em: req.em, actor: currentUser(req), transferId, legId, input });
+    req.em.clear();
+    res.json(await presentFor(req, transferId));
+  });
+
+  router.get(
+    "/temperature/model-accuracy",
+    requirePolicy(canReadModelAccuracy, "How the model compares with the readings is for keepers and administrators."),
+    async (req, res) => {
+      const actor = currentUser(req);
+      if (actor.role === "admin") return void res.json(await modelAccuracy(req.em, null));
+      const organizationId = actor.organization?.id;
+      if (!organizationId) throw new HttpError(403, "forbidden", "Your account belongs to no organisation.");
+      res.json(await modelAccuracy(req.em, organizationId));
+    },
+  );
 
   router.post(
     "/temperature/assess",

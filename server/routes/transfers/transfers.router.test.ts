@@ -16,19 +16,29 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-function handoffBody(
-  transfer: { containers: { id: string; sealNumber: string | null }[] },
-  index: number,
-  over: Record<string, unknown> = {},
-) {
+type TransferView = {
+  containers: { id: string; sealNumber: string | null }[];
+  sender: { organization: { name: string } };
+  receiver: { organization: { name: string } };
+  legs: { courier: { displayName: string } }[];
+  origin: { lat: number | null; lon: number | null };
+};
+
+/** A handoff as planned: the people assigned, at the origin's position (the test's handoffs come seconds apart). */
+function handoffBody(transfer: TransferView, index: number, over: Record<string, unknown> = {}) {
+  const names = [
+    transfer.sender.organization.name,
+    ...transfer.legs.map((l) => l.courier.displayName),
+    transfer.receiver.organization.name,
+  ];
   return {
     handoffIndex: index,
     boxesCounted: transfer.containers.length,
     seals: transfer.containers.map((c) => ({ containerId: c.id, sealNumber: c.sealNumber, intact: true })),
     boxTempF: 71.5,
-    place: { text: "Depot dock 3" },
-    releasedByName: "Ruth Calder",
-    receivedByName: "Juno Park",
+    place: { text: "Depot dock 3", lat: transfer.origin.lat, lon: transfer.origin.lon },
+    releasedByName: names[index],
+    receivedByName: names[index + 1],
     acknowledged: true,
     ...over,
   };
@@ -153,7 +163,7 @@ describe("bad input is a 400 that changes nothing", () => {
 
 describe("life cycle through the API", () => {
   it("draft → awaiting → ready → (pickup) in transit → (delivery) delivered → checked in → closed", async () => {
-    const cast = await buildTransfer(em(), { status: "draft" });
+    const cast = await buildTransfer(em(), { status: "draft", daysAhead: 0.5 });
     const s = await signIn(t.app, cast.sender.email);
     const r = await signIn(t.app, cast.receiver.email);
     const id = cast.transfer.id;
@@ -231,9 +241,11 @@ describe("life cycle through the API", () => {
     ]);
     expect(mail.rows[0]!.to_address).toBe(cast.receiver.email);
     expect(mail.rows[1]!.to_address).toBe(cast.sender.email);
+    // Two overrides with the one reason: the unverified rules check (no state on the route reviewed, D27), then the temperature.
     expect(log.body.entries.map((e: { kind: string }) => e.kind)).toEqual([
       "created",
       "status_change",
+      "override",
       "override",
       "status_change",
       "couriers_assigned",

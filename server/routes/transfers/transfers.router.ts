@@ -1,14 +1,18 @@
+import { pipeline } from "node:stream/promises";
 import { Router, type Request } from "express";
 import {
   alertAcknowledgeSchema,
   checkInInputSchema,
   createTransferSchema,
+  deliveryAcknowledgeSchema,
   handoffInputSchema,
   legsInputSchema,
   messageInputSchema,
+  photoUploadQuerySchema,
   transferListQuerySchema,
   transferPatchSchema,
   transitionSchema,
+  type DeliveryCodeDto,
   type MessageDto,
   type TransferChangeDto,
 } from "@shared/schemas/transfer";
@@ -34,6 +38,9 @@ import { courierServiceChoiceSchema } from "@shared/schemas/account";
 import { recordHandoff } from "../../services/transfers/handoff";
 import { acknowledgeAlert } from "../../services/transfers/alerts";
 import { checkInTransfer } from "../../services/transfers/check-in";
+import { acknowledgeDelivery, issueDeliveryCode } from "../../services/transfers/delivery";
+import { addPhoto, loadPhotoForActor } from "../../services/transfers/photos";
+import { photoBody } from "./photo-upload";
 import { manifestExtras } from "../../services/transfers/manifest-extras";
 import { presentManifestInput } from "../../presenters/manifest.presenter";
 import { renderManifestPdf } from "../../pdf/manifest.pdf";
@@ -92,7 +99,12 @@ export function transfersRouter(): Router {
       em: req.em,
       actor: currentUser(req),
       transferId: id,
-      input: { to: input.to, reason: input.reason ?? null, override: input.override },
+      input: {
+        to: input.to,
+        reason: input.reason ?? null,
+        override: input.override,
+        overrideGates: input.overrideGates,
+      },
       gates: req.ctx.readyGates,
       links: req.ctx.links,
     });
@@ -152,6 +164,61 @@ export function transfersRouter(): Router {
       req.ctx.kickOutbox();
       return { status: 201, body: { transfer: await presentForActor(req, id) } };
     });
+  });
+
+  // The receiver's "I have the boxes": from their own account, or with their code on the courier's phone.
+  router.post("/:id/delivery/acknowledge", async (req, res) => {
+    const id = idParam(req);
+    const { code } = parse(deliveryAcknowledgeSchema, req.body ?? {});
+    await acknowledgeDelivery({ em: req.em, actor: currentUser(req), transferId: id, code, links: req.ctx.links });
+    req.ctx.kickOutbox();
+    res.json({ transfer: await presentForActor(req, id) });
+  });
+
+  // A one-time code the receiver reads out to the courier; shown once, stored only as a hash.
+  router.post("/:id/delivery-code", async (req, res) => {
+    const { code, expiresAt } = await issueDeliveryCode({
+      em: req.em,
+      actor: currentUser(req),
+      transferId: idParam(req),
+    });
+    const body: DeliveryCodeDto = { code, expiresAt: expiresAt.toISOString() };
+    res.status(201).json(body);
+  });
+
+  router.post("/:id/photos", photoBody, async (req, res) => {
+    const id = idParam(req);
+    const query = parse(photoUploadQuerySchema, req.query);
+    const photo = await addPhoto({
+      em: req.em,
+      storage: req.ctx.adapters.storage,
+      actor: currentUser(req),
+      transferId: id,
+      query,
+      body: Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0),
+    });
+    res.status(201).json({ photo: { id: photo.id, sha256: photo.sha256 }, transfer: await presentForActor(req, id) });
+  });
+
+  // Shown inline as an image, never as a page of ours: the stored type (read from the bytes), nosniff, a sandbox.
+  router.get("/:id/photos/:photoId", async (req, res) => {
+    const photo = await loadPhotoForActor(req.em, currentUser(req), idParam(req), pathId(req, "photoId", "photo"));
+    const object = await req.ctx.adapters.storage.getObjectStream(photo.storageKey);
+    res.set({
+      "Content-Type": photo.contentType,
+      "Content-Length": String(object.contentLength ?? photo.sizeBytes),
+      "Content-Disposition": `inline; filename="photo-${photo.id}.${photo.contentType === "image/png" ? "png" : "jpg"}"`,
+      "X-Content-Type-Options": "nosniff",
+      "Content-Security-Policy": "sandbox; default-src 'none'",
+      "Cache-Control": "no-store",
+      "Repr-Digest": `sha-256=:${Buffer.from(photo.sha256, "hex").toString("base64")}:`,
+    });
+    try {
+      await pipeline(object.stream, res);
+    } catch (err) {
+      // The viewer went away mid-download: nothing to answer any more.
+      if ((err as NodeJS.ErrnoException).code !== "ERR_STREAM_PREMATURE_CLOSE") throw err;
+    }
   });
 
   // The paper that travels with the animals: parties and the assigned courier (admins read).

@@ -142,7 +142,9 @@ async function someTransferUses(
 
 function satisfiedIds(result: Awaited<ReturnType<typeof evaluateTransfer>>["result"]): Set<string> {
   return new Set(
-    result.animals.flatMap((a) => a.findings.flatMap((f) => (f.satisfiedBy?.id ? [f.satisfiedBy.id] : []))),
+    [...result.shipmentFindings, ...result.animals.flatMap((a) => a.findings)].flatMap((f) =>
+      f.satisfiedBy?.id ? [f.satisfiedBy.id] : [],
+    ),
   );
 }
 
@@ -225,7 +227,8 @@ export async function documentsForTransfer(
   const { result, documents } = await evaluateTransfer(em, transfer);
   const satisfies = new Map<string, { ruleId: string; scientificName: string }[]>();
   for (const animal of result.animals) {
-    for (const f of animal.findings) {
+    // A shipment-wide finding is satisfied for every line.
+    for (const f of [...result.shipmentFindings, ...animal.findings]) {
       if (f.satisfiedBy?.id)
         satisfies.set(f.satisfiedBy.id, [
           ...(satisfies.get(f.satisfiedBy.id) ?? []),

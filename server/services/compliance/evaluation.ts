@@ -10,7 +10,11 @@ import type { HolderSide } from "@shared/compliance/rule";
 import type { EvaluateRequest, EvaluateResponse } from "@shared/compliance/schemas";
 import { STATE_TRANSIT_POLICIES } from "@shared/compliance/state-rules.demo";
 import { normalizeTaxonName } from "@shared/compliance/taxon";
+import { placeFromZip } from "@shared/temperature/places";
+import type { LatLon } from "@shared/temperature/geo";
 import { localDate } from "@shared/temperature/zoned-time";
+import { loadCoverageRecords } from "./coverage";
+import { transitStatesAlong } from "./route-states";
 import { PermitDocumentSchema, type PermitDocument } from "../../db/entities/compliance.entity";
 import { AnimalSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { loadActiveRules } from "./rules";
@@ -30,12 +34,35 @@ export function shipDateOf(transfer: Pick<Transfer, "plannedDepartureAt" | "orig
     : transfer.plannedDepartureAt.toISOString().slice(0, 10);
 }
 
-/** The facts rules read from a stored transfer. A stored transfer names no transit states. */
+/** Where a transfer starts or ends: its stored position or, failing that, its ZIP code's centre. */
+function positionOf(transfer: Transfer, side: "origin" | "destination"): LatLon | null {
+  const [lat, lon, zip] =
+    side === "origin"
+      ? [transfer.originLat, transfer.originLon, transfer.originZip]
+      : [transfer.destinationLat, transfer.destinationLon, transfer.destinationZip];
+  if (lat != null && lon != null) return { lat, lon };
+  return placeFromZip(zip.slice(0, 5)) ?? null;
+}
+
+/**
+ * The states a stored transfer passes through, in travel order (route-states.ts: the great circle
+ * from origin to destination, as the temperature timeline lays out a drive; none by air). Empty
+ * when an end cannot be located.
+ */
+export function transitStatesOf(transfer: Transfer): UsState[] {
+  const origin = positionOf(transfer, "origin");
+  const destination = positionOf(transfer, "destination");
+  if (!origin || !destination) return [];
+  const ends = new Set([transfer.originState, transfer.destinationState]);
+  return transitStatesAlong(origin, destination, transfer.mode).filter((state) => !ends.has(state));
+}
+
+/** The facts rules read from a stored transfer, with the transit states along its route. */
 export function transferFactsOf(transfer: Transfer): TransferFacts {
   return {
     originState: transfer.originState as UsState,
     destinationState: transfer.destinationState as UsState,
-    transitStates: [],
+    transitStates: transitStatesOf(transfer),
     shipDate: shipDateOf(transfer),
     purpose: transfer.purpose as Purpose,
     sale: transfer.sale,
@@ -92,6 +119,7 @@ export async function evaluateTransfer(em: EntityManager, transfer: Transfer) {
   const animals = await em.find(AnimalSchema, { transfer: transfer.id }, { orderBy: { position: "asc" } });
   const documents = await documentsOnFile(em, transfer);
   const rules = await loadActiveRules(em);
+  const coverage = await loadCoverageRecords(em);
   const taxa = await resolveTaxaById(
     em,
     animals.map((a) => a.taxon.id),
@@ -115,6 +143,7 @@ export async function evaluateTransfer(em: EntityManager, transfer: Transfer) {
     documents: documents.map(evaluationDocumentOf),
     rules,
     transitPolicies: STATE_TRANSIT_POLICIES,
+    coverage,
   });
   return { result, facts, documents };
 }
@@ -124,12 +153,13 @@ export type WhatIfOutcome =
 
 /** The what-if of `POST /api/compliance/evaluate`: nothing is stored. Fails on the first unknown species. */
 export async function evaluateWhatIf(em: EntityManager, request: EvaluateRequest): Promise<WhatIfOutcome> {
-  const [taxa, rules] = await Promise.all([
+  const [taxa, rules, coverage] = await Promise.all([
     findTaxaByName(
       em,
       request.animals.map((a) => a.scientificName),
     ),
     loadActiveRules(em),
+    loadCoverageRecords(em),
   ]);
   const lines: EvaluationAnimal[] = [];
   for (const [index, animal] of request.animals.entries()) {
@@ -144,6 +174,7 @@ export async function evaluateWhatIf(em: EntityManager, request: EvaluateRequest
     documents,
     rules,
     transitPolicies: STATE_TRANSIT_POLICIES,
+    coverage,
   });
   return { ok: true, result };
 }

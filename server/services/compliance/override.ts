@@ -6,11 +6,12 @@ import { canOverrideCompliance } from "../../policies/compliance.policy";
 import { appendCustody } from "../transfers/custody";
 import { loadTransferForActor } from "../transfers/load";
 import { evaluateTransfer } from "./evaluation";
-import { currentOverride, recordEvaluation } from "./gate";
+import { currentOverride, findingsWithLines, recordEvaluation } from "./gate";
 
 /**
  * An admin lets the current version of a transfer that waits for the receiver become ready
- * despite its compliance verdict. The override, the evaluation it answers and a custody entry
+ * despite a blocked or documents-needed compliance verdict (an unverified one is the confirming
+ * party's to acknowledge, in the gate). The override, the evaluation it answers and a custody entry
  * with the verdict and the reason are written in one transaction. An edit of the transfer
  * (a new version) ends the override.
  */
@@ -35,6 +36,10 @@ export async function overrideCompliance({
     if (await currentOverride(tx, transfer)) throw conflict("This version of the transfer is already overridden.");
     const { result } = await evaluateTransfer(tx, transfer);
     if (result.verdict === "clear") throw conflict("There is nothing to override: the compliance check is clear.");
+    if (result.verdict === "unverified")
+      throw conflict(
+        "Nothing in the rule library blocks this transfer: it is unverified because a state on the route has no reviewed rules. The receiver confirms it with a reason after asking the agencies named; an administrator's override does not apply.",
+      );
     const override = tx.create(ComplianceOverrideSchema, {
       transfer: transfer.id,
       transferVersion: transfer.version,
@@ -42,11 +47,13 @@ export async function overrideCompliance({
       admin: actor.id,
     });
     recordEvaluation(tx, transfer, result);
-    const open = result.animals.flatMap((a) =>
-      a.findings
-        .filter((f) => f.satisfiedBy === null && f.severity !== "advisory")
-        .map((f) => ({ scientificName: a.scientificName, ruleId: f.ruleId, ruleVersion: f.ruleVersion })),
-    );
+    const open = findingsWithLines(result)
+      .filter(({ finding }) => finding.satisfiedBy === null && finding.severity !== "advisory")
+      .map(({ scientificName, finding }) => ({
+        scientificName,
+        ruleId: finding.ruleId,
+        ruleVersion: finding.ruleVersion,
+      }));
     await appendCustody(tx, transfer.id, actor, "override", {
       gate: "compliance",
       verdict: result.verdict,

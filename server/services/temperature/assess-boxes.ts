@@ -2,13 +2,9 @@
  * One trip, one or more boxes: the timeline, the outside temperatures (forecast or a what-if's
  * own) and each box's verdict under its own profile. The trip's answer is its worst box's.
  */
-import {
-  ambientFromForecasts,
-  ambientFromOverride,
-  type AmbientByHour,
-  type HourlyTempF,
-} from "@shared/temperature/ambient";
-import { assessTransit } from "@shared/temperature/assess";
+import { ambientFromOverride, weatherFromForecasts, type HourlyTempF } from "@shared/temperature/ambient";
+import { assessTransit, type ExposureInput, type TripAssessment } from "@shared/temperature/assess";
+import type { TripWeather } from "@shared/temperature/exposure";
 import type { BoxSpec } from "@shared/temperature/box-model";
 import type { TemperatureProfile } from "@shared/temperature/profiles";
 import {
@@ -17,7 +13,6 @@ import {
   type ProfileSummary,
   type TemperatureReport,
 } from "@shared/temperature/report";
-import type { TransitAssessment } from "@shared/temperature/schemas";
 import {
   buildTransitTimeline,
   plannedArrivalWarning,
@@ -33,10 +28,10 @@ export type AmbientPlan =
   | { kind: "forecast"; source: WeatherSource | null; nowMs: number }
   | { kind: "override"; samples: readonly HourlyTempF[] };
 
-type Source = TransitAssessment["sources"][number];
-type AmbientLookup = { ambientFor: (timeline: TransitTimeline) => AmbientByHour; extraSources: Source[] };
+type Source = TripAssessment["sources"][number];
+type WeatherLookup = { weatherFor: (timeline: TransitTimeline) => TripWeather; extraSources: Source[] };
 
-const NO_AMBIENT: AmbientByHour = new Map();
+const NO_WEATHER: TripWeather = { ambient: new Map() };
 
 const summary = (p: TemperatureProfile): ProfileSummary => ({
   group: p.group,
@@ -44,11 +39,12 @@ const summary = (p: TemperatureProfile): ProfileSummary => ({
   safeTransitF: { ...p.safeTransitF },
 });
 
-async function ambientLookup(plan: AmbientPlan, timeline: TransitTimeline): Promise<AmbientLookup> {
-  if (plan.kind === "override") return { ambientFor: (t) => ambientFromOverride(t, plan.samples), extraSources: [] };
+async function weatherLookup(plan: AmbientPlan, timeline: TransitTimeline): Promise<WeatherLookup> {
+  if (plan.kind === "override")
+    return { weatherFor: (t) => ({ ambient: ambientFromOverride(t, plan.samples) }), extraSources: [] };
   if (!plan.source) {
     return {
-      ambientFor: () => NO_AMBIENT,
+      weatherFor: () => NO_WEATHER,
       extraSources: [
         {
           id: "forecast-unavailable",
@@ -60,11 +56,11 @@ async function ambientLookup(plan: AmbientPlan, timeline: TransitTimeline): Prom
   const outcome = await forecastIndexFor(plan.source, timeline, plan.nowMs);
   if (!outcome.ok) {
     return {
-      ambientFor: () => NO_AMBIENT,
+      weatherFor: () => NO_WEATHER,
       extraSources: [{ id: "forecast-unavailable", title: unavailableText(outcome.reason, outcome.detail) }],
     };
   }
-  return { ambientFor: (t) => ambientFromForecasts(t, outcome.index), extraSources: [] };
+  return { weatherFor: (t) => weatherFromForecasts(t, outcome.index), extraSources: [] };
 }
 
 // Only reached with no outside temperatures, where the box plays no part in the answer.
@@ -78,7 +74,7 @@ const PLACEHOLDER_BOX: BoxSpec = {
   pack: "none",
 };
 
-function boxSummary(b: BoxToAssess, result: TransitAssessment): BoxTemperature {
+function boxSummary(b: BoxToAssess, result: TripAssessment): BoxTemperature {
   return {
     containerId: b.containerId,
     label: b.label,
@@ -101,6 +97,7 @@ export function unassessable(
   boxes: readonly BoxToAssess[],
   fallback: TemperatureProfile,
   why: Source,
+  exposure?: ExposureInput,
 ): TemperatureReport {
   const at = new Date(trip.departAt).toISOString();
   const timeline: TransitTimeline = {
@@ -112,10 +109,12 @@ export function unassessable(
     roadKm: null,
     waypoints: [],
     points: [],
+    stays: [],
+    skippedStops: [],
     warnings: [],
   };
   const assess = (b: Pick<BoxToAssess, "box" | "profile">) =>
-    assessTransit({ timeline, ambientByHour: NO_AMBIENT, box: b.box, profile: b.profile });
+    assessTransit({ timeline, ambientByHour: NO_WEATHER.ambient, box: b.box, profile: b.profile, exposure });
   const shown = boxes[0] ?? { box: PLACEHOLDER_BOX, profile: fallback };
   const result = assess(shown);
   return {
@@ -138,22 +137,27 @@ export async function assessBoxes(
   plan: AmbientPlan,
   fallback: TemperatureProfile,
   plannedArrivalMs?: number,
+  exposure?: ExposureInput,
 ): Promise<TemperatureReport> {
   if (boxes.length === 0)
-    return unassessable(request, boxes, fallback, {
-      id: "no-boxes",
-      title: "No box holds animals yet: there is nothing to assess.",
-    });
+    return unassessable(
+      request,
+      boxes,
+      fallback,
+      { id: "no-boxes", title: "No box holds animals yet: there is nothing to assess." },
+      exposure,
+    );
   const timeline = buildTransitTimeline(request);
-  const lookup = await ambientLookup(plan, timeline);
+  const lookup = await weatherLookup(plan, timeline);
 
   const ambientSource = plan.kind === "override" ? ("override" as const) : ("forecast" as const);
   const timelineFor = (departMs: number) => buildTransitTimeline({ ...request, departAt: departMs });
-  const search = { timelineFor, ambientFor: lookup.ambientFor };
-  const ambientByHour = lookup.ambientFor(timeline);
+  const search = { timelineFor, weatherFor: lookup.weatherFor };
+  const weather = lookup.weatherFor(timeline);
+  const common = { ambientByHour: weather.ambient, radiationByHour: weather.radiation, ambientSource, exposure };
   const assessed = boxes.map((b) => ({
     ...b,
-    result: assessTransit({ timeline, ambientByHour, box: b.box, profile: b.profile, ambientSource, search }),
+    result: assessTransit({ timeline, ...common, box: b.box, profile: b.profile, search }),
   }));
   const worst = assessed.reduce((w, b) =>
     VERDICT_SEVERITY.indexOf(b.result.verdict) < VERDICT_SEVERITY.indexOf(w.result.verdict) ? b : w,
@@ -162,11 +166,19 @@ export async function assessBoxes(
   const suggested = worst.result.suggestedDeparture;
   const suitsEveryBox = (departAt: string) => {
     const later = timelineFor(Date.parse(departAt));
-    const ambient = lookup.ambientFor(later);
+    const laterWeather = lookup.weatherFor(later);
     return assessed.every((b) =>
       ["ship", "pack"].includes(
-        assessTransit({ timeline: later, ambientByHour: ambient, box: b.box, profile: b.profile, ambientSource })
-          .verdict,
+        assessTransit({
+          timeline: later,
+          ambientByHour: laterWeather.ambient,
+          radiationByHour: laterWeather.radiation,
+          box: b.box,
+          profile: b.profile,
+          ambientSource,
+          exposure,
+          brief: true,
+        }).verdict,
       ),
     );
   };

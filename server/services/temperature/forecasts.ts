@@ -1,5 +1,6 @@
 /**
- * Hourly forecasts for a trip, cached in PostgreSQL by rounded position and hour: the cache
+ * Hourly forecasts for a trip (temperature and solar radiation), cached in PostgreSQL by rounded
+ * position and hour: the cache
  * answers what it holds fresh, the weather adapter is asked only for the positions it lacks,
  * and what comes back is stored for the next assessment (another box, the gate, a re-check).
  */
@@ -77,30 +78,50 @@ export async function forecastIndexFor(
     });
     if (!result.ok) return { ok: false, reason: result.reason, detail: result.detail };
     await writeCache(source.db, chunk, result.forecasts, nowMs);
-    result.forecasts.forEach((f, j) => series.set(keyText(chunk[j]!), new Map(f.hours.map((h) => [h.at, h.tempF]))));
+    result.forecasts.forEach((f, j) =>
+      series.set(
+        keyText(chunk[j]!),
+        new Map(f.hours.map((h) => [h.at, { tempF: h.tempF, radiationWm2: h.radiationWm2 ?? null }])),
+      ),
+    );
   }
 
   const forecasts: PointForecast[] = keys.map((k) => ({
     ...positionOf(k),
-    hours: [...(series.get(keyText(k)) ?? new Map<string, number>())].map(([at, tempF]) => ({ at, tempF })),
+    hours: [...(series.get(keyText(k)) ?? new Map<string, CachedHour>())].map(([at, hour]) => ({
+      at,
+      tempF: hour.tempF,
+      ...(hour.radiationWm2 === null ? {} : { radiationWm2: hour.radiationWm2 }),
+    })),
   }));
   return { ok: true, index: indexForecasts(forecasts), fetchedPoints: missing.length };
 }
 
-/** Fresh cached hours per position key, as ISO hour → °F. */
+type CachedHour = { tempF: number; radiationWm2: number | null };
+
+/**
+ * Fresh cached hours per position key, as ISO hour → °F and W/m². Rows cached before radiation
+ * was asked for (null) count as missing, so the point is fetched again.
+ */
 async function readCache(db: Queryable, keys: readonly Key[], fromMs: number, toMs: number, freshSinceMs: number) {
-  const { rows } = await db.query<{ lat_e2: number; lon_e2: number; hour: Date; temp_f: number }>(
-    `SELECT f.lat_e2, f.lon_e2, f.hour, f.temp_f
+  const { rows } = await db.query<{
+    lat_e2: number;
+    lon_e2: number;
+    hour: Date;
+    temp_f: number;
+    radiation_wm2: number;
+  }>(
+    `SELECT f.lat_e2, f.lon_e2, f.hour, f.temp_f, f.radiation_wm2
        FROM forecast_hour f
        JOIN unnest($1::int[], $2::int[]) AS k(lat_e2, lon_e2) ON k.lat_e2 = f.lat_e2 AND k.lon_e2 = f.lon_e2
-      WHERE f.hour BETWEEN $3 AND $4 AND f.fetched_at >= $5`,
+      WHERE f.hour BETWEEN $3 AND $4 AND f.fetched_at >= $5 AND f.radiation_wm2 IS NOT NULL`,
     [keys.map((k) => k.latE2), keys.map((k) => k.lonE2), new Date(fromMs), new Date(toMs), new Date(freshSinceMs)],
   );
-  const series = new Map<string, Map<string, number>>();
+  const series = new Map<string, Map<string, CachedHour>>();
   for (const row of rows) {
     const key = keyText({ latE2: row.lat_e2, lonE2: row.lon_e2 });
     if (!series.has(key)) series.set(key, new Map());
-    series.get(key)!.set(row.hour.toISOString(), row.temp_f);
+    series.get(key)!.set(row.hour.toISOString(), { tempF: row.temp_f, radiationWm2: row.radiation_wm2 });
   }
   return series;
 }
@@ -115,22 +136,25 @@ async function writeCache(
   const lon: number[] = [];
   const hour: string[] = [];
   const temp: number[] = [];
+  const radiation: (number | null)[] = [];
   forecasts.forEach((f, i) => {
     for (const h of f.hours) {
       lat.push(keys[i]!.latE2);
       lon.push(keys[i]!.lonE2);
       hour.push(h.at);
       temp.push(h.tempF);
+      radiation.push(h.radiationWm2 ?? null);
     }
   });
   // Rows go in key order so that two writers of overlapping forecasts cannot deadlock.
   await db.query(
-    `INSERT INTO forecast_hour (lat_e2, lon_e2, hour, temp_f, fetched_at)
-     SELECT u.lat_e2, u.lon_e2, u.hour, u.temp_f, $5
-       FROM unnest($1::int[], $2::int[], $3::timestamptz[], $4::float8[]) AS u(lat_e2, lon_e2, hour, temp_f)
+    `INSERT INTO forecast_hour (lat_e2, lon_e2, hour, temp_f, radiation_wm2, fetched_at)
+     SELECT u.lat_e2, u.lon_e2, u.hour, u.temp_f, u.radiation_wm2, $6
+       FROM unnest($1::int[], $2::int[], $3::timestamptz[], $4::float8[], $5::float8[]) AS u(lat_e2, lon_e2, hour, temp_f, radiation_wm2)
       ORDER BY 1, 2, 3
-     ON CONFLICT (lat_e2, lon_e2, hour) DO UPDATE SET temp_f = EXCLUDED.temp_f, fetched_at = EXCLUDED.fetched_at`,
-    [lat, lon, hour, temp, new Date(nowMs)],
+     ON CONFLICT (lat_e2, lon_e2, hour) DO UPDATE
+       SET temp_f = EXCLUDED.temp_f, radiation_wm2 = EXCLUDED.radiation_wm2, fetched_at = EXCLUDED.fetched_at`,
+    [lat, lon, hour, temp, radiation, new Date(nowMs)],
   );
 }
 

@@ -2,7 +2,7 @@ import { TEMPERATURE_VERDICT_WORDS } from "@shared/words";
 import { blocksShipping } from "@shared/temperature/report";
 import { conflict, invalidField } from "../../http/errors";
 import { appendCustody } from "../transfers/custody";
-import type { ReadyGate } from "../transfers/transition";
+import { overrides, type ReadyGate } from "../transfers/transition";
 import { recordCheck } from "./checks";
 import type { WeatherSource } from "./forecasts";
 import { assessTransferTemperature } from "./transfer-temperature";
@@ -21,7 +21,7 @@ export function createTemperatureGate(source: WeatherSource | null): ReadyGate {
       const report = await assessTransferTemperature({ em, source, transfer, nowMs: now.getTime() });
       recordCheck(em, transfer, "gate", report, now);
       if (!blocksShipping(report.verdict)) return;
-      if (input.override !== true) {
+      if (!overrides(input, "temperature")) {
         throw conflict(
           `Temperature check: ${TEMPERATURE_VERDICT_WORDS[report.verdict].toLowerCase()}. ${report.advice.message} To clear the transfer anyway, confirm with an override and a reason; it goes into the custody log.`,
           { temperature: report },

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { adviceMessage } from "@shared/temperature/advice";
 import { createTestApp, type TestApp } from "../../../tests/support/app";
-import { actorOf, buildTransfer, type TransferCast } from "../../../tests/factories";
+import { actorOf, buildTransfer, markReviewed, type TransferCast } from "../../../tests/factories";
 import { startOpenMeteoFake, type OpenMeteoFake } from "../../../fakes/open-meteo/server";
 import { startSmtpFake, type SmtpFake } from "../../../fakes/smtp/smtp-fake";
 import { deliverDueMail } from "../outbox";
@@ -29,6 +29,8 @@ beforeAll(async () => {
   // Knoxville, TN → Eugene, OR overnight; two corn snakes in an EPS box (the factory's transfer)
   cast = await buildTransfer(em(), { status: "awaiting_receiver" });
   idle = await buildTransfer(em(), { status: "awaiting_receiver" });
+  // The route's rules reviewed (federal, TN, OR by air), so the rules check, which runs first, is clear (D25).
+  await markReviewed(em(), ["US", "TN", "OR"]);
   await transitionTransfer({
     em: em(),
     actor: await actorOf(em(), cast.receiver),

@@ -3,10 +3,13 @@ import { boxContentsG, profileForBox, type AnimalLine } from "@shared/temperatur
 import { placeFromPosition, placeFromZip, type TransitPlace } from "@shared/temperature/places";
 import type { AnimalClass } from "@shared/temperature/profiles";
 import type { TemperatureReport } from "@shared/temperature/report";
-import { AnimalSchema, ContainerSchema, type Transfer } from "../../db/entities/transfer.entity";
+import { AnimalSchema, ContainerSchema, LegSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { assessBoxes, unassessable, type BoxToAssess } from "./assess-boxes";
 import type { WeatherSource } from "./forecasts";
+import { exposureOf } from "./exposure-plan";
 import { loadProfiles, type ProfileTable } from "./profiles";
+import { pickupAt } from "./readings";
+import { tripExposureFields } from "./trip-plan";
 
 const CLASS_OF_TAXON: Readonly<Record<string, AnimalClass>> = { Reptilia: "reptile", Amphibia: "amphibian" };
 
@@ -39,7 +42,7 @@ function placeOf(t: Transfer, side: "origin" | "destination"): TransitPlace | un
 }
 
 /** The boxes that hold animals, each with its profile (see profileForBox) and its contents. */
-async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileTable): Promise<BoxToAssess[]> {
+export async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileTable): Promise<BoxToAssess[]> {
   const [containers, animals] = await Promise.all([
     em.find(ContainerSchema, { transfer }, { orderBy: { position: "asc" } }),
     em.find(AnimalSchema, { transfer }, { populate: ["taxon"] }),
@@ -78,9 +81,12 @@ async function boxesOf(em: EntityManager, transfer: Transfer, profiles: ProfileT
 }
 
 /**
- * The temperature verdict of a stored transfer: its route and planned departure, each box that
- * holds animals under its animals' profile, forecasts through the cache. A place that cannot be
- * located or a source that cannot answer gives "forecast unavailable".
+ * The temperature verdict of a stored transfer: its route and planned departure (or, once the box
+ * is picked up, the actual pickup: the model then follows the trip as it started, with the planned
+ * stops as far after it as they were after the planned departure), how the box travels (the
+ * transfer's vehicle and stops, each leg's declared vehicle), each box that holds animals under
+ * its animals' profile, forecasts through the cache. A place that cannot be located or a source
+ * that cannot answer gives "forecast unavailable".
  */
 export async function assessTransferTemperature({
   em,
@@ -94,30 +100,57 @@ export async function assessTransferTemperature({
   nowMs: number;
 }): Promise<TemperatureReport> {
   const profiles = await loadProfiles(em);
-  const boxes = await boxesOf(em, transfer, profiles);
+  const [boxes, legs, pickedUp] = await Promise.all([
+    boxesOf(em, transfer, profiles),
+    em.find(LegSchema, { transfer }, { orderBy: { sequence: "asc" } }),
+    pickupAt(em, transfer.id),
+  ]);
   const origin = placeOf(transfer, "origin");
   const destination = placeOf(transfer, "destination");
   const fallback = profileForBox([], [], profiles);
-  const trip = { mode: transfer.mode, departAt: transfer.plannedDepartureAt.getTime() };
+  const plannedMs = transfer.plannedDepartureAt.getTime();
+  const { driving, exposure } = exposureOf(tripExposureFields(transfer, legs), plannedMs);
+  const trip = { mode: transfer.mode, departAt: pickedUp?.getTime() ?? plannedMs };
   if (!origin || !destination) {
-    return unassessable(trip, boxes, fallback, {
-      id: "place-unknown",
-      title: `The ${origin ? "destination" : "origin"} ZIP code could not be located, so there is no forecast for it.`,
-    });
+    return unassessable(
+      trip,
+      boxes,
+      fallback,
+      {
+        id: "place-unknown",
+        title: `The ${origin ? "destination" : "origin"} ZIP code could not be located, so there is no forecast for it.`,
+      },
+      exposure,
+    );
   }
   try {
-    return await assessBoxes(
-      { ...trip, origin, destination },
+    const report = await assessBoxes(
+      { ...trip, origin, destination, options: { driving } },
       boxes,
       { kind: "forecast", source, nowMs },
       fallback,
       transfer.expectedArrivalAt.getTime(),
+      exposure,
     );
+    if (!pickedUp) return report;
+    return {
+      ...report,
+      sources: [
+        ...report.sources,
+        {
+          id: "following-pickup",
+          title: `Following the trip from the recorded pickup (${pickedUp.toISOString()}) rather than the planned departure.`,
+        },
+      ],
+    };
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;
-    return unassessable(trip, boxes, fallback, {
-      id: "route-unplanned",
-      title: `The trip could not be laid out hour by hour: ${err.message}.`,
-    });
+    return unassessable(
+      trip,
+      boxes,
+      fallback,
+      { id: "route-unplanned", title: `The trip could not be laid out hour by hour: ${err.message}.` },
+      exposure,
+    );
   }
 }

@@ -6,6 +6,7 @@ import type { TemperatureReport } from "@shared/temperature/report";
 import type { PlaceInputParsed, WhatIfInput } from "@shared/temperature/schemas";
 import { invalidField } from "../../http/errors";
 import { assessBoxes, type AmbientPlan } from "./assess-boxes";
+import { exposureOf } from "./exposure-plan";
 import type { WeatherSource } from "./forecasts";
 import { loadProfiles } from "./profiles";
 import { animalClasses } from "./transfer-temperature";
@@ -49,7 +50,8 @@ async function whatIfProfile(
 
 /**
  * A trip planned before any transfer exists: one box, one profile, the forecast through the
- * cache or the caller's own outside temperatures. Stores nothing but forecasts.
+ * cache or the caller's own outside temperatures, the vehicle and stops the planner gives.
+ * Stores nothing but forecasts.
  */
 export async function assessWhatIf({
   em,
@@ -71,12 +73,15 @@ export async function assessWhatIf({
   const plan: AmbientPlan = input.ambientOverrideF
     ? { kind: "override", samples: input.ambientOverrideF }
     : { kind: "forecast", source, nowMs };
+  const { driving, exposure } = exposureOf(input, Date.parse(input.departAt));
   try {
     return await assessBoxes(
-      { mode: input.mode, origin, destination, hub, departAt: input.departAt },
+      { mode: input.mode, origin, destination, hub, departAt: input.departAt, options: { driving } },
       [{ containerId: null, label: "Box", box: input.box, profile }],
       plan,
       profile,
+      undefined,
+      exposure,
     );
   } catch (err) {
     // The model refuses a trip it cannot lay out (longer than it covers); its own words are for developers.

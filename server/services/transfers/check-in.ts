@@ -5,17 +5,14 @@ import type { checkInInputSchema } from "@shared/schemas/transfer";
 import { computeDiscrepancies, outcomeTotal } from "@shared/checkin/discrepancy";
 import type { Actor } from "../../auth/actor";
 import { AnimalSchema } from "../../db/entities/transfer.entity";
-import {
-  CheckInExtraSchema,
-  CheckInItemSchema,
-  CheckInSchema,
-  RegisterEntrySchema,
-} from "../../db/entities/check-in.entity";
+import { CheckInExtraSchema, CheckInItemSchema, CheckInSchema } from "../../db/entities/check-in.entity";
+import { recordArrivals } from "../register/arrivals";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { conflict, forbidden, invalidField } from "../../http/errors";
 import { mayCheckIn, transferAbilities } from "../../policies/transfer.policy";
+import { checkBoxReading } from "../temperature/readings";
 import { appendCustody } from "./custody";
 import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
@@ -35,9 +32,25 @@ function describe(rows: ReturnType<typeof computeDiscrepancies>): string {
 }
 
 /**
+ * What a register entry says besides its condition: the problem for an animal that arrived with one;
+ * for a loss, the line's notes (or the check-in's when the line has none). An animal that arrived
+ * well carries no note: the line's notes may be about the ones lost.
+ */
+function registerNotes(
+  condition: "well" | "problem" | "dead_on_arrival" | "missing",
+  item: CheckInParsed["items"][number],
+  checkInNotes: string | null,
+): string | null {
+  if (condition === "well") return null;
+  if (condition === "problem") return item.problem?.trim() || null;
+  return item.notes?.trim() || checkInNotes;
+}
+
+/**
  * The receiver's signed check-in: an outcome for every animal on the manifest, animals that
- * came but were not listed, and the discrepancy against the manifest. Accepted animals enter
- * the receiver's collection register; the sender is told.
+ * came but were not listed, and the discrepancy against the manifest. Every animal enters the
+ * receiver's collection register: accepted ones as held, dead-on-arrival and missing ones as losses
+ * (with the line's notes and weight); the sender is told.
  */
 export async function checkInTransfer({
   em,
@@ -101,8 +114,8 @@ export async function checkInTransfer({
       notes: input.notes ?? null,
     });
     const sender = await tx.findOneOrFail(OrganizationSchema, { id: t.senderOrganization.id });
-    const receiverOrg = tx.getReference(OrganizationSchema, t.receiverOrganization.id);
-    const dateAcquired = signedAt.toISOString().slice(0, 10);
+    const receiverOrg = await tx.findOneOrFail(OrganizationSchema, { id: t.receiverOrganization.id });
+    const arrivedOn = signedAt.toISOString().slice(0, 10);
     for (const item of input.items) {
       const animal = byId.get(item.animalId)!;
       tx.create(CheckInItemSchema, {
@@ -116,28 +129,38 @@ export async function checkInTransfer({
         weightG: item.weightG ?? null,
         notes: item.notes ?? null,
       });
-      for (const [condition, count] of [
-        ["well", item.arrivedWell],
-        ["problem", item.arrivedProblem],
-      ] as const) {
-        if (count === 0) continue;
-        tx.create(RegisterEntrySchema, {
-          organization: receiverOrg,
-          taxon: animal.taxon,
-          sex: animal.sex,
-          count,
-          identifier: animal.identifier ?? null,
-          dateAcquired,
-          sourceOrganization: sender,
-          sourceOrganizationName: sender.name,
-          transfer: t,
-          transferNumber: t.number,
-          animal,
-          condition,
-          notes: condition === "problem" ? (item.problem ?? null) : null,
-        });
-      }
     }
+    // Every animal enters the register, losses too, so it accounts for every animal on the
+    // manifest (CITES Rp/3 1.72, 1.82); lines started from the sender's register continue it.
+    const departed = await tx.getConnection().execute<{ on: string }[]>(
+      `SELECT to_char(at AT TIME ZONE 'UTC', 'YYYY-MM-DD') AS "on" FROM custody_entry
+        WHERE transfer_id = ? AND kind = 'status_change' AND payload->>'to' = 'in_transit' ORDER BY seq LIMIT 1`,
+      [t.id],
+    );
+    await recordArrivals(tx, {
+      actor,
+      transfer: t,
+      sender,
+      receiver: receiverOrg,
+      arrivedOn,
+      departedOn: departed[0]?.on ?? null,
+      lines: input.items.map((item) => ({
+        animal: byId.get(item.animalId)!,
+        counts: {
+          well: item.arrivedWell,
+          problem: item.arrivedProblem,
+          dead_on_arrival: item.deadOnArrival,
+          missing: item.missing,
+        },
+        notes: {
+          well: registerNotes("well", item, input.notes ?? null),
+          problem: registerNotes("problem", item, input.notes ?? null),
+          dead_on_arrival: registerNotes("dead_on_arrival", item, input.notes ?? null),
+          missing: registerNotes("missing", item, input.notes ?? null),
+        },
+        weightG: item.weightG ?? null,
+      })),
+    });
     for (const e of input.extras)
       tx.create(CheckInExtraSchema, {
         checkIn,
@@ -164,7 +187,26 @@ export async function checkInTransfer({
       })),
     );
     const summary = describe(rows);
-    await appendCustody(tx, t.id, actor, "check_in", { signedName: input.signedName, summary, discrepancies: rows });
+    // Each line's own words on the record too: what was wrong, the notes, the weight.
+    const lines = input.items
+      .filter((item) => item.problem || item.notes || item.weightG != null || item.deadOnArrival || item.missing)
+      .map((item) => ({
+        scientificName: byId.get(item.animalId)!.taxon.getEntity().scientificName,
+        deadOnArrival: item.deadOnArrival,
+        missing: item.missing,
+        problem: item.problem ?? null,
+        notes: item.notes ?? null,
+        weightG: item.weightG ?? null,
+      }));
+    await appendCustody(tx, t.id, actor, "check_in", {
+      signedName: input.signedName,
+      summary,
+      discrepancies: rows,
+      lines,
+      notes: input.notes ?? null,
+      boxTempF: input.boxTempF ?? null,
+    });
+    await checkBoxReading(tx, links, t, actor, { tempF: input.boxTempF, place: null, source: "check_in" });
     await appendCustody(tx, t.id, actor, "status_change", {
       from: "delivered",
       to: "checked_in",

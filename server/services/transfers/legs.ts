@@ -47,17 +47,23 @@ export async function assignLegs({
       if (i > 0 && input.legs[i - 1]!.courierId === l.courierId)
         throw invalidField(["legs", i, "courierId"], "the same courier cannot hand over to themselves");
     });
+    // A courier who keeps a leg keeps the vehicle they declared for it (issue 13).
+    const declared = new Map(old.map((leg) => [leg.courier.id, leg]));
     for (const leg of old) tx.remove(leg);
     await tx.flush();
-    input.legs.forEach((l, i) =>
+    input.legs.forEach((l, i) => {
+      const before = declared.get(l.courierId);
       tx.create(LegSchema, {
         transfer,
         sequence: i + 1,
         courier: byId.get(l.courierId)!,
         fromLabel: l.fromLabel ?? null,
         toLabel: l.toLabel ?? null,
-      }),
-    );
+        vehicle: before?.vehicle ?? null,
+        vehicleMinF: before?.vehicleMinF ?? null,
+        vehicleMaxF: before?.vehicleMaxF ?? null,
+      });
+    });
     transfer.version += 1;
     await appendCustody(tx, transfer.id, actor, "couriers_assigned", {
       legs: input.legs.map((l, i) => ({

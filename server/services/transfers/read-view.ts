@@ -6,6 +6,8 @@ import type {
   LengthKind,
   OrganizationKind,
   PackKind,
+  PhotoMoment,
+  PhotoSubject,
   ProfileGroup,
   Purpose,
   Sex,
@@ -128,6 +130,29 @@ export type TransferView = {
   } | null;
   /** The custody entry of demo or bench data cleared without the gates (gatesForLoadedData), if any. */
   checksSkipped: { at: string; payload: Record<string, unknown> } | null;
+  /** Photos at the handoffs and the check-in, oldest first. */
+  photos: {
+    id: string;
+    moment: PhotoMoment;
+    handoff_index: number | null;
+    subject: PhotoSubject;
+    container_id: string | null;
+    animal_id: string | null;
+    caption: string | null;
+    content_type: string;
+    size_bytes: number;
+    sha256: string;
+    uploaded_by_id: string;
+    uploaded_by_name: string;
+    created_at: string;
+  }[];
+  /** The receiver's acknowledgement of a delivery the courier recorded (custody entry), if any. */
+  deliveryAcknowledged: {
+    at: string;
+    actor_id: string | null;
+    actor_name: string;
+    payload: Record<string, unknown>;
+  } | null;
 };
 type OrgRow = {
   id: string;
@@ -235,7 +260,14 @@ SELECT json_build_object(
                                       FROM check_in_extra e JOIN taxon x ON x.id = e.taxon_id WHERE e.check_in_id = ci.id), '[]'))
                 FROM check_in ci JOIN app_user su ON su.id = ci.signed_by_id WHERE ci.transfer_id = t.id),
   'checksSkipped', (SELECT json_build_object('at', e.at, 'payload', e.payload) FROM custody_entry e
-                     WHERE e.transfer_id = t.id AND e.kind = 'checks_skipped' ORDER BY e.seq LIMIT 1)
+                     WHERE e.transfer_id = t.id AND e.kind = 'checks_skipped' ORDER BY e.seq LIMIT 1),
+  'photos', coalesce((SELECT json_agg(json_build_object('id', ph.id, 'moment', ph.moment, 'handoff_index', ph.handoff_index, 'subject', ph.subject,
+                           'container_id', ph.container_id, 'animal_id', ph.animal_id, 'caption', ph.caption, 'content_type', ph.content_type,
+                           'size_bytes', ph.size_bytes, 'sha256', ph.sha256, 'uploaded_by_id', ph.uploaded_by_id, 'uploaded_by_name', ph.uploaded_by_name,
+                           'created_at', ph.created_at) ORDER BY ph.created_at, ph.custody_seq)
+                        FROM transfer_photo ph WHERE ph.transfer_id = t.id), '[]'),
+  'deliveryAcknowledged', (SELECT json_build_object('at', e.at, 'actor_id', e.actor_id, 'actor_name', e.actor_name, 'payload', e.payload) FROM custody_entry e
+                     WHERE e.transfer_id = t.id AND e.kind = 'delivery_acknowledged' ORDER BY e.seq DESC LIMIT 1)
 ) AS view
 FROM transfer t
 JOIN organization so ON so.id = t.sender_organization_id
@@ -245,7 +277,7 @@ WHERE t.id = $1`;
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
   const { rows } = await pool.query<{ view: TransferView }>({
-    name: "transfer-view-v3",
+    name: "transfer-view-v4",
     text: TRANSFER_VIEW_SQL,
     values: [id],
   });

@@ -15,7 +15,20 @@ import { loadTransferForActor } from "./load";
 import { notifyParty } from "./notify";
 import type { AppLinks } from "../../mail/links";
 
-type Parsed = { to: TransferStatus; reason?: string | null; override?: boolean };
+type Parsed = {
+  to: TransferStatus;
+  reason?: string | null;
+  override?: boolean;
+  overrideGates?: readonly ("compliance" | "temperature")[];
+};
+
+/**
+ * Whether the step answers this gate's block with an override: only a block the party was shown
+ * when they name the ones they saw, so acknowledging one never answers another unseen.
+ */
+export function overrides(input: Parsed, gate: "compliance" | "temperature"): boolean {
+  return input.override === true && (input.overrideGates === undefined || input.overrideGates.includes(gate));
+}
 
 /** Which ability a requested step needs. */
 function abilityFor(from: TransferStatus, to: TransferStatus): keyof TransferAbilitiesDto | null {

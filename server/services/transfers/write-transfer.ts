@@ -1,4 +1,5 @@
 import { KEEPER_ROLES } from "@shared/constants";
+import { RegisterEntrySchema } from "../../db/entities/check-in.entity";
 import { randomBytes } from "node:crypto";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { LockMode, ref, UniqueConstraintViolationException } from "@mikro-orm/core";
@@ -95,6 +96,31 @@ async function resolveTaxa(em: EntityManager, animals: TransferInputParsed["anim
   return byId;
 }
 
+/**
+ * Lines started from the sender's register (issue 15 §2) must name the sender's own entries, of
+ * the line's species, holding at least the line's count; one entry may start one line.
+ */
+async function checkRegisterEntries(em: EntityManager, transfer: Transfer, animals: TransferInputParsed["animals"]) {
+  const named = animals.flatMap((a, index) => (a.registerEntryId ? [{ a, index }] : []));
+  if (named.length === 0) return;
+  const entries = await em.find(RegisterEntrySchema, {
+    id: { $in: named.map(({ a }) => a.registerEntryId!) },
+    organization: transfer.senderOrganization.id,
+  });
+  const byId = new Map(entries.map((entry) => [entry.id, entry]));
+  const seen = new Set<string>();
+  for (const { a, index } of named) {
+    const entry = byId.get(a.registerEntryId!);
+    const path = ["animals", index, "registerEntryId"];
+    if (!entry) throw invalidField(path, "choose an animal of your own register");
+    if (seen.has(entry.id)) throw invalidField(path, "this register entry already has a line of its own");
+    seen.add(entry.id);
+    if (entry.taxon.id !== a.taxonId) throw invalidField(path, "the register entry is of another species");
+    if (entry.countInCare < a.count)
+      throw invalidField(["animals", index, "count"], `the register holds ${entry.countInCare} of these in your care`);
+  }
+}
+
 /** Replaces the transfer's boxes and animal lines with the given lists, keeping ids that match. */
 async function replaceLines(
   em: EntityManager,
@@ -131,6 +157,7 @@ async function replaceLines(
     if (c.id) oldC.delete(c.id);
     byKey.set(c.key, entity);
   });
+  await checkRegisterEntries(em, transfer, input.animals);
   input.animals.forEach((a, position) => {
     if (a.id && !oldA.has(a.id))
       throw invalidField(["animals", position, "id"], "this animal line is not one of this transfer's");
@@ -148,6 +175,8 @@ async function replaceLines(
       hatchDate: a.hatchDate ?? null,
       notes: a.notes ?? null,
       container: a.containerKey ? ref(byKey.get(a.containerKey)!) : null,
+      registerEntryId:
+        a.registerEntryId === undefined ? (a.id ? (oldA.get(a.id)!.registerEntryId ?? null) : null) : a.registerEntryId,
     };
     if (a.id) {
       em.assign(oldA.get(a.id)!, values as never);

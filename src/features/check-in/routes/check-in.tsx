@@ -1,5 +1,5 @@
 import { SEX_WORDS } from "@shared/words";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Controller, FormProvider, useForm } from "react-hook-form";
 import { keeperResolver } from "@/lib/form-resolver";
 import { Link, useParams } from "react-router";
@@ -9,6 +9,7 @@ import { checkInInputSchema, type CheckInInput, type TaxonBriefDto, type Transfe
 import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { TextAreaField, TextField } from "@/components/ui/field";
+import { MeasureField } from "@/components/ui/measure-field";
 import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { TaxonName } from "@/components/ui/taxon-name";
@@ -19,20 +20,32 @@ import { useIdempotencyKey } from "@/lib/idempotency";
 import { searchTaxa } from "@/lib/taxa-search";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
+import { PhotoPicker } from "@/components/ui/photo-picker";
+import type { ChosenPhoto } from "@/lib/photos";
 import { useCheckIn } from "../api/check-in";
+import { ArrivalRecord } from "../components/arrival-record";
 import { DiscrepancyTable } from "../components/discrepancy-table";
 import { ExtrasEditor } from "../components/extras-editor";
 import { OutcomeCard } from "../components/outcome-card";
 
 type Parsed = z.output<typeof checkInInputSchema>;
 
-function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: string }) {
+function CheckInForm({
+  transfer: t,
+  signer,
+  onPhotoProblems,
+}: {
+  transfer: TransferDto;
+  signer: string;
+  onPhotoProblems: (messages: string[]) => void;
+}) {
   const animals = [...t.animals].sort((a, b) => a.position - b.position);
   const boxLabel = new Map(t.containers.map((c) => [c.id, c.label]));
   const submitCheckIn = useCheckIn(t.id);
   const { key, settle } = useIdempotencyKey();
   const [taxa, setTaxa] = useState<Record<string, TaxonBriefDto>>({});
   const [sumError, setSumError] = useState<string | null>(null);
+  const [photos, setPhotos] = useState<ChosenPhoto[]>([]);
   const form = useForm<CheckInInput, unknown, Parsed>({
     resolver: keeperResolver(checkInInputSchema),
     defaultValues: {
@@ -49,11 +62,23 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
       })),
       extras: [],
       notes: "",
+      boxTempF: null,
       signedName: signer,
       acknowledged: false as unknown as true,
     },
   });
   const e = form.formState.errors;
+
+  // A stale refusal never stays on screen: any change to the entries clears it.
+  const reset = useRef(submitCheckIn.reset);
+  reset.current = submitCheckIn.reset;
+  useEffect(() => {
+    const subscription = form.watch(() => {
+      setSumError(null);
+      reset.current();
+    });
+    return () => subscription.unsubscribe();
+  }, [form]);
 
   const submit = form.handleSubmit((input) => {
     const off = input.items.filter((item, i) => outcomeTotal(item) !== animals[i]!.count).length;
@@ -64,7 +89,13 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
       return;
     }
     setSumError(null);
-    submitCheckIn.mutate({ input, idempotencyKey: key }, { onSettled: (_d, error) => settle(error ?? undefined) });
+    submitCheckIn.mutate(
+      { input, idempotencyKey: key, photos },
+      {
+        onSuccess: ({ failed }) => onPhotoProblems(failed.map((m) => `A photo was not sent (${m}).`)),
+        onSettled: (_d, error) => settle(error ?? undefined),
+      },
+    );
   });
 
   return (
@@ -78,24 +109,30 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
             Listed animals
           </h2>
           {animals.map((a, i) => (
-            <Controller
-              key={a.id}
-              control={form.control}
-              name={`items.${i}`}
-              render={({ field }) => (
-                <OutcomeCard
-                  animal={a}
-                  boxLabel={a.containerId ? (boxLabel.get(a.containerId) ?? null) : null}
-                  value={field.value}
-                  onChange={field.onChange}
-                  errors={{
-                    problem: e.items?.[i]?.problem?.message,
-                    weightG: e.items?.[i]?.weightG?.message,
-                    notes: e.items?.[i]?.notes?.message,
-                  }}
-                />
-              )}
-            />
+            <div key={a.id} className="grid gap-2">
+              <Controller
+                control={form.control}
+                name={`items.${i}`}
+                render={({ field }) => (
+                  <OutcomeCard
+                    animal={a}
+                    boxLabel={a.containerId ? (boxLabel.get(a.containerId) ?? null) : null}
+                    value={field.value}
+                    onChange={field.onChange}
+                    errors={{
+                      problem: e.items?.[i]?.problem?.message,
+                      weightG: e.items?.[i]?.weightG?.message,
+                      notes: e.items?.[i]?.notes?.message,
+                    }}
+                  />
+                )}
+              />
+              <PhotoPicker
+                slots={[{ subject: "animal", label: `Photo of ${a.taxon.scientificName}`, animalId: a.id }]}
+                value={photos.filter((p) => p.animalId === a.id)}
+                onChange={(mine) => setPhotos([...photos.filter((p) => p.animalId !== a.id), ...mine])}
+              />
+            </div>
           ))}
         </section>
 
@@ -108,7 +145,27 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
           <h2 id="sign-title" className="text-xl font-semibold">
             Sign
           </h2>
+          <Controller
+            control={form.control}
+            name="boxTempF"
+            render={({ field }) => (
+              <MeasureField
+                kind="temperature"
+                label="Box temperature on opening (optional)"
+                value={field.value}
+                onChange={field.onChange}
+                onBlur={field.onBlur}
+                error={e.boxTempF?.message}
+                hint="Read it inside the box before taking the animals out; it is set beside the model's prediction."
+              />
+            )}
+          />
           <TextAreaField label="Notes on the arrival (optional)" error={e.notes?.message} {...form.register("notes")} />
+          <PhotoPicker
+            slots={[{ subject: "box_outside", label: "Photo of the boxes as they arrived" }]}
+            value={photos.filter((p) => !p.animalId)}
+            onChange={(mine) => setPhotos([...photos.filter((p) => p.animalId), ...mine])}
+          />
           <TextField
             label="Your name, as a signature"
             autoComplete="name"
@@ -152,7 +209,7 @@ function CheckInForm({ transfer: t, signer }: { transfer: TransferDto; signer: s
   );
 }
 
-function Results({ transfer: t }: { transfer: TransferDto }) {
+function Results({ transfer: t, photoProblems }: { transfer: TransferDto; photoProblems: string[] }) {
   const c = t.checkIn!;
   return (
     <div className="grid grid-cols-1 gap-5">
@@ -162,7 +219,13 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
           Open the collection register
         </Link>
       </Notice>
+      {photoProblems.length ? (
+        <Notice tone="block" role="alert" title="Some photos were not sent">
+          {photoProblems.join(" ")}
+        </Notice>
+      ) : null}
       <DiscrepancyTable checkIn={c} />
+      <ArrivalRecord transfer={t} />
       {c.extras.length ? (
         <section aria-labelledby="extras-done" className="grid gap-2">
           <h2 id="extras-done" className="text-lg font-semibold">
@@ -178,7 +241,6 @@ function Results({ transfer: t }: { transfer: TransferDto }) {
           </ul>
         </section>
       ) : null}
-      {c.notes ? <p className="whitespace-pre-wrap">{c.notes}</p> : null}
     </div>
   );
 }
@@ -188,6 +250,7 @@ export function CheckInRoute() {
   const { transferId = "" } = useParams();
   const viewer = useViewer();
   const transfer = useTransfer(transferId);
+  const [photoProblems, setPhotoProblems] = useState<string[]>([]);
   if (transfer.isPending) return <Loading label="Loading the transfer…" />;
   if (transfer.error)
     return (
@@ -214,12 +277,14 @@ export function CheckInRoute() {
         }
       />
       {t.checkIn ? (
-        <Results transfer={t} />
+        <Results transfer={t} photoProblems={photoProblems} />
       ) : t.abilities.checkIn ? (
-        <CheckInForm transfer={t} signer={viewer.user.displayName} />
+        <CheckInForm transfer={t} signer={viewer.user.displayName} onPhotoProblems={setPhotoProblems} />
       ) : (
         <Notice tone="info" title="Not ready for check-in">
-          The receiver checks the animals in once the delivery is recorded.
+          {t.delivery?.state === "awaiting_receiver"
+            ? "The courier recorded the delivery: confirm on the transfer page that you have the boxes, then check the animals in."
+            : "The receiver checks the animals in once the delivery is recorded and acknowledged."}
         </Notice>
       )}
     </div>

@@ -7,6 +7,7 @@ export const complianceKeys = {
   ruleList: (filters: RuleListQuery) => [...complianceKeys.rules(), "list", filters] as const,
   ruleHistory: (ruleKey: string) => [...complianceKeys.rules(), "history", ruleKey] as const,
   documents: () => [...complianceKeys.all, "documents"] as const,
+  coverage: () => [...complianceKeys.all, "coverage"] as const,
   transfer: (transferId: string) => [...complianceKeys.all, "transfer", transferId] as const,
   transferDocuments: (transferId: string) => [...complianceKeys.transfer(transferId), "documents"] as const,
 };

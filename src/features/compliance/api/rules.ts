@@ -38,6 +38,30 @@ export function useSaveRuleVersion() {
         method: "POST",
         body: input,
       }),
-    onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.rules() }),
+    // A new version can change every verdict and the coverage counts.
+    onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.all }),
+  });
+}
+
+/** Adds a new rule to the library as its version 1. */
+export function useCreateRule() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: RuleVersionInput) =>
+      api<{ version: RuleVersionDto }>("/api/compliance/rules", { method: "POST", body: input }),
+    onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.all }),
+  });
+}
+
+/** Retires a rule (or puts it back in force) as its next version; the rule itself is unchanged. */
+export function useRetireRule() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ current, retired }: { current: RuleVersionDto; retired: boolean }) =>
+      api<{ version: RuleVersionDto }>(`/api/compliance/rules/${encodeURIComponent(current.rule.id)}/versions`, {
+        method: "POST",
+        body: { retired, rule: { ...current.rule, version: current.rule.version + 1 } },
+      }),
+    onSuccess: () => client.invalidateQueries({ queryKey: complianceKeys.all }),
   });
 }

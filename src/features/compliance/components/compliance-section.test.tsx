@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { render, screen, within } from "@testing-library/react";
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { DEMO_TAXA } from "@shared/compliance/demo-taxa";
-import { evaluateCompliance } from "@shared/compliance/evaluate";
+import { evaluateCompliance, type EvaluationInput } from "@shared/compliance/evaluate";
 import { buildAnimal, buildFacts, buildInput } from "@shared/compliance/evaluate-fixtures";
 import type { TransferComplianceDto } from "@shared/schemas/compliance";
 import { ComplianceSection } from "./compliance-section";
@@ -10,9 +10,12 @@ import { ComplianceSection } from "./compliance-section";
 const TRANSFER_ID = "00000000-0000-4000-8000-0000000000aa";
 
 /** The server's answer for a leopard tortoise from Tennessee to Ohio with no certificate on file, computed by the real evaluation. */
-function complianceDto(abilities: Partial<TransferComplianceDto["abilities"]> = {}): TransferComplianceDto {
+function complianceDto(
+  abilities: Partial<TransferComplianceDto["abilities"]> = {},
+  input: Partial<EvaluationInput> = {},
+): TransferComplianceDto {
   const facts = buildFacts();
-  const result = evaluateCompliance(buildInput({ facts, animals: [buildAnimal(DEMO_TAXA.leopardTortoise)] }));
+  const result = evaluateCompliance(buildInput({ facts, animals: [buildAnimal(DEMO_TAXA.leopardTortoise)], ...input }));
   return {
     ...result,
     shipDate: facts.shipDate,
@@ -59,5 +62,40 @@ describe("ComplianceSection", () => {
     expect(await screen.findByRole("button", { name: "Override with this reason" })).toBeInTheDocument();
     expect(screen.getByLabelText("Reason")).toBeInTheDocument();
     expect(screen.queryByText("Documents for this transfer")).not.toBeInTheDocument();
+  });
+
+  it("says “Unverified” in amber, naming the states not reviewed and the agency to ask, and the shared findings once", async () => {
+    // source: issue 12 §1 (product requirement): an unverified verdict names the state and the agency to ask
+    const tennesseeOnly = [
+      {
+        jurisdiction: "TN" as const,
+        reviewedOn: "2026-12-01",
+        reviewedBy: "Test reviewer",
+        wildlifeAgency: { name: "Test Tennessee agency", url: "https://example.test/tn" },
+        stateVeterinarian: { name: "Test Tennessee vet", url: "https://example.test/tn-vet" },
+      },
+    ];
+    renderSection(
+      complianceDto(
+        {},
+        {
+          facts: buildFacts({ destinationState: "OR" }),
+          animals: [buildAnimal(DEMO_TAXA.cornSnake), buildAnimal(DEMO_TAXA.beardedDragon)],
+          coverage: tennesseeOnly,
+        },
+      ),
+    );
+    const [title] = await screen.findAllByText("Unverified");
+    const banner = title?.closest('[role="status"]');
+    expect(banner).toHaveClass("border-amber-line");
+    // Federal law and Oregon are not reviewed; Tennessee is.
+    expect(banner).toHaveTextContent("federal law and Oregon");
+    expect(banner).not.toHaveTextContent("Tennessee");
+    expect(screen.getAllByText("Rules reviewed Tue, Dec 1, 2026").length).toBe(1);
+    // [published] 16 U.S.C. 3372: the Lacey Act applies to every animal moved across a state line: said once
+    const shared = screen.getByRole("region", { name: "Findings for every animal" });
+    expect(within(shared).getAllByRole("link", { name: /16 U\.S\.C\. 3371/ })).toHaveLength(1);
+    const snake = screen.getByRole("region", { name: "Findings for Pantherophis guttatus" });
+    expect(within(snake).queryByRole("link", { name: /16 U\.S\.C\. 3371/ })).not.toBeInTheDocument();
   });
 });

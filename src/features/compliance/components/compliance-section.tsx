@@ -1,7 +1,8 @@
 import { useId } from "react";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { useTransferCompliance } from "../api/transfer-compliance";
-import { FindingsByAnimal } from "./findings-list";
+import { CoverageList } from "./coverage-list";
+import { FindingsByAnimal, ShipmentFindings } from "./findings-list";
 import { LegalCaution } from "./legal-caution";
 import { OverrideForm } from "./override-form";
 import { TransferDocuments } from "./transfer-documents";
@@ -32,7 +33,11 @@ export function ComplianceSection({ transferId }: { transferId: string }) {
         </Notice>
       ) : (
         <>
-          <VerdictBanner verdict={compliance.data.verdict} overridden={compliance.data.override !== null} />
+          <VerdictBanner
+            verdict={compliance.data.verdict}
+            coverage={compliance.data.coverage}
+            overridden={compliance.data.override !== null}
+          />
           {compliance.data.override ? (
             <Notice tone="info" title="Overridden by an administrator">
               {compliance.data.override.admin.displayName}, {formatInstant(compliance.data.override.at)}: “
@@ -44,6 +49,8 @@ export function ComplianceSection({ transferId }: { transferId: string }) {
             sender and the receiver have on file: {compliance.data.rulesUsed.length} rule
             {compliance.data.rulesUsed.length === 1 ? " applies" : "s apply"}.
           </p>
+          <CoverageList coverage={compliance.data.coverage} />
+          <ShipmentFindings findings={compliance.data.shipmentFindings} />
           <FindingsByAnimal animals={compliance.data.animals} />
           {compliance.data.abilities.readDocuments ? (
             <div className="flex flex-col gap-2">

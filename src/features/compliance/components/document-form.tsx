@@ -11,6 +11,7 @@ import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
 import { useCreateDocument, useUpdateDocument } from "../api/documents";
 import { LinesField } from "./lines-field";
+import { TaxaPicker } from "./taxa-picker";
 
 type FormIn = z.input<typeof documentInputSchema>;
 type FormOut = z.output<typeof documentInputSchema>;
@@ -129,20 +130,21 @@ export function DocumentForm({
         hint={isCertificate ? "A certificate's age counts from this day." : undefined}
         {...date("issuedOn")}
       />
-      <Controller
-        control={form.control}
-        name="speciesCovered"
-        render={({ field }) => (
-          <LinesField
-            label="Species covered, one per line"
-            hint="Scientific names at any rank; older names are understood."
-            value={field.value}
-            onChange={field.onChange}
-            onBlur={field.onBlur}
-            error={listError(e, "speciesCovered")}
-          />
-        )}
-      />
+      <div className="sm:col-span-2">
+        <Controller
+          control={form.control}
+          name="speciesCovered"
+          render={({ field }) => (
+            <TaxaPicker
+              label="Species covered"
+              hint="Choose each from the species list, at any rank; older names are found too."
+              value={field.value}
+              onChange={field.onChange}
+              error={listError(e, "speciesCovered")}
+            />
+          )}
+        />
+      </div>
       {isCertificate ? (
         <fieldset className="grid gap-4 rounded-card border border-rule p-4 sm:col-span-2 sm:grid-cols-2">
           <legend className="px-1 text-sm font-semibold">Certificate of veterinary inspection</legend>

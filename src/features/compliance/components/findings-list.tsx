@@ -45,7 +45,22 @@ function FindingItem({ finding }: { finding: Finding }) {
   );
 }
 
-/** Each animal line with its findings: severity, what the rule says and why it applies, the source. */
+/** Findings that apply to every animal, said once above the lines (the Lacey Act, box marking …). */
+export function ShipmentFindings({ findings }: { findings: readonly Finding[] }) {
+  if (findings.length === 0) return null;
+  return (
+    <section aria-label="Findings for every animal" className="rounded-card border border-rule bg-paper px-4 py-2">
+      <h3 className="pt-2 font-semibold">For every animal in this transfer</h3>
+      <ul>
+        {findings.map((finding) => (
+          <FindingItem key={finding.ruleId} finding={finding} />
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+/** Each animal line with what differs for it: severity, what the rule says and why it applies, the source. */
 export function FindingsByAnimal({ animals }: { animals: EvaluateResponse["animals"] }) {
   return (
     <div className="flex flex-col gap-4">
@@ -59,7 +74,7 @@ export function FindingsByAnimal({ animals }: { animals: EvaluateResponse["anima
             <i>{animal.scientificName}</i>
           </h3>
           {animal.findings.length === 0 ? (
-            <p className="py-3 text-sm text-ink-soft">No rule in the library applies to this line.</p>
+            <p className="py-3 text-sm text-ink-soft">Nothing more than the findings for every animal.</p>
           ) : (
             <ul>
               {animal.findings.map((finding) => (

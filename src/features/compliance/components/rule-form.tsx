@@ -3,246 +3,176 @@ import { GOVERNS_WORDS } from "@shared/words";
 import { Controller, useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import { GOVERNS, type Rule } from "@shared/compliance/rule";
 import { JURISDICTIONS, jurisdictionName } from "@shared/compliance/jurisdiction";
-import { ruleVersionInputSchema, type RuleVersionDto, type RuleVersionInput } from "@shared/schemas/compliance";
+import { ruleVersionInputSchema, type RuleVersionInput } from "@shared/schemas/compliance";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { ApiError } from "@/lib/api-client";
-import { useSaveRuleVersion } from "../api/rules";
-import { LinesField } from "./lines-field";
+import { useCreateRule, useSaveRuleVersion } from "../api/rules";
+import { ConditionFields, EffectFields, Fieldset } from "./rule-form-fields";
+import { fieldOf, ruleOf, valuesOf, type RuleFormValues } from "./rule-form-values";
+import { TaxaPicker } from "./taxa-picker";
 
-type Values = {
-  jurisdiction: Rule["jurisdiction"];
-  governs: Rule["governs"];
-  summary: string;
-  citationText: string;
-  citationUrl: string;
-  effectiveFrom: string;
-  effectiveTo: string;
-  reviewedOn: string;
-  reviewedBy: string;
-  taxa: string[];
-  exceptTaxa: string[];
-  conditionsJson: string;
-  effectJson: string;
-  retired: boolean;
-};
+const today = () => new Date().toISOString().slice(0, 10);
 
-function valuesOf(rule: Rule, retired: boolean, reviewer: string): Values {
-  return {
-    jurisdiction: rule.jurisdiction,
-    governs: rule.governs,
-    summary: rule.summary,
-    citationText: rule.citation.text,
-    citationUrl: rule.citation.url ?? "",
-    effectiveFrom: rule.effectiveFrom ?? "",
-    effectiveTo: rule.effectiveTo ?? "",
-    reviewedOn: new Date().toISOString().slice(0, 10),
-    reviewedBy: reviewer,
-    taxa: rule.selector.taxa,
-    exceptTaxa: rule.selector.exceptTaxa ?? [],
-    conditionsJson: JSON.stringify(rule.conditions, null, 2),
-    effectJson: JSON.stringify(rule.effect, null, 2),
-    retired,
-  };
-}
-
-/** Where an issue of the rule schema is shown on this form. */
-const FIELD_OF: Record<string, keyof Values> = {
-  jurisdiction: "jurisdiction",
-  governs: "governs",
-  summary: "summary",
-  citation: "citationText",
-  "citation.text": "citationText",
-  "citation.url": "citationUrl",
-  effectiveFrom: "effectiveFrom",
-  effectiveTo: "effectiveTo",
-  reviewedOn: "reviewedOn",
-  reviewedBy: "reviewedBy",
-  selector: "taxa",
-  "selector.taxa": "taxa",
-  "selector.exceptTaxa": "exceptTaxa",
-  conditions: "conditionsJson",
-  effect: "effectJson",
-};
-
-function fieldOf(path: readonly PropertyKey[]): keyof Values {
-  const inRule = path[0] === "rule" ? path.slice(1).map(String) : path.map(String);
-  return FIELD_OF[inRule.slice(0, 2).join(".")] ?? FIELD_OF[inRule[0] ?? ""] ?? "summary";
-}
-
-function parseJson(text: string): { ok: true; value: unknown } | { ok: false } {
-  try {
-    return { ok: true, value: JSON.parse(text) };
-  } catch {
-    return { ok: false };
-  }
-}
-
-/** Builds the next version from the form and checks it with the shared schema, issue by issue. */
-function resolverFor(base: Rule): Resolver<Values, unknown, RuleVersionInput> {
+/** Builds the version from the form and checks it with the shared schema, issue by issue. */
+function resolverFor(version: number): Resolver<RuleFormValues, unknown, RuleVersionInput> {
   return async (values) => {
-    const errors: FieldErrors<Values> = {};
-    const conditions = parseJson(values.conditionsJson);
-    const effect = parseJson(values.effectJson);
-    if (!conditions.ok)
-      errors.conditionsJson = { type: "json", message: 'Write the conditions as JSON, e.g. {"sale": true}' };
-    if (!effect.ok)
-      errors.effectJson = { type: "json", message: 'Write the effect as JSON, e.g. {"kind": "advisory"}' };
-    if (!conditions.ok || !effect.ok) return { values: {}, errors };
-    const candidate = {
-      retired: values.retired,
-      rule: {
-        ...base,
-        version: base.version + 1,
-        jurisdiction: values.jurisdiction,
-        governs: values.governs,
-        summary: values.summary,
-        citation: {
-          text: values.citationText,
-          url: values.citationUrl.trim() === "" ? null : values.citationUrl.trim(),
-        },
-        effectiveFrom: values.effectiveFrom || null,
-        effectiveTo: values.effectiveTo || null,
-        reviewedOn: values.reviewedOn,
-        reviewedBy: values.reviewedBy,
-        selector: values.exceptTaxa.length
-          ? { taxa: values.taxa, exceptTaxa: values.exceptTaxa }
-          : { taxa: values.taxa },
-        conditions: conditions.value,
-        effect: effect.value,
-      },
-    };
-    const parsed = ruleVersionInputSchema.safeParse(candidate, parseOptions());
+    const parsed = ruleVersionInputSchema.safeParse(ruleOf(values, version), parseOptions());
     if (parsed.success) return { values: parsed.data, errors: {} };
-    for (const issue of parsed.error.issues) {
-      const field = fieldOf(issue.path);
-      errors[field] ??= { type: issue.code, message: issue.message };
-    }
+    const errors: FieldErrors<RuleFormValues> = {};
+    for (const issue of parsed.error.issues)
+      errors[fieldOf(issue.path)] ??= { type: issue.code, message: issue.message };
     return { values: {}, errors };
   };
 }
 
-/** Edits a rule as its next version: citation, review date and reviewer, dates, scope and effect. */
+/**
+ * Writes a rule with fields, never JSON: where it applies and what it governs, the taxa from the
+ * species catalogue, each condition and effect, the citation, the dates in force and the review.
+ * With `base` null it creates a new rule (version 1); otherwise it saves the next version of it.
+ */
 export function RuleForm({
-  current,
+  base,
   reviewer,
   onDone,
 }: {
-  current: RuleVersionDto;
+  base: { rule: Rule; retired: boolean } | { blank: Rule };
   reviewer: string;
   onDone: () => void;
 }) {
+  const creating = "blank" in base;
+  const rule = creating ? base.blank : base.rule;
+  const version = creating ? 1 : rule.version + 1;
   const save = useSaveRuleVersion();
-  const form = useForm<Values, unknown, RuleVersionInput>({
-    resolver: resolverFor(current.rule),
-    defaultValues: valuesOf(current.rule, current.retired, reviewer),
+  const create = useCreateRule();
+  const mutation = creating ? create : save;
+  const form = useForm<RuleFormValues, unknown, RuleVersionInput>({
+    resolver: resolverFor(version),
+    defaultValues: valuesOf(rule, creating ? false : base.retired, reviewer, today()),
   });
-  const e = form.formState.errors;
-  const submit = form.handleSubmit((input) => save.mutate(input, { onSuccess: onDone }));
+  const { control, register, watch } = form;
+  const errors = form.formState.errors;
+  const submit = form.handleSubmit((input) => mutation.mutate(input, { onSuccess: onDone }));
+  const parts = { control, register, watch, errors };
   return (
-    <form className="grid gap-4 sm:grid-cols-2" onSubmit={submit} noValidate>
-      {save.error ? (
+    <form
+      className="grid gap-4 sm:grid-cols-2"
+      onSubmit={submit}
+      noValidate
+      aria-label={creating ? "New rule" : "Edit rule"}
+    >
+      {mutation.error ? (
         <div className="sm:col-span-2">
           <Notice tone="block" role="alert">
-            {save.error instanceof ApiError ? save.error.message : "Not saved."}
+            {mutation.error instanceof ApiError ? mutation.error.message : "Not saved."}
           </Notice>
         </div>
       ) : null}
-      <SelectField
-        label="Jurisdiction"
-        options={JURISDICTIONS.map((j) => ({
-          value: j,
-          label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})`,
-        }))}
-        error={e.jurisdiction?.message}
-        {...form.register("jurisdiction")}
-      />
-      <SelectField
-        label="Governs"
-        options={GOVERNS.map((g) => ({ value: g, label: GOVERNS_WORDS[g] }))}
-        error={e.governs?.message}
-        {...form.register("governs")}
-      />
-      <div className="sm:col-span-2">
-        <TextAreaField
-          label="What the rule says, in plain words"
-          error={e.summary?.message}
-          {...form.register("summary")}
+      <Fieldset legend="Where and what">
+        {creating ? (
+          <TextField
+            label="Reference"
+            hint="Lower-case letters, digits, dots and dashes, e.g. or-oar635-056-prohibited. It never changes."
+            error={errors.id?.message}
+            {...register("id")}
+          />
+        ) : null}
+        <SelectField
+          label="Jurisdiction"
+          options={JURISDICTIONS.map((j) => ({
+            value: j,
+            label: j === "US" ? "Federal (US)" : `${jurisdictionName(j)} (${j})`,
+          }))}
+          error={errors.jurisdiction?.message}
+          {...register("jurisdiction")}
         />
-      </div>
-      <TextField
-        label="Citation"
-        error={e.citationText?.message}
-        hint={
-          current.rule.demo ? "A demo rule's citation must say it is not a statement of the state's law." : undefined
-        }
-        {...form.register("citationText")}
-      />
-      <TextField
-        label="Link to the official text (https)"
-        type="url"
-        error={e.citationUrl?.message}
-        {...form.register("citationUrl")}
-      />
-      <TextField
-        label="In force from"
-        type="date"
-        error={e.effectiveFrom?.message}
-        {...form.register("effectiveFrom")}
-      />
-      <TextField
-        label="In force until (last day)"
-        type="date"
-        error={e.effectiveTo?.message}
-        {...form.register("effectiveTo")}
-      />
-      <TextField label="Reviewed on" type="date" error={e.reviewedOn?.message} {...form.register("reviewedOn")} />
-      <TextField label="Reviewed by" error={e.reviewedBy?.message} {...form.register("reviewedBy")} />
-      <Controller
-        control={form.control}
-        name="taxa"
-        render={({ field }) => (
-          <LinesField
-            label="Taxa covered, one per line"
-            hint="Any rank; descendants and synonyms are covered. * covers every animal."
-            value={field.value}
-            onChange={field.onChange}
-            error={e.taxa?.message}
+        <SelectField
+          label="Governs"
+          options={GOVERNS.map((g) => ({ value: g, label: GOVERNS_WORDS[g] }))}
+          error={errors.governs?.message}
+          {...register("governs")}
+        />
+        <div className="sm:col-span-2">
+          <TextAreaField
+            label="What the rule says, in plain words"
+            error={errors.summary?.message}
+            {...register("summary")}
+          />
+        </div>
+      </Fieldset>
+      <Fieldset legend="Which animals">
+        <label className="flex min-h-11 items-center gap-2 text-sm sm:col-span-2">
+          <input type="checkbox" className="h-5 w-5" {...register("everyAnimal")} />
+          Every animal (all wildlife, e.g. the Lacey Act)
+        </label>
+        {watch("everyAnimal") ? null : (
+          <Controller
+            control={control}
+            name="taxa"
+            render={({ field }) => (
+              <TaxaPicker
+                label="Taxa covered"
+                hint="Any rank from the species list; descendants and older names are covered."
+                value={field.value}
+                onChange={field.onChange}
+                error={errors.taxa?.message}
+              />
+            )}
           />
         )}
-      />
-      <Controller
-        control={form.control}
-        name="exceptTaxa"
-        render={({ field }) => (
-          <LinesField
-            label="Except these taxa, one per line"
-            value={field.value}
-            onChange={field.onChange}
-            error={e.exceptTaxa?.message}
-          />
-        )}
-      />
-      <TextAreaField
-        label="Conditions (JSON)"
-        className="font-mono text-sm"
-        error={e.conditionsJson?.message}
-        {...form.register("conditionsJson")}
-      />
-      <TextAreaField
-        label="Effect (JSON)"
-        className="font-mono text-sm"
-        error={e.effectJson?.message}
-        {...form.register("effectJson")}
-      />
-      <label className="flex min-h-11 items-center gap-2 text-sm sm:col-span-2">
-        <input type="checkbox" className="h-5 w-5" {...form.register("retired")} />
-        Retire this rule (kept in the history, no longer applied)
-      </label>
+        <Controller
+          control={control}
+          name="exceptTaxa"
+          render={({ field }) => (
+            <TaxaPicker
+              label="Except these taxa"
+              value={field.value}
+              onChange={field.onChange}
+              error={errors.exceptTaxa?.message}
+            />
+          )}
+        />
+      </Fieldset>
+      <ConditionFields {...parts} />
+      <EffectFields {...parts} />
+      <Fieldset legend="Source and review">
+        <TextField
+          label="Citation"
+          error={errors.citationText?.message}
+          hint={watch("demo") ? "A demo rule's citation must say it is not a statement of the state's law." : undefined}
+          {...register("citationText")}
+        />
+        <TextField
+          label="Link to the official text (https)"
+          type="url"
+          error={errors.citationUrl?.message}
+          {...register("citationUrl")}
+        />
+        <TextField
+          label="In force from"
+          type="date"
+          error={errors.effectiveFrom?.message}
+          {...register("effectiveFrom")}
+        />
+        <TextField
+          label="In force until (last day)"
+          type="date"
+          error={errors.effectiveTo?.message}
+          {...register("effectiveTo")}
+        />
+        <TextField label="Reviewed on" type="date" error={errors.reviewedOn?.message} {...register("reviewedOn")} />
+        <TextField label="Reviewed by" error={errors.reviewedBy?.message} {...register("reviewedBy")} />
+      </Fieldset>
+      {creating ? null : (
+        <label className="flex min-h-11 items-center gap-2 text-sm sm:col-span-2">
+          <input type="checkbox" className="h-5 w-5" {...register("retired")} />
+          Retire this rule (kept in the history, no longer applied)
+        </label>
+      )}
       <div className="flex gap-2 sm:col-span-2">
-        <Button type="submit" busy={save.isPending}>
-          Save as version {current.rule.version + 1}
+        <Button type="submit" busy={mutation.isPending}>
+          {creating ? "Add the rule" : `Save as version ${version}`}
         </Button>
         <Button type="button" variant="secondary" onClick={onDone}>
           Cancel

@@ -74,7 +74,7 @@ function ScanItem({ scan }: { scan: ScanDto }) {
           className="max-h-96 w-auto self-start rounded border border-rule"
         />
       ) : null}
-      <p className="break-all text-xs text-ink-soft">SHA-256 {scan.sha256}</p>
+      <p className="wrap-anywhere text-xs text-ink-soft">SHA-256 {scan.sha256}</p>
     </li>
   );
 }

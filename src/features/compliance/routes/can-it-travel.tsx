@@ -15,7 +15,8 @@ import { TaxonCombobox } from "@/components/ui/taxon-combobox";
 import { ApiError } from "@/lib/api-client";
 import { searchTaxa } from "@/lib/taxa-search";
 import { useEvaluate } from "../api/evaluate";
-import { FindingsByAnimal } from "../components/findings-list";
+import { CoverageList } from "../components/coverage-list";
+import { FindingsByAnimal, ShipmentFindings } from "../components/findings-list";
 import { LegalCaution } from "../components/legal-caution";
 import { LinesField } from "../components/lines-field";
 import { VerdictBanner } from "../components/verdict-banner";
@@ -320,7 +321,9 @@ export function CanItTravelRoute() {
           ) : null}
           {evaluate.data ? (
             <>
-              <VerdictBanner verdict={evaluate.data.verdict} />
+              <VerdictBanner verdict={evaluate.data.verdict} coverage={evaluate.data.coverage} />
+              <CoverageList coverage={evaluate.data.coverage} transitFrom="listed" />
+              <ShipmentFindings findings={evaluate.data.shipmentFindings} />
               <FindingsByAnimal animals={evaluate.data.animals} />
             </>
           ) : (

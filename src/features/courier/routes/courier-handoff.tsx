@@ -1,4 +1,5 @@
-import { HANDOFF_KIND_WORDS } from "@shared/words";
+import { TRANSFER_STATUS_WORDS } from "@shared/words";
+import { DELIVERY_STATE_WORDS, HANDOFF_KIND_WORDS } from "@shared/words";
 import { useState } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
 import { useParams } from "react-router";
@@ -10,6 +11,8 @@ import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
 import { useDocumentTitle } from "@/lib/document-title";
+import { AddPhotos } from "../components/add-photos";
+import { DeliveryCodeEntry } from "../components/delivery-code-entry";
 import { HandoffForm } from "../components/handoff-form";
 
 const phoneLink =
@@ -20,7 +23,7 @@ export function CourierHandoffRoute() {
   const { transferId = "" } = useParams();
   const viewer = useViewer();
   const transfer = useTransfer(transferId);
-  const [recorded, setRecorded] = useState<string | null>(null);
+  const [recorded, setRecorded] = useState<{ message: string; problems: string[] } | null>(null);
   useDocumentTitle(transfer.data ? `Leg of ${transfer.data.number}` : "Your leg");
 
   if (transfer.isPending) return <Loading label="Loading the transfer…" />;
@@ -57,10 +60,16 @@ export function CourierHandoffRoute() {
       </header>
 
       {recorded ? (
-        <Notice tone="ok" role="status" title={recorded}>
+        <Notice tone="ok" role="status" title={recorded.message}>
           It is in the custody trail; the sender and receiver can see it.
         </Notice>
       ) : null}
+      {recorded?.problems.length ? (
+        <Notice tone="block" role="alert" title="Some photos were not sent">
+          {recorded.problems.join(" ")}
+        </Notice>
+      ) : null}
+      {t.abilities.enterDeliveryCode ? <DeliveryCodeEntry transfer={t} /> : null}
 
       <TransportCautions />
       {t.handlingNotes ? (
@@ -110,6 +119,13 @@ export function CourierHandoffRoute() {
                       ? "To record now"
                       : "Not yet"}
                 </p>
+                {done && i === legs.length && t.delivery ? (
+                  <p
+                    className={`text-base ${t.delivery.state === "acknowledged" ? "text-fern-dark" : "font-semibold text-amber"}`}
+                  >
+                    {DELIVERY_STATE_WORDS[t.delivery.state]}
+                  </p>
+                ) : null}
               </li>
             );
           })}
@@ -117,14 +133,23 @@ export function CourierHandoffRoute() {
       </section>
 
       {next !== null ? (
-        <HandoffForm key={`${next}-${t.version}`} transfer={t} index={next} onRecorded={setRecorded} />
+        <HandoffForm
+          key={`${next}-${t.version}`}
+          transfer={t}
+          index={next}
+          viewerName={viewer.user.displayName}
+          onRecorded={(message, problems) => setRecorded({ message, problems })}
+        />
       ) : (
         <Notice tone="info" title="Nothing for you to record right now">
           {t.handoffs.length === t.handoffsPlanned && t.handoffsPlanned > 0
             ? "Every handoff of this transfer is recorded."
-            : "The next handoff is someone else's, or the transfer is not cleared to travel yet."}
+            : t.status === "ready" || t.status === "in_transit"
+              ? "The next handoff is someone else's to record: the courier of the next leg, or the receiver."
+              : `The transfer is “${TRANSFER_STATUS_WORDS[t.status]}”: handoffs are recorded once it is cleared to travel.`}
         </Notice>
       )}
+      {t.abilities.addPhotos && t.handoffs.length > 0 && next === null ? <AddPhotos transfer={t} /> : null}
     </div>
   );
 }

@@ -1,20 +1,33 @@
-import { REGISTER_CONDITION_WORDS, SEX_WORDS } from "@shared/words";
+import { REGISTER_STATUS_WORDS, SEX_WORDS } from "@shared/words";
 import { useEffect, useState } from "react";
 import { Link, useSearchParams } from "react-router";
-import { SEXES } from "@shared/constants";
-import { registerQuerySchema, type TaxonBriefDto } from "@shared/schemas/transfer";
-import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
+import type { RowSelectionState } from "@tanstack/react-table";
+import { REGISTER_STATUSES, SEXES } from "@shared/constants";
+import type { TaxonBriefDto } from "@shared/schemas/transfer";
+import { registerQuerySchema } from "@shared/schemas/register";
+import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { SelectField, TextField } from "@/components/ui/field";
 import { PageHeader } from "@/components/ui/page";
-import { Table, Td, Th } from "@/components/ui/table";
 import { TaxonCombobox } from "@/components/ui/taxon-combobox";
-import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
-import { formatDate } from "@shared/dates";
 import { searchTaxa } from "@/lib/taxa-search";
 import { registerCsvHref, useRegister, type RegisterFilters } from "../api/get-register";
+import { usePermitPlans } from "../api/register-report";
+import { RegisterTable, type RegisterSort } from "../components/register-table";
 
-const KEYS = ["q", "taxonId", "sex", "from", "to"] as const;
+const KEYS = [
+  "q",
+  "taxonId",
+  "sex",
+  "status",
+  "permitId",
+  "quarantine",
+  "from",
+  "to",
+  "sort",
+  "dir",
+  "cursor",
+] as const;
 
 /** Filters from the address bar, each checked with the server's schema. */
 function filtersFrom(search: URLSearchParams): RegisterFilters {
@@ -30,19 +43,30 @@ function withParam(search: URLSearchParams, key: string, value: string | undefin
   const next = new URLSearchParams(search);
   if (value) next.set(key, value);
   else next.delete(key);
+  // A new filter or order starts again at the first page.
+  if (key !== "cursor") next.delete("cursor");
   return next;
 }
 
-/** The organisation's collection register: every animal it received, where from, and how it arrived. */
+const linkButton =
+  "inline-flex min-h-11 items-center rounded-md border border-rule bg-paper-card px-4 font-medium text-ink hover:bg-paper-deep";
+
+/** The organisation's register: every animal it holds or held, filtered, sorted and paged by the server. */
 export function RegisterRoute() {
   const [search, setSearch] = useSearchParams();
   const filters = filtersFrom(search);
-  const register = useRegister(filters);
+  const register = useRegister({ ...filters, limit: 50 });
+  const permits = usePermitPlans();
   const [q, setQ] = useState(filters.q ?? "");
   const [taxon, setTaxon] = useState<TaxonBriefDto | null>(null);
+  const [selected, setSelected] = useState<RowSelectionState>({});
+  // Cursors of the pages before this one, so "Previous page" goes back without an offset.
+  const [previous, setPrevious] = useState<string[]>([]);
 
-  const set = (key: (typeof KEYS)[number], value: string | undefined) =>
+  const set = (key: (typeof KEYS)[number], value: string | undefined) => {
+    if (key !== "cursor") setPrevious([]);
     setSearch((current) => withParam(current, key, value), { replace: true });
+  };
 
   // The search box asks the server once typing pauses, not at every key.
   useEffect(() => {
@@ -51,27 +75,35 @@ export function RegisterRoute() {
     return () => clearTimeout(timer);
   }, [q, search, setSearch]);
 
+  const chosen = Object.keys(selected).filter((id) => selected[id]);
   return (
     <>
       <PageHeader
         title="Collection register"
-        eyebrow="Animals received"
+        eyebrow="Every animal, from arrival to departure"
         actions={
-          <a
-            href={registerCsvHref(filters)}
-            download
-            className="inline-flex min-h-11 items-center rounded-md border border-rule bg-paper-card px-4 font-medium text-ink hover:bg-paper-deep"
-          >
-            Download as CSV
-          </a>
+          <div className="flex flex-wrap gap-2">
+            <Link to={paths.registerAdd} className={linkButton}>
+              Add animals
+            </Link>
+            <Link to={paths.registerImport} className={linkButton}>
+              Import a spreadsheet
+            </Link>
+            <Link to={paths.registerReport} className={linkButton}>
+              Yearly report
+            </Link>
+            <a href={registerCsvHref(filters)} download className={linkButton}>
+              Download as CSV
+            </a>
+          </div>
         }
       >
-        Every animal checked in from a transfer, for the records your permits ask you to keep.
+        The records your permits ask you to keep: what came in, hatched, died or left, and who is in quarantine.
       </PageHeader>
       <form
         role="search"
         aria-label="Filter the register"
-        className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-5"
+        className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4"
         onSubmit={(e) => e.preventDefault()}
       >
         <TextField
@@ -79,28 +111,45 @@ export function RegisterRoute() {
           type="search"
           value={q}
           onChange={(e) => setQ(e.target.value)}
-          hint="Identifier, source or notes"
+          hint="Identifier, source or transfer"
         />
-        <div>
-          <TaxonCombobox
-            label="Species"
-            value={taxon}
-            search={searchTaxa}
-            onChange={(t) => {
-              setTaxon(t);
-              set("taxonId", t?.id);
-            }}
-          />
-          {filters.taxonId && !taxon ? (
-            <button
-              type="button"
-              className="mt-1 min-h-11 text-sm font-medium text-fern underline"
-              onClick={() => set("taxonId", undefined)}
-            >
-              Showing one species only: show all
-            </button>
-          ) : null}
-        </div>
+        <TaxonCombobox
+          label="Species"
+          value={taxon}
+          search={searchTaxa}
+          onChange={(t) => {
+            setTaxon(t);
+            set("taxonId", t?.id);
+          }}
+        />
+        <SelectField
+          label="Status"
+          options={[
+            { value: "", label: "Any" },
+            ...REGISTER_STATUSES.map((s) => ({ value: s, label: REGISTER_STATUS_WORDS[s] })),
+          ]}
+          value={filters.status ?? ""}
+          onChange={(e) => set("status", e.target.value)}
+        />
+        <SelectField
+          label="Permit"
+          options={[
+            { value: "", label: "Any" },
+            ...(permits.data ?? []).map((p) => ({ value: p.id, label: `${p.number} (${p.jurisdiction})` })),
+          ]}
+          value={filters.permitId ?? ""}
+          onChange={(e) => set("permitId", e.target.value)}
+        />
+        <SelectField
+          label="Quarantine"
+          options={[
+            { value: "", label: "Any" },
+            { value: "yes", label: "In quarantine" },
+            { value: "no", label: "Not in quarantine" },
+          ]}
+          value={filters.quarantine ?? ""}
+          onChange={(e) => set("quarantine", e.target.value)}
+        />
         <SelectField
           label="Sex"
           options={[{ value: "", label: "Any" }, ...SEXES.map((s) => ({ value: s, label: SEX_WORDS[s] }))]}
@@ -120,57 +169,69 @@ export function RegisterRoute() {
           onChange={(e) => set("to", e.target.value)}
         />
       </form>
+      {chosen.length ? (
+        <div className="mb-3 flex flex-wrap items-center gap-3">
+          <span>
+            {chosen.length} chosen. Species, identifiers, sex, origin and sizes fill the new transfer's animal lines.
+          </span>
+          <Link to={`${paths.transfers.new}?fromRegister=${chosen.join(",")}`} className={linkButton}>
+            Start a transfer with these
+          </Link>
+        </div>
+      ) : null}
       {register.isPending ? (
         <Loading label="Loading the register…" />
       ) : register.error ? (
         <Notice tone="block" role="alert">
           {(register.error as Error).message}
         </Notice>
-      ) : register.data.length === 0 ? (
-        <EmptyState title="Nothing in the register yet">
-          {Object.keys(filters).length
+      ) : register.data.entries.length === 0 ? (
+        <EmptyState title="Nothing in the register here">
+          {search.toString()
             ? "No entry matches these filters."
-            : "Animals appear here when you sign a check-in."}
+            : "Animals appear here when you sign a check-in, add them or import a spreadsheet."}
         </EmptyState>
       ) : (
-        <Table
-          caption="Collection register"
-          head={
-            <tr>
-              <Th>Species</Th>
-              <Th>Sex</Th>
-              <Th className="text-right">Count</Th>
-              <Th>Identifier</Th>
-              <Th>Acquired</Th>
-              <Th>From</Th>
-              <Th>Transfer</Th>
-              <Th>Condition</Th>
-              <Th>Notes</Th>
-            </tr>
-          }
-        >
-          {register.data.map((r) => (
-            <tr key={r.id}>
-              <Td>
-                <TaxonName taxon={r.taxon} />
-              </Td>
-              <Td>{SEX_WORDS[r.sex]}</Td>
-              <Td className="text-right tabular-nums">{r.count}</Td>
-              <Td>{r.identifier ?? "—"}</Td>
-              <Td className="whitespace-nowrap">{formatDate(r.dateAcquired)}</Td>
-              <Td>{r.sourceOrganization}</Td>
-              <Td>
-                <Link className="text-fern underline" to={paths.transfers.detail.href(r.transferId)}>
-                  {r.transferNumber}
-                </Link>
-              </Td>
-              <Td>
-                <Badge tone={r.condition === "well" ? "ok" : "caution"}>{REGISTER_CONDITION_WORDS[r.condition]}</Badge>
-              </Td>
-              <Td className="whitespace-pre-wrap">{r.notes ?? ""}</Td>
-            </tr>
-          ))}
-        </Table>
+        <>
+          <RegisterTable
+            entries={register.data.entries}
+            sort={(filters.sort ?? "acquired") as RegisterSort}
+            dir={filters.dir ?? "desc"}
+            onSort={(sort, dir) => {
+              setPrevious([]);
+              setSearch((current) => withParam(withParam(current, "sort", sort), "dir", dir), { replace: true });
+            }}
+            selected={selected}
+            onSelect={setSelected}
+          />
+          <nav aria-label="Register pages" className="mt-3 flex gap-2">
+            <button
+              type="button"
+              className={linkButton}
+              disabled={!filters.cursor}
+              onClick={() => {
+                const back = previous.at(-1);
+                setPrevious(previous.slice(0, -1));
+                setSearch((current) => withParam(current, "cursor", back), { replace: true });
+              }}
+            >
+              Previous page
+            </button>
+            <button
+              type="button"
+              className={linkButton}
+              disabled={!register.data.nextCursor}
+              onClick={() => {
+                setPrevious([...previous, filters.cursor ?? ""]);
+                setSearch((current) => withParam(current, "cursor", register.data.nextCursor ?? undefined), {
+                  replace: true,
+                });
+              }}
+            >
+              Next page
+            </button>
+          </nav>
+        </>
       )}
     </>
   );

@@ -8,5 +8,6 @@ export const temperatureKeys = {
   all: ["temperature"] as const,
   profiles: () => [...temperatureKeys.all, "profiles"] as const,
   weatherScenario: () => [...temperatureKeys.all, "weather-scenario"] as const,
+  modelAccuracy: () => [...temperatureKeys.all, "model-accuracy"] as const,
   transfer: (transferId: string) => [...transferKeys.detail(transferId), "temperature"] as const,
 };

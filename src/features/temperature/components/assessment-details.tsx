@@ -27,6 +27,11 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       <Notice tone={VERDICT_TONE[report.verdict]} title={TEMPERATURE_VERDICT_WORDS[report.verdict]} role="status">
         {report.advice.message}
       </Notice>
+      {report.vehicle?.note ? (
+        <Notice tone="caution" title="How the vehicle is held was not given">
+          {report.vehicle.note}
+        </Notice>
+      ) : null}
       {report.advice.pack ? (
         <div>
           <h3 className="font-semibold">Packing</h3>
@@ -38,6 +43,8 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
         <dt className="text-ink-soft">Outside on the way</dt>
         <dd>{range(report.ambientF)}</dd>
+        <dt className="text-ink-soft">Around the box, where it is (model)</dt>
+        <dd>{range(aroundRange(report))}</dd>
         <dt className="text-ink-soft">Inside the box, as packed (model)</dt>
         <dd>{range(report.insideF)}</dd>
         <dt className="text-ink-soft">Safe in transit for {report.profile.label.toLowerCase()}</dt>
@@ -73,6 +80,14 @@ export function AssessmentDetails({ report, showBoxes = false }: { report: Tempe
       </details>
     </div>
   );
+}
+
+/** The warmest and coldest air around the box over the trip's hours, °F; null without weather. */
+function aroundRange(report: TemperatureReport): { min: number; max: number } | null {
+  const values = report.hours.flatMap((h) =>
+    h.aroundBoxF === null || h.aroundBoxF === undefined ? [] : [h.aroundBoxF],
+  );
+  return values.length ? { min: Math.min(...values), max: Math.max(...values) } : null;
 }
 
 /** Each box's own verdict; the transfer's is the worst of them. */

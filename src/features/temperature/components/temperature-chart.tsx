@@ -1,38 +1,56 @@
 import {
   CartesianGrid,
+  ComposedChart,
   Legend,
   Line,
-  LineChart,
   ReferenceArea,
   ResponsiveContainer,
+  Scatter,
   Tooltip,
   XAxis,
   YAxis,
 } from "recharts";
 import { formatAxisHour, formatInstant } from "@shared/dates";
-import type { TemperatureReport } from "@shared/temperature/report";
+import type { BoxReadingDto, TemperatureReport } from "@shared/temperature/report";
 import { tempUnit } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
-import { chartRows, safeBand, type ChartRow } from "./chart-rows";
+import { bandSegments, chartRows, hourTicks, readingPoints, safeBand } from "./chart-rows";
+import { ExposureBand } from "./exposure-band";
+import { HoursTable } from "./hours-table";
 
-// The palette of tailwind.config.ts: slate for the weather, fern for the box, fern-light for the band.
-const COLOURS = { outside: "#3d5566", inside: "#2f5d3a", band: "#6f9a76" };
+// The palette of tailwind.config.ts: slate for the weather, amber for the air around the box,
+// fern for the box, fern-light for the band, brick for what a person read.
+const COLOURS = { outside: "#3d5566", around: "#84510c", inside: "#2f5d3a", band: "#6f9a76", reading: "#a23b2a" };
+const SERIES_WORDS: Readonly<Record<string, string>> = {
+  outside: "Outside (forecast)",
+  around: "Around the box (model)",
+  inside: "Inside the box (model)",
+  reading: "Box reading",
+};
+// The plotting area starts after the y axis and ends before the right margin: the band aligns with it.
+const Y_AXIS_WIDTH = 64;
+const MARGIN = { top: 8, right: 16, bottom: 8, left: 0 };
 
 /**
- * Outside and predicted inside temperature over the trip, with the profile's safe band shaded,
- * in the unit the person chose. The hour-by-hour table says the same in words, for screen readers and keyboards.
+ * Outside air, the air around the box and the box's modelled inside over the trip, with the
+ * profile's safe band shaded, the box readings as points and, under the time axis, a band that
+ * shows where the box is; in the unit the person chose. The hour-by-hour table says the same in
+ * words, for screen readers and keyboards.
  */
-export function TemperatureChart({ report }: { report: TemperatureReport }) {
+export function TemperatureChart({ report, readings = [] }: { report: TemperatureReport; readings?: BoxReadingDto[] }) {
   const [system] = useUnitSystem();
   const unit = tempUnit(system);
   const rows = chartRows(report.hours, system);
+  const points = readingPoints(readings, system);
   const band = safeBand(report.profile.safeTransitF, system);
   if (rows.every((r) => r.outside === null)) return null;
+  const axis = { fromMs: rows[0]!.atMs, toMs: rows.at(-1)!.atMs };
+  const segments = bandSegments(report.exposures ?? [], axis);
   return (
     <figure className="flex flex-col gap-2">
       <div className="h-72 w-full" aria-hidden>
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 8, left: 0 }} accessibilityLayer={false}>
+          <ComposedChart data={rows} margin={MARGIN} accessibilityLayer={false}>
             <CartesianGrid stroke="#e6dcc6" strokeDasharray="3 3" />
             <ReferenceArea
               y1={band.low}
@@ -45,24 +63,32 @@ export function TemperatureChart({ report }: { report: TemperatureReport }) {
               dataKey="atMs"
               type="number"
               scale="time"
-              domain={["dataMin", "dataMax"]}
+              domain={[axis.fromMs, axis.toMs]}
+              ticks={hourTicks(axis)}
+              allowDataOverflow
               tickFormatter={(ms: number) => formatAxisHour(ms)}
               minTickGap={24}
             />
-            <YAxis unit={unit} width={64} domain={["auto", "auto"]} />
+            <YAxis unit={unit} width={Y_AXIS_WIDTH} domain={["auto", "auto"]} />
             <Tooltip
               labelFormatter={(ms) => formatInstant(Number(ms))}
-              formatter={(value, name) => [
-                `${String(value)} ${unit}`,
-                name === "outside" ? "Outside" : "Inside the box",
-              ]}
+              formatter={(value, name) => [`${String(value)} ${unit}`, SERIES_WORDS[String(name)] ?? String(name)]}
             />
-            <Legend formatter={(name) => (name === "outside" ? "Outside (forecast)" : "Inside the box (model)")} />
+            <Legend formatter={(name) => SERIES_WORDS[String(name)] ?? String(name)} />
             <Line
               type="monotone"
               dataKey="outside"
               stroke={COLOURS.outside}
               strokeWidth={2}
+              dot={false}
+              isAnimationActive={false}
+            />
+            <Line
+              type="linear"
+              dataKey="around"
+              stroke={COLOURS.around}
+              strokeWidth={1.5}
+              strokeDasharray="2 2"
               dot={false}
               isAnimationActive={false}
             />
@@ -75,51 +101,25 @@ export function TemperatureChart({ report }: { report: TemperatureReport }) {
               dot={false}
               isAnimationActive={false}
             />
-          </LineChart>
+            {points.length > 0 ? (
+              <Scatter
+                data={points}
+                dataKey="reading"
+                name="reading"
+                fill={COLOURS.reading}
+                isAnimationActive={false}
+              />
+            ) : null}
+          </ComposedChart>
         </ResponsiveContainer>
       </div>
+      <ExposureBand segments={segments} plotInset={{ left: Y_AXIS_WIDTH + MARGIN.left, right: MARGIN.right }} />
       <figcaption className="text-sm text-ink-soft">
-        Shaded: the safe range in transit for {report.profile.label.toLowerCase()}, {band.low}–{band.high} {unit}.
+        Shaded: the safe range in transit for {report.profile.label.toLowerCase()}, {band.low}–{band.high} {unit}. The
+        band under the time axis shows where the box is; the air around it is the outside air passed through that place.
+        {points.length > 0 ? " Dots: box temperatures read at handoffs and the check-in." : ""}
       </figcaption>
       <HoursTable rows={rows} unit={unit} />
     </figure>
-  );
-}
-
-function HoursTable({ rows, unit }: { rows: ChartRow[]; unit: string }) {
-  return (
-    <details className="text-sm">
-      <summary className="inline-flex min-h-11 cursor-pointer items-center text-fern">Hour by hour</summary>
-      <div className="max-h-72 overflow-auto">
-        <table className="w-full text-left">
-          <thead>
-            <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 pr-3 font-semibold">
-                Hour
-              </th>
-              <th scope="col" className="py-1 pr-3 font-semibold">
-                Where
-              </th>
-              <th scope="col" className="py-1 pr-3 font-semibold">
-                Outside ({unit})
-              </th>
-              <th scope="col" className="py-1 font-semibold">
-                Inside ({unit})
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((r) => (
-              <tr key={r.atMs} className="border-b border-rule/60 last:border-0">
-                <td className="py-1 pr-3">{formatInstant(r.atMs)}</td>
-                <td className="py-1 pr-3">{r.place}</td>
-                <td className="py-1 pr-3">{r.outside ?? "—"}</td>
-                <td className="py-1">{r.inside ?? "—"}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-    </details>
   );
 }

@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { render, screen } from "@testing-library/react";
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { MemoryRouter } from "react-router";
 import { ambientFromOverride } from "@shared/temperature/ambient";
 import { assessTransit } from "@shared/temperature/assess";
 import type { BoxSpec } from "@shared/temperature/box-model";
@@ -59,6 +60,16 @@ function reportAt(tempF: number): TransferTemperatureDto {
     transferVersion: 3,
     alert: null,
     checks: [],
+    readings: [],
+    plan: {
+      applies: true,
+      vehicle: null,
+      vehicleRangeF: null,
+      stops: [],
+      legs: [],
+      canEdit: false,
+      followingPickupAt: null,
+    },
   };
 }
 
@@ -73,7 +84,9 @@ function renderSection(report: TransferTemperatureDto, status: TransferStatus = 
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   return render(
     <QueryClientProvider client={client}>
-      <TemperatureSection transferId={TRANSFER_ID} status={status} />
+      <MemoryRouter>
+        <TemperatureSection transferId={TRANSFER_ID} status={status} />
+      </MemoryRouter>
     </QueryClientProvider>,
   );
 }
@@ -124,5 +137,57 @@ describe("TemperatureSection", () => {
     expect(screen.queryByText(/can only confirm the transfer by overriding/)).not.toBeInTheDocument();
     // °F until the person asks for °C: the outside is held at 38 °F
     expect(screen.getByText("38 °F to 38 °F")).toBeInTheDocument();
+  });
+
+  it("says beside the verdict that nobody described the vehicle, and shows where the box is under the chart", async () => {
+    // issue 13: an assumption is said beside the verdict, with what a climate-controlled vehicle would give
+    renderSection(reportAt(75));
+    expect(await screen.findByText("How the vehicle is held was not given")).toBeInTheDocument();
+    expect(screen.getByText(/If it were climate-controlled \(65–80 °F\), the verdict would be/)).toBeInTheDocument();
+    const key = screen.getByRole("list", { name: "Where the box is, by colour" });
+    expect(key).toHaveTextContent("Outdoors");
+    expect(key).toHaveTextContent("Unconditioned vehicle, moving");
+    // PRODUCT.md cautions and issue 13: never leave animals in a parked vehicle
+    expect(screen.getByText(/Never leave animals in a parked vehicle: a closed car/)).toBeInTheDocument();
+  });
+
+  it("lists the box readings beside the model, marks one outside the safe range, and never adjusts the verdict", async () => {
+    const report = reportAt(75);
+    report.readings = [
+      {
+        at: "2027-03-09T15:10:00Z",
+        place: "Knoxville depot",
+        tempF: 72,
+        modelF: 71.5,
+        source: "pickup",
+        differenceF: 0.5,
+        outsideSafeRange: false,
+      },
+      {
+        at: "2027-03-09T16:00:00Z",
+        place: "Front porch",
+        tempF: 97,
+        modelF: 74,
+        source: "delivery",
+        differenceF: 23,
+        outsideSafeRange: true,
+      },
+    ];
+    renderSection(report);
+    expect(await screen.findByText("Box temperatures read on the way, against the model")).toBeInTheDocument();
+    expect(screen.getByText("Front porch")).toBeInTheDocument();
+    expect(screen.getByText(/97 °F — outside the safe range/)).toBeInTheDocument();
+    expect(screen.getByText("+23.0 °F")).toBeInTheDocument();
+    expect(screen.getByText(/Readings never change the verdict/)).toBeInTheDocument();
+  });
+
+  it("lets the sender say how the box travels: the vehicle and the stops", async () => {
+    const report = reportAt(75);
+    report.plan = { ...report.plan, canEdit: true };
+    renderSection(report);
+    expect(await screen.findByText("How the box travels")).toBeInTheDocument();
+    expect(screen.getByRole("button", { name: "Add a stop" })).toBeInTheDocument();
+    expect(screen.getByRole("button", { name: "Save how the box travels" })).toBeInTheDocument();
+    expect(screen.getByLabelText("How the vehicle is heated or cooled")).toBeInTheDocument();
   });
 });

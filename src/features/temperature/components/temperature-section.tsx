@@ -5,9 +5,13 @@ import { blocksShipping, type TransferTemperatureDto } from "@shared/temperature
 import { Loading, Notice } from "@/components/ui/feedback";
 import { formatInstant } from "@shared/dates";
 import { useTransferTemperature } from "../api/transfer-temperature";
+import { Link } from "react-router";
+import { paths } from "@/config/paths";
 import { AssessmentDetails } from "./assessment-details";
+import { ReadingsTable } from "./readings-table";
 import { TemperatureCautions } from "./temperature-cautions";
 import { TemperatureChart } from "./temperature-chart";
+import { TripPlanCard } from "./trip-plan-card";
 
 /**
  * The transfer page's temperature section: the chart of the trip, the advice and packing, a
@@ -32,7 +36,7 @@ export function TemperatureSection({ transferId, status }: { transferId: string;
           {(temperature.error as Error).message} Until it does, treat the trip as not checked.
         </Notice>
       ) : (
-        <TemperatureBody report={temperature.data} status={status} />
+        <TemperatureBody report={temperature.data} status={status} transferId={transferId} />
       )}
     </section>
   );
@@ -62,7 +66,16 @@ function BlockNotice({ report, status }: { report: TransferTemperatureDto; statu
   return null;
 }
 
-function TemperatureBody({ report, status }: { report: TransferTemperatureDto; status: TransferStatus }) {
+function TemperatureBody({
+  report,
+  status,
+  transferId,
+}: {
+  report: TransferTemperatureDto;
+  status: TransferStatus;
+  transferId: string;
+}) {
+  const departureAt = report.exposures?.[0]?.from ?? report.hours[0]?.at ?? new Date().toISOString();
   return (
     <>
       {report.alert ? (
@@ -72,7 +85,9 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
       ) : null}
       <AssessmentDetails report={report} showBoxes />
       <BlockNotice report={report} status={status} />
-      <TemperatureChart report={report} />
+      {report.plan ? <TripPlanCard transferId={transferId} plan={report.plan} departureAt={departureAt} /> : null}
+      <TemperatureChart report={report} readings={report.readings ?? []} />
+      <ReadingsTable readings={report.readings ?? []} />
       {report.checks.length > 0 ? (
         <div className="text-sm">
           <h3 className="font-semibold">Checks kept on the record</h3>
@@ -90,6 +105,11 @@ function TemperatureBody({ report, status }: { report: TransferTemperatureDto; s
           </p>
         </div>
       ) : null}
+      <p className="text-sm">
+        <Link to={paths.modelAccuracy} className="text-fern underline">
+          How close the model has been to the readings across your transfers
+        </Link>
+      </p>
       <TemperatureCautions />
     </>
   );

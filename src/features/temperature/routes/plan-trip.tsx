@@ -1,6 +1,8 @@
 import { parseOptions } from "@/lib/form-resolver";
 import { PACK_WORDS, TRANSPORT_MODE_WORDS, WALL_MATERIAL_WORDS } from "@shared/words";
 import { useState, type FormEvent } from "react";
+import { Link } from "react-router";
+import { paths } from "@/config/paths";
 import {
   PACK_KINDS,
   PROFILE_GROUPS,
@@ -27,7 +29,9 @@ import { useAssessTrip } from "../api/assess-trip";
 import { useProfiles } from "../api/profiles";
 import { AssessmentDetails } from "../components/assessment-details";
 import { TemperatureCautions } from "../components/temperature-cautions";
+import { StopsEditor, stopsOf, type StopRow } from "../components/stops-editor";
 import { TemperatureChart } from "../components/temperature-chart";
+import { VEHICLE_NOT_SAID, VehicleFields, vehicleOf, type VehicleForm } from "../components/vehicle-fields";
 import { WeatherScenarioSwitch } from "../components/weather-scenario-switch";
 
 type Form = {
@@ -48,6 +52,9 @@ type Form = {
   pack: PackKind;
   /** A steady outside temperature instead of the forecast, °F; null for the forecast. */
   steadyF: number | null;
+  /** Ground courier and hand delivery: how the vehicle is held, and the driver's stops. */
+  vehicle: VehicleForm;
+  stops: StopRow[];
 };
 
 function tomorrowAtTen(): string {
@@ -74,6 +81,8 @@ const START: Form = {
   contentsG: "500",
   pack: "none",
   steadyF: null,
+  vehicle: VEHICLE_NOT_SAID,
+  stops: [],
 };
 
 /** The form as the what-if request; what the schema cannot read is left for it to name. */
@@ -96,6 +105,17 @@ function requestOf(f: Form): unknown {
       pack: f.pack,
     },
     ...(f.steadyF !== null ? { ambientOverrideF: [{ at: departAt, tempF: f.steadyF }] } : {}),
+    ...(f.mode === "overnight_air" ? {} : groundFields(f)),
+  };
+}
+
+/** The vehicle and stops of a ground trip, leaving out what the planner did not give. */
+function groundFields(f: Form) {
+  const { vehicle, vehicleRangeF } = vehicleOf(f.vehicle);
+  return {
+    ...(vehicle ? { vehicle } : {}),
+    ...(vehicleRangeF ? { vehicleRangeF } : {}),
+    ...(f.stops.length ? { stops: stopsOf(f.stops) } : {}),
   };
 }
 
@@ -266,6 +286,23 @@ export function PlanTripRoute() {
               />
             </fieldset>
 
+            {form.mode === "overnight_air" ? null : (
+              <fieldset className="grid gap-4">
+                <legend className="text-sm font-semibold">The vehicle and the stops</legend>
+                <VehicleFields value={form.vehicle} onChange={(v) => set("vehicle", v)} errorFor={err} />
+                <StopsEditor
+                  rows={form.stops}
+                  onChange={(rows) => set("stops", rows)}
+                  errorFor={err}
+                  startAt={form.departLocal}
+                />
+                <p className="text-sm text-ink-soft">
+                  Never leave animals in a parked vehicle: a closed car in the sun gains about 40 °F in an hour, even on
+                  a mild day.
+                </p>
+              </fieldset>
+            )}
+
             <MeasureField
               kind="temperature"
               label="Or a steady outside temperature instead of the forecast"
@@ -298,11 +335,17 @@ export function PlanTripRoute() {
             </Card>
           ) : (
             <Notice tone="info" title="How it works">
-              Hatchway lays out the trip hour by hour, reads the forecast at each end and along the way, and models how
-              the inside of the box follows the outside with and without a heat or cold pack. The bands come from the
+              Hatchway lays out the trip hour by hour, reads the forecast at each end and along the way, works out the
+              air around the box where it is (a vehicle, a carrier&rsquo;s building, a parked car, a doorstep), and
+              models how the inside of the box follows it with and without a heat or cold pack. The bands come from the
               shipping guideline for the species&rsquo; group.
             </Notice>
           )}
+          <p className="text-sm">
+            <Link to={paths.modelAccuracy} className="text-fern underline">
+              How close the model has been to the box readings on your transfers
+            </Link>
+          </p>
           <TemperatureCautions />
         </div>
       </div>

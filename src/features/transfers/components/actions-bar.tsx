@@ -9,18 +9,35 @@ import { useToast } from "@/components/ui/toast";
 import { paths } from "@/config/paths";
 import { ApiError } from "@/lib/api-client";
 import { useTransitionTransfer } from "../api/transition-transfer";
-import { TemperatureOverride } from "./temperature-override";
+import { ConfirmPastBlock, type AnswerableBlock } from "./confirm-past-block";
 import { STEPS, type Step } from "./transition-steps";
 
 const linkButton = "inline-flex min-h-11 items-center justify-center rounded-md border px-4 font-medium";
 
-/** The temperature report behind a refusal the receiver may override with a reason; null otherwise. */
-function overridableBlock(error: unknown): { advice: string | null } | null {
+/**
+ * A refusal the confirming party may answer with a reason: the temperature gate (a planning aid,
+ * not law), or an unverified compliance verdict (a state on the route whose rules Hatchway has not
+ * reviewed). Compliance blocks are not offered here; only an administrator can override those.
+ */
+type Answer = { gate: "compliance" | "temperature"; reason: string };
+
+/** One reason for the custody log when the receiver answered both blocks: each said in its own words. */
+function reasonFor(answers: readonly Answer[]): string {
+  if (answers.length === 1) return answers[0]!.reason;
+  return answers
+    .map(
+      (a) => `${a.gate === "compliance" ? "Rules of the route" : "Temperature"}: ${a.reason.replace(/[.!?]?$/, ".")}`,
+    )
+    .join(" ");
+}
+
+function answerableBlock(error: unknown): AnswerableBlock | null {
   if (!(error instanceof ApiError) || error.status !== 409) return null;
   const details = (error.body as { error?: Record<string, unknown> } | undefined)?.error;
+  if (details?.acknowledgeUnverified === true) return { kind: "unverified" };
   if (!details || !("temperature" in details) || "compliance" in details) return null;
   const report = details.temperature as { advice?: { message?: string } } | undefined;
-  return { advice: report?.advice?.message ?? null };
+  return { kind: "temperature", advice: report?.advice?.message ?? null };
 }
 
 /** The buttons the caller's abilities allow, and the links to the screens where work is done. */
@@ -32,11 +49,19 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
   const [reasonError, setReasonError] = useState<string | null>(null);
   const steps = STEPS.filter((s) => t.abilities[s.ability]);
   const packingOpen = t.abilities.submit && t.packingFindings.length > 0;
-  const block = transition.variables?.to === "ready" ? overridableBlock(transition.error) : null;
+  const block = transition.variables?.to === "ready" ? answerableBlock(transition.error) : null;
 
-  function take(step: Step, why?: string, override = false) {
+  // The blocks the receiver has answered on this attempt, each with its reason: an override names
+  // only the blocks shown, so answering one never answers another nobody saw.
+  const [answered, setAnswered] = useState<Answer[]>([]);
+
+  function take(step: Step, why?: string, answers: Answer[] = []) {
     transition.mutate(
-      { to: step.to, reason: why, ...(override ? { override: true } : {}) },
+      {
+        to: step.to,
+        reason: answers.length ? reasonFor(answers) : why,
+        ...(answers.length ? { override: true, overrideGates: answers.map((a) => a.gate) } : {}),
+      },
       {
         onSuccess: (updated) => {
           setAsking(null);
@@ -51,6 +76,7 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
 
   function start(step: Step) {
     transition.reset();
+    setAnswered([]);
     setReasonError(null);
     if (step.ask) setAsking(step);
     else take(step);
@@ -82,17 +108,21 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
         </Notice>
       ) : null}
       {block ? (
-        <TemperatureOverride
+        <ConfirmPastBlock
+          key={block.kind}
           transfer={t}
-          advice={block.advice}
+          block={block}
           busy={transition.isPending}
-          onConfirm={(why) =>
+          onConfirm={(why) => {
+            const gate: Answer["gate"] = block.kind === "unverified" ? "compliance" : "temperature";
+            const answers: Answer[] = [...answered.filter((a) => a.gate !== gate), { gate, reason: why }];
+            setAnswered(answers);
             take(
               STEPS.find((x) => x.ability === "confirm")!,
               why,
-              true,
-            )
-          }
+              answers,
+            );
+          }}
         />
       ) : null}
       {packingOpen ? (
@@ -142,7 +172,10 @@ export function ActionsBar({ transfer: t }: { transfer: TransferDto }) {
             label={asking.reason.label}
             value={reason}
             maxLength={1000}
-            onChange={(e) => setReason(e.target.value)}
+            onChange={(e) => {
+              setReason(e.target.value);
+              setReasonError(null);
+            }}
             error={reasonError ?? undefined}
             autoFocus
           />

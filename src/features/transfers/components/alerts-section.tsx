@@ -43,7 +43,11 @@ function AlertItem({ transfer, alert }: { transfer: TransferDto; alert: AlertDto
               hint="Your note stays on the record with the alert; the other party sees it."
               value={note}
               maxLength={1000}
-              onChange={(e) => setNote(e.target.value)}
+              onChange={(e) => {
+                setNote(e.target.value);
+                // A refusal about the old note goes as soon as the note changes.
+                if (acknowledge.error) acknowledge.reset();
+              }}
               error={acknowledge.error instanceof ApiError ? acknowledge.error.message : undefined}
             />
             <div className="flex flex-wrap gap-2">
@@ -84,11 +88,14 @@ export function AlertsSection({ transfer }: { transfer: TransferDto }) {
           ? `${open.length} ${open.length === 1 ? "alert needs" : "alerts need"} your attention`
           : "Alerts (all acknowledged)"}
       </h2>
-      <ul className="grid gap-2" role={open.length > 0 ? "alert" : undefined}>
-        {[...open, ...done].map((a) => (
-          <AlertItem key={a.id} transfer={transfer} alert={a} />
-        ))}
-      </ul>
+      {/* The live region wraps the list: role="alert" on the list itself would take its list semantics away. */}
+      <div role={open.length > 0 ? "alert" : undefined}>
+        <ul className="grid gap-2">
+          {[...open, ...done].map((a) => (
+            <AlertItem key={a.id} transfer={transfer} alert={a} />
+          ))}
+        </ul>
+      </div>
     </section>
   );
 }

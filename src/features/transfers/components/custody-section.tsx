@@ -1,42 +1,12 @@
 import { HANDOFF_KIND_WORDS } from "@shared/words";
 import { Link } from "react-router";
-import type { HandoffDto, TransferDto } from "@shared/schemas/transfer";
+import type { TransferDto } from "@shared/schemas/transfer";
 import { handoffKind } from "@shared/transfer/lifecycle";
 import { Badge } from "@/components/ui/feedback";
 import { paths } from "@/config/paths";
-import { formatInstant } from "@shared/dates";
-import { formatTemp } from "@shared/units";
-import { useUnitSystem } from "@/lib/units-preference";
 import { useCustody } from "../api/custody";
+import { HandoffRecord } from "./handoff-record";
 import { Section } from "./section";
-
-function Recorded({ handoff: h }: { handoff: HandoffDto }) {
-  const [system] = useUnitSystem();
-  const broken = h.seals.filter((s) => !s.intact).length;
-  const short = h.boxesCounted !== h.boxesExpected;
-  const place =
-    h.place.text ??
-    (h.place.lat != null && h.place.lon != null ? `${h.place.lat.toFixed(4)}, ${h.place.lon.toFixed(4)}` : null);
-  return (
-    <>
-      <p className="text-sm">
-        {formatInstant(h.at)} · {h.releasedByName} <span aria-hidden>→</span>
-        <span className="sr-only">handed to</span> {h.receivedByName}
-      </p>
-      <p className="text-sm text-ink-soft">
-        {h.boxesCounted} of {h.boxesExpected} boxes · seals {broken === 0 ? "all intact" : `${broken} not intact`} · box
-        at {formatTemp(h.boxTempF, system)}
-        {place ? ` · ${place}` : ""} · recorded by {h.recordedBy.displayName}
-      </p>
-      {short || broken > 0 ? (
-        <p className="mt-1">
-          <Badge tone="caution">{short ? "Box count differs" : "Seal problem"}</Badge>
-        </p>
-      ) : null}
-      {h.notes ? <p className="whitespace-pre-wrap text-sm">{h.notes}</p> : null}
-    </>
-  );
-}
 
 /** The handoffs planned and recorded, and the state of the tamper-evident log behind them. */
 export function CustodySection({ transfer: t }: { transfer: TransferDto }) {
@@ -82,7 +52,7 @@ export function CustodySection({ transfer: t }: { transfer: TransferDto }) {
                   {i + 1}. {HANDOFF_KIND_WORDS[kind]}{" "}
                   {h ? null : <span className="font-normal text-ink-soft">— not yet recorded</span>}
                 </p>
-                {h ? <Recorded handoff={h} /> : null}
+                {h ? <HandoffRecord handoff={h} transfer={t} /> : null}
                 {!h && t.abilities.handOff === i ? (
                   <Link
                     to={paths.courier.handoff.href(t.id)}

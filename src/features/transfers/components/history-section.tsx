@@ -1,4 +1,4 @@
-import { describeChange } from "@shared/words";
+import { changeSentence } from "@shared/words";
 import type { TransferDto } from "@shared/schemas/transfer";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { formatInstant } from "@shared/dates";
@@ -6,10 +6,10 @@ import { useUnitSystem } from "@/lib/units-preference";
 import { useChanges } from "../api/changes";
 import { Section } from "./section";
 
-/** A long note stays readable in a table cell. */
-const short = (text: string) => (text.length > 160 ? `${text.slice(0, 157)}…` : text);
+/** A long note stays readable in the list. */
+const short = (text: string) => (text.length > 240 ? `${text.slice(0, 237)}…` : text);
 
-/** Every edit: who, when, and the old and new value. */
+/** Every edit as a sentence in the reader's units: "Box Turtles D: seal SEAL-0004 → SEAL-0044", who and when. */
 export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
   const changes = useChanges(t.id);
   const [system] = useUnitSystem();
@@ -24,46 +24,16 @@ export function HistorySection({ transfer: t }: { transfer: TransferDto }) {
       ) : changes.data.length === 0 ? (
         <p className="text-ink-soft">No edits since the transfer was created.</p>
       ) : (
-        <div className="relative overflow-x-auto">
-          <table className="w-full border-collapse text-left text-sm">
-            <caption className="sr-only">Edits to this transfer</caption>
-            <thead className="text-xs uppercase tracking-wide text-ink-soft">
-              <tr>
-                <th scope="col" className="px-2 py-2">
-                  When
-                </th>
-                <th scope="col" className="px-2 py-2">
-                  Who
-                </th>
-                <th scope="col" className="px-2 py-2">
-                  What
-                </th>
-                <th scope="col" className="px-2 py-2">
-                  Was
-                </th>
-                <th scope="col" className="px-2 py-2">
-                  Now
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-rule">
-              {changes.data.map((c, i) => {
-                const change = describeChange(c, system);
-                return (
-                  <tr key={`${c.at}-${c.field}-${i}`}>
-                    <td className="whitespace-nowrap px-2 py-2 align-top">{formatInstant(c.at)}</td>
-                    <td className="px-2 py-2 align-top">{c.actor.displayName}</td>
-                    <td className="px-2 py-2 align-top">{change.what}</td>
-                    <td className="break-words px-2 py-2 align-top text-ink-soft line-through decoration-brick/50">
-                      {short(change.was)}
-                    </td>
-                    <td className="break-words px-2 py-2 align-top">{short(change.now)}</td>
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
-        </div>
+        <ol className="grid gap-2 text-sm" aria-label="Edits to this transfer, newest first">
+          {changes.data.map((c, i) => (
+            <li key={`${c.at}-${c.field}-${i}`} className="grid gap-0.5 border-b border-rule pb-2 last:border-b-0">
+              <span className="wrap-break-word">{short(changeSentence(c, system))}</span>
+              <span className="text-xs text-ink-soft">
+                {c.actor.displayName} · {formatInstant(c.at)}
+              </span>
+            </li>
+          ))}
+        </ol>
       )}
     </Section>
   );

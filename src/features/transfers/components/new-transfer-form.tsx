@@ -2,7 +2,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import { useBlocker, useNavigate, useSearchParams } from "react-router";
 import { useQueryClient } from "@tanstack/react-query";
 import type { Address } from "@shared/schemas/common";
-import type { DirectoryOrganizationDto, TransferDto, TransferInput } from "@shared/schemas/transfer";
+import type { DirectoryOrganizationDto, TaxonBriefDto, TransferDto, TransferInput } from "@shared/schemas/transfer";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useToast } from "@/components/ui/toast";
 import { paths } from "@/config/paths";
@@ -26,6 +26,11 @@ type Props = {
   senderAddress: Address | null;
   /** What this browser kept, to resume from; null for a fresh form. */
   restored: BrowserDraft | null;
+  /** Animal lines chosen in the register (issue 15 §2), for a fresh form. */
+  prefill?: {
+    animals: Omit<TransferInput["animals"][number], "containerKey">[];
+    taxa: Record<string, TaxonBriefDto>;
+  } | null;
 };
 
 /**
@@ -34,7 +39,14 @@ type Props = {
  * chosen (each step then saves what is complete), the step in the address (the browser's Back
  * goes one step back), and a question before leaving for another page with work not on the server.
  */
-export function NewTransferForm({ userId, organizations, senderOrganizationId, senderAddress, restored }: Props) {
+export function NewTransferForm({
+  userId,
+  organizations,
+  senderOrganizationId,
+  senderAddress,
+  restored,
+  prefill,
+}: Props) {
   const client = useQueryClient();
   const navigate = useNavigate();
   const notify = useToast();
@@ -139,8 +151,16 @@ export function NewTransferForm({ userId, organizations, senderOrganizationId, s
     <>
       <TransferForm
         mode="create"
-        defaultValues={restored?.values ?? blank}
-        initialTaxa={restored?.taxa ?? {}}
+        defaultValues={
+          restored?.values ??
+          (prefill?.animals.length
+            ? {
+                ...blank,
+                animals: prefill.animals.map((line) => ({ ...line, containerKey: blank.containers[0]?.key ?? null })),
+              }
+            : blank)
+        }
+        initialTaxa={restored?.taxa ?? prefill?.taxa ?? {}}
         step={step}
         onStepChange={(next) => showStep(next, next < step)}
         organizations={organizations}

@@ -1,6 +1,7 @@
 import { describeCustodyEntry } from "@shared/words";
 import { Link, useParams } from "react-router";
-import type { CustodyEntryDto } from "@shared/schemas/transfer";
+import type { CustodyEntryDto, PhotoDto } from "@shared/schemas/transfer";
+import { PhotoStrip } from "@/components/ui/photo-strip";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
@@ -9,7 +10,7 @@ import { useTransfer } from "@/lib/transfer-queries";
 import { useUnitSystem } from "@/lib/units-preference";
 import { useCustody } from "../api/custody";
 
-function Entry({ entry: e, broken }: { entry: CustodyEntryDto; broken: boolean }) {
+function Entry({ entry: e, broken, photo }: { entry: CustodyEntryDto; broken: boolean; photo: PhotoDto | null }) {
   const [system] = useUnitSystem();
   const { title, lines } = describeCustodyEntry(e, system);
   return (
@@ -27,7 +28,8 @@ function Entry({ entry: e, broken }: { entry: CustodyEntryDto; broken: boolean }
           ))}
         </ul>
       ) : null}
-      <p className="mt-1 break-all font-mono text-xs text-ink-soft">
+      {photo ? <PhotoStrip photos={[photo]} label={`Photo of entry ${e.seq}`} /> : null}
+      <p className="mt-1 wrap-anywhere font-mono text-xs text-ink-soft">
         <span className="font-sans">Hash</span> {e.hash} <span className="font-sans">follows</span> {e.prevHash}
       </p>
     </li>
@@ -40,6 +42,7 @@ export function TransferCustodyRoute() {
   const transfer = useTransfer(transferId);
   const custody = useCustody(transferId, true);
   const number = transfer.data?.number ?? "";
+  const photos = new Map((transfer.data?.photos ?? []).map((p) => [p.id, p]));
   return (
     <>
       <PageHeader
@@ -98,6 +101,7 @@ export function TransferCustodyRoute() {
                 key={e.seq}
                 entry={e}
                 broken={custody.data.breaks.some((b) => e.seq >= b.seq && e.seq <= b.toSeq)}
+                photo={e.kind === "photo_added" ? (photos.get(String(e.payload.photoId)) ?? null) : null}
               />
             ))}
           </ol>

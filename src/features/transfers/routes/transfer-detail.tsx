@@ -14,11 +14,13 @@ import { ActionsBar } from "../components/actions-bar";
 import { AlertsSection } from "../components/alerts-section";
 import { BoxesSection } from "../components/boxes-section";
 import { CustodySection } from "../components/custody-section";
+import { DeliverySection } from "../components/delivery-section";
 import { DiscussionSection } from "../components/discussion-section";
 import { HistorySection } from "../components/history-section";
 import { LegsSection } from "../components/legs-section";
 import { OverviewSection } from "../components/overview-section";
 import { PackingSection } from "../components/packing-section";
+import { StateNoticesSection } from "../components/state-notices-section";
 
 type Props = {
   /**
@@ -26,12 +28,22 @@ type Props = {
    * each other). Rendered between the overview and the boxes; nothing is shown without it.
    */
   checks?: (transfer: TransferDto) => ReactNode;
+  /** What the check-in recorded (losses, each line's notes, weight and photos), composed in by src/app. */
+  arrival?: (transfer: TransferDto) => ReactNode;
 };
 
 /** The edit history is the parties' record; the server keeps it from couriers. */
 const showHistory = (t: TransferDto) => t.viewerRole !== "courier";
 
-function Contents({ transfer: t, withChecks }: { transfer: TransferDto; withChecks: boolean }) {
+function Contents({
+  transfer: t,
+  withChecks,
+  withArrival,
+}: {
+  transfer: TransferDto;
+  withChecks: boolean;
+  withArrival: boolean;
+}) {
   const items = [
     ["overview", "Who and where"],
     withChecks ? ["checks", "Rules and weather"] : null,
@@ -39,6 +51,7 @@ function Contents({ transfer: t, withChecks }: { transfer: TransferDto; withChec
     ["packing", "Packing"],
     ["legs", "Couriers"],
     ["custody", "Custody trail"],
+    withArrival ? ["arrival", "Arrival"] : null,
     t.abilities.discuss ? ["discussion", "Conversation"] : null,
     showHistory(t) ? ["history", "Change history"] : null,
   ].filter((i): i is [string, string] => i !== null);
@@ -61,7 +74,7 @@ function Contents({ transfer: t, withChecks }: { transfer: TransferDto; withChec
 }
 
 /** The shared record of one transfer, as the caller may see it. */
-export function TransferDetailRoute({ checks }: Props) {
+export function TransferDetailRoute({ checks, arrival }: Props) {
   const { transferId = "" } = useParams();
   const transfer = useTransfer(transferId);
   if (transfer.isPending) return <Loading label="Loading the transfer…" />;
@@ -96,10 +109,12 @@ export function TransferDetailRoute({ checks }: Props) {
         </Notice>
       ) : null}
       <AlertsSection transfer={t} />
+      <StateNoticesSection transfer={t} />
+      <DeliverySection transfer={t} />
       <ActionsBar transfer={t} />
       <PaperworkLinks transferId={t.id} />
       <TransportCautions />
-      <Contents transfer={t} withChecks={Boolean(checks)} />
+      <Contents transfer={t} withChecks={Boolean(checks)} withArrival={Boolean(arrival && t.checkIn)} />
       <OverviewSection transfer={t} />
       {checks ? (
         <section id="checks" aria-label="Rules and weather" className="scroll-mt-4">
@@ -110,6 +125,18 @@ export function TransferDetailRoute({ checks }: Props) {
       <PackingSection transfer={t} />
       <LegsSection transfer={t} />
       <CustodySection transfer={t} />
+      {arrival && t.checkIn ? (
+        <section
+          id="arrival"
+          aria-labelledby="arrival-heading"
+          className="scroll-mt-4 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:p-5"
+        >
+          <h2 id="arrival-heading" className="mb-3 text-lg font-semibold">
+            Arrival
+          </h2>
+          {arrival(t)}
+        </section>
+      ) : null}
       <DiscussionSection transfer={t} />
       {showHistory(t) ? <HistorySection transfer={t} /> : null}
     </div>

@@ -1,4 +1,6 @@
 import { useState } from "react";
+import { useSearchParams } from "react-router";
+import { useRegisterLines } from "../api/register-lines";
 import { Button } from "@/components/ui/button";
 import { Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
@@ -17,6 +19,10 @@ export function TransferNewRoute() {
   const [restored, setRestored] = useState(() => readBrowserDraft(userId));
   const [attempt, setAttempt] = useState(0);
   const ownOrganizationId = viewer.user.organization?.id ?? null;
+  // Animals chosen in the register fill the lines of a fresh form (a kept copy wins).
+  const [search] = useSearchParams();
+  const fromRegister = restored ? null : search.get("fromRegister");
+  const lines = useRegisterLines(fromRegister);
 
   if (!viewer.abilities.draftTransfers) {
     return (
@@ -25,7 +31,8 @@ export function TransferNewRoute() {
       </Notice>
     );
   }
-  if (directory.isPending) return <Loading label="Loading the organisations…" />;
+  if (directory.isPending || (fromRegister && lines.isPending))
+    return <Loading label={fromRegister ? "Loading the animals you chose…" : "Loading the organisations…"} />;
   if (directory.error)
     return (
       <Notice tone="block" role="alert" title="The organisations did not load">
@@ -44,6 +51,13 @@ export function TransferNewRoute() {
       <PageHeader title="New transfer" eyebrow={viewer.user.organization?.name}>
         Saved as a draft once the route and parties are chosen; nothing is sent to the receiver until you say so.
       </PageHeader>
+      {lines.error ? (
+        <div className="mb-5">
+          <Notice tone="block" role="alert" title="The animals from the register did not load">
+            {(lines.error as Error).message}
+          </Notice>
+        </div>
+      ) : null}
       {restored ? (
         <div className="mb-5">
           <Notice tone="info" title="Picked up where you left off">
@@ -66,6 +80,7 @@ export function TransferNewRoute() {
         senderOrganizationId={ownOrganizationId}
         senderAddress={own ? { street: own.street, city: own.city, state: own.state, zip: own.zip } : null}
         restored={restored}
+        prefill={attempt === 0 ? (lines.data ?? null) : null}
       />
     </>
   );

@@ -123,6 +123,8 @@ export function TransferForm({
   }, [onProgress, step, taxa, form]);
   useEffect(() => {
     const subscription = form.watch((values) => {
+      // A refusal from the server goes as soon as the entries change: it may no longer apply.
+      setSaveError(null);
       const { onProgress: report, step: at, taxa: known } = reported.current;
       report?.({ values: values as TransferInput, step: at, taxa: known });
     });

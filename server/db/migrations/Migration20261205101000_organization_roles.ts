@@ -7,7 +7,7 @@ import { Migration } from "@mikro-orm/migrations";
  * can manage them without the site administrator. Courier services keep their couriers; the
  * site administrator names their manager.
  */
-export class Migration20261202150100_organization_roles extends Migration {
+export class Migration20261205101000_organization_roles extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter table "app_user" drop constraint if exists "app_user_role_check";`);
     this.addSql(

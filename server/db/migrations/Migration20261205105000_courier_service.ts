@@ -4,7 +4,7 @@ import { Migration } from "@mikro-orm/migrations";
  * A sender asks a courier service to carry a transfer (issue 14, §3); the service's manager then
  * assigns its couriers to the legs.
  */
-export class Migration20261202150500_courier_service extends Migration {
+export class Migration20261205105000_courier_service extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter table "transfer" add column "courier_service_id" uuid null;`);
     this.addSql(

@@ -6,7 +6,7 @@ import { Migration } from "@mikro-orm/migrations";
  * receiver and the couriers keep seeing it. Existing transfers take the time of their first
  * step to "awaiting_receiver" from the custody log.
  */
-export class Migration20261202150000_draft_privacy extends Migration {
+export class Migration20261205100000_draft_privacy extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter table "transfer" add column "first_sent_at" timestamptz null;`);
     this.addSql(

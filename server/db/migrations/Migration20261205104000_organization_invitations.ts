@@ -5,7 +5,7 @@ import { Migration } from "@mikro-orm/migrations";
  * one-time link for an organisation that has nobody yet, so a link need not belong to an account,
  * and it names who sent it.
  */
-export class Migration20261202150400_organization_invitations extends Migration {
+export class Migration20261205104000_organization_invitations extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter table "password_token" alter column "user_id" drop not null;`);
     this.addSql(`alter table "password_token" drop constraint if exists "password_token_purpose_check";`);

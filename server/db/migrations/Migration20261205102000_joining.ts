@@ -6,7 +6,7 @@ import { Migration } from "@mikro-orm/migrations";
  * a sign-up, resetting a password, accepting to join an organisation) beside the first password
  * of an invitation. Existing accounts and links keep working as they were.
  */
-export class Migration20261202150200_joining extends Migration {
+export class Migration20261205102000_joining extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter table "app_user" add column "awaiting_confirmation" boolean not null default false;`);
     this.addSql(
