@@ -94,7 +94,7 @@ function MailCard({ mail }: { mail: Record<(typeof MAIL_CHOICES)[number], boolea
           <label key={choice} className="flex min-h-11 items-center gap-3">
             <input
               type="checkbox"
-              className="h-5 w-5"
+              className="h-5 w-5 shrink-0"
               checked={mail[choice]}
               disabled={update.isPending}
               onChange={(e) => update.mutate({ mail: { [choice]: e.target.checked } })}

@@ -45,7 +45,7 @@ function ListingCard({ id, listed }: { id: string; listed: boolean }) {
       <label className="flex min-h-11 items-center gap-3">
         <input
           type="checkbox"
-          className="h-5 w-5"
+          className="h-5 w-5 shrink-0"
           checked={listed}
           disabled={update.isPending}
           onChange={(e) => update.mutate({ listed: e.target.checked })}
