@@ -6,7 +6,14 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { expectAccessible, launchBrowser, newPage, screenshot, signInAs } from "../support/browser";
+import {
+  expectAccessible,
+  launchBrowser,
+  newPage,
+  screenshot,
+  signInAs,
+  confirmAnsweringBlocks,
+} from "../support/browser";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -124,35 +131,10 @@ describe("a nature centre invited to a transfer", () => {
     await page.getByRole("button", { name: "Confirm and clear to travel" }).click();
     // The route's rules were never reviewed (the demo's are not), and the weather may block: each
     // block is answered on its own, the rules check first.
-    for (let answered = 0; answered < 2; answered++) {
-      const status = await Promise.race([
-        page
-          .getByText("Cleared to travel", { exact: true })
-          .first()
-          .waitFor()
-          .then(() => "cleared"),
-        page
-          .getByRole("button", { name: "Confirm anyway, with this reason" })
-          .waitFor()
-          .then(() => "blocked"),
-      ]);
-      if (status === "cleared") break;
-      await page
-        .getByRole("textbox", { name: /Why it is safe to confirm anyway|What the agencies told you/ })
-        .fill("Oregon's agency confirmed by phone; we collect at the airport in a heated car.");
-      await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
-      await page
-        .getByRole("dialog", {
-          name: /^Confirm (past the temperature block|although the rules of the route are not verified)\?$/,
-        })
-        .getByRole("button", { name: "Confirm anyway" })
-        .click();
-      await page
-        .getByRole("dialog")
-        .waitFor({ state: "detached" })
-        .catch(() => undefined);
-      await page.waitForLoadState("networkidle");
-    }
+    await confirmAnsweringBlocks(
+      page,
+      "Oregon's agency confirmed by phone; we collect at the airport in a heated car.",
+    );
     await expect.poll(() => page.getByText("Cleared to travel", { exact: true }).count()).toBeGreaterThan(0);
     await screenshot(page, "invited-3-confirmed");
     await context.close();

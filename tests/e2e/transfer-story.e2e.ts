@@ -5,7 +5,15 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { expectAccessible, launchBrowser, newPage, PHONE, screenshot, signInAs } from "../support/browser";
+import {
+  expectAccessible,
+  launchBrowser,
+  newPage,
+  PHONE,
+  screenshot,
+  signInAs,
+  confirmAnsweringBlocks,
+} from "../support/browser";
 
 let browser: Browser;
 let transferUrl = "";
@@ -90,36 +98,11 @@ describe("one transfer from draft to check-in", () => {
     // No state on the demo route has reviewed rules (the verdict is "Unverified"), and the weather
     // fake's December forecast may block: the receiver then answers each block with a reason.
     // Each block is answered on its own (the rules check first, then the temperature if it blocks).
-    for (let answered = 0; answered < 2; answered++) {
-      const status = await Promise.race([
-        page
-          .getByText("Cleared to travel", { exact: true })
-          .first()
-          .waitFor()
-          .then(() => "cleared"),
-        page
-          .getByRole("button", { name: "Confirm anyway, with this reason" })
-          .waitFor()
-          .then(() => "blocked"),
-      ]);
-      if (status === "cleared") break;
-      await screenshot(page, `story-3${answered ? "b" : "a"}-receiver-block`);
-      await page
-        .getByRole("textbox", { name: /Why it is safe to confirm anyway|What the agencies told you/ })
-        .fill("Both wildlife agencies confirmed by phone; heated van door to door.");
-      await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
-      await page
-        .getByRole("dialog", {
-          name: /^Confirm (past the temperature block|although the rules of the route are not verified)\?$/,
-        })
-        .getByRole("button", { name: "Confirm anyway" })
-        .click();
-      await page
-        .getByRole("dialog")
-        .waitFor({ state: "detached" })
-        .catch(() => undefined);
-      await page.waitForLoadState("networkidle");
-    }
+    await confirmAnsweringBlocks(
+      page,
+      "Both wildlife agencies confirmed by phone; heated van door to door.",
+      (answered) => screenshot(page, `story-3${answered ? "b" : "a"}-receiver-block`),
+    );
     await expect.poll(() => page.getByText("Cleared to travel", { exact: true }).count()).toBeGreaterThan(0);
     await screenshot(page, "story-3-receiver-confirmed");
     await context.close();

@@ -43,3 +43,45 @@ export async function expectAccessible(page: Page): Promise<void> {
   const bad = result.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
   expect(bad.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`)).toEqual([]);
 }
+
+/**
+ * After "Confirm and clear to travel": answers each block the page shows with the reason (the
+ * unverified rules first, then the temperature if it blocks), each in its own dialog, until the
+ * transfer is cleared. `onBlock` runs when a block shows (a screenshot, say).
+ */
+export async function confirmAnsweringBlocks(
+  page: Page,
+  reason: string,
+  onBlock: (answered: number) => Promise<void> = async () => undefined,
+): Promise<void> {
+  for (let answered = 0; answered < 2; answered++) {
+    const status = await Promise.race([
+      page
+        .getByText("Cleared to travel", { exact: true })
+        .first()
+        .waitFor()
+        .then(() => "cleared"),
+      page
+        .getByRole("button", { name: "Confirm anyway, with this reason" })
+        .waitFor()
+        .then(() => "blocked"),
+    ]);
+    if (status === "cleared") return;
+    await onBlock(answered);
+    await page
+      .getByRole("textbox", { name: /Why it is safe to confirm anyway|What the agencies told you/ })
+      .fill(reason);
+    await page.getByRole("button", { name: "Confirm anyway, with this reason" }).click();
+    await page
+      .getByRole("dialog", {
+        name: /^Confirm (past the temperature block|although the rules of the route are not verified)\?$/,
+      })
+      .getByRole("button", { name: "Confirm anyway" })
+      .click();
+    await page
+      .getByRole("dialog")
+      .waitFor({ state: "detached" })
+      .catch(() => undefined);
+    await page.waitForLoadState("networkidle");
+  }
+}
