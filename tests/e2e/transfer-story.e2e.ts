@@ -97,7 +97,6 @@ describe("one transfer from draft to check-in", () => {
     await page.getByRole("button", { name: "Confirm and clear to travel" }).click();
     // No state on the demo route has reviewed rules (the verdict is "Unverified"), and the weather
     // fake's December forecast may block: the receiver then answers each block with a reason.
-    // Each block is answered on its own (the rules check first, then the temperature if it blocks).
     await confirmAnsweringBlocks(
       page,
       "Both wildlife agencies confirmed by phone; heated van door to door.",
