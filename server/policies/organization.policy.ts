@@ -1,4 +1,3 @@
-import type { OrganizationKind, UserRole } from "@shared/constants";
 import type { Actor } from "../auth/actor";
 
 /** Organisations are kept by admins: listing all of them, creating one by hand. */
@@ -15,12 +14,4 @@ export function organizationAccess(actor: Actor, organizationId: string): "manag
   if (actor.role === "admin") return "manage";
   if (actor.organization?.id !== organizationId) return null;
   return actor.role === "manager" ? "manage" : "belongs";
-}
-
-/**
- * The roles a person can hold in an organisation of this kind: a keeper organisation has
- * managers and members, a courier service managers and couriers. Nobody is made site admin here.
- */
-export function rolesInOrganization(kind: OrganizationKind): readonly UserRole[] {
-  return kind === "courier_service" ? ["manager", "courier"] : ["manager", "member"];
 }

@@ -2,6 +2,7 @@ import { createHash, randomBytes } from "node:crypto";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { UserInviteInput } from "@shared/schemas/auth";
 import { emailKey } from "@shared/schemas/common";
+import { roleMisfit } from "@shared/roles";
 import { UserSchema } from "../db/entities/user.entity";
 import type { Actor } from "../auth/actor";
 import { OrganizationSchema } from "../db/entities/organization.entity";
@@ -28,11 +29,11 @@ export async function inviteUser({
   const key = emailKey(input.email);
   if (await em.count(UserSchema, { emailKey: key }))
     throw conflict("An account with this e-mail already exists.", { field: "email" });
-  if ((input.role === "member" || input.role === "manager") && !input.organizationId)
-    throw invalidField(["organizationId"], "a keeper organisation member needs an organisation");
   const organization = input.organizationId ? await em.findOne(OrganizationSchema, { id: input.organizationId }) : null;
   if (input.organizationId && !organization)
     throw invalidField(["organizationId"], "choose an organisation from the list");
+  const misfit = roleMisfit(input.role, organization?.kind ?? null);
+  if (misfit) throw invalidField(["organizationId"], misfit);
 
   const user = em.create(UserSchema, {
     email: input.email,

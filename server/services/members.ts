@@ -9,7 +9,7 @@ import { endOtherSessions } from "../auth/session";
 import { OrganizationSchema, type Organization } from "../db/entities/organization.entity";
 import { UserSchema, type User } from "../db/entities/user.entity";
 import { conflict, HttpError, invalidField, notFound } from "../http/errors";
-import { rolesInOrganization } from "../policies/organization.policy";
+import { rolesInOrganization } from "@shared/roles";
 import { enqueueMail } from "./outbox";
 import { invitationMail, joinOrganizationMail } from "../mail/templates";
 import type { AppLinks } from "../mail/links";

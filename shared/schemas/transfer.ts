@@ -339,6 +339,15 @@ export type OrgBriefDto = {
   email: string;
   address: { street: string; city: string; state: UsState; zip: string };
 };
+/** A courier service as a transfer shows it: no address, its phone once it has joined. */
+export type CourierServiceBriefDto = {
+  id: string;
+  name: string;
+  city: string;
+  state: string;
+  phone: string;
+  pending: boolean;
+};
 export type PersonDto = { id: string; displayName: string; email: string };
 export type PlaceDto = {
   street: string;
@@ -587,6 +596,8 @@ export type TransferDto = {
    * compliance and temperature checks (the custody log holds the same entry); null otherwise.
    */
   loadedWithoutChecks: LoadedWithoutChecksDto | null;
+  /** The courier service asked to carry it; pending until someone of it signs up (issue 14, §3). */
+  courierService: CourierServiceBriefDto | null;
   /** Every alert raised on this transfer, oldest first; acknowledged ones stay. */
   alerts: AlertDto[];
   /** The delivery to the receiver, once recorded; null before. */
@@ -685,6 +696,16 @@ export type DirectoryOrganizationDto = {
   zip: string;
   street: string;
   contacts: PersonDto[];
+  /** Invited by the caller's organisation, nobody signed up yet. */
+  pending: boolean;
+  listed: boolean;
+};
+/** A courier service in the directory: name, city and state only (issue 14, §3). */
+export type DirectoryCourierServiceDto = {
+  id: string;
+  name: string;
+  city: string;
+  state: UsState;
   /** Invited by the caller's organisation, nobody signed up yet. */
   pending: boolean;
   listed: boolean;

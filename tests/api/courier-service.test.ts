@@ -80,4 +80,60 @@ describe("a courier service carries a transfer", () => {
       expect([res.status, res.body.error.field]).toEqual([400, "organizationId"]);
     }
   });
+
+  it("shows the sender the services it may ask, and the chosen one on the transfer, without every courier on Hatchway", async () => {
+    const listed = await buildOrganization(em(), {
+      kind: "courier_service",
+      name: "Listed Lane Couriers",
+      listed: true,
+    });
+    const hidden = await buildOrganization(em(), { kind: "courier_service", name: "Hidden Hollow Couriers" });
+    const listedDriver = await buildUser(em(), { role: "courier", organization: listed });
+    const hiddenDriver = await buildUser(em(), { role: "courier", organization: hidden });
+    const cast = await buildTransfer(em(), { status: "draft", couriers: [] });
+    const sender = await signIn(t.app, cast.sender.email);
+
+    const services = await sender.get("/api/directory/courier-services");
+    expect(services.status).toBe(200);
+    const names = services.body.courierServices.map((s: { name: string }) => s.name);
+    expect(names).toContain("Listed Lane Couriers");
+    expect(names).not.toContain("Hidden Hollow Couriers");
+    // Name, city and state only: no address, phone or e-mail of a service merely listed.
+    expect(Object.keys(services.body.courierServices[0]).sort()).toEqual(
+      ["city", "id", "listed", "name", "pending", "state"].sort(),
+    );
+    const couriers = (await sender.get("/api/directory/couriers")).body.couriers.map((c: { id: string }) => c.id);
+    expect(couriers).toContain(listedDriver.id);
+    expect(couriers).not.toContain(hiddenDriver.id);
+
+    // Invited by the sender: it appears for the sender as pending, and can be chosen at once.
+    const invited = await sender.agent
+      .post("/api/organizations/invitations")
+      .set("X-CSRF-Token", sender.csrf)
+      .send({
+        organizationName: "Invited Ridge Couriers",
+        kind: "courier_service",
+        email: "ridge@example.test",
+        state: "KY",
+      });
+    expect(invited.status, JSON.stringify(invited.body)).toBe(201);
+    const after = (await sender.get("/api/directory/courier-services")).body.courierServices;
+    expect(after.find((s: { id: string }) => s.id === invited.body.organization.id)).toMatchObject({ pending: true });
+    const chosen = await put(sender, `/api/transfers/${cast.transfer.id}/courier-service`, {
+      organizationId: invited.body.organization.id,
+    });
+    expect(chosen.status).toBe(200);
+    expect(chosen.body.transfer.courierService).toMatchObject({
+      id: invited.body.organization.id,
+      name: "Invited Ridge Couriers",
+      pending: true,
+    });
+    // Another keeper does not see the services this sender invited.
+    const stranger = await buildUser(em(), { role: "manager" });
+    const theirs = (await (await signIn(t.app, stranger.email)).get("/api/directory/courier-services")).body;
+    expect(theirs.courierServices.map((s: { id: string }) => s.id)).not.toContain(invited.body.organization.id);
+    // Taking the request back.
+    const none = await put(sender, `/api/transfers/${cast.transfer.id}/courier-service`, { organizationId: null });
+    expect(none.body.transfer.courierService).toBeNull();
+  });
 });

@@ -1,12 +1,19 @@
 import { isKeeper } from "../../auth/actor";
 import { KEEPER_ROLES } from "@shared/constants";
 import { Router } from "express";
-import type { DirectoryCourierDto, DirectoryOrganizationDto } from "@shared/schemas/transfer";
+import type {
+  DirectoryCourierDto,
+  DirectoryCourierServiceDto,
+  DirectoryOrganizationDto,
+} from "@shared/schemas/transfer";
 import type { UsState } from "@shared/constants";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { UserSchema } from "../../db/entities/user.entity";
 import { forbidden } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
+
+type CourierServiceRow = { id: string; name: string; city: string; state: string; pending: boolean; listed: boolean };
+type CourierRow = { id: string; display_name: string; organization_name: string | null };
 
 /** Who a sender can send to and whom they can ask to carry: keeper organisations and couriers. */
 export function directoryRouter(): Router {
@@ -73,22 +80,63 @@ export function directoryRouter(): Router {
     res.json({ organizations });
   });
 
+  // Courier services a sender can ask to carry a transfer (issue 14, §3): the listed ones by name,
+  // city and state; those the caller's organisation invited, and those already carrying one of its
+  // transfers, with their state of joining.
+  router.get("/courier-services", async (req, res) => {
+    const own = currentUser(req).organization?.id ?? null;
+    const admin = currentUser(req).role === "admin";
+    const rows: CourierServiceRow[] = await req.em.getConnection().execute(
+      `SELECT o.id, o.name, o.city, o.state, o.pending, o.listed
+         FROM organization o
+        WHERE o.kind = 'courier_service'
+          AND (?::boolean
+               OR (o.listed AND NOT o.pending)
+               OR o.invited_by_id = ?
+               OR o.id IN (SELECT t.courier_service_id FROM transfer t
+                            WHERE t.sender_organization_id = ? OR t.receiver_organization_id = ?))
+        ORDER BY o.name, o.id`,
+      [admin, own, own, own],
+    );
+    const services: DirectoryCourierServiceDto[] = rows.map((r) => ({
+      id: r.id,
+      name: r.name,
+      city: r.city,
+      state: r.state as UsState,
+      pending: r.pending,
+      listed: r.listed,
+    }));
+    res.json({ courierServices: services });
+  });
+
+  // Couriers a sender may put on a leg, or a service's manager on its legs: a keeper sees the
+  // couriers of the services it could choose (listed, invited by it, or already carrying its
+  // transfers) and those already on its legs, never every courier on Hatchway.
   router.get("/couriers", async (req, res) => {
-    const couriers = await req.em.find(
-      UserSchema,
-      {
-        role: "courier",
-        disabled: false,
-        ...(currentUser(req).role === "manager" && currentUser(req).organization?.kind === "courier_service"
-          ? { organization: currentUser(req).organization!.id }
-          : {}),
-      },
-      { populate: ["organization"], orderBy: { displayName: "asc" } },
+    const actor = currentUser(req);
+    const own = actor.organization?.id ?? null;
+    const serviceManager = actor.role === "manager" && actor.organization?.kind === "courier_service";
+    const scope = actor.role === "admin" ? "all" : serviceManager ? "service" : "keeper";
+    const couriers: CourierRow[] = await req.em.getConnection().execute(
+      `SELECT u.id, u.display_name, o.name AS organization_name
+         FROM app_user u LEFT JOIN organization o ON o.id = u.organization_id
+        WHERE u.role = 'courier' AND NOT u.disabled
+          AND (? = 'all'
+               OR (? = 'service' AND u.organization_id = ?)
+               OR (? = 'keeper' AND (
+                     (o.listed AND NOT o.pending)
+                     OR o.invited_by_id = ?
+                     OR o.id IN (SELECT t.courier_service_id FROM transfer t
+                                  WHERE t.sender_organization_id = ? OR t.receiver_organization_id = ?)
+                     OR u.id IN (SELECT l.courier_id FROM leg l JOIN transfer t ON t.id = l.transfer_id
+                                  WHERE t.sender_organization_id = ? OR t.receiver_organization_id = ?))))
+        ORDER BY u.display_name, u.id`,
+      [scope, scope, own, scope, own, own, own, own, own],
     );
     const list: DirectoryCourierDto[] = couriers.map((c) => ({
       id: c.id,
-      displayName: c.displayName,
-      organizationName: c.organization?.getEntity()?.name ?? null,
+      displayName: c.display_name,
+      organizationName: c.organization_name,
     }));
     res.json({ couriers: list });
   });

@@ -10,7 +10,8 @@ import type { AppContext } from "../../context";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { PasswordTokenSchema } from "../../db/entities/password-token.entity";
 import { UserSchema } from "../../db/entities/user.entity";
-import { forbidden, notFound } from "../../http/errors";
+import { conflict, forbidden, notFound } from "../../http/errors";
+import { roleMisfit } from "@shared/roles";
 import { currentUser, requirePolicy, requireUser } from "../../http/guards";
 import { parse, pathId } from "../../http/validate";
 import { canManageOrganizations, organizationAccess } from "../../policies/organization.policy";
@@ -83,6 +84,16 @@ export function organizationsRouter(ctx: AppContext): Router {
     const input = parse(organizationPatchSchema, req.body);
     if (input.kind !== undefined && input.kind !== org.kind && currentUser(req).role !== "admin")
       throw forbidden("Only a Hatchway administrator can change what kind of organisation this is.");
+    if (input.kind !== undefined && input.kind !== org.kind) {
+      const kind = input.kind;
+      const people = await req.em.find(UserSchema, { organization: org.id }, { orderBy: { displayName: "asc" } });
+      const misfits = people.filter((p) => roleMisfit(p.role, kind));
+      if (misfits.length)
+        throw conflict(
+          `${misfits.map((p) => p.displayName).join(", ")} ${misfits.length === 1 ? "has a role" : "have roles"} this kind of organisation does not have (${roleMisfit(misfits[0]!.role, kind)}): change ${misfits.length === 1 ? "it" : "them"} first.`,
+          { field: "kind" },
+        );
+    }
     const { address, ...rest } = input;
     req.em.assign(org, { ...rest, ...(address ?? {}) });
     await req.em.flush();

@@ -4,6 +4,8 @@ import { buildOrganization, buildUser } from "../../../tests/factories";
 import { startSmtpFake, type SmtpFake } from "../../../fakes/smtp/smtp-fake";
 import { createMailer } from "../../adapters/mailer";
 import { deliverDueMail } from "../../services/outbox";
+import { UserSchema } from "../../db/entities/user.entity";
+import { OrganizationSchema } from "../../db/entities/organization.entity";
 
 let t: TestApp;
 let smtp: SmtpFake;
@@ -170,9 +172,10 @@ describe("users", () => {
 
   it("admin changes a role and disables an account; the account can no longer sign in", async () => {
     const user = await buildUser(em(), { role: "member" });
-    const asCourier = await admin.patch(`/api/users/${user.id}`, { role: "courier" });
+    const service = await buildOrganization(em(), { kind: "courier_service" });
+    const asCourier = await admin.patch(`/api/users/${user.id}`, { role: "courier", organizationId: service.id });
     expect(asCourier.status).toBe(200);
-    expect(asCourier.body.user.role).toBe("courier");
+    expect(asCourier.body.user).toMatchObject({ role: "courier", organization: { id: service.id } });
     const disabled = await admin.patch(`/api/users/${user.id}`, { disabled: true });
     expect(disabled.body.user.disabled).toBe(true);
     const anon = await anonymousClient(t.app);
@@ -184,5 +187,42 @@ describe("users", () => {
     expect(res.status).toBe(200);
     expect(res.body.users.length).toBeGreaterThan(0);
     expect(JSON.stringify(res.body)).not.toMatch(/argon2|passwordHash|password_hash/);
+  });
+
+  // Issue 14, §2: a keeper organisation has managers and members, a courier service managers and
+  // couriers (our own rule); the admin's screens may not make a person the other kind's role.
+  it("keeps each role to an organisation of the kind that has it, and changes nothing when it does not fit", async () => {
+    const keeper = await buildOrganization(em(), { kind: "zoo" });
+    const service = await buildOrganization(em(), { kind: "courier_service" });
+    const invitedCourier = await admin.post("/api/users", {
+      email: "misfit.courier@example.test",
+      displayName: "Misfit Courier",
+      role: "courier",
+      organizationId: keeper.id,
+    });
+    expect([invitedCourier.status, invitedCourier.body.error.field]).toEqual([400, "organizationId"]);
+    expect(invitedCourier.body.error.message).toMatch(/managers or members/);
+    const invitedMember = await admin.post("/api/users", {
+      email: "misfit.member@example.test",
+      displayName: "Misfit Member",
+      role: "member",
+      organizationId: service.id,
+    });
+    expect([invitedMember.status, invitedMember.body.error.field]).toEqual([400, "organizationId"]);
+    expect(await em().count(UserSchema, { email: { $like: "misfit.%" } })).toBe(0);
+
+    const member = await buildUser(em(), { role: "member", organization: keeper });
+    const toCourier = await admin.patch(`/api/users/${member.id}`, { role: "courier" });
+    expect([toCourier.status, toCourier.body.error.field]).toEqual([400, "role"]);
+    const moved = await admin.patch(`/api/users/${member.id}`, { organizationId: service.id });
+    expect([moved.status, moved.body.error.field]).toEqual([400, "organizationId"]);
+    const unchanged = await em().findOneOrFail(UserSchema, { id: member.id }, { populate: ["organization"] });
+    expect([unchanged.role, unchanged.organization?.id]).toEqual(["member", keeper.id]);
+
+    // Turning the zoo into a courier service would leave its member without a fitting role.
+    const kind = await admin.patch(`/api/organizations/${keeper.id}`, { kind: "courier_service" });
+    expect([kind.status, kind.body.error.field]).toEqual([409, "kind"]);
+    expect(kind.body.error.message).toContain(member.displayName);
+    expect((await em().findOneOrFail(OrganizationSchema, { id: keeper.id })).kind).toBe("zoo");
   });
 });

@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { ref } from "@mikro-orm/core";
 import { userInviteSchema, userPatchSchema } from "@shared/schemas/auth";
+import { roleMisfit } from "@shared/roles";
 import type { AppContext } from "../../context";
 import { UserSchema } from "../../db/entities/user.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
@@ -48,8 +49,8 @@ export function usersRouter(ctx: AppContext): Router {
     if (input.displayName !== undefined) user.displayName = input.displayName;
     if (input.role !== undefined) user.role = input.role;
     if (input.disabled !== undefined) user.disabled = input.disabled;
-    if ((user.role === "member" || user.role === "manager") && !user.organization)
-      throw invalidField(["organizationId"], "a keeper organisation member needs an organisation");
+    const misfit = roleMisfit(user.role, user.organization?.getEntity().kind ?? null);
+    if (misfit) throw invalidField([input.organizationId !== undefined ? "organizationId" : "role"], misfit);
     await req.em.flush();
     const pending = await req.em.count(PasswordTokenSchema, { user, usedAt: null });
     res.json({ user: presentUserForAdmin(user, !user.passwordHash && pending > 0) });

@@ -130,6 +130,8 @@ export type TransferView = {
   } | null;
   /** The custody entry of demo or bench data cleared without the gates (gatesForLoadedData), if any. */
   checksSkipped: { at: string; payload: Record<string, unknown> } | null;
+  /** The courier service the sender asked to carry the transfer (issue 14, §3). */
+  courierService: { id: string; name: string; city: string; state: string; phone: string; pending: boolean } | null;
   /** Photos at the handoffs and the check-in, oldest first. */
   photos: {
     id: string;
@@ -259,6 +261,8 @@ SELECT json_build_object(
                 'extras', coalesce((SELECT json_agg(json_build_object('count', e.count, 'sex', e.sex, 'notes', e.notes, 'taxon', ${TAXON_JSON("x")}))
                                       FROM check_in_extra e JOIN taxon x ON x.id = e.taxon_id WHERE e.check_in_id = ci.id), '[]'))
                 FROM check_in ci JOIN app_user su ON su.id = ci.signed_by_id WHERE ci.transfer_id = t.id),
+  'courierService', (SELECT json_build_object('id', cs.id, 'name', cs.name, 'city', cs.city, 'state', cs.state, 'phone', cs.phone, 'pending', cs.pending)
+                      FROM organization cs WHERE cs.id = t.courier_service_id),
   'checksSkipped', (SELECT json_build_object('at', e.at, 'payload', e.payload) FROM custody_entry e
                      WHERE e.transfer_id = t.id AND e.kind = 'checks_skipped' ORDER BY e.seq LIMIT 1),
   'photos', coalesce((SELECT json_agg(json_build_object('id', ph.id, 'moment', ph.moment, 'handoff_index', ph.handoff_index, 'subject', ph.subject,
@@ -277,7 +281,7 @@ WHERE t.id = $1`;
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
   const { rows } = await pool.query<{ view: TransferView }>({
-    name: "transfer-view-v4",
+    name: "transfer-view-v5",
     text: TRANSFER_VIEW_SQL,
     values: [id],
   });

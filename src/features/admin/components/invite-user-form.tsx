@@ -1,8 +1,10 @@
+import { useEffect } from "react";
 import { USER_ROLE_WORDS } from "@shared/words";
 import { useForm } from "react-hook-form";
 import { keeperResolver } from "@/lib/form-resolver";
 import type { z } from "zod";
-import { USER_ROLES } from "@shared/constants";
+import { USER_ROLES, type OrganizationKind } from "@shared/constants";
+import { roleMisfit } from "@shared/roles";
 import { userInviteSchema } from "@shared/schemas/auth";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
@@ -22,6 +24,15 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
     defaultValues: { email: "", displayName: "", role: "member", organizationId: null },
   });
   const errors = form.formState.errors;
+  // The roles offered follow the organisation chosen: a courier service has couriers, a keeper
+  // organisation members; without one, only the site admin or a courier on their own.
+  const organizationId = form.watch("organizationId");
+  const kind: OrganizationKind | null = (orgs.data ?? []).find((o) => o.id === organizationId)?.kind ?? null;
+  const roles = USER_ROLES.filter((r) => !roleMisfit(r, kind));
+  const role = form.watch("role");
+  useEffect(() => {
+    if (!roles.includes(role)) form.setValue("role", roles.includes("member") ? "member" : roles.at(-1)!);
+  }, [roles, role, form]);
   const orgOptions = [
     { value: "", label: "— none —" },
     ...(orgs.data ?? []).map((o) => ({ value: o.id, label: o.name })),
@@ -50,16 +61,16 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
       <TextField label="Name" error={errors.displayName?.message} {...form.register("displayName")} />
       <TextField label="E-mail" type="email" error={errors.email?.message} {...form.register("email")} />
       <SelectField
-        label="Role"
-        options={USER_ROLES.map((r) => ({ value: r, label: USER_ROLE_WORDS[r] }))}
-        error={errors.role?.message}
-        {...form.register("role")}
-      />
-      <SelectField
         label="Organisation"
         options={orgOptions}
         error={errors.organizationId?.message}
         {...form.register("organizationId", { setValueAs: (v: string) => (v === "" ? null : v) })}
+      />
+      <SelectField
+        label="Role"
+        options={roles.map((r) => ({ value: r, label: USER_ROLE_WORDS[r] }))}
+        error={errors.role?.message}
+        {...form.register("role")}
       />
       <div className="sm:col-span-2 flex gap-2">
         <Button type="submit" busy={invite.isPending}>

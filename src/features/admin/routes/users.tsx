@@ -1,6 +1,7 @@
 import { USER_ROLE_WORDS } from "@shared/words";
 import { useState } from "react";
-import { USER_ROLES, type UserRole } from "@shared/constants";
+import { USER_ROLES, type OrganizationKind, type UserRole } from "@shared/constants";
+import { roleMisfit } from "@shared/roles";
 import { Button } from "@/components/ui/button";
 import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { Card, PageHeader } from "@/components/ui/page";
@@ -93,7 +94,10 @@ export function UsersRoute() {
                     setRoleChange({ user: u, role: e.target.value as UserRole });
                   }}
                 >
-                  {USER_ROLES.map((r) => (
+                  {USER_ROLES.filter(
+                    (r) =>
+                      r === u.role || !roleMisfit(r, (u.organization?.kind as OrganizationKind | undefined) ?? null),
+                  ).map((r) => (
                     <option key={r} value={r}>
                       {USER_ROLE_WORDS[r]}
                     </option>

@@ -12,6 +12,11 @@ export function useInviteOrganization() {
         method: "POST",
         body: input,
       }).then((r) => r.organization),
-    onSuccess: () => client.invalidateQueries({ queryKey: directoryKeys.organizations }),
+    onSuccess: () =>
+      Promise.all([
+        client.invalidateQueries({ queryKey: directoryKeys.organizations }),
+        client.invalidateQueries({ queryKey: directoryKeys.courierServices }),
+        client.invalidateQueries({ queryKey: directoryKeys.couriers }),
+      ]),
   });
 }

@@ -8,6 +8,7 @@ import { SelectField, TextField } from "@/components/ui/field";
 import { ApiError } from "@/lib/api-client";
 import { useAssignLegs } from "../api/assign-legs";
 import { useDirectoryCouriers } from "../api/directory";
+import { CourierServiceChoice } from "./courier-service-choice";
 import { Section } from "./section";
 
 type LegsParsed = import("zod").output<typeof legsInputSchema>;
@@ -132,6 +133,7 @@ export function LegsSection({ transfer: t }: { transfer: TransferDto }) {
         ) : null
       }
     >
+      <CourierServiceChoice transfer={t} />
       {editing ? (
         <LegsEditor transfer={t} onDone={() => setEditing(false)} />
       ) : legs.length === 0 ? (

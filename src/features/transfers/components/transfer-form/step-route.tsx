@@ -3,7 +3,7 @@ import { Controller, useFormContext, useWatch } from "react-hook-form";
 import { PURPOSES, TRANSPORT_MODES, US_STATES } from "@shared/constants";
 import type { DirectoryOrganizationDto, TransferInput } from "@shared/schemas/transfer";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
-import { InviteReceiver } from "./invite-receiver";
+import { InviteOrganization } from "../invite-organization";
 import { instantToLocalInput, localInputToInstant } from "@/lib/datetime";
 
 const choose = { value: "", label: "Choose…" };
@@ -113,7 +113,8 @@ export function RouteStep({
           {...register("receiverContactId", { setValueAs: (v: string | null) => (v ? v : null) })}
         />
       </div>
-      <InviteReceiver
+      <InviteOrganization
+        party="receiver"
         onInvited={(organizationId) =>
           setValue("receiverOrganizationId", organizationId, {
             shouldDirty: true,
