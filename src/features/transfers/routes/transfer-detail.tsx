@@ -73,6 +73,23 @@ function Contents({
   );
 }
 
+const CHECK_NAMES: Record<string, string> = { compliance: "the rules of the route", temperature: "the weather" };
+
+/**
+ * Demo or benchmark data cleared past the gates (D16): its "cleared" was never checked, and the
+ * page says so rather than let the status read as a verdict.
+ */
+function LoadedWithoutChecks({ loaded }: { loaded: NonNullable<TransferDto["loadedWithoutChecks"]> }) {
+  const names = loaded.checksNotRun.map((c) => CHECK_NAMES[c] ?? c);
+  return (
+    <Notice tone="caution" title={loaded.loadedAs === "demo" ? "Demo data: not checked" : "Test data: not checked"}>
+      This transfer was loaded as {loaded.loadedAs === "demo" ? "invented demo data" : "benchmark data"} and cleared to
+      travel on {formatInstant(loaded.at, null)} without checking {names.join(" or ")}. Its status is not a verdict:
+      nothing here says these animals may travel.
+    </Notice>
+  );
+}
+
 /** The shared record of one transfer, as the caller may see it. */
 export function TransferDetailRoute({ checks, arrival }: Props) {
   const { transferId = "" } = useParams();
@@ -103,6 +120,7 @@ export function TransferDetailRoute({ checks, arrival }: Props) {
           {t.cancelledReason}
         </Notice>
       ) : null}
+      {t.loadedWithoutChecks ? <LoadedWithoutChecks loaded={t.loadedWithoutChecks} /> : null}
       {t.reconfirmationReason && t.status === "awaiting_receiver" ? (
         <Notice tone="caution" title="Changed after confirmation">
           {t.reconfirmationReason}
