@@ -1,4 +1,5 @@
 import { useEffect, useId, useState, type KeyboardEvent } from "react";
+import { Controller, type Control, type FieldPath, type FieldValues } from "react-hook-form";
 import type { TaxonBriefDto, TaxonSearchHitDto } from "@shared/schemas/transfer";
 import type { TaxonSearch } from "@/lib/taxa-search";
 import { TaxonName } from "./taxon-name";
@@ -238,5 +239,41 @@ export function TaxonCombobox({
         </p>
       ) : null}
     </div>
+  );
+}
+
+/** The species of a form line: the combobox bound to a taxon-id field of a react-hook-form form. */
+export function TaxonField<T extends FieldValues>({
+  control,
+  name,
+  taxa,
+  rememberTaxon,
+  search,
+}: {
+  control: Control<T>;
+  name: FieldPath<T>;
+  /** Taxa already chosen or loaded, by id, so a chosen id shows its name. */
+  taxa: Record<string, TaxonBriefDto>;
+  rememberTaxon: (t: TaxonBriefDto) => void;
+  search: TaxonSearch;
+}) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <TaxonCombobox
+          label="Species"
+          value={taxa[field.value as string] ?? null}
+          onChange={(t) => {
+            if (t) rememberTaxon(t);
+            field.onChange(t?.id ?? "");
+          }}
+          onBlur={field.onBlur}
+          search={search}
+          error={fieldState.error ? "Choose the species from the list" : undefined}
+        />
+      )}
+    />
   );
 }

@@ -1,10 +1,10 @@
 import { SEX_WORDS } from "@shared/words";
-import { Controller, useFieldArray, useFormContext } from "react-hook-form";
+import { useFieldArray, useFormContext } from "react-hook-form";
 import { SEXES } from "@shared/constants";
 import type { CheckInInput, TaxonBriefDto } from "@shared/schemas/transfer";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
-import { TaxonCombobox } from "@/components/ui/taxon-combobox";
+import { TaxonField } from "@/components/ui/taxon-combobox";
 import type { TaxonSearch } from "@/lib/taxa-search";
 
 type Props = { taxa: Record<string, TaxonBriefDto>; rememberTaxon: (t: TaxonBriefDto) => void; search: TaxonSearch };
@@ -32,22 +32,12 @@ export function ExtrasEditor({ taxa, rememberTaxon, search }: Props) {
           >
             <legend className="px-1 font-semibold">Extra {i + 1}</legend>
             <div className="sm:col-span-4">
-              <Controller
+              <TaxonField
                 control={control}
                 name={`extras.${i}.taxonId`}
-                render={({ field: f, fieldState }) => (
-                  <TaxonCombobox
-                    label="Species"
-                    value={taxa[f.value] ?? null}
-                    onChange={(t) => {
-                      if (t) rememberTaxon(t);
-                      f.onChange(t?.id ?? "");
-                    }}
-                    onBlur={f.onBlur}
-                    search={search}
-                    error={fieldState.error ? "Choose the species from the list" : undefined}
-                  />
-                )}
+                taxa={taxa}
+                rememberTaxon={rememberTaxon}
+                search={search}
               />
             </div>
             <TextField

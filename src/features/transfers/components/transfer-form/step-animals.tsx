@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/feedback";
 import { MeasureField } from "@/components/ui/measure-field";
-import { TaxonCombobox } from "@/components/ui/taxon-combobox";
+import { TaxonField } from "@/components/ui/taxon-combobox";
 import type { TaxonSearch } from "@/lib/taxa-search";
 import { duplicateAnimal, nextAnimal } from "./form-values";
 
@@ -44,22 +44,12 @@ function AnimalLine({
     <fieldset className="grid gap-3 rounded-card border border-rule bg-paper-card p-4 shadow-card sm:grid-cols-6">
       <legend className="px-1 font-display font-semibold">Animal line {index + 1}</legend>
       <div className="sm:col-span-6">
-        <Controller
+        <TaxonField
           control={control}
           name={`animals.${index}.taxonId`}
-          render={({ field, fieldState }) => (
-            <TaxonCombobox
-              label="Species"
-              value={taxa[field.value] ?? null}
-              onChange={(t) => {
-                if (t) rememberTaxon(t);
-                field.onChange(t?.id ?? "");
-              }}
-              onBlur={field.onBlur}
-              search={search}
-              error={fieldState.error ? "Choose the species from the list" : undefined}
-            />
-          )}
+          taxa={taxa}
+          rememberTaxon={rememberTaxon}
+          search={search}
         />
       </div>
       <TextField
