@@ -5,15 +5,35 @@ import type { ReactNode } from "react";
  * is `relative` so screen-reader-only text in the cells (absolutely placed) scrolls with it instead of
  * widening the page.
  */
+/**
+ * A box that scrolls sideways when its content is wider than the screen. It is a named region and
+ * takes focus, so a keyboard can scroll it too (axe: scrollable-region-focusable).
+ */
+export function ScrollRegion({
+  label,
+  className = "",
+  children,
+}: {
+  label: string;
+  className?: string;
+  children: ReactNode;
+}) {
+  return (
+    <div role="region" aria-label={label} tabIndex={0} className={`relative overflow-x-auto ${className}`}>
+      {children}
+    </div>
+  );
+}
+
 export function Table({ caption, head, children }: { caption: string; head: ReactNode; children: ReactNode }) {
   return (
-    <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+    <ScrollRegion label={caption} className="rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">{head}</thead>
         <tbody className="divide-y divide-rule">{children}</tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
 

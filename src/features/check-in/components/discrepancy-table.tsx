@@ -1,6 +1,7 @@
 import { SEX_WORDS } from "@shared/words";
 import type { CheckInDto } from "@shared/schemas/transfer";
 import { Badge } from "@/components/ui/feedback";
+import { ScrollRegion } from "@/components/ui/table";
 
 const columns = [
   ["expected", "Listed"],
@@ -22,7 +23,10 @@ export function DiscrepancyTable({ checkIn }: { checkIn: CheckInDto }) {
           <Badge tone="caution">What arrived differs from the manifest</Badge>
         )}
       </p>
-      <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+      <ScrollRegion
+        label="Arrivals compared with the manifest"
+        className="rounded-card border border-rule bg-paper-card shadow-card"
+      >
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Arrivals compared with the manifest</caption>
           <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
@@ -62,7 +66,7 @@ export function DiscrepancyTable({ checkIn }: { checkIn: CheckInDto }) {
             })}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

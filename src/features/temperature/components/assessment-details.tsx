@@ -5,6 +5,7 @@ import { Badge, Notice } from "@/components/ui/feedback";
 import { formatInstant } from "@shared/dates";
 import { formatTemp } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
+import { ScrollRegion } from "@/components/ui/table";
 
 type Tone = "ok" | "info" | "caution" | "block";
 /** An unknown forecast wears the colour of a block: it is never a kind of "ship". */
@@ -94,7 +95,7 @@ function aroundRange(report: TemperatureReport): { min: number; max: number } | 
 function BoxVerdicts({ report }: { report: TemperatureReport }) {
   const [system] = useUnitSystem();
   return (
-    <div className="relative overflow-x-auto">
+    <ScrollRegion label="Box by box">
       <table className="w-full text-left text-sm">
         <caption className="mb-1 text-left font-semibold">Box by box</caption>
         <thead>
@@ -132,6 +133,6 @@ function BoxVerdicts({ report }: { report: TemperatureReport }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

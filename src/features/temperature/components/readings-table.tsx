@@ -2,6 +2,7 @@ import { formatInstant } from "@shared/dates";
 import type { BoxReadingDto } from "@shared/temperature/report";
 import { formatTemp, tempUnit } from "@shared/units";
 import { useUnitSystem } from "@/lib/units-preference";
+import { ScrollRegion } from "@/components/ui/table";
 
 /** A difference of temperatures in the chosen unit, signed: "+4.2 °F", "−2.3 °C". */
 function differenceText(differenceF: number, system: "imperial" | "metric"): string {
@@ -19,7 +20,7 @@ export function ReadingsTable({ readings }: { readings: BoxReadingDto[] }) {
   if (readings.length === 0) return null;
   return (
     <div className="flex flex-col gap-1 text-sm">
-      <div className="overflow-x-auto">
+      <ScrollRegion label="Box temperatures read on the way">
         <table className="w-full text-left">
           <caption className="mb-1 text-left font-semibold">
             Box temperatures read on the way, against the model
@@ -48,7 +49,7 @@ export function ReadingsTable({ readings }: { readings: BoxReadingDto[] }) {
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       <p className="text-ink-faint">
         A reading outside the safe range raises an alert and e-mails both parties and the couriers. Readings never
         change the verdict: where the model and the box disagree, judge for yourselves.

@@ -7,6 +7,7 @@ import { Card, PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
 import { useUnitSystem } from "@/lib/units-preference";
 import { useModelAccuracy } from "../api/model-accuracy";
+import { ScrollRegion } from "@/components/ui/table";
 
 /** A temperature difference in the chosen unit: °F differences are 1.8 times °C differences. */
 function difference(differenceF: number, system: UnitSystem, signed = false): string {
@@ -79,7 +80,7 @@ function AccuracyBody({ data }: { data: ModelAccuracyDto }) {
         </dl>
       </Card>
       <Card title="Transfer by transfer">
-        <div className="overflow-x-auto">
+        <ScrollRegion label="Readings against the model, transfer by transfer">
           <table className="w-full text-left text-sm">
             <thead>
               <tr className="border-b border-rule text-ink-soft">
@@ -105,7 +106,7 @@ function AccuracyBody({ data }: { data: ModelAccuracyDto }) {
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       </Card>
       <p className="text-sm text-ink-faint lg:col-span-2">
         The prediction compared is the last forecast check kept before the pickup, followed from the pickup itself. A

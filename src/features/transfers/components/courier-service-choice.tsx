@@ -80,7 +80,7 @@ function ChooseServiceForm({ transfer, onDone }: { transfer: TransferDto; onDone
       >
         <div className="min-w-0 grow sm:max-w-md">
           <SelectField
-            label="Courier service"
+            label="Services you can ask"
             options={options}
             value={picked}
             onChange={(e) => setPicked(e.target.value)}

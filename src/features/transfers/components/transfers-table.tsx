@@ -6,6 +6,7 @@ import type { TransferSummaryDto } from "@shared/schemas/transfer";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { paths } from "@/config/paths";
 import { formatInstant } from "@shared/dates";
+import { ScrollRegion } from "@/components/ui/table";
 
 export type SortKey = TransferSortKey;
 
@@ -104,7 +105,7 @@ export function TransfersTable({ transfers, sort, dir, onSort }: Props) {
   });
 
   return (
-    <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+    <ScrollRegion label="Transfers" className="rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">
           Transfers, sorted by {TRANSFER_SORT_WORDS[sort]} ({dir === "asc" ? "ascending" : "descending"})
@@ -154,6 +155,6 @@ export function TransfersTable({ transfers, sort, dir, onSort }: Props) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
