@@ -1,7 +1,15 @@
 import { booleanPointInPolygon } from "@turf/boolean-point-in-polygon";
 import { describe, expect, it } from "vitest";
 import { placeFromZip } from "@shared/temperature/places";
-import { ATLAS_SIZE, MIN_VIEW_WIDTH, fitView, project, stateFeatures, stateOutlines } from "./map-geometry";
+import {
+  ATLAS_SIZE,
+  MIN_VIEW_WIDTH,
+  fitView,
+  project,
+  spreadStacked,
+  stateFeatures,
+  stateOutlines,
+} from "./map-geometry";
 
 const stateNamed = (name: string) => {
   const state = stateFeatures.find((f) => f.properties.name === name);
@@ -86,5 +94,26 @@ describe("fitView", () => {
     expect(view.width).toBeLessThanOrEqual(ATLAS_SIZE.width);
     expect(view.x).toBeLessThanOrEqual(Math.min(a[0], b[0]));
     expect(view.x + view.width).toBeGreaterThanOrEqual(Math.max(a[0], b[0]));
+  });
+});
+
+describe("spreadStacked", () => {
+  it("leaves marks on their own spot and lays marks sharing a spot out below it, in order", () => {
+    const points: [number, number][] = [
+      [100, 100],
+      [200, 200],
+      [200, 200],
+      [200, 200],
+      [300, 100],
+    ];
+    const spread = spreadStacked(points, 10, 2);
+    expect(spread[0]).toEqual([100, 100]);
+    expect(spread[4]).toEqual([300, 100]);
+    // three hours at one place: two in the first row, one centred in the second, all below the place
+    expect(spread[1]).toEqual([195, 218]);
+    expect(spread[2]).toEqual([205, 218]);
+    expect(spread[3]).toEqual([200, 228]);
+    const distinct = new Set(spread.map((p) => p.join(",")));
+    expect(distinct.size).toBe(points.length);
   });
 });

@@ -66,3 +66,28 @@ export function fitView(points: readonly [number, number][], paddingShare = 0.15
     height,
   };
 }
+
+/**
+ * Marks that fall on one spot (the hours the box waits at a place) laid out in a block of rows
+ * just below it, in time order, so each hour stays visible and countable; a lone mark stays put.
+ * `spacing` is the distance between marks in SVG units.
+ */
+export function spreadStacked(points: readonly [number, number][], spacing: number, perRow = 6): [number, number][] {
+  const groups = new Map<string, number[]>();
+  points.forEach(([x, y], index) => {
+    const key = `${Math.round(x / (spacing / 4))},${Math.round(y / (spacing / 4))}`;
+    groups.set(key, [...(groups.get(key) ?? []), index]);
+  });
+  const spread = points.map((p): [number, number] => [p[0], p[1]]);
+  for (const members of groups.values()) {
+    if (members.length < 2) continue;
+    const [x0, y0] = points[members[0]!]!;
+    members.forEach((index, k) => {
+      const row = Math.floor(k / perRow);
+      const inRow = Math.min(perRow, members.length - row * perRow);
+      const col = k % perRow;
+      spread[index] = [x0 + (col - (inRow - 1) / 2) * spacing, y0 + spacing * 1.8 + row * spacing];
+    });
+  }
+  return spread;
+}

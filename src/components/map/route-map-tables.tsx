@@ -49,7 +49,8 @@ export function RouteMapTables({
         </table>
       </div>
       {hours.length > 0 ? (
-        <div className="max-h-80 overflow-auto">
+        // A scrolling region a keyboard can reach (WCAG 2.1.1): it takes focus and is named.
+        <div className="max-h-80 overflow-auto" tabIndex={0} role="region" aria-label="Hour by hour, scrolls">
           <table className="w-full text-left">
             <caption className="mb-1 text-left font-semibold">Where the box is, hour by hour</caption>
             <thead>

@@ -1,10 +1,10 @@
-import { useId, useState } from "react";
+import { useEffect, useId, useRef, useState } from "react";
 import { airBand } from "@shared/temperature/air-band";
 import { formatInstant } from "@shared/dates";
 import { formatTemp } from "@shared/units";
 import { AIR_BAND_WORDS } from "@shared/words";
 import { useUnitSystem } from "@/lib/units-preference";
-import { ATLAS_SIZE, fitView, project, stateOutlines, type ViewBox } from "./map-geometry";
+import { ATLAS_SIZE, fitView, project, spreadStacked, stateOutlines, type ViewBox } from "./map-geometry";
 import { MapLegend } from "./map-legend";
 import { AIR_BAND_MARKS, markPath } from "./map-marks";
 import { mapSummary } from "./map-summary";
@@ -26,6 +26,22 @@ const share = (xy: [number, number], view: ViewBox) => ({
   top: `${((xy[1] - view.y) / view.height) * 100}%`,
 });
 
+/** The drawn width of an element in CSS pixels, followed as it changes (600 until measured). */
+function useDrawnWidth() {
+  const element = useRef<HTMLDivElement>(null);
+  const [widthPx, setWidthPx] = useState(600);
+  useEffect(() => {
+    const target = element.current;
+    if (!target || typeof ResizeObserver === "undefined") return;
+    const observer = new ResizeObserver(([entry]) => {
+      if (entry && entry.contentRect.width > 0) setWidthPx(entry.contentRect.width);
+    });
+    observer.observe(target);
+    return () => observer.disconnect();
+  }, []);
+  return { element, widthPx };
+}
+
 const stopLabel = (stop: MapStop, index: number) => `Stop ${index + 1}, ${stop.name}: ${stop.place}, ${stop.when}`;
 
 /**
@@ -38,18 +54,28 @@ export function RouteMap(props: RouteMapProps) {
   const [system] = useUnitSystem();
   const [tableShown, setTableShown] = useState(false);
   const [selected, setSelected] = useState<number | null>(null);
+  const { element, widthPx } = useDrawnWidth();
   const summaryId = useId();
   const tableId = useId();
   const lineXY = placed(line).map((p) => p.xy);
   const stopsXY = placed(stops.map((stop, index) => ({ ...stop, index })));
-  const hoursXY = placed(hours);
-  const view = fitView([...lineXY, ...stopsXY.map((s) => s.xy), ...hoursXY.map((h) => h.xy)]);
-  const unit = view.width / 600;
+  const onMap = placed(hours);
+  const places = [...lineXY, ...stopsXY.map((s) => s.xy), ...onMap.map((h) => h.xy)];
+  // Hours spent at one place are laid out below it, so each stays visible; the view takes them in.
+  const spread = spreadStacked(
+    onMap.map((h) => h.xy),
+    (12 * fitView(places).width) / widthPx,
+  );
+  const hoursXY = onMap.map((h, i) => ({ item: h.item, xy: spread[i]! }));
+  const view = fitView([...places, ...spread]);
+  // SVG units per CSS pixel: marks and labels keep their size on a phone and a wide screen.
+  const unit = view.width / widthPx;
   const ends = [stopsXY[0], stopsXY.length > 1 ? stopsXY.at(-1) : undefined].flatMap((s) => (s ? [s] : []));
   const chosen = selected === null ? null : stops[selected];
   return (
-    <figure className="flex flex-col gap-3">
+    <figure className="flex min-w-0 max-w-full flex-col gap-3">
       <div
+        ref={element}
         className="relative w-full overflow-hidden rounded-md border border-rule"
         style={{ aspectRatio: `${ATLAS_SIZE.width} / ${ATLAS_SIZE.height}`, background: LAND.water }}
       >
@@ -81,7 +107,7 @@ export function RouteMap(props: RouteMapProps) {
                 return (
                   <path
                     key={hour.atMs}
-                    d={markPath(band, xy[0], xy[1], 5 * unit)}
+                    d={markPath(band, xy[0], xy[1], 4.5 * unit)}
                     fill={AIR_BAND_MARKS[band].fill}
                     stroke={LAND.ink}
                     strokeWidth={1}
@@ -95,9 +121,10 @@ export function RouteMap(props: RouteMapProps) {
           {ends.map(({ item: stop, xy }) => (
             <text
               key={stop.index}
-              x={xy[0] + 14 * unit}
+              textAnchor={xy[0] > view.x + view.width * 0.6 ? "end" : "start"}
+              x={xy[0] + (xy[0] > view.x + view.width * 0.6 ? -14 : 14) * unit}
               y={xy[1] - 12 * unit}
-              fontSize={14 * unit}
+              fontSize={13 * unit}
               fill={LAND.ink}
               stroke="#ffffff"
               strokeWidth={3 * unit}

@@ -52,7 +52,7 @@ export function tripMapProps(
 export function TripMap({ report, title = "the trip" }: { report: TemperatureReport; title?: string }) {
   if (!report.route || report.route.stops.length < 2) return null;
   return (
-    <div className="flex flex-col gap-2">
+    <div className="flex min-w-0 flex-col gap-2">
       <h3 className="font-semibold">Map of the way</h3>
       <LazyRouteMap {...tripMapProps(report, title)} />
     </div>
