@@ -3,6 +3,7 @@ import { EARTH_MEAN_RADIUS_KM, haversineKm, type LatLon } from "../temperature/g
 import {
   DEFAULT_RUN_PLAN_OPTIONS,
   firstPrecedenceBreak,
+  insertIntoOrder,
   orderStops,
   precedenceHolds,
   roadKm,
@@ -38,7 +39,8 @@ function randomRequests(random: () => number, count: number): RunRequest[] {
 
 function lengthOf(stops: readonly OrderedStop[], requests: readonly RunRequest[]): number {
   const byId = new Map(requests.map((r) => [r.transferId, r]));
-  const at = (s: OrderedStop) => (s.kind === "pickup" ? byId.get(s.transferId)!.pickup : byId.get(s.transferId)!.dropoff);
+  const at = (s: OrderedStop) =>
+    s.kind === "pickup" ? byId.get(s.transferId)!.pickup : byId.get(s.transferId)!.dropoff;
   let km = 0;
   for (let i = 1; i < stops.length; i++) km += roadKm(at(stops[i - 1]!), at(stops[i]!));
   return km;
@@ -213,5 +215,21 @@ describe("stop order", () => {
         { kind: "dropoff", transferId: "a" },
       ]),
     ).toBeNull();
+  });
+});
+
+describe("adding transfers to a run the driver ordered", () => {
+  it("keeps the driver's order and puts the new pickup and drop-off where they add least", () => {
+    const requests: RunRequest[] = [
+      { transferId: "a", pickup: east(0), dropoff: east(4) },
+      { transferId: "b", pickup: east(1), dropoff: east(3) },
+    ];
+    const current: OrderedStop[] = [
+      { kind: "pickup", transferId: "a" },
+      { kind: "dropoff", transferId: "a" },
+    ];
+    const stops = insertIntoOrder(current, requests);
+    expect(stops.map((s) => `${s.kind}:${s.transferId}`)).toEqual(["pickup:a", "pickup:b", "dropoff:b", "dropoff:a"]);
+    expect(precedenceHolds(stops)).toBe(true);
   });
 });

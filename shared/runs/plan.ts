@@ -132,8 +132,6 @@ export function firstPrecedenceBreak(stops: readonly OrderedStop[]): string | nu
   return [...picked].find((id) => !dropped.has(id)) ?? null;
 }
 
-type Node = { kind: RunStopKind; request: number };
-
 /**
  * Orders the stops of a run: cheapest insertion of pickup-and-drop-off pairs, then pair
  * relocation, or-opt and 2-opt moves that keep every pickup before its drop-off, until none
@@ -162,6 +160,33 @@ export function orderStops(
     const improved = relocatePairs(route, n, d) || orOpt(route, d) || twoOpt(route, d);
     if (!improved) break;
     route = improved;
+  }
+  return route.map((node) => ({
+    kind: node % 2 === 0 ? "pickup" : "dropoff",
+    transferId: requests[node >> 1]!.transferId,
+  }));
+}
+
+/**
+ * Puts transfers that are not yet on a run into its current order, each pickup and drop-off where
+ * they add the least distance (cheapest insertion), leaving the stops already there in the order
+ * the driver chose. `requests` lists every transfer, old and new.
+ */
+export function insertIntoOrder(
+  current: readonly OrderedStop[],
+  requests: readonly RunRequest[],
+  options: Pick<RunPlanOptions, "circuityFactor"> = DEFAULT_RUN_PLAN_OPTIONS,
+): OrderedStop[] {
+  const index = new Map(requests.map((r, i) => [r.transferId, i]));
+  const positions = requests.flatMap((r) => [r.pickup, r.dropoff]);
+  const d = (a: number, b: number) => roadKm(positions[a]!, positions[b]!, options.circuityFactor);
+  let route = current.map((stop) => 2 * index.get(stop.transferId)! + (stop.kind === "pickup" ? 0 : 1));
+  const placed = new Set(current.map((stop) => stop.transferId));
+  for (const request of requests) {
+    if (placed.has(request.transferId)) continue;
+    const r = index.get(request.transferId)!;
+    const at = bestPairInsertion(route, 2 * r, 2 * r + 1, d);
+    route = insertPair(route, 2 * r, 2 * r + 1, at.i, at.j);
   }
   return route.map((node) => ({
     kind: node % 2 === 0 ? "pickup" : "dropoff",
@@ -294,8 +319,7 @@ function twoOpt(route: readonly number[], d: (a: number, b: number) => number): 
       const b = route[i]!;
       const c = route[k]!;
       const e = route[k + 1];
-      const delta =
-        (a === undefined ? 0 : d(a, c) - d(a, b)) + (e === undefined ? 0 : d(b, e) - d(c, e));
+      const delta = (a === undefined ? 0 : d(a, c) - d(a, b)) + (e === undefined ? 0 : d(b, e) - d(c, e));
       if (delta >= -1e-6) continue;
       // A reversed stretch must not hold both stops of one request.
       const inside = new Set<number>();
