@@ -13,6 +13,7 @@ import type { Organization } from "../../server/db/entities/organization.entity"
 import type { User } from "../../server/db/entities/user.entity";
 import { buildOrganization, buildTransfer, buildUser } from "../factories";
 import { createTestApp, signIn, type Client, type TestApp } from "../support/app";
+import { extractPageTexts } from "../../server/pdf/pdf-test-support";
 
 let t: TestApp;
 const em = () => t.orm.em.fork();
@@ -274,6 +275,43 @@ describe("who may plan and see runs", () => {
     expect(again.status).toBe(409);
     expect(again.body.error.message).toContain(a.transfer.number);
     expect(await em().count(RunSchema, { courierOrganization: service.org.id })).toBe(1);
+  });
+});
+
+describe("the run sheet", () => {
+  it("prints the stops, the boxes and their contents, the states' paperwork or NOT REVIEWED, for the service only", async () => {
+    const service = await courierService();
+    const a = await carried(service, "knoxville", "littleRock");
+    const created = await service.boss.post("/api/runs", {
+      departAt: DEPART,
+      climateControlled: true,
+      vehicleRangeF: { min: 68, max: 78 },
+      transferIds: [a.transfer.id],
+    });
+    expect(created.status, JSON.stringify(created.body)).toBe(201);
+    const path = `/api/runs/${created.body.id}/sheet.pdf`;
+    const res = await service.boss
+      .get(path)
+      .buffer(true)
+      .parse((response, done) => {
+        const chunks: Buffer[] = [];
+        response.on("data", (chunk: Buffer) => chunks.push(chunk));
+        response.on("end", () => done(null, Buffer.concat(chunks)));
+      });
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toBe("application/pdf");
+    const text = (await extractPageTexts(new Uint8Array(res.body as Buffer))).join(" ");
+    expect(text).toContain(a.transfer.number);
+    expect(text).toContain("418 Quarry Hollow Road, Knoxville, TN 37917");
+    expect(text).toContain("3 Pinnacle Court, Little Rock, AR 72201");
+    expect(text).toMatch(/Load Box A, seal SEAL-1: Pantherophis guttatus × 2 \(not venomous\)/);
+    // Tennessee to Arkansas; the seed reviews no state, so every one says so (D25).
+    expect(text).toMatch(/Tennessee \(TN\) • NOT REVIEWED/);
+    expect(text).toMatch(/Arkansas \(AR\) • NOT REVIEWED/);
+    expect(text).toContain("Van temperature log");
+    expect((await (await signIn(t.app, service.courier.email)).get(path)).status).toBe(200);
+    expect((await (await courierService()).boss.get(path)).status).toBe(404);
+    expect((await (await signIn(t.app, a.receiver.email)).get(path)).status).toBe(404);
   });
 });
 

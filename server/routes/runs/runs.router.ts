@@ -8,6 +8,9 @@ import { presentRun } from "../../presenters/run.presenter";
 import { readRunView } from "../../services/runs/read-run";
 import { createRun, loadRunForActor, updateRun } from "../../services/runs/runs";
 import { recheckRunTransfers } from "../../services/runs/recheck-run";
+import { renderRunSheetPdf } from "../../pdf/run-sheet.pdf";
+import { runSheetInput } from "../../services/runs/run-sheet";
+import { SANDBOX_CSP } from "../../http/security";
 
 const idParam = (req: Request) => pathId(req, "id", "run");
 
@@ -58,6 +61,21 @@ export function runsRouter(): Router {
       temperature,
     };
     res.json(answer);
+  });
+
+  router.get("/:id/sheet.pdf", async (req, res) => {
+    const id = idParam(req);
+    const em = req.em.fork();
+    const { run } = await loadRunForActor(em, currentUser(req), id);
+    const bytes = await renderRunSheetPdf(await runSheetInput(em, run, new Date()));
+    res.setHeader("Content-Type", "application/pdf");
+    res.setHeader(
+      "Content-Disposition",
+      `${req.query.download === "1" ? "attachment" : "inline"}; filename="run-${run.departAt.toISOString().slice(0, 10)}.pdf"`,
+    );
+    res.setHeader("X-Content-Type-Options", "nosniff");
+    res.setHeader("Content-Security-Policy", SANDBOX_CSP);
+    res.send(Buffer.from(bytes));
   });
 
   return router;
