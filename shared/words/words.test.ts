@@ -54,12 +54,15 @@ import { AIR_BANDS } from "../temperature/air-band";
 import { DEFAULT_PROFILES } from "../temperature/profiles";
 import { ROUTE_STOP_KINDS } from "../temperature/route";
 import * as words from "./index";
+import { RUN_REST_REASONS, RUN_STOP_KINDS } from "../schemas/run";
 
 const effectKinds = ruleEffectSchema.options.map((option) => option.shape.kind.value);
 
 /** Each enum of the product with every map that gives it words. */
 const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]][] = [
   ["transfer status", TRANSFER_STATUSES, [words.TRANSFER_STATUS_WORDS]],
+  ["run stop kind", RUN_STOP_KINDS, [words.RUN_STOP_KIND_WORDS]],
+  ["run rest reason", RUN_REST_REASONS, [words.RUN_REST_WORDS]],
   ["alert kind", ALERT_KINDS, [words.ALERT_KIND_WORDS]],
   ["transport mode", TRANSPORT_MODES, [words.TRANSPORT_MODE_WORDS]],
   ["purpose", PURPOSES, [words.PURPOSE_WORDS]],
