@@ -153,3 +153,22 @@ export type RunNotifiedDto = {
   told: { party: "sender" | "receiver"; name: string }[];
 };
 export type RunPatchAnswerDto = RunDto & { notified: RunNotifiedDto[] };
+
+/**
+ * `GET /api/runs` (added on the client's side of issue 16, for the runs list): the courier
+ * service's runs, latest departure first; an admin sees every service's.
+ */
+export type RunSummaryDto = {
+  id: string;
+  courierOrganization: { id: string; name: string };
+  departAt: string;
+  finishAt: string;
+  drivingH: number;
+  roadKm: number;
+  climateControlled: boolean;
+  stopCount: number;
+  /** The transfers on the run, in the order of their pickups. */
+  transferNumbers: string[];
+  drivers: string[];
+};
+export type RunListDto = { runs: RunSummaryDto[] };

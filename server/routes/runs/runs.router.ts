@@ -1,10 +1,11 @@
 import { Router, type Request } from "express";
-import { runInputSchema, runPatchSchema, type RunPatchAnswerDto } from "@shared/schemas/run";
+import { runInputSchema, runPatchSchema, type RunListDto, type RunPatchAnswerDto } from "@shared/schemas/run";
 import { forbidden } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { parse, pathId } from "../../http/validate";
-import { mayPlanRuns } from "../../policies/run.policy";
+import { mayPlanRuns, runListScope } from "../../policies/run.policy";
 import { presentRun } from "../../presenters/run.presenter";
+import { listRuns } from "../../services/runs/list-runs";
 import { readRunView } from "../../services/runs/read-run";
 import { createRun, loadRunForActor, updateRun } from "../../services/runs/runs";
 import { recheckRunTransfers } from "../../services/runs/recheck-run";
@@ -34,6 +35,13 @@ export function runsRouter(): Router {
     await recheckRunTransfers(req.ctx, changedTransferIds);
     req.ctx.kickOutbox();
     res.status(201).json(await presentForActor(req, runId));
+  });
+
+  router.get("/", async (req, res) => {
+    const scope = runListScope(currentUser(req));
+    if (!scope) throw forbidden("Runs belong to courier services: only their managers and couriers read them.");
+    const body: RunListDto = { runs: await listRuns(req.em.fork(), scope.organizationId) };
+    res.json(body);
   });
 
   router.get("/:id", async (req, res) => {
