@@ -78,4 +78,37 @@ describe("a map of the way", () => {
       await context.close();
     }
   });
+
+  it("on a courier service's run: planned by its manager, with the stops, the rests as guidance and the sheet", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, "dispatch@demo.hatchway.test");
+    await page.waitForURL((u) => u.pathname === "/");
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Runs" }).click();
+    await page.getByRole("link", { name: "Plan a run" }).click();
+    const leaves = new Date(Date.now() + 3 * 86_400_000);
+    const pad = (n: number) => String(n).padStart(2, "0");
+    await page
+      .getByLabel("Leaves")
+      .fill(`${leaves.getFullYear()}-${pad(leaves.getMonth() + 1)}-${pad(leaves.getDate())}T08:00`);
+    const transfers = page.getByRole("group", { name: "Transfers on the run" }).getByRole("checkbox");
+    await transfers.first().waitFor();
+    await transfers.first().check();
+    await page.getByRole("button", { name: "Plan the run" }).click();
+    await page.waitForURL((u) => /^\/runs\/[0-9a-f-]{36}$/.test(u.pathname));
+    const stops = page.getByRole("region", { name: "Stops in order" });
+    await stops.getByText(/^1\. Pick up/).waitFor();
+    expect(await stops.getByText(/^2\. Drop off/).count()).toBe(1);
+    // 49 CFR 395.3 as planning guidance; the rule binds vehicles over 10,000 lb (49 CFR 390.5) [published]
+    expect(await page.getByText(/10,000 lb/).count()).toBeGreaterThan(0);
+    expect(await page.getByRole("link", { name: "Run sheet (PDF)" }).getAttribute("href")).toMatch(/\/sheet\.pdf$/);
+    const picture = page.getByRole("img", { name: /^Map of the run from / });
+    await picture.waitFor({ timeout: 20_000 });
+    await page.locator("figure").filter({ has: picture }).getByRole("button", { name: "Show as table" }).click();
+    expect(await page.getByRole("table", { name: "Stops of the run" }).getByRole("row").count()).toBeGreaterThan(2);
+    await expectAccessible(page);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, "run-page-desktop.png"), fullPage: true });
+    await page.setViewportSize(PHONE.viewport);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, "run-page-phone.png"), fullPage: true });
+    await context.close();
+  });
 });

@@ -3,6 +3,7 @@ import { Seeder } from "@mikro-orm/seeder";
 import { buildOrganization, buildUser } from "../../../tests/factories";
 import { seedDemoTransfers } from "./demo-transfers";
 import { seedDemoDocuments } from "./demo-documents";
+import { TransferSchema } from "../entities/transfer.entity";
 import type { AppLinks } from "../../mail/links";
 
 /**
@@ -112,5 +113,7 @@ export class DemoSeeder extends Seeder {
     });
     await seedDemoDocuments(em, { breeder, centre, rescue });
     await seedDemoTransfers(em, { sender, receiver, other, courier, relay }, this.links);
+    // Nightjar's drivers carry every road transfer of the demo: its manager can put them on a run (issue 16).
+    await em.nativeUpdate(TransferSchema, { mode: { $ne: "overnight_air" } }, { courierService: couriers.id });
   }
 }
