@@ -5,6 +5,8 @@ export type MapStop = LatLon & {
   /** What the stop is ("Start", "Night's rest", "Pickup"). */
   name: string;
   place: string;
+  /** A short name for the label beside the first and last stop ("Knoxville, TN"); `place` when absent. */
+  shortPlace?: string;
   /** When, as a person reads it ("Mon, Jun 1, 2026, 06:00 CDT" or a span). */
   when: string;
 };

@@ -73,7 +73,8 @@ export function RouteMap(props: RouteMapProps) {
   const ends = [stopsXY[0], stopsXY.length > 1 ? stopsXY.at(-1) : undefined].flatMap((s) => (s ? [s] : []));
   const chosen = selected === null ? null : stops[selected];
   return (
-    <figure className="flex min-w-0 max-w-full flex-col gap-3">
+    // contain: inline-size: the table below never widens the page (a 390 px phone scrolls it instead).
+    <figure className="flex min-w-0 max-w-full flex-col gap-3 [contain:inline-size]">
       <div
         ref={element}
         className="relative w-full overflow-hidden rounded-md border border-rule"
@@ -131,7 +132,7 @@ export function RouteMap(props: RouteMapProps) {
               paintOrder="stroke"
               fontWeight={600}
             >
-              {stop.place}
+              {stop.shortPlace ?? stop.place}
             </text>
           ))}
         </svg>

@@ -30,7 +30,11 @@ export function runMapProps(run: Pick<RunDto, "stops" | "rests">): RouteMapProps
       lon: stop.place.lon,
       name: `${RUN_STOP_KIND_WORDS[stop.kind]} ${stop.transferNumber}`,
       place: stop.place.label,
-      when: stop.at === stop.leaveAt ? formatInstant(stop.at) : formatTimeSpan(stop.at, stop.leaveAt),
+      shortPlace: `${stop.place.city}, ${stop.place.state}`,
+      when:
+        stop.at === stop.leaveAt
+          ? formatInstant(stop.at, stop.place.timeZone)
+          : formatTimeSpan(stop.at, stop.leaveAt, stop.place.timeZone),
     },
   }));
   const rests = run.rests.map((rest) => ({

@@ -42,7 +42,7 @@ export function RunPageRoute() {
   return (
     <div className="mx-auto grid max-w-4xl gap-5">
       <PageHeader
-        title={`Run leaving ${formatInstant(data.departAt)}`}
+        title={`Run leaving ${formatInstant(data.departAt, data.stops[0]?.place.timeZone)}`}
         documentTitle="Run"
         eyebrow={data.courierOrganization.name}
         actions={
@@ -57,7 +57,7 @@ export function RunPageRoute() {
           {data.drivingH.toFixed(1)} h, {formatDistance(data.roadKm, system)} by road (estimated)
         </dd>
         <dt className="text-ink-soft">Done</dt>
-        <dd>{formatInstant(data.finishAt)}</dd>
+        <dd>{formatInstant(data.finishAt, data.stops.at(-1)?.place.timeZone)}</dd>
         <dt className="text-ink-soft">Van</dt>
         <dd>{van}</dd>
         <dt className="text-ink-soft">Drivers</dt>
