@@ -136,6 +136,10 @@ describe("planning a run", () => {
     expect(got.status).toBe(200);
     expect(got.body).toEqual(run);
 
+    // The transfer API names the run.
+    const asSender = await signIn(t.app, a.sender.email);
+    expect((await asSender.get(`/api/transfers/${a.transfer.id}`)).body.transfer.runId).toBe(run.id);
+
     // Each transfer takes its pickup and drop-off times and the van from the run, with history.
     for (const id of ids) {
       const row = await transferRow(id);
