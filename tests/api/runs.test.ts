@@ -395,6 +395,32 @@ describe("changing a run", () => {
     expect(other.status).toBe(201);
   });
 
+  it("keeps a picked-up transfer on the run: later changes move only its arrival; bad additions are named by their place", async () => {
+    const service = await courierService();
+    const { a, b, path } = await planned(service);
+    const before = await transferRow(a.transfer.id);
+    const bBefore = await transferRow(b.transfer.id);
+    // The pickup was recorded (the handoff service moves the status; here the state is set directly).
+    await em().nativeUpdate(TransferSchema, { id: a.transfer.id }, { status: "in_transit" });
+    const later = await service.boss.patch(path, {
+      departAt: new Date(Date.parse(DEPART) + 3 * 3_600_000).toISOString(),
+    });
+    expect(later.status, JSON.stringify(later.body)).toBe(200);
+    const after = await transferRow(a.transfer.id);
+    expect(after.plannedDepartureAt.toISOString()).toBe(before.plannedDepartureAt.toISOString());
+    expect(after.expectedArrivalAt.getTime() - before.expectedArrivalAt.getTime()).toBe(3 * 3_600_000);
+    // The transfer not yet picked up moves both ways.
+    expect((await transferRow(b.transfer.id)).plannedDepartureAt.getTime() - bBefore.plannedDepartureAt.getTime()).toBe(
+      3 * 3_600_000,
+    );
+    const c = await carried(service, "memphis", "littleRock");
+    const air = await buildTransfer(em(), { status: "ready", mode: "overnight_air", couriers: [service.courier] });
+    await em().nativeUpdate(TransferSchema, { id: air.transfer.id }, { courierService: service.org.id });
+    const refused = await service.boss.patch(path, { addTransferIds: [c.transfer.id, air.transfer.id] });
+    expect([refused.status, refused.body.error.field]).toEqual([400, "addTransferIds.1"]);
+    expect(refused.body.error.message).toContain(air.transfer.number);
+  });
+
   it("tells the sender and the receiver when their arrival moves by more than 2 hours", async () => {
     const service = await courierService();
     const { a, b, run, path } = await planned(service);
