@@ -153,3 +153,15 @@ export type RunNotifiedDto = {
   told: { party: "sender" | "receiver"; name: string }[];
 };
 export type RunPatchAnswerDto = RunDto & { notified: RunNotifiedDto[] };
+
+/** `GET /api/runs`: the caller's courier service's runs, soonest departure first. */
+export type RunSummaryDto = {
+  id: string;
+  departAt: string;
+  finishAt: string;
+  climateControlled: boolean;
+  stopCount: number;
+  transferIds: string[];
+  drivingH: number;
+  version: number;
+};

@@ -200,7 +200,11 @@ describe("who may plan and see runs", () => {
         .status,
     ).toBe(403);
 
+    // The service's people list its runs; another service's list is empty of them.
+    for (const client of [service.boss, courier])
+      expect((await client.get("/api/runs")).body.runs.map((r: { id: string }) => r.id)).toEqual([created.body.id]);
     const other = await courierService();
+    expect((await other.boss.get("/api/runs")).body.runs).toEqual([]);
     expect((await other.boss.get(path)).status).toBe(404);
     expect((await other.boss.patch(path, { departAt: DEPART })).status).toBe(404);
     const keeper = await signIn(t.app, a.sender.email);

@@ -5,7 +5,7 @@ import { currentUser, requireUser } from "../../http/guards";
 import { parse, pathId } from "../../http/validate";
 import { mayPlanRuns } from "../../policies/run.policy";
 import { presentRun } from "../../presenters/run.presenter";
-import { readRunView } from "../../services/runs/read-run";
+import { listRuns, readRunView } from "../../services/runs/read-run";
 import { createRun, loadRunForActor, updateRun } from "../../services/runs/runs";
 import { recheckRunTransfers } from "../../services/runs/recheck-run";
 import { renderRunSheetPdf } from "../../pdf/run-sheet.pdf";
@@ -25,6 +25,12 @@ async function presentForActor(req: Request, runId: string) {
 export function runsRouter(): Router {
   const router = Router();
   router.use(requireUser);
+
+  router.get("/", async (req, res) => {
+    const actor = currentUser(req);
+    const ownService = actor.organization?.kind === "courier_service" && !actor.disabled ? actor.organization.id : null;
+    res.json({ runs: await listRuns(req.em.fork(), ownService) });
+  });
 
   router.post("/", async (req, res) => {
     const actor = currentUser(req);
