@@ -369,6 +369,15 @@ describe("changing a run", () => {
     expect(moved.body.drivingH).toBeGreaterThan(run.drivingH);
     const row = await transferRow(a.transfer.id);
     expect(row.expectedArrivalAt.toISOString()).toBe(moved.body.stops[3].at);
+    // A set range on a van that is not climate-controlled is refused; changing the van is not.
+    const plain = await service.boss.patch(path, { climateControlled: false });
+    expect([plain.body.climateControlled, plain.body.vehicleRangeF]).toEqual([false, null]);
+    expect((await transferRow(a.transfer.id)).vehicle).toBe("unconditioned");
+    const ranged = await service.boss.patch(path, { vehicleRangeF: { min: 60, max: 70 } });
+    expect([ranged.status, ranged.body.error.field]).toEqual([400, "vehicleRangeF"]);
+    const cooled = await service.boss.patch(path, { climateControlled: true, vehicleRangeF: { min: 60, max: 70 } });
+    expect(cooled.body.vehicleRangeF).toEqual({ min: 60, max: 70 });
+    expect((await transferRow(a.transfer.id)).vehicleMinF).toBe(60);
     // A stale version is a 409.
     expect((await service.boss.patch(path, { stops: detour, version: run.version })).status).toBe(409);
   });

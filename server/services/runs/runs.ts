@@ -327,12 +327,14 @@ export async function updateRun({
       );
     if (input.departAt) run.departAt = new Date(input.departAt);
     if (input.climateControlled !== undefined) run.climateControlled = input.climateControlled;
-    if (input.vehicleRangeF !== undefined || input.climateControlled === false) {
-      const range = run.climateControlled ? (input.vehicleRangeF ?? null) : null;
-      if (input.vehicleRangeF !== undefined || !run.climateControlled) {
-        run.vehicleMinF = range?.min ?? null;
-        run.vehicleMaxF = range?.max ?? null;
-      }
+    if (input.vehicleRangeF != null && !run.climateControlled)
+      throw invalidField(
+        ["vehicleRangeF"],
+        "a set range goes with a climate-controlled van; say the van is climate-controlled or leave the range out",
+      );
+    if (!run.climateControlled || input.vehicleRangeF !== undefined) {
+      run.vehicleMinF = input.vehicleRangeF?.min ?? null;
+      run.vehicleMaxF = input.vehicleRangeF?.max ?? null;
     }
     if (input.driverIds) run.driverIds = await checkedDrivers(tx, actor, input.driverIds);
 
