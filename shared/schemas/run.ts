@@ -144,7 +144,7 @@ export type RunDto = {
   abilities: { edit: boolean };
 };
 
-/** `PATCH /api/runs/:id` adds who was told that their arrival moved by more than 2 h. */
+/** `PATCH /api/runs/:id` adds who was told that their arrival moved by more than 2 h, and the re-checks. */
 export type RunNotifiedDto = {
   transferId: string;
   transferNumber: string;
@@ -152,7 +152,9 @@ export type RunNotifiedDto = {
   arrivalMovedH: number;
   told: { party: "sender" | "receiver"; name: string }[];
 };
-export type RunPatchAnswerDto = RunDto & { notified: RunNotifiedDto[] };
+/** Each transfer on the run assessed again after the change; verdict null where the check failed. */
+export type RunRecheckDto = { transferId: string; verdict: string | null; adviceChanged: boolean };
+export type RunPatchAnswerDto = RunDto & { notified: RunNotifiedDto[]; temperature: RunRecheckDto[] };
 
 /** `GET /api/runs`: the caller's courier service's runs, soonest departure first. */
 export type RunSummaryDto = {

@@ -61,7 +61,7 @@ export function runsRouter(): Router {
     });
     const temperature = await recheckRunTransfers(req.ctx, changedTransferIds);
     req.ctx.kickOutbox();
-    const answer: RunPatchAnswerDto & { temperature: typeof temperature } = {
+    const answer: RunPatchAnswerDto = {
       ...(await presentForActor(req, id)),
       notified,
       temperature,
