@@ -29,16 +29,11 @@ export function runAbilities(role: RunViewerRole): { edit: boolean } {
   return { edit: role === "manager" };
 }
 
-/** Whose runs a caller lists: their courier service's (its manager and couriers), every service's for an admin; null: none. */
-export function runListScope(actor: Actor): { organizationId: string | null } | null {
-  if (actor.disabled) return null;
-  if (actor.role === "admin") return { organizationId: null };
-  if (actor.organization?.kind === "courier_service" && (actor.role === "manager" || actor.role === "courier"))
-    return { organizationId: actor.organization.id };
-  return null;
-}
-
-/** Whether a caller has runs to read: the people of a courier service, and admins. */
+/** Whether a caller has runs to read: the manager and couriers of a courier service (GET /api/runs answers theirs). */
 export function mayReadRuns(actor: Actor): boolean {
-  return runListScope(actor) !== null;
+  return (
+    !actor.disabled &&
+    actor.organization?.kind === "courier_service" &&
+    (actor.role === "manager" || actor.role === "courier")
+  );
 }

@@ -16,7 +16,7 @@ export function abilitiesOf(actor: Actor) {
     carryTransfers: isCourier(actor),
     manageOwnOrganization: actor.role === "manager" && actor.organization != null && !actor.disabled,
     /** A courier service's people read its runs; its manager plans them (issue 16). */
-    readRuns: mayReadRuns(actor) && actor.role !== "admin",
+    readRuns: mayReadRuns(actor),
     planRuns: mayPlanRuns(actor),
   };
 }

@@ -220,6 +220,7 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     cancelledReason: t.cancelled_reason,
     reconfirmationReason: t.reconfirmation_reason,
     loadedWithoutChecks: presentChecksSkipped(v.checksSkipped),
+    runId: v.runId ?? null,
     alerts: v.alerts.map(presentAlert),
     delivery,
     photos: abilities.readPhotos ? v.photos.map((p) => presentPhoto(t.id, p)) : [],

@@ -144,7 +144,7 @@ export type RunDto = {
   abilities: { edit: boolean };
 };
 
-/** `PATCH /api/runs/:id` adds who was told that their arrival moved by more than 2 h. */
+/** `PATCH /api/runs/:id` adds who was told that their arrival moved by more than 2 h, and the re-checks. */
 export type RunNotifiedDto = {
   transferId: string;
   transferNumber: string;
@@ -152,23 +152,18 @@ export type RunNotifiedDto = {
   arrivalMovedH: number;
   told: { party: "sender" | "receiver"; name: string }[];
 };
-export type RunPatchAnswerDto = RunDto & { notified: RunNotifiedDto[] };
+/** Each transfer on the run assessed again after the change; verdict null where the check failed. */
+export type RunRecheckDto = { transferId: string; verdict: string | null; adviceChanged: boolean };
+export type RunPatchAnswerDto = RunDto & { notified: RunNotifiedDto[]; temperature: RunRecheckDto[] };
 
-/**
- * `GET /api/runs` (added on the client's side of issue 16, for the runs list): the courier
- * service's runs, latest departure first; an admin sees every service's.
- */
+/** `GET /api/runs`: the caller's courier service's runs, soonest departure first. */
 export type RunSummaryDto = {
   id: string;
-  courierOrganization: { id: string; name: string };
   departAt: string;
   finishAt: string;
-  drivingH: number;
-  roadKm: number;
   climateControlled: boolean;
   stopCount: number;
-  /** The transfers on the run, in the order of their pickups. */
-  transferNumbers: string[];
-  drivers: string[];
+  transferIds: string[];
+  drivingH: number;
+  version: number;
 };
-export type RunListDto = { runs: RunSummaryDto[] };

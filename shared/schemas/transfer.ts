@@ -587,6 +587,8 @@ export type TransferDto = {
    * compliance and temperature checks (the custody log holds the same entry); null otherwise.
    */
   loadedWithoutChecks: LoadedWithoutChecksDto | null;
+  /** The courier's run that carries it (issue 16), null when it is on none. */
+  runId: string | null;
   /** Every alert raised on this transfer, oldest first; acknowledged ones stay. */
   alerts: AlertDto[];
   /** The delivery to the receiver, once recorded; null before. */

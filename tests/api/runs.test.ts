@@ -136,6 +136,10 @@ describe("planning a run", () => {
     expect(got.status).toBe(200);
     expect(got.body).toEqual(run);
 
+    // The transfer API names the run.
+    const asSender = await signIn(t.app, a.sender.email);
+    expect((await asSender.get(`/api/transfers/${a.transfer.id}`)).body.transfer.runId).toBe(run.id);
+
     // Each transfer takes its pickup and drop-off times and the van from the run, with history.
     for (const id of ids) {
       const row = await transferRow(id);
@@ -196,7 +200,11 @@ describe("who may plan and see runs", () => {
         .status,
     ).toBe(403);
 
+    // The service's people list its runs; another service's list is empty of them.
+    for (const client of [service.boss, courier])
+      expect((await client.get("/api/runs")).body.runs.map((r: { id: string }) => r.id)).toEqual([created.body.id]);
     const other = await courierService();
+    expect((await other.boss.get("/api/runs")).body.runs).toEqual([]);
     expect((await other.boss.get(path)).status).toBe(404);
     expect((await other.boss.patch(path, { departAt: DEPART })).status).toBe(404);
     const keeper = await signIn(t.app, a.sender.email);
@@ -361,6 +369,15 @@ describe("changing a run", () => {
     expect(moved.body.drivingH).toBeGreaterThan(run.drivingH);
     const row = await transferRow(a.transfer.id);
     expect(row.expectedArrivalAt.toISOString()).toBe(moved.body.stops[3].at);
+    // A set range on a van that is not climate-controlled is refused; changing the van is not.
+    const plain = await service.boss.patch(path, { climateControlled: false });
+    expect([plain.body.climateControlled, plain.body.vehicleRangeF]).toEqual([false, null]);
+    expect((await transferRow(a.transfer.id)).vehicle).toBe("unconditioned");
+    const ranged = await service.boss.patch(path, { vehicleRangeF: { min: 60, max: 70 } });
+    expect([ranged.status, ranged.body.error.field]).toEqual([400, "vehicleRangeF"]);
+    const cooled = await service.boss.patch(path, { climateControlled: true, vehicleRangeF: { min: 60, max: 70 } });
+    expect(cooled.body.vehicleRangeF).toEqual({ min: 60, max: 70 });
+    expect((await transferRow(a.transfer.id)).vehicleMinF).toBe(60);
     // A stale version is a 409.
     expect((await service.boss.patch(path, { stops: detour, version: run.version })).status).toBe(409);
   });
@@ -389,6 +406,32 @@ describe("changing a run", () => {
       transferIds: [a.transfer.id],
     });
     expect(other.status).toBe(201);
+  });
+
+  it("keeps a picked-up transfer on the run: later changes move only its arrival; bad additions are named by their place", async () => {
+    const service = await courierService();
+    const { a, b, path } = await planned(service);
+    const before = await transferRow(a.transfer.id);
+    const bBefore = await transferRow(b.transfer.id);
+    // The pickup was recorded (the handoff service moves the status; here the state is set directly).
+    await em().nativeUpdate(TransferSchema, { id: a.transfer.id }, { status: "in_transit" });
+    const later = await service.boss.patch(path, {
+      departAt: new Date(Date.parse(DEPART) + 3 * 3_600_000).toISOString(),
+    });
+    expect(later.status, JSON.stringify(later.body)).toBe(200);
+    const after = await transferRow(a.transfer.id);
+    expect(after.plannedDepartureAt.toISOString()).toBe(before.plannedDepartureAt.toISOString());
+    expect(after.expectedArrivalAt.getTime() - before.expectedArrivalAt.getTime()).toBe(3 * 3_600_000);
+    // The transfer not yet picked up moves both ways.
+    expect((await transferRow(b.transfer.id)).plannedDepartureAt.getTime() - bBefore.plannedDepartureAt.getTime()).toBe(
+      3 * 3_600_000,
+    );
+    const c = await carried(service, "memphis", "littleRock");
+    const air = await buildTransfer(em(), { status: "ready", mode: "overnight_air", couriers: [service.courier] });
+    await em().nativeUpdate(TransferSchema, { id: air.transfer.id }, { courierService: service.org.id });
+    const refused = await service.boss.patch(path, { addTransferIds: [c.transfer.id, air.transfer.id] });
+    expect([refused.status, refused.body.error.field]).toEqual([400, "addTransferIds.1"]);
+    expect(refused.body.error.message).toContain(air.transfer.number);
   });
 
   it("tells the sender and the receiver when their arrival moves by more than 2 hours", async () => {

@@ -1,12 +1,11 @@
 import { Router, type Request } from "express";
-import { runInputSchema, runPatchSchema, type RunListDto, type RunPatchAnswerDto } from "@shared/schemas/run";
+import { runInputSchema, runPatchSchema, type RunPatchAnswerDto } from "@shared/schemas/run";
 import { forbidden } from "../../http/errors";
 import { currentUser, requireUser } from "../../http/guards";
 import { parse, pathId } from "../../http/validate";
-import { mayPlanRuns, runListScope } from "../../policies/run.policy";
+import { mayPlanRuns } from "../../policies/run.policy";
 import { presentRun } from "../../presenters/run.presenter";
-import { listRuns } from "../../services/runs/list-runs";
-import { readRunView } from "../../services/runs/read-run";
+import { listRuns, readRunView } from "../../services/runs/read-run";
 import { createRun, loadRunForActor, updateRun } from "../../services/runs/runs";
 import { recheckRunTransfers } from "../../services/runs/recheck-run";
 import { renderRunSheetPdf } from "../../pdf/run-sheet.pdf";
@@ -27,6 +26,12 @@ export function runsRouter(): Router {
   const router = Router();
   router.use(requireUser);
 
+  router.get("/", async (req, res) => {
+    const actor = currentUser(req);
+    const ownService = actor.organization?.kind === "courier_service" && !actor.disabled ? actor.organization.id : null;
+    res.json({ runs: await listRuns(req.em.fork(), ownService) });
+  });
+
   router.post("/", async (req, res) => {
     const actor = currentUser(req);
     if (!mayPlanRuns(actor)) throw forbidden("Only the manager of a courier service plans its runs.");
@@ -35,13 +40,6 @@ export function runsRouter(): Router {
     await recheckRunTransfers(req.ctx, changedTransferIds);
     req.ctx.kickOutbox();
     res.status(201).json(await presentForActor(req, runId));
-  });
-
-  router.get("/", async (req, res) => {
-    const scope = runListScope(currentUser(req));
-    if (!scope) throw forbidden("Runs belong to courier services: only their managers and couriers read them.");
-    const body: RunListDto = { runs: await listRuns(req.em.fork(), scope.organizationId) };
-    res.json(body);
   });
 
   router.get("/:id", async (req, res) => {
@@ -63,7 +61,7 @@ export function runsRouter(): Router {
     });
     const temperature = await recheckRunTransfers(req.ctx, changedTransferIds);
     req.ctx.kickOutbox();
-    const answer: RunPatchAnswerDto & { temperature: typeof temperature } = {
+    const answer: RunPatchAnswerDto = {
       ...(await presentForActor(req, id)),
       notified,
       temperature,

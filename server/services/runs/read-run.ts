@@ -1,5 +1,6 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { RunStopSchema, type Run, type RunStop } from "../../db/entities/run.entity";
+import type { RunSummaryDto } from "@shared/schemas/run";
+import { RunSchema, RunStopSchema, type Run, type RunStop } from "../../db/entities/run.entity";
 import { ContainerSchema, TransferSchema, type Transfer } from "../../db/entities/transfer.entity";
 import { OrganizationSchema, type Organization } from "../../db/entities/organization.entity";
 import { UserSchema, type User } from "../../db/entities/user.entity";
@@ -53,4 +54,32 @@ export async function readRunView(em: EntityManager, run: Run): Promise<RunView>
 export async function runBoxes(em: EntityManager, transferIds: readonly string[]) {
   if (transferIds.length === 0) return [];
   return em.find(ContainerSchema, { transfer: { $in: [...transferIds] } }, { orderBy: { position: "asc" } });
+}
+
+/**
+ * The runs of the caller's courier service (its manager and couriers see them all), soonest
+ * departure first; nobody else has any.
+ */
+export async function listRuns(em: EntityManager, organizationId: string | null): Promise<RunSummaryDto[]> {
+  if (!organizationId) return [];
+  const runs = await em.find(
+    RunSchema,
+    { courierOrganization: organizationId },
+    { orderBy: { departAt: "asc", id: "asc" }, limit: 200 },
+  );
+  if (runs.length === 0) return [];
+  const stops = await em.find(RunStopSchema, { run: { $in: runs.map((r) => r.id) } }, { orderBy: { position: "asc" } });
+  return runs.map((run) => {
+    const own = stops.filter((s) => s.run.id === run.id);
+    return {
+      id: run.id,
+      departAt: run.departAt.toISOString(),
+      finishAt: run.finishAt.toISOString(),
+      climateControlled: run.climateControlled,
+      stopCount: own.length,
+      transferIds: [...new Set(own.map((s) => s.transfer.id))],
+      drivingH: Math.round(run.drivingH * 100) / 100,
+      version: run.version,
+    };
+  });
 }

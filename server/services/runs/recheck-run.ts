@@ -1,4 +1,5 @@
 import { CHECK_MARK_WORDS } from "@shared/words";
+import type { RunRecheckDto } from "@shared/schemas/run";
 import type { AppContext } from "../../context";
 import { TransferSchema } from "../../db/entities/transfer.entity";
 import { latestCheck, raiseAlert, recordCheck } from "../temperature/checks";
@@ -11,11 +12,8 @@ import { notifyParty } from "../transfers/notify";
  * parties are e-mailed, as the scheduled re-checks do. One transfer's failure (a forecast outage)
  * leaves the others checked and is reported as not re-checked.
  */
-export async function recheckRunTransfers(
-  ctx: AppContext,
-  transferIds: readonly string[],
-): Promise<{ transferId: string; verdict: string | null; adviceChanged: boolean }[]> {
-  const results = [];
+export async function recheckRunTransfers(ctx: AppContext, transferIds: readonly string[]): Promise<RunRecheckDto[]> {
+  const results: RunRecheckDto[] = [];
   for (const transferId of transferIds) {
     try {
       results.push(

@@ -65,6 +65,7 @@ async function carriedTransfers(
   ids: readonly string[],
   field: string,
   runId: string | null,
+  kept: ReadonlySet<string> = new Set(),
 ): Promise<Carried[]> {
   const found = await em.find(
     TransferSchema,
@@ -78,15 +79,24 @@ async function carriedTransfers(
     { fields: ["transfer", "run"] },
   );
   const onRun = new Map(elsewhere.map((stop) => [stop.transfer.id, stop.run.id]));
-  return ids.map((id, i) => {
+  const keptCount = ids.filter((id) => kept.has(id)).length;
+  return ids.map((id, index) => {
     const t = byId.get(id);
+    const onThisRun = kept.has(id);
+    const i = onThisRun ? index : index - keptCount;
+    if (onThisRun && t && t.courierService?.id !== actor.organization?.id)
+      throw invalidField(
+        ["removeTransferIds"],
+        `transfer ${t.number} is no longer asked of your courier service; take it off the run`,
+      );
     if (
       !t ||
       t.courierService?.id !== actor.organization?.id ||
       !sharedWithOtherParties({ status: t.status, everSent: t.firstSentAt != null })
     )
       throw invalidField([field, i], "this is not a transfer your courier service was asked to carry");
-    if (!PLANNABLE.has(t.status))
+    // A transfer already on the run stays whatever happened to it since (picked up, delivered).
+    if (!onThisRun && !PLANNABLE.has(t.status))
       throw invalidField(
         [field, i],
         `transfer ${t.number} is ${t.status === "draft" ? "back with the sender" : "already past its pickup or closed"}; a run carries transfers that are sent and not yet picked up`,
@@ -187,14 +197,19 @@ async function replan(
     const pickupAt = new Date(schedule.stops.find((s) => s.transferId === t.id && s.kind === "pickup")!.arriveMs);
     const dropoffAt = new Date(schedule.stops.find((s) => s.transferId === t.id && s.kind === "dropoff")!.arriveMs);
     const oldRange = t.vehicleMinF != null && t.vehicleMaxF != null ? { min: t.vehicleMinF, max: t.vehicleMaxF } : null;
+    // Before pickup the run sets both times; on the road only the arrival is still a plan; once
+    // delivered (or cancelled) nothing is rewritten.
+    const beforePickup = PLANNABLE.has(t.status);
+    if (!beforePickup && t.status !== "in_transit") continue;
     const changed = [
-      logChange(em, t, actor, "plannedDepartureAt", t.plannedDepartureAt.toISOString(), pickupAt.toISOString()),
+      beforePickup &&
+        logChange(em, t, actor, "plannedDepartureAt", t.plannedDepartureAt.toISOString(), pickupAt.toISOString()),
       logChange(em, t, actor, "expectedArrivalAt", t.expectedArrivalAt.toISOString(), dropoffAt.toISOString()),
       logChange(em, t, actor, "vehicle", t.vehicle ?? null, vehicle),
       logChange(em, t, actor, "vehicleRangeF", oldRange, range),
     ].some(Boolean);
     if (!changed) continue;
-    t.plannedDepartureAt = pickupAt;
+    if (beforePickup) t.plannedDepartureAt = pickupAt;
     t.expectedArrivalAt = dropoffAt;
     t.vehicle = vehicle;
     t.vehicleMinF = range?.min ?? null;
@@ -290,7 +305,7 @@ export async function updateRun({
     const ids = [...keptIds, ...(input.addTransferIds ?? [])];
     if (ids.length === 0)
       throw invalidField(["removeTransferIds"], "a run keeps at least one transfer; leave one on it");
-    const carried = await carriedTransfers(tx, actor, ids, "addTransferIds", run.id);
+    const carried = await carriedTransfers(tx, actor, ids, "addTransferIds", run.id, new Set(keptIds));
 
     let order = currentOrder.filter((s) => !removed.has(s.transferId));
     if (input.stops) {
@@ -312,12 +327,14 @@ export async function updateRun({
       );
     if (input.departAt) run.departAt = new Date(input.departAt);
     if (input.climateControlled !== undefined) run.climateControlled = input.climateControlled;
-    if (input.vehicleRangeF !== undefined || input.climateControlled === false) {
-      const range = run.climateControlled ? (input.vehicleRangeF ?? null) : null;
-      if (input.vehicleRangeF !== undefined || !run.climateControlled) {
-        run.vehicleMinF = range?.min ?? null;
-        run.vehicleMaxF = range?.max ?? null;
-      }
+    if (input.vehicleRangeF != null && !run.climateControlled)
+      throw invalidField(
+        ["vehicleRangeF"],
+        "a set range goes with a climate-controlled van; say the van is climate-controlled or leave the range out",
+      );
+    if (!run.climateControlled || input.vehicleRangeF !== undefined) {
+      run.vehicleMinF = input.vehicleRangeF?.min ?? null;
+      run.vehicleMaxF = input.vehicleRangeF?.max ?? null;
     }
     if (input.driverIds) run.driverIds = await checkedDrivers(tx, actor, input.driverIds);
 

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { RunDto, RunInput, RunListDto, RunPatch, RunPatchAnswerDto } from "@shared/schemas/run";
+import type { RunDto, RunInput, RunPatch, RunPatchAnswerDto, RunSummaryDto } from "@shared/schemas/run";
 import { api } from "@/lib/api-client";
 
 /** Query keys for runs, from general to specific. */
@@ -17,7 +17,7 @@ export const runSheetHref = (id: string) => `${runUrl(id)}/sheet.pdf`;
 export const runsQueryOptions = () =>
   queryOptions({
     queryKey: runKeys.lists(),
-    queryFn: ({ signal }) => api<RunListDto>("/api/runs", { signal }).then((body) => body.runs),
+    queryFn: ({ signal }) => api<{ runs: RunSummaryDto[] }>("/api/runs", { signal }).then((body) => body.runs),
   });
 
 export const useRuns = () => useQuery(runsQueryOptions());

@@ -1,11 +1,9 @@
 import { Link } from "react-router";
 import type { RunSummaryDto } from "@shared/schemas/run";
 import { formatInstant } from "@shared/dates";
-import { formatDistance } from "@shared/units";
 import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
-import { useUnitSystem } from "@/lib/units-preference";
 import { useViewer } from "@/lib/viewer";
 import { useRuns } from "../api/runs";
 
@@ -13,16 +11,17 @@ const linkButton =
   "inline-flex min-h-11 items-center justify-center rounded-md border border-fern-dark bg-fern px-4 font-medium text-paper-card hover:bg-fern-dark";
 
 function RunCard({ run }: { run: RunSummaryDto }) {
-  const [system] = useUnitSystem();
+  const transfers = run.transferIds.length;
   return (
     <li className="grid gap-1 rounded-card border border-rule bg-paper-card p-4 shadow-card">
       <p className="font-semibold">Leaves {formatInstant(run.departAt)}</p>
       <p className="text-sm text-ink-soft">
-        {run.stopCount} stops · {run.drivingH.toFixed(1)} h driving · {formatDistance(run.roadKm, system)} · done{" "}
-        {formatInstant(run.finishAt)}
+        {transfers} {transfers === 1 ? "transfer" : "transfers"}, {run.stopCount} stops · {run.drivingH.toFixed(1)} h
+        driving · done {formatInstant(run.finishAt)}
       </p>
-      <p className="text-sm">Transfers: {run.transferNumbers.join(", ") || "none"}</p>
-      <p className="text-sm text-ink-soft">Drivers: {run.drivers.join(", ") || "not named yet"}</p>
+      <p className="text-sm text-ink-soft">
+        {run.climateControlled ? "Climate-controlled van" : "Van not climate-controlled"}
+      </p>
       <Link
         to={paths.run.href(run.id)}
         className="mt-1 text-fern underline"
@@ -34,7 +33,7 @@ function RunCard({ run }: { run: RunSummaryDto }) {
   );
 }
 
-/** A courier service's runs, latest departure first; its manager plans new ones from here. */
+/** A courier service's runs, soonest departure first; its manager plans new ones from here. */
 export function RunsRoute() {
   const { abilities } = useViewer();
   const runs = useRuns();
@@ -50,7 +49,7 @@ export function RunsRoute() {
           ) : undefined
         }
       >
-        One van, many transfers: the stops in order with their times, and the rests the drive needs.
+        One van, many transfers: the stops in order with their times, and the rests the drive needs. Soonest first.
       </PageHeader>
       {runs.isPending ? (
         <Loading label="Loading the runs…" />
