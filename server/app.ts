@@ -17,6 +17,7 @@ import { queryCounter } from "./http/query-count";
 import { clientFiles } from "./http/client-files";
 import { taxaRouter } from "./routes/taxa/taxa.router";
 import { transfersRouter } from "./routes/transfers/transfers.router";
+import { runsRouter } from "./routes/runs/runs.router";
 import {
   isRegisterImport,
   REGISTER_IMPORT_TYPES,
@@ -97,6 +98,7 @@ export function createApp(input: AppContext | AppBase): Express {
   api.use("/dev/mail", caughtMailRouter(ctx));
   api.use("/taxa", taxaRouter(ctx));
   api.use("/transfers", transfersRouter());
+  api.use("/runs", runsRouter());
   api.use(registerCsvRoute());
   api.use("/register", registerRouter(ctx));
   api.use("/directory", directoryRouter());

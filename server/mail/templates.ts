@@ -37,6 +37,7 @@ export type TransferMailTopic =
   | "delivery_awaiting_acknowledgement"
   | "checked_in"
   | "temperature_changed"
+  | "arrival_moved"
   | "alert";
 
 type TransferMailFacts = {
@@ -67,6 +68,7 @@ const SUBJECTS: Record<TransferMailTopic, (n: string, f: TransferMailFacts) => s
     `Transfer ${n}: the courier recorded the delivery — please confirm you have the boxes`,
   checked_in: (n) => `Transfer ${n} was checked in`,
   temperature_changed: (n) => `Transfer ${n}: the temperature advice changed`,
+  arrival_moved: (n) => `Transfer ${n}: the courier's run moved the arrival`,
   alert: (n, f) => `Alert on transfer ${n}: ${f.alertTitle ?? "please look"}`,
 };
 
@@ -97,6 +99,12 @@ const LEADS: Record<TransferMailTopic, (f: TransferMailFacts) => string> = {
       `Now: ${f.advice ?? ""}`,
       "",
       "The advice is a planning aid, not a guarantee: look at the forecast at both ends yourselves, keep heat packs away from the animals' containers, and follow the carrier's and the states' rules.",
+    ].join("\n"),
+  arrival_moved: (f) =>
+    [
+      `${f.actor} changed the courier's run that carries transfer ${f.number}. ${f.summary ?? ""}`,
+      "",
+      "The temperature check follows the new times. If the new time does not suit you, tell the courier service and the other party now.",
     ].join("\n"),
   alert: (f) =>
     [

@@ -1,4 +1,5 @@
 import { isCourier, isKeeper, type Actor } from "../auth/actor";
+import { mayPlanRuns, mayReadRuns } from "./run.policy";
 
 /** Who may manage accounts: admins only. */
 export function canManageUsers(actor: Actor): boolean {
@@ -14,5 +15,8 @@ export function abilitiesOf(actor: Actor) {
     draftTransfers: isKeeper(actor),
     carryTransfers: isCourier(actor),
     manageOwnOrganization: actor.role === "manager" && actor.organization != null && !actor.disabled,
+    /** A courier service's people read its runs; its manager plans them (issue 16). */
+    readRuns: mayReadRuns(actor),
+    planRuns: mayPlanRuns(actor),
   };
 }

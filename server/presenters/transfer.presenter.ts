@@ -221,6 +221,7 @@ export function presentTransfer(v: TransferView, role: ViewerRole, abilities: Tr
     reconfirmationReason: t.reconfirmation_reason,
     loadedWithoutChecks: presentChecksSkipped(v.checksSkipped),
     courierService: v.courierService,
+    runId: v.runId ?? null,
     alerts: v.alerts.map(presentAlert),
     delivery,
     photos: abilities.readPhotos ? v.photos.map((p) => presentPhoto(t.id, p)) : [],

@@ -598,6 +598,8 @@ export type TransferDto = {
   loadedWithoutChecks: LoadedWithoutChecksDto | null;
   /** The courier service asked to carry it; pending until someone of it signs up (issue 14, §3). */
   courierService: CourierServiceBriefDto | null;
+  /** The courier's run that carries it (issue 16), null when it is on none. */
+  runId: string | null;
   /** Every alert raised on this transfer, oldest first; acknowledged ones stay. */
   alerts: AlertDto[];
   /** The delivery to the receiver, once recorded; null before. */

@@ -3,6 +3,7 @@ import type { AdviceCode, Verdict } from "./advice";
 import type { ProfileData } from "./profile-schema";
 import type { TripAssessment } from "./assess";
 import type { TransitAssessment } from "./schemas";
+import type { TripRouteDto } from "./route";
 import type { TransitWarning } from "./timeline";
 
 /** Worst first: a transfer's answer is its worst box's. An unknown forecast outranks every "ship". */
@@ -38,12 +39,14 @@ export type BoxTemperature = {
 
 /**
  * The answer of both temperature routes: the contract keys of issue 5 (those of the worst box),
- * plus the profile whose safe band the chart shades, the calendar warnings and every box.
+ * plus the profile whose safe band the chart shades, the calendar warnings, every box and the
+ * route the map draws (its `hours` go with `hours`, one for one).
  */
 export type TemperatureReport = TripAssessment & {
   profile: ProfileSummary;
   warnings: TransitWarning[];
   boxes: BoxTemperature[];
+  route: TripRouteDto;
 };
 
 export type { CheckMark } from "../constants";

@@ -229,6 +229,12 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   durationMin: "length of the stop",
   parked: "where it waits",
   legId: "leg",
+  // runs (issue 16)
+  climateControlled: "climate-controlled van",
+  transferIds: "transfers",
+  addTransferIds: "transfers to add",
+  removeTransferIds: "transfers to remove",
+  driverIds: "drivers",
   // answers the API gives (their schemas are walked too)
   transitOnlyExempt: "exempt when only passing through",
   ruleId: "rule",
@@ -278,6 +284,10 @@ const ITEM_WORDS: Readonly<Record<string, string>> = {
   ambientOverrideF: "outside temperature",
   hours: "hour",
   stops: "stop",
+  transferIds: "transfer",
+  addTransferIds: "transfer to add",
+  removeTransferIds: "transfer to remove",
+  driverIds: "driver",
   documentKinds: "kind of document",
   origins: "origin",
   purposes: "purpose",

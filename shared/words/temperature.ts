@@ -8,6 +8,8 @@ import type {
   WeatherScenario,
 } from "../constants";
 import type { AdviceCode, Verdict } from "../temperature/advice";
+import type { AirBand } from "../temperature/air-band";
+import type { RouteStopKind } from "../temperature/route";
 
 /** Temperature verdicts in plain words. "Forecast unavailable" is never a kind of "ship". */
 export const TEMPERATURE_VERDICT_WORDS: Readonly<Record<Verdict, string>> = {
@@ -107,4 +109,24 @@ export const READING_SOURCE_WORDS: Readonly<Record<ReadingSource, string>> = {
   handoff: "Handoff between couriers",
   delivery: "Delivery to the receiver",
   check_in: "Check-in at the receiver",
+};
+
+/** The stops a map of the trip marks. */
+export const ROUTE_STOP_WORDS: Readonly<Record<RouteStopKind, string>> = {
+  origin: "Start",
+  hub: "Carrier's hub",
+  planned_stop: "Planned stop",
+  rest_stop: "Break",
+  overnight_rest: "Night's rest",
+  destination: "Arrival",
+};
+
+/** The map's bands of the air around the box, against the animals' safe range in transit. */
+export const AIR_BAND_WORDS: Readonly<Record<AirBand, string>> = {
+  well_below: "Far colder than safe",
+  below: "Colder than safe",
+  within: "In the safe range",
+  above: "Warmer than safe",
+  well_above: "Far warmer than safe",
+  unknown: "Not known (no forecast)",
 };

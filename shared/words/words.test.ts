@@ -50,14 +50,19 @@ import { ROUTE_ROLES, UNCOVERED_REASONS } from "../compliance/coverage";
 import { GOVERNS, HOLDER_SIDES, ruleEffectSchema } from "../compliance/rule";
 import { SEVERITIES, VERDICTS as COMPLIANCE_VERDICTS } from "../compliance/schemas";
 import { ADVICE_CODES, VERDICTS as TEMPERATURE_VERDICTS } from "../temperature/advice";
+import { AIR_BANDS } from "../temperature/air-band";
 import { DEFAULT_PROFILES } from "../temperature/profiles";
+import { ROUTE_STOP_KINDS } from "../temperature/route";
 import * as words from "./index";
+import { RUN_REST_REASONS, RUN_STOP_KINDS } from "../schemas/run";
 
 const effectKinds = ruleEffectSchema.options.map((option) => option.shape.kind.value);
 
 /** Each enum of the product with every map that gives it words. */
 const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]][] = [
   ["transfer status", TRANSFER_STATUSES, [words.TRANSFER_STATUS_WORDS]],
+  ["run stop kind", RUN_STOP_KINDS, [words.RUN_STOP_KIND_WORDS]],
+  ["run rest reason", RUN_REST_REASONS, [words.RUN_REST_WORDS]],
   ["alert kind", ALERT_KINDS, [words.ALERT_KIND_WORDS]],
   ["transport mode", TRANSPORT_MODES, [words.TRANSPORT_MODE_WORDS]],
   ["purpose", PURPOSES, [words.PURPOSE_WORDS]],
@@ -117,6 +122,8 @@ const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]
   ["check mark", CHECK_MARKS, [words.CHECK_MARK_WORDS]],
   ["exposure", EXPOSURES, [words.EXPOSURE_WORDS, words.EXPOSURE_IN_SENTENCE]],
   ["vehicle conditioning", VEHICLE_CONDITIONINGS, [words.VEHICLE_CONDITIONING_WORDS]],
+  ["stop on a map", ROUTE_STOP_KINDS, [words.ROUTE_STOP_WORDS]],
+  ["band of the air on a map", AIR_BANDS, [words.AIR_BAND_WORDS]],
   ["parked kind", PARKED_KINDS, [words.PARKED_WORDS]],
   ["reading source", READING_SOURCES, [words.READING_SOURCE_WORDS]],
   ["weather scenario", WEATHER_SCENARIOS, [words.WEATHER_SCENARIO_WORDS]],

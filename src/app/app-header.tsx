@@ -12,6 +12,7 @@ type NavItem = { to: string; label: string; show: (s: NonNullable<Session>) => b
 const NAV: NavItem[] = [
   { to: paths.home, label: "Transfers", show: (s) => !s.abilities.carryTransfers },
   { to: paths.home, label: "My legs", show: (s) => s.abilities.carryTransfers },
+  { to: paths.runs, label: "Runs", show: (s) => s.abilities.readRuns },
   { to: paths.register, label: "Register", show: (s) => s.abilities.draftTransfers },
   { to: paths.permits, label: "Permits", show: (s) => s.abilities.draftTransfers },
   {

@@ -115,6 +115,9 @@ export function createAppRouter(queryClient: QueryClient) {
           loader: prefetchTransfer,
           lazy: screen(() => import("@/features/courier/routes/courier-handoff"), "CourierHandoffRoute"),
         },
+        { path: paths.runs, lazy: screen(() => import("@/features/runs/routes/runs"), "RunsRoute") },
+        { path: paths.runNew, lazy: screen(() => import("@/features/runs/routes/run-new"), "RunNewRoute") },
+        { path: paths.run.pattern, lazy: screen(() => import("@/features/runs/routes/run-page"), "RunPageRoute") },
         { path: paths.register, lazy: screen(() => import("@/features/register/routes/register"), "RegisterRoute") },
         {
           path: paths.registerEntry.pattern,

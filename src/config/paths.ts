@@ -31,6 +31,13 @@ export const paths = {
       href: (transferId: string) => `/legs/${encodeURIComponent(transferId)}`,
     },
   },
+  /** A courier service's runs (its manager plans them, its couriers read them). */
+  runs: "/runs",
+  runNew: "/runs/new",
+  run: {
+    pattern: "/runs/:runId",
+    href: (runId: string) => `/runs/${encodeURIComponent(runId)}`,
+  },
   register: "/register",
   registerEntry: {
     pattern: "/register/entries/:entryId",

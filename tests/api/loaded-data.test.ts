@@ -104,3 +104,20 @@ describe("demo and bench data written past the gates", () => {
     for (const row of rows) expect(row.text_body).toContain(`${DEMO_URL}/transfers/`);
   });
 });
+
+describe("the demo's run (issue 16)", () => {
+  it("puts the breeder's road transfer on an invented run of Nightjar's, which its dispatcher and courier read", async () => {
+    const { rows } = await t.ctx.pool.query<{ run_id: string; transfer_id: string; kind: string }>(
+      `SELECT rs.run_id, rs.transfer_id, rs.kind FROM run_stop rs JOIN run r ON r.id = rs.run_id
+         JOIN organization o ON o.id = r.courier_organization_id WHERE o.name = 'Nightjar Ground Couriers' ORDER BY rs.position`,
+    );
+    expect(rows.map((r) => r.kind)).toEqual(["pickup", "dropoff"]);
+    for (const email of ["dispatch@demo.hatchway.test", "courier@demo.hatchway.test"]) {
+      const client = await signIn(t.app, email);
+      const run = await client.get(`/api/runs/${rows[0]!.run_id}`);
+      expect(run.status).toBe(200);
+      expect(run.body.stops[0].place.city).toBe("Knoxville");
+      expect(run.body.drivers.map((d: { displayName: string }) => d.displayName)).toEqual(["Juno Park"]);
+    }
+  });
+});

@@ -21,6 +21,7 @@ const HEAVY = {
   table: "getCoreRowModel", // @tanstack/react-table
   forms: "shouldUnregister", // react-hook-form
   schemas: "ZodError", // zod
+  map: "Topology", // us-atlas's states (TopoJSON), with d3-geo in the map's chunk
 };
 
 /** The JavaScript a page fetched, with each file's text. */

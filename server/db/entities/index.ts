@@ -22,6 +22,7 @@ import {
   RegisterEventSchema,
 } from "./check-in.entity";
 import { IdempotencyKeySchema } from "./idempotency-key.entity";
+import { RunSchema, RunStopSchema } from "./run.entity";
 import {
   ComplianceEvaluationSchema,
   ComplianceOverrideSchema,
@@ -98,4 +99,6 @@ export const ENTITIES = [
   TemperatureAlertSchema,
   TransferPhotoSchema,
   DeliveryCodeSchema,
+  RunSchema,
+  RunStopSchema,
 ];

@@ -17,6 +17,7 @@ import { Migration20261205102000_joining } from "./Migration20261205102000_joini
 import { Migration20261205103000_account_mail } from "./Migration20261205103000_account_mail";
 import { Migration20261205104000_organization_invitations } from "./Migration20261205104000_organization_invitations";
 import { Migration20261205105000_courier_service } from "./Migration20261205105000_courier_service";
+import { Migration20261206100000_runs } from "./Migration20261206100000_runs";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -39,4 +40,5 @@ export const MIGRATIONS = [
     class: Migration20261205104000_organization_invitations,
   },
   { name: "Migration20261205105000_courier_service", class: Migration20261205105000_courier_service },
+  { name: "Migration20261206100000_runs", class: Migration20261206100000_runs },
 ];

@@ -4,6 +4,7 @@ import { buildOrganization, buildUser } from "../../../tests/factories";
 import { seedDemoTransfers } from "./demo-transfers";
 import { seedDemoDocuments } from "./demo-documents";
 import type { AppLinks } from "../../mail/links";
+import { seedDemoRun } from "./demo-run";
 
 /**
  * The demo scenario. Every organisation, person, address, phone number and permit number
@@ -104,7 +105,7 @@ export class DemoSeeder extends Seeder {
       organization: couriers,
     });
     // The courier service's manager assigns Juno and Theo to the legs of the transfers it carries.
-    await buildUser(em, {
+    const dispatcher = await buildUser(em, {
       email: "dispatch@demo.hatchway.test",
       displayName: "Wren Okafor",
       role: "manager",
@@ -112,5 +113,6 @@ export class DemoSeeder extends Seeder {
     });
     await seedDemoDocuments(em, { breeder, centre, rescue });
     await seedDemoTransfers(em, { sender, receiver, other, courier, relay }, this.links);
+    await seedDemoRun(em, { breeder, couriers, sender, dispatcher, courier });
   }
 }

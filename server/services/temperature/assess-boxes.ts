@@ -7,6 +7,7 @@ import { assessTransit, type ExposureInput, type TripAssessment } from "@shared/
 import type { TripWeather } from "@shared/temperature/exposure";
 import type { BoxSpec } from "@shared/temperature/box-model";
 import type { TemperatureProfile } from "@shared/temperature/profiles";
+import { tripRoute } from "@shared/temperature/route";
 import {
   VERDICT_SEVERITY,
   type BoxTemperature,
@@ -123,6 +124,7 @@ export function unassessable(
     profile: summary(shown.profile),
     warnings: [],
     boxes: boxes.map((b) => boxSummary(b, assess(b))),
+    route: tripRoute(timeline),
   };
 }
 
@@ -191,5 +193,6 @@ export async function assessBoxes(
     profile: summary(worst.profile),
     warnings: arrival ? [...timeline.warnings, arrival] : timeline.warnings,
     boxes: assessed.map((b) => boxSummary(b, b.result)),
+    route: tripRoute(timeline),
   };
 }

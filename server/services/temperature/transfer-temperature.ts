@@ -1,6 +1,9 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { boxContentsG, profileForBox, type AnimalLine } from "@shared/temperature/box-profile";
-import { placeFromPosition, placeFromZip, type TransitPlace } from "@shared/temperature/places";
+import { placeFromPosition, placeFromZip, townNear, type TransitPlace } from "@shared/temperature/places";
+import { haversineKm } from "@shared/temperature/geo";
+import { DEFAULT_DRIVING_OPTIONS } from "@shared/temperature/timeline";
+import { RunStopSchema, type Run } from "../../db/entities/run.entity";
 import type { AnimalClass } from "@shared/temperature/profiles";
 import type { TemperatureReport } from "@shared/temperature/report";
 import { AnimalSchema, ContainerSchema, LegSchema, type Transfer } from "../../db/entities/transfer.entity";
@@ -29,6 +32,38 @@ export async function animalClasses(
     [[...new Set(taxonIds)]],
   );
   return new Map(rows.map((r) => [r.id, r.class_name ? (CLASS_OF_TAXON[r.class_name] ?? null) : null]));
+}
+
+/**
+ * A transfer on a courier's run (issue 16) is in the run's van from its pickup to its drop-off,
+ * which the run wrote as the transfer's planned departure and arrival. The van goes by the other
+ * stops in between, so the model lays the box along the straight road from origin to destination
+ * at the pace that takes exactly that long, without rests of its own (the run's rests are inside
+ * the span), in the run's van: climate-controlled with its set range, or unconditioned. The air
+ * along a detour is taken from the straight road's points: a simplification D38 names.
+ */
+function followRun(
+  run: Run,
+  transfer: Transfer,
+  origin: TransitPlace,
+  destination: TransitPlace,
+): ReturnType<typeof exposureOf> {
+  const spanH = Math.max(
+    (transfer.expectedArrivalAt.getTime() - transfer.plannedDepartureAt.getTime()) / 3_600_000,
+    1 / 60,
+  );
+  const roadKm = haversineKm(origin, destination) * DEFAULT_DRIVING_OPTIONS.circuityFactor;
+  return {
+    driving: { nameNear: townNear, averageSpeedKmh: Math.max(roadKm / spanH, 0.1), stops: [] },
+    exposure: {
+      vehicle: run.climateControlled ? "climate_controlled" : "unconditioned",
+      vehicleRangeF:
+        run.climateControlled && run.vehicleMinF != null && run.vehicleMaxF != null
+          ? { min: run.vehicleMinF, max: run.vehicleMaxF }
+          : null,
+      stopParking: [],
+    },
+  };
 }
 
 /** Where a transfer starts or ends, from its stored position or, failing that, its ZIP code. */
@@ -100,16 +135,19 @@ export async function assessTransferTemperature({
   nowMs: number;
 }): Promise<TemperatureReport> {
   const profiles = await loadProfiles(em);
-  const [boxes, legs, pickedUp] = await Promise.all([
+  const [boxes, legs, pickedUp, onRun] = await Promise.all([
     boxesOf(em, transfer, profiles),
     em.find(LegSchema, { transfer }, { orderBy: { sequence: "asc" } }),
     pickupAt(em, transfer.id),
+    em.findOne(RunStopSchema, { transfer, kind: "pickup" }, { populate: ["run"] }),
   ]);
   const origin = placeOf(transfer, "origin");
   const destination = placeOf(transfer, "destination");
   const fallback = profileForBox([], [], profiles);
   const plannedMs = transfer.plannedDepartureAt.getTime();
-  const { driving, exposure } = exposureOf(tripExposureFields(transfer, legs), plannedMs);
+  const planned = exposureOf(tripExposureFields(transfer, legs), plannedMs);
+  const { driving, exposure } =
+    onRun && origin && destination ? followRun(onRun.run.getEntity(), transfer, origin, destination) : planned;
   const trip = { mode: transfer.mode, departAt: pickedUp?.getTime() ?? plannedMs };
   if (!origin || !destination) {
     return unassessable(
@@ -132,11 +170,23 @@ export async function assessTransferTemperature({
       transfer.expectedArrivalAt.getTime(),
       exposure,
     );
-    if (!pickedUp) return report;
+    const timed = onRun
+      ? {
+          ...report,
+          sources: [
+            ...report.sources,
+            {
+              id: "following-run",
+              title: `Timed by the courier's run: in its ${onRun.run.getEntity().climateControlled ? "climate-controlled" : "unconditioned"} van from the pickup (${transfer.plannedDepartureAt.toISOString()}) to the drop-off (${transfer.expectedArrivalAt.toISOString()}).`,
+            },
+          ],
+        }
+      : report;
+    if (!pickedUp) return timed;
     return {
-      ...report,
+      ...timed,
       sources: [
-        ...report.sources,
+        ...timed.sources,
         {
           id: "following-pickup",
           title: `Following the trip from the recorded pickup (${pickedUp.toISOString()}) rather than the planned departure.`,

@@ -56,7 +56,7 @@ export function tripExposureFields(transfer: Transfer, legs: readonly Leg[]): Tr
 }
 
 /** Records one changed field of the plan in the transfer's change history. */
-function logChange(
+export function logChange(
   em: EntityManager,
   transfer: Transfer,
   actor: Actor,

@@ -11,6 +11,7 @@ import type { AppLinks } from "../../mail/links";
 /**
  * Queues an e-mail to one party of a transfer, in the caller's transaction: the named
  * contact when there is one and the account is active, otherwise every active member.
+ * Returns the names of the people it wrote to.
  */
 export async function notifyParty(
   em: EntityManager,
@@ -29,9 +30,12 @@ export async function notifyParty(
     : await em.find(UserSchema, { organization: orgRef.id, role: { $in: KEEPER_ROLES }, disabled: false });
   const org = await em.findOneOrFail(OrganizationSchema, { id: orgRef.id });
   // Alerts and temperature advice carry safety information: sent whatever the person chose.
-  const safety = topic === "alert" || topic === "temperature_changed";
+  // A moved arrival too: someone must be there to take the animals.
+  const safety = topic === "alert" || topic === "temperature_changed" || topic === "arrival_moved";
+  const told: string[] = [];
   for (const r of recipients) {
     if (!safety && r.mailOptOuts.includes("transfer_steps")) continue;
+    told.push(r.displayName);
     enqueueMail(
       em,
       transferMail(topic, {
@@ -45,4 +49,5 @@ export async function notifyParty(
       }),
     );
   }
+  return told;
 }

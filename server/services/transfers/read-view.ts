@@ -132,6 +132,8 @@ export type TransferView = {
   checksSkipped: { at: string; payload: Record<string, unknown> } | null;
   /** The courier service the sender asked to carry the transfer (issue 14, §3). */
   courierService: { id: string; name: string; city: string; state: string; phone: string; pending: boolean } | null;
+  /** The courier's run that carries it (issue 16), if any. */
+  runId: string | null;
   /** Photos at the handoffs and the check-in, oldest first. */
   photos: {
     id: string;
@@ -270,6 +272,7 @@ SELECT json_build_object(
                            'size_bytes', ph.size_bytes, 'sha256', ph.sha256, 'uploaded_by_id', ph.uploaded_by_id, 'uploaded_by_name', ph.uploaded_by_name,
                            'created_at', ph.created_at) ORDER BY ph.created_at, ph.custody_seq)
                         FROM transfer_photo ph WHERE ph.transfer_id = t.id), '[]'),
+  'runId', (SELECT rs.run_id FROM run_stop rs WHERE rs.transfer_id = t.id AND rs.kind = 'pickup'),
   'deliveryAcknowledged', (SELECT json_build_object('at', e.at, 'actor_id', e.actor_id, 'actor_name', e.actor_name, 'payload', e.payload) FROM custody_entry e
                      WHERE e.transfer_id = t.id AND e.kind = 'delivery_acknowledged' ORDER BY e.seq DESC LIMIT 1)
 ) AS view
@@ -281,7 +284,7 @@ WHERE t.id = $1`;
 export async function readTransferView(pool: pg.Pool, id: string): Promise<TransferView | null> {
   // A named statement: PostgreSQL plans this large query once per connection, not per request.
   const { rows } = await pool.query<{ view: TransferView }>({
-    name: "transfer-view-v5",
+    name: "transfer-view-v6",
     text: TRANSFER_VIEW_SQL,
     values: [id],
   });

@@ -11,6 +11,9 @@ export type Abilities = {
   carryTransfers: boolean;
   /** A manager runs their own organisation's people and details. */
   manageOwnOrganization: boolean;
+  /** A courier service's people read its runs; its manager plans them. */
+  readRuns: boolean;
+  planRuns: boolean;
 };
 export type Session = { user: UserDto; abilities: Abilities } | null;
 

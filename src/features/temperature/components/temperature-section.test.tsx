@@ -8,6 +8,7 @@ import type { BoxSpec } from "@shared/temperature/box-model";
 import { DEFAULT_PROFILES } from "@shared/temperature/profiles";
 import type { TransferStatus } from "@shared/constants";
 import type { TransferTemperatureDto } from "@shared/temperature/report";
+import { tripRoute } from "@shared/temperature/route";
 import { buildTransitTimeline } from "@shared/temperature/timeline";
 import { TemperatureSection } from "./temperature-section";
 
@@ -57,6 +58,7 @@ function reportAt(tempF: number): TransferTemperatureDto {
         hoursOutsideRange: result.hoursOutsideRange,
       },
     ],
+    route: tripRoute(timeline),
     transferVersion: 3,
     alert: null,
     checks: [],

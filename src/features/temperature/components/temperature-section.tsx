@@ -11,6 +11,7 @@ import { AssessmentDetails } from "./assessment-details";
 import { ReadingsTable } from "./readings-table";
 import { TemperatureCautions } from "./temperature-cautions";
 import { TemperatureChart } from "./temperature-chart";
+import { TripMap } from "./trip-map";
 import { TripPlanCard } from "./trip-plan-card";
 
 /**
@@ -87,6 +88,7 @@ function TemperatureBody({
       <BlockNotice report={report} status={status} />
       {report.plan ? <TripPlanCard transferId={transferId} plan={report.plan} departureAt={departureAt} /> : null}
       <TemperatureChart report={report} readings={report.readings ?? []} />
+      <TripMap report={report} />
       <ReadingsTable readings={report.readings ?? []} />
       {report.checks.length > 0 ? (
         <div className="text-sm">

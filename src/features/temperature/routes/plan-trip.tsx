@@ -31,6 +31,7 @@ import { AssessmentDetails } from "../components/assessment-details";
 import { TemperatureCautions } from "../components/temperature-cautions";
 import { StopsEditor, stopsOf, type StopRow } from "../components/stops-editor";
 import { TemperatureChart } from "../components/temperature-chart";
+import { TripMap } from "../components/trip-map";
 import { VEHICLE_NOT_SAID, VehicleFields, vehicleOf, type VehicleForm } from "../components/vehicle-fields";
 import { WeatherScenarioSwitch } from "../components/weather-scenario-switch";
 
@@ -331,6 +332,7 @@ export function PlanTripRoute() {
               <div className="flex flex-col gap-4">
                 <AssessmentDetails report={assess.data} />
                 <TemperatureChart report={assess.data} />
+                <TripMap report={assess.data} title="the planned trip" />
               </div>
             </Card>
           ) : (
