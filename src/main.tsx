@@ -3,6 +3,7 @@ import { createRoot } from "react-dom/client";
 import { RouterProvider } from "react-router";
 import { AppProviders, createQueryClient } from "./app/providers";
 import { createAppRouter } from "./app/router";
+import { registerServiceWorker } from "./lib/service-worker";
 import "./index.css";
 
 const client = createQueryClient();
@@ -15,3 +16,5 @@ createRoot(document.getElementById("root")!).render(
     </AppProviders>
   </StrictMode>,
 );
+
+registerServiceWorker();

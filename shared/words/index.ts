@@ -18,3 +18,4 @@ export * from "./transfer";
 export * from "./changes";
 export * from "./evidence";
 export * from "./register";
+export * from "./offline";
