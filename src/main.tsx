@@ -17,4 +17,4 @@ createRoot(document.getElementById("root")!).render(
   </StrictMode>,
 );
 
-registerServiceWorker();
+registerServiceWorker({ onControlled: () => void client.refetchQueries({ type: "active" }) });

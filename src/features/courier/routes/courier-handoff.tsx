@@ -110,7 +110,13 @@ export function CourierHandoffRoute() {
             return (
               <li
                 key={i}
-                className={`rounded-md border p-3 ${i === next ? "border-fern bg-fern-light" : "border-rule bg-paper-card"}`}
+                className={`rounded-md border p-3 ${
+                  keptAt(i) && !done
+                    ? "border-amber-line bg-amber-bg"
+                    : i === next
+                      ? "border-fern bg-fern-light"
+                      : "border-rule bg-paper-card"
+                }`}
               >
                 <p className="font-semibold">
                   {i + 1}.{" "}
