@@ -17,4 +17,11 @@ createRoot(document.getElementById("root")!).render(
   </StrictMode>,
 );
 
-registerServiceWorker({ onControlled: () => void client.refetchQueries({ type: "active" }) });
+registerServiceWorker({
+  settled: () =>
+    router.state.initialized &&
+    router.state.navigation.state === "idle" &&
+    client.isFetching() === 0 &&
+    client.isMutating() === 0,
+  onControlled: () => void client.refetchQueries({ type: "active" }),
+});

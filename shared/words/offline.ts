@@ -19,5 +19,4 @@ export const OFFLINE_HANDOFF_WORDS = {
   signOutQuestion: "Sign out with handoffs not yet sent?",
   signOutDetail:
     "Handoffs saved on this phone that are not yet sent are removed when you sign out, so the next person on this phone cannot read them. Wait for signal to send them first, or sign out anyway.",
-  signInAgain: "Sign in again to send it: the phone kept it.",
 } as const;

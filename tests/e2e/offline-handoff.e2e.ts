@@ -4,7 +4,7 @@
  * (the service worker opens it), signal returns and the pickup goes by itself: one custody entry.
  * [practice] couriers hand boxes over in car parks and on rural roads without signal.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { DESKTOP, expectAccessible, launchBrowser, newPage, PHONE, screenshot, signInAs } from "../support/browser";
 import { TINY_JPEG } from "../support/images";
@@ -49,6 +49,40 @@ const handoffEntries = async (page: Page) => {
   );
   return log.entries.filter((entry) => entry.kind === "handoff");
 };
+
+describe("the installable app", () => {
+  // A worker script is re-checked on every load (no long cache); the manifest names the app
+  // and its icons [published: W3C Web Application Manifest; Service Workers §update].
+  it("serves the worker and the manifest fresh, from our own origin, under the CSP", async () => {
+    const base = inject("baseUrl");
+    const worker = await fetch(`${base}/sw.js`);
+    expect(worker.status).toBe(200);
+    expect(worker.headers.get("content-type")).toMatch(/javascript/);
+    expect(worker.headers.get("cache-control")).toBe("no-cache");
+    expect(worker.headers.get("content-security-policy")).toContain("script-src 'self'");
+    const source = await worker.text();
+    expect(source).toContain("hatchway-api");
+    // One script: Workbox's runtime is inside, no importScripts of another file.
+    expect(source).not.toContain("importScripts(");
+    // The precompressed copies are the server's business, never precached as files of their own.
+    expect(source).not.toMatch(/\.(br|gz)"/);
+
+    const manifestResponse = await fetch(`${base}/manifest.webmanifest`);
+    expect(manifestResponse.headers.get("content-type")).toMatch(/manifest\+json/);
+    const manifest = (await manifestResponse.json()) as {
+      name: string;
+      display: string;
+      theme_color: string;
+      icons: { src: string; type: string }[];
+    };
+    expect(manifest).toMatchObject({ name: "Hatchway", display: "standalone", theme_color: "#2f5d3a" });
+    for (const icon of manifest.icons) {
+      const response = await fetch(`${base}${icon.src}`);
+      expect(response.status).toBe(200);
+      expect(response.headers.get("content-type")).toContain(icon.type);
+    }
+  });
+});
 
 describe("a handoff without signal", () => {
   it("the sender and the receiver clear a transfer the demo courier carries", async () => {
