@@ -2,15 +2,15 @@
  * A handoff confirmed on a phone without signal, kept on the phone until Hatchway has it
  * (DEVELOPERS.md D40): where it stands, in the courier's words.
  */
-export const OFFLINE_HANDOFF_STATES = ["waiting", "refused"] as const;
-export type OfflineHandoffState = (typeof OFFLINE_HANDOFF_STATES)[number];
+import type { OfflineHandoffState } from "../constants";
 
 export const OFFLINE_HANDOFF_STATE_WORDS: Record<OfflineHandoffState, string> = {
   waiting: "Saved on this phone, not yet sent",
   refused: "Refused by Hatchway: not recorded",
 };
 
-export const OFFLINE_HANDOFF_WORDS = {
+/** Longer sentences about a kept handoff (not an enum's words). */
+export const OFFLINE_HANDOFF_TEXT = {
   waitingDetail:
     "It goes by itself when the phone has signal again, with its photos, and counts once however often it is tried. Closing the page or restarting the phone does not lose it.",
   refusedDetail:

@@ -13,6 +13,7 @@ import {
   EXPOSURES,
   FORECAST_UNAVAILABLE_REASONS,
   HANDOFF_KINDS,
+  OFFLINE_HANDOFF_STATES,
   IDENTIFIER_KINDS,
   LENGTH_KINDS,
   ORGANIZATION_KINDS,
@@ -58,6 +59,7 @@ const effectKinds = ruleEffectSchema.options.map((option) => option.shape.kind.v
 /** Each enum of the product with every map that gives it words. */
 const VOCABULARY: [string, readonly string[], Readonly<Record<string, string>>[]][] = [
   ["transfer status", TRANSFER_STATUSES, [words.TRANSFER_STATUS_WORDS]],
+  ["handoff kept on a phone", OFFLINE_HANDOFF_STATES, [words.OFFLINE_HANDOFF_STATE_WORDS]],
   ["alert kind", ALERT_KINDS, [words.ALERT_KIND_WORDS]],
   ["transport mode", TRANSPORT_MODES, [words.TRANSPORT_MODE_WORDS]],
   ["purpose", PURPOSES, [words.PURPOSE_WORDS]],

@@ -3,11 +3,10 @@ import { NavLink, useNavigate } from "react-router";
 import { Button } from "@/components/ui/button";
 import { UnitsSwitch } from "@/components/ui/units-switch";
 import { paths } from "@/config/paths";
-import { USER_ROLE_WORDS } from "@shared/words";
+import { OFFLINE_HANDOFF_TEXT, USER_ROLE_WORDS } from "@shared/words";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useSignOut, type Session } from "@/features/auth/api/session";
 import { useQueuedHandoffs } from "@/lib/offline-data";
-import { OFFLINE_HANDOFF_WORDS } from "@shared/words";
 
 type NavItem = { to: string; label: string; show: (s: NonNullable<Session>) => boolean };
 
@@ -85,7 +84,7 @@ export function AppHeader({ session }: { session: NonNullable<Session> }) {
           </Button>
           <ConfirmDialog
             open={askSignOut}
-            title={OFFLINE_HANDOFF_WORDS.signOutQuestion}
+            title={OFFLINE_HANDOFF_TEXT.signOutQuestion}
             confirmLabel="Sign out anyway"
             cancelLabel="Stay signed in"
             tone="danger"
@@ -94,7 +93,7 @@ export function AppHeader({ session }: { session: NonNullable<Session> }) {
             onCancel={() => setAskSignOut(false)}
           >
             {kept.length === 1 ? "One handoff is" : `${kept.length} handoffs are`} kept on this phone.{" "}
-            {OFFLINE_HANDOFF_WORDS.signOutDetail}
+            {OFFLINE_HANDOFF_TEXT.signOutDetail}
           </ConfirmDialog>
         </div>
         <nav id="main-menu" aria-label="Main" className={`${folded} w-full sm:order-last sm:flex`}>

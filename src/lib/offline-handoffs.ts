@@ -5,9 +5,8 @@
  * Photos are kept as Blobs and sent after the handoff, as on the page.
  */
 import { openDB, type DBSchema, type IDBPDatabase } from "idb";
-import type { HandoffKind, PhotoSubject } from "@shared/constants";
+import type { HandoffKind, OfflineHandoffState, PhotoSubject } from "@shared/constants";
 import type { HandoffInput } from "@shared/schemas/transfer";
-import type { OfflineHandoffState } from "@shared/words";
 
 export type QueuedPhoto = {
   key: string;

@@ -41,14 +41,126 @@ const keptUrls = (page: Page) =>
     return (await cache.keys()).map((request) => new URL(request.url).pathname + new URL(request.url).search);
   });
 
-const handoffEntries = async (page: Page) => {
+const handoffEntries = async (page: Page, id = transferId) => {
   const log = await call<{ entries: { kind: string; payload: { handoffIndex?: number } }[] }>(
     page,
     "GET",
-    `/api/transfers/${transferId}/custody`,
+    `/api/transfers/${id}/custody`,
   );
   return log.entries.filter((entry) => entry.kind === "handoff");
 };
+
+/** The pickup as a courier fills it on the phone: the seal read, the place, a photo, the review. */
+async function confirmPickup(page: Page): Promise<void> {
+  await page.getByRole("button", { name: /One more: Boxes/ }).click();
+  await page.getByLabel("Seal number you read on A").fill("SEAL-0160");
+  await page.getByRole("checkbox", { name: "The seal is there and unbroken" }).check();
+  await page.getByLabel("Place").fill("Rest area car park, mile 112");
+  await page.locator('input[type="file"]').first().setInputFiles({
+    name: "boxes.jpg",
+    mimeType: "image/jpeg",
+    buffer: TINY_JPEG,
+  });
+  await page.getByRole("button", { name: "Review before confirming" }).click();
+  const early = page.getByLabel("Why so early?");
+  await page.getByRole("button", { name: "Confirm the pickup" }).waitFor();
+  if (await early.count()) await early.fill("Collected early to ride in our heated van.");
+  await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
+  await page.getByRole("button", { name: "Confirm the pickup" }).click();
+}
+
+/** The worker controls the page and keeps the leg: the way a courier opens it before driving off. */
+async function openLegWithTheWorker(page: Page, id: string): Promise<void> {
+  await expect
+    .poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null), { timeout: 30_000 })
+    .toBe(true);
+  await page.goto(`/legs/${id}`);
+  await page.getByRole("button", { name: "Review before confirming" }).waitFor();
+  await expect.poll(async () => (await keptUrls(page)).includes(`/api/transfers/${id}`)).toBe(true);
+}
+
+/** A transfer cleared to travel whose one leg the demo courier (Juno Park) carries. */
+async function clearedTransferForTheDemoCourier(): Promise<string> {
+  const { context, page } = await newPage(browser);
+  await signInAs(page, "sender@demo.hatchway.test");
+  await page.waitForURL((u) => u.pathname === "/");
+  const { organizations } = await call<{ organizations: { id: string; name: string }[] }>(
+    page,
+    "GET",
+    "/api/directory/organizations",
+  );
+  const { taxa } = await call<{ taxa: { id: string; scientificName: string }[] }>(
+    page,
+    "GET",
+    `/api/taxa?q=${encodeURIComponent("Pantherophis guttatus")}`,
+  );
+  const { couriers } = await call<{ couriers: { id: string; displayName: string }[] }>(
+    page,
+    "GET",
+    "/api/directory/couriers",
+  );
+  const depart = new Date(Date.now() + 6 * 3600_000);
+  const { transfer } = await call<{ transfer: { id: string } }>(page, "POST", "/api/transfers", {
+    receiverOrganizationId: organizations.find((o) => o.name === "Willow Marsh Nature Centre")!.id,
+    receiverContactId: null,
+    origin: { street: "418 Quarry Hollow Road", city: "Knoxville", state: "TN", zip: "37917" },
+    destination: { street: "92 Boardwalk Lane", city: "Eugene", state: "OR", zip: "97401" },
+    mode: "ground_courier",
+    plannedDepartureAt: depart.toISOString(),
+    expectedArrivalAt: new Date(depart.getTime() + 40 * 3600_000).toISOString(),
+    purpose: "education_exhibition",
+    sale: false,
+    salePriceUsd: null,
+    handlingNotes: "Keep upright.",
+    privateNotes: null,
+    containers: [
+      {
+        key: "A",
+        label: "A",
+        lengthMm: 400,
+        widthMm: 300,
+        heightMm: 250,
+        wallMaterial: "eps",
+        wallThicknessMm: 25,
+        pack: "none",
+        sealNumber: "SEAL-0160",
+      },
+    ],
+    animals: [
+      {
+        taxonId: taxa.find((t) => t.scientificName === "Pantherophis guttatus")!.id,
+        count: 1,
+        sex: "female",
+        identifier: null,
+        identifierKind: null,
+        origin: "captive_bred",
+        lengthMm: null,
+        lengthKind: null,
+        weightG: null,
+        hatchDate: null,
+        notes: null,
+        containerKey: "A",
+      },
+    ],
+  });
+  const createdId = transfer.id;
+  await call(page, "PUT", `/api/transfers/${createdId}/legs`, {
+    legs: [{ courierId: couriers.find((c) => c.displayName === "Juno Park")!.id }],
+  });
+  await call(page, "POST", `/api/transfers/${createdId}/transition`, { to: "awaiting_receiver" });
+  await context.close();
+
+  const receiverSide = await newPage(browser);
+  await signInAs(receiverSide.page, "receiver@demo.hatchway.test");
+  await receiverSide.page.waitForURL((u) => u.pathname === "/");
+  await call(receiverSide.page, "POST", `/api/transfers/${createdId}/transition`, {
+    to: "ready",
+    override: true,
+    reason: "Heated van door to door; checked the forecast ourselves.",
+  });
+  await receiverSide.context.close();
+  return createdId;
+}
 
 describe("the installable app", () => {
   // A worker script is re-checked on every load (no long cache); the manifest names the app
@@ -86,84 +198,7 @@ describe("the installable app", () => {
 
 describe("a handoff without signal", () => {
   it("the sender and the receiver clear a transfer the demo courier carries", async () => {
-    const { context, page } = await newPage(browser);
-    await signInAs(page, "sender@demo.hatchway.test");
-    await page.waitForURL((u) => u.pathname === "/");
-    const { organizations } = await call<{ organizations: { id: string; name: string }[] }>(
-      page,
-      "GET",
-      "/api/directory/organizations",
-    );
-    const { taxa } = await call<{ taxa: { id: string; scientificName: string }[] }>(
-      page,
-      "GET",
-      `/api/taxa?q=${encodeURIComponent("Pantherophis guttatus")}`,
-    );
-    const { couriers } = await call<{ couriers: { id: string; displayName: string }[] }>(
-      page,
-      "GET",
-      "/api/directory/couriers",
-    );
-    const depart = new Date(Date.now() + 6 * 3600_000);
-    const { transfer } = await call<{ transfer: { id: string } }>(page, "POST", "/api/transfers", {
-      receiverOrganizationId: organizations.find((o) => o.name === "Willow Marsh Nature Centre")!.id,
-      receiverContactId: null,
-      origin: { street: "418 Quarry Hollow Road", city: "Knoxville", state: "TN", zip: "37917" },
-      destination: { street: "92 Boardwalk Lane", city: "Eugene", state: "OR", zip: "97401" },
-      mode: "ground_courier",
-      plannedDepartureAt: depart.toISOString(),
-      expectedArrivalAt: new Date(depart.getTime() + 40 * 3600_000).toISOString(),
-      purpose: "education_exhibition",
-      sale: false,
-      salePriceUsd: null,
-      handlingNotes: "Keep upright.",
-      privateNotes: null,
-      containers: [
-        {
-          key: "A",
-          label: "A",
-          lengthMm: 400,
-          widthMm: 300,
-          heightMm: 250,
-          wallMaterial: "eps",
-          wallThicknessMm: 25,
-          pack: "none",
-          sealNumber: "SEAL-0160",
-        },
-      ],
-      animals: [
-        {
-          taxonId: taxa.find((t) => t.scientificName === "Pantherophis guttatus")!.id,
-          count: 1,
-          sex: "female",
-          identifier: null,
-          identifierKind: null,
-          origin: "captive_bred",
-          lengthMm: null,
-          lengthKind: null,
-          weightG: null,
-          hatchDate: null,
-          notes: null,
-          containerKey: "A",
-        },
-      ],
-    });
-    transferId = transfer.id;
-    await call(page, "PUT", `/api/transfers/${transferId}/legs`, {
-      legs: [{ courierId: couriers.find((c) => c.displayName === "Juno Park")!.id }],
-    });
-    await call(page, "POST", `/api/transfers/${transferId}/transition`, { to: "awaiting_receiver" });
-    await context.close();
-
-    const receiverSide = await newPage(browser);
-    await signInAs(receiverSide.page, "receiver@demo.hatchway.test");
-    await receiverSide.page.waitForURL((u) => u.pathname === "/");
-    await call(receiverSide.page, "POST", `/api/transfers/${transferId}/transition`, {
-      to: "ready",
-      override: true,
-      reason: "Heated van door to door; checked the forecast ourselves.",
-    });
-    await receiverSide.context.close();
+    transferId = await clearedTransferForTheDemoCourier();
   });
 
   it("the courier confirms the pickup offline; it waits on the phone, survives a reload and is recorded once", async () => {
@@ -187,21 +222,7 @@ describe("a handoff without signal", () => {
     expect(before).toBe(0);
 
     await context.setOffline(true);
-    await page.getByRole("button", { name: /One more: Boxes/ }).click();
-    await page.getByLabel("Seal number you read on A").fill("SEAL-0160");
-    await page.getByRole("checkbox", { name: "The seal is there and unbroken" }).check();
-    await page.getByLabel("Place").fill("Rest area car park, mile 112");
-    await page.locator('input[type="file"]').first().setInputFiles({
-      name: "boxes.jpg",
-      mimeType: "image/jpeg",
-      buffer: TINY_JPEG,
-    });
-    await page.getByRole("button", { name: "Review before confirming" }).click();
-    const early = page.getByLabel("Why so early?");
-    await page.getByRole("button", { name: "Confirm the pickup" }).waitFor();
-    if (await early.count()) await early.fill("Collected early to ride in our heated van.");
-    await page.getByRole("checkbox", { name: /I have counted the boxes/ }).check();
-    await page.getByRole("button", { name: "Confirm the pickup" }).click();
+    await confirmPickup(page);
 
     const waiting = page.getByRole("status").filter({ hasText: /saved on this phone, not yet sent/i });
     await expect.poll(() => waiting.count()).toBe(1);
@@ -250,6 +271,52 @@ describe("a handoff without signal", () => {
     await page.getByRole("heading", { name: "Handoffs" }).waitFor();
     await page.waitForLoadState("networkidle");
     expect(await handoffEntries(page)).toHaveLength(1);
+    await context.close();
+  });
+
+  it("a pickup the server refuses when it arrives (the transfer was cancelled) is said plainly and kept until discarded", async () => {
+    const cancelledId = await clearedTransferForTheDemoCourier();
+    const { context, page } = await newPage(browser, PHONE);
+    await signInAs(page, "courier@demo.hatchway.test");
+    await page.waitForURL((u) => u.pathname === "/");
+    await openLegWithTheWorker(page, cancelledId);
+
+    await context.setOffline(true);
+    await confirmPickup(page);
+    await expect
+      .poll(() =>
+        page
+          .getByRole("status")
+          .filter({ hasText: /saved on this phone, not yet sent/i })
+          .count(),
+      )
+      .toBe(1);
+
+    // Meanwhile, with signal, the sender cancels the transfer.
+    const sender = await newPage(browser);
+    await signInAs(sender.page, "sender@demo.hatchway.test");
+    await sender.page.waitForURL((u) => u.pathname === "/");
+    await call(sender.page, "POST", `/api/transfers/${cancelledId}/transition`, {
+      to: "cancelled",
+      reason: "The receiver's permit is on hold.",
+    });
+    await sender.context.close();
+
+    await context.setOffline(false);
+    const refused = page.getByRole("alert").filter({ hasText: "Refused by Hatchway: not recorded" });
+    await expect.poll(() => refused.count(), { timeout: 30_000 }).toBe(1);
+    // The server's own words are on the phone, quoted.
+    await expect.poll(async () => (await refused.textContent())?.match(/“.+”/)?.[0].length ?? 0).toBeGreaterThan(4);
+    await expectAccessible(page);
+    await screenshot(page, "offline-6-phone-refused");
+
+    // Kept across a reload until the courier discards it.
+    await page.reload();
+    await expect.poll(() => refused.count(), { timeout: 20_000 }).toBe(1);
+    await page.getByRole("button", { name: "Discard it" }).click();
+    await page.getByRole("dialog").getByRole("button", { name: "Discard it" }).click();
+    await expect.poll(() => refused.count()).toBe(0);
+    expect(await handoffEntries(page, cancelledId)).toHaveLength(0);
     await context.close();
   });
 

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
-import { HANDOFF_KIND_WORDS, OFFLINE_HANDOFF_WORDS } from "@shared/words";
+import { HANDOFF_KIND_WORDS, OFFLINE_HANDOFF_TEXT } from "@shared/words";
 import { useToast } from "@/components/ui/toast";
 import { newIdempotencyKey } from "@/lib/idempotency";
 import { queuedHandoffKeys, useQueuedHandoffs } from "@/lib/offline-data";
@@ -28,7 +28,7 @@ export function useSendQueuedHandoffs(userId: string) {
       for (const { entry, transfer } of report.sent) {
         if (transfer) storeTransfer(client, transfer);
         else void client.invalidateQueries({ queryKey: transferKeys.detail(entry.transferId) });
-        notify(`${entry.transferNumber}: ${HANDOFF_KIND_WORDS[entry.kind]} ${OFFLINE_HANDOFF_WORDS.sent}`);
+        notify(`${entry.transferNumber}: ${HANDOFF_KIND_WORDS[entry.kind]} ${OFFLINE_HANDOFF_TEXT.sent}`);
       }
       if (report.photoProblems.length) notify("Not every photo was accepted", report.photoProblems.join(" "));
       if (report.refused.length) void client.invalidateQueries({ queryKey: transferKeys.lists() });

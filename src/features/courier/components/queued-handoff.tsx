@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { formatInstant } from "@shared/dates";
-import { HANDOFF_KIND_WORDS, OFFLINE_HANDOFF_STATE_WORDS, OFFLINE_HANDOFF_WORDS } from "@shared/words";
+import { HANDOFF_KIND_WORDS, OFFLINE_HANDOFF_STATE_WORDS, OFFLINE_HANDOFF_TEXT } from "@shared/words";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Notice } from "@/components/ui/feedback";
@@ -25,7 +25,7 @@ export function QueuedHandoffCard({ entry, userId }: { entry: QueuedHandoff; use
     return (
       <section aria-label={`${what}: ${OFFLINE_HANDOFF_STATE_WORDS.refused}`} className="grid gap-3">
         <Notice tone="block" role="alert" title={`${what}: ${OFFLINE_HANDOFF_STATE_WORDS.refused}`}>
-          <p>{OFFLINE_HANDOFF_WORDS.refusedDetail}</p>
+          <p>{OFFLINE_HANDOFF_TEXT.refusedDetail}</p>
           <p className="mt-2 text-base font-semibold">“{entry.refusal?.message}”</p>
           <p className="mt-2">{confirmed}</p>
         </Notice>
@@ -54,7 +54,7 @@ export function QueuedHandoffCard({ entry, userId }: { entry: QueuedHandoff; use
   return (
     <section aria-label={`${what}: ${OFFLINE_HANDOFF_STATE_WORDS.waiting}`} className="grid gap-3">
       <Notice tone="caution" role="status" title={`${what}: ${OFFLINE_HANDOFF_STATE_WORDS.waiting.toLowerCase()}`}>
-        <p>{OFFLINE_HANDOFF_WORDS.waitingDetail}</p>
+        <p>{OFFLINE_HANDOFF_TEXT.waitingDetail}</p>
         <p className="mt-2">{confirmed}</p>
       </Notice>
       <div>

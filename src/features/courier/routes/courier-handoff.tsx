@@ -112,7 +112,9 @@ export function CourierHandoffRoute() {
                 key={i}
                 className={`rounded-md border p-3 ${
                   keptAt(i) && !done
-                    ? "border-amber-line bg-amber-bg"
+                    ? keptAt(i)!.state === "refused"
+                      ? "border-brick-line bg-brick-bg"
+                      : "border-amber-line bg-amber-bg"
                     : i === next
                       ? "border-fern bg-fern-light"
                       : "border-rule bg-paper-card"
