@@ -155,7 +155,10 @@ async function measureLegPage(browser: Browser, baseUrl: string) {
     const context = await browser.newContext({ baseURL: baseUrl, viewport: { width: 390, height: 844 } });
     await context.addCookies([{ name, value, url: baseUrl }]);
     loads.push(
-      await loadUntilUsable(context, `/legs/${transferId}`, { selector: "button[type=submit]", text: "Confirm the" }),
+      await loadUntilUsable(context, `/legs/${transferId}`, {
+        selector: "button[type=submit]",
+        text: "Review before confirming",
+      }),
     );
     await context.close();
   }

@@ -241,6 +241,10 @@ export type TransferSortKey = (typeof TRANSFER_SORT_KEYS)[number];
 export const HANDOFF_KINDS = ["pickup", "handoff", "delivery"] as const;
 export type HandoffKind = (typeof HANDOFF_KINDS)[number];
 
+/** A handoff kept on a phone without signal (D40): waiting to be sent, or refused by the server. */
+export const OFFLINE_HANDOFF_STATES = ["waiting", "refused"] as const;
+export type OfflineHandoffState = (typeof OFFLINE_HANDOFF_STATES)[number];
+
 /** Kinds of entry in a transfer's append-only custody log. */
 export const CUSTODY_KINDS = [
   "created",

@@ -3,6 +3,7 @@ import { createRoot } from "react-dom/client";
 import { RouterProvider } from "react-router";
 import { AppProviders, createQueryClient } from "./app/providers";
 import { createAppRouter } from "./app/router";
+import { registerServiceWorker } from "./lib/service-worker";
 import "./index.css";
 
 const client = createQueryClient();
@@ -15,3 +16,12 @@ createRoot(document.getElementById("root")!).render(
     </AppProviders>
   </StrictMode>,
 );
+
+registerServiceWorker({
+  settled: () =>
+    router.state.initialized &&
+    router.state.navigation.state === "idle" &&
+    client.isFetching() === 0 &&
+    client.isMutating() === 0,
+  onControlled: () => void client.refetchQueries({ type: "active" }),
+});

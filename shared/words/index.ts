@@ -19,3 +19,4 @@ export * from "./changes";
 export * from "./evidence";
 export * from "./register";
 export * from "./runs";
+export * from "./offline";

@@ -3,8 +3,10 @@ import { NavLink, useNavigate } from "react-router";
 import { Button } from "@/components/ui/button";
 import { UnitsSwitch } from "@/components/ui/units-switch";
 import { paths } from "@/config/paths";
-import { USER_ROLE_WORDS } from "@shared/words";
+import { OFFLINE_HANDOFF_TEXT, USER_ROLE_WORDS } from "@shared/words";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useSignOut, type Session } from "@/features/auth/api/session";
+import { useQueuedHandoffs } from "@/lib/offline-data";
 
 type NavItem = { to: string; label: string; show: (s: NonNullable<Session>) => boolean };
 
@@ -42,6 +44,10 @@ export function AppHeader({ session }: { session: NonNullable<Session> }) {
   const signOut = useSignOut();
   const navigate = useNavigate();
   const [menuOpen, setMenuOpen] = useState(false);
+  // Handoffs kept on this phone go at sign-out (D40): ask first while any is not yet sent.
+  const kept = useQueuedHandoffs(session.user.id).data ?? [];
+  const [askSignOut, setAskSignOut] = useState(false);
+  const doSignOut = () => signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn) });
   const folded = menuOpen ? "flex" : "hidden";
 
   return (
@@ -72,11 +78,24 @@ export function AppHeader({ session }: { session: NonNullable<Session> }) {
           </div>
           <Button
             variant="secondary"
-            onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.signIn) })}
+            onClick={() => (kept.length ? setAskSignOut(true) : doSignOut())}
             busy={signOut.isPending}
           >
             Sign out
           </Button>
+          <ConfirmDialog
+            open={askSignOut}
+            title={OFFLINE_HANDOFF_TEXT.signOutQuestion}
+            confirmLabel="Sign out anyway"
+            cancelLabel="Stay signed in"
+            tone="danger"
+            busy={signOut.isPending}
+            onConfirm={doSignOut}
+            onCancel={() => setAskSignOut(false)}
+          >
+            {kept.length === 1 ? "One handoff is" : `${kept.length} handoffs are`} kept on this phone.{" "}
+            {OFFLINE_HANDOFF_TEXT.signOutDetail}
+          </ConfirmDialog>
         </div>
         <nav id="main-menu" aria-label="Main" className={`${folded} w-full sm:order-last sm:flex`}>
           <ul className="flex w-full flex-col gap-1 sm:flex-row sm:flex-wrap">

@@ -4,11 +4,19 @@ import { ToastProvider } from "@/components/ui/toast";
 import { paths } from "@/config/paths";
 import type { Viewer } from "@/lib/viewer";
 import { useSession } from "@/features/auth/api/session";
+import { OfflineHandoffSender } from "@/features/courier/components/offline-handoff-sender";
+import { forgetOtherPeople } from "@/lib/offline-data";
+import { useEffect } from "react";
 import { AppHeader } from "./app-header";
 
 export function AppLayout() {
   const session = useSession();
   const location = useLocation();
+  const userId = session.data?.user.id;
+  // Another person on this phone since the last visit: what was kept for them goes (D40).
+  useEffect(() => {
+    if (userId) void forgetOtherPeople(userId);
+  }, [userId]);
 
   if (session.isPending)
     return (
@@ -30,6 +38,7 @@ export function AppLayout() {
 
   return (
     <ToastProvider>
+      <OfflineHandoffSender userId={session.data.user.id} />
       <div className="min-h-screen">
         <a
           href="#main"

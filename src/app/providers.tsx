@@ -9,6 +9,9 @@ export function createQueryClient() {
         // 4xx answers are final; only network trouble and 5xx are worth a retry.
         retry: (count, error) => count < 2 && !(error instanceof ApiError && error.status >= 400 && error.status < 500),
         refetchOnWindowFocus: false,
+        // Ask even when the phone says it is offline: the service worker may answer with the copy
+        // it kept (D40). Retries wait for the network.
+        networkMode: "offlineFirst",
       },
     },
   });

@@ -20,7 +20,12 @@ let csrfToken: string | null = null;
 
 async function csrf(): Promise<string> {
   if (csrfToken) return csrfToken;
-  const response = await fetch("/api/auth/csrf", { credentials: "same-origin" });
+  let response: Response;
+  try {
+    response = await fetch("/api/auth/csrf", { credentials: "same-origin" });
+  } catch {
+    throw new ApiError(0, "network", "Hatchway cannot be reached. Check your connection and try again.");
+  }
   if (!response.ok) throw new ApiError(response.status, "csrf", "Could not reach Hatchway. Check your connection.");
   csrfToken = ((await response.json()) as { csrfToken: string }).csrfToken;
   return csrfToken;

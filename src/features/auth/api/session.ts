@@ -2,6 +2,7 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/r
 import type { LoginInput, SetPasswordInput, UserDto } from "@shared/schemas/auth";
 import { api, ApiError, resetCsrf } from "@/lib/api-client";
 import { forgetAllWork } from "@/lib/kept-work";
+import { forgetOfflineData } from "@/lib/offline-data";
 
 export type Abilities = {
   manageUsers: boolean;
@@ -38,7 +39,11 @@ export function useSignIn() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (input: LoginInput) => api<{ user: UserDto }>("/api/auth/login", { method: "POST", body: input }),
-    onSuccess: () => client.invalidateQueries({ queryKey: sessionKey }),
+    // Pages the phone kept for someone else go before this person's are read (D40).
+    onSuccess: async ({ user }) => {
+      await forgetOfflineData(user.id);
+      await client.invalidateQueries({ queryKey: sessionKey });
+    },
   });
 }
 
@@ -46,10 +51,12 @@ export function useSignOut() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: () => api<void>("/api/auth/logout", { method: "POST" }),
-    onSettled: () => {
+    onSettled: async () => {
       resetCsrf();
-      // What the browser kept for the person (e.g. a half-typed transfer) goes with them.
+      // What the browser kept for the person (e.g. a half-typed transfer, the pages and handoffs
+      // kept for use without signal) goes with them.
       forgetAllWork();
+      await forgetOfflineData(null);
       client.clear();
       client.setQueryData(sessionKey, null);
     },

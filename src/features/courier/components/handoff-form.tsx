@@ -1,4 +1,4 @@
-import { HANDOFF_KIND_WORDS } from "@shared/words";
+import { HANDOFF_KIND_WORDS, OFFLINE_HANDOFF_STATE_WORDS } from "@shared/words";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { Controller, FormProvider, useForm, type FieldPath } from "react-hook-form";
 import type { z } from "zod";
@@ -71,15 +71,17 @@ function serverFindings(error: unknown): Finding[] | null {
 export function HandoffForm({
   transfer: t,
   index,
-  viewerName,
+  viewer,
   onRecorded,
 }: {
   transfer: TransferDto;
   index: number;
-  viewerName: string;
-  onRecorded: (message: string, problems: string[]) => void;
+  viewer: { id: string; displayName: string };
+  /** `kept`: no signal, the handoff waits on the phone (D40). */
+  onRecorded: (message: string, problems: string[], kept?: boolean) => void;
 }) {
-  const record = useRecordHandoff(t.id);
+  const viewerName = viewer.displayName;
+  const record = useRecordHandoff(t, viewer.id);
   const { key, settle } = useIdempotencyKey();
   const [review, setReview] = useState<HandoffReview | null>(null);
   const [photos, setPhotos] = useState<ChosenPhoto[]>([]);
@@ -135,11 +137,17 @@ export function HandoffForm({
       record.mutate(
         { input: { ...input, receiverCode: input.receiverCode || null }, idempotencyKey: key, photos },
         {
-          onSuccess: ({ failed }) =>
-            onRecorded(
-              `${HANDOFF_KIND_WORDS[kind]} recorded.${findings.length ? ` ${findings.length === 1 ? "An alert went" : `${findings.length} alerts went`} to the sender and the receiver.` : ""}`,
-              failed.map((f) => `A photo was not sent (${f.message}). Add it again below.`),
-            ),
+          onSuccess: (outcome) =>
+            outcome.sent
+              ? onRecorded(
+                  `${HANDOFF_KIND_WORDS[kind]} recorded.${findings.length ? ` ${findings.length === 1 ? "An alert went" : `${findings.length} alerts went`} to the sender and the receiver.` : ""}`,
+                  outcome.failed.map((f) => `A photo was not sent (${f.message}). Add it again below.`),
+                )
+              : onRecorded(
+                  `${HANDOFF_KIND_WORDS[kind]}: ${OFFLINE_HANDOFF_STATE_WORDS.waiting.toLowerCase()}.`,
+                  [],
+                  true,
+                ),
           onError: (error) => {
             const more = serverFindings(error);
             if (more) setFromServer(more);

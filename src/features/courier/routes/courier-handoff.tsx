@@ -1,5 +1,5 @@
 import { TRANSFER_STATUS_WORDS } from "@shared/words";
-import { DELIVERY_STATE_WORDS, HANDOFF_KIND_WORDS } from "@shared/words";
+import { DELIVERY_STATE_WORDS, HANDOFF_KIND_WORDS, OFFLINE_HANDOFF_STATE_WORDS } from "@shared/words";
 import { useState } from "react";
 import { PaperworkLinks } from "@/components/ui/paperwork-links";
 import { useParams } from "react-router";
@@ -11,9 +11,11 @@ import { formatInstant } from "@shared/dates";
 import { useTransfer } from "@/lib/transfer-queries";
 import { useViewer } from "@/lib/viewer";
 import { useDocumentTitle } from "@/lib/document-title";
+import { useQueuedHandoffs } from "@/lib/offline-data";
 import { AddPhotos } from "../components/add-photos";
 import { DeliveryCodeEntry } from "../components/delivery-code-entry";
 import { HandoffForm } from "../components/handoff-form";
+import { QueuedHandoffCard } from "../components/queued-handoff";
 
 const phoneLink =
   "inline-flex min-h-12 items-center rounded-md border border-rule bg-paper-card px-4 text-lg font-semibold text-fern";
@@ -23,6 +25,7 @@ export function CourierHandoffRoute() {
   const { transferId = "" } = useParams();
   const viewer = useViewer();
   const transfer = useTransfer(transferId);
+  const queue = useQueuedHandoffs(viewer.user.id);
   const [recorded, setRecorded] = useState<{ message: string; problems: string[] } | null>(null);
   useDocumentTitle(transfer.data ? `Leg of ${transfer.data.number}` : "Your leg");
 
@@ -41,6 +44,11 @@ export function CourierHandoffRoute() {
   const legs = [...t.legs].sort((a, b) => a.sequence - b.sequence);
   const animals = t.animals.reduce((n, a) => n + a.count, 0);
   const next = t.abilities.handOff;
+  // Kept on this phone and not yet on the record (D40); one the record already has is not shown twice.
+  const kept = (queue.data ?? []).filter(
+    (entry) => entry.transferId === t.id && !t.handoffs.some((h) => h.handoffIndex === entry.input.handoffIndex),
+  );
+  const keptAt = (index: number) => kept.find((entry) => entry.input.handoffIndex === index);
 
   return (
     <div className="mx-auto grid max-w-xl gap-5 text-lg">
@@ -69,6 +77,9 @@ export function CourierHandoffRoute() {
           {recorded.problems.join(" ")}
         </Notice>
       ) : null}
+      {kept.map((entry) => (
+        <QueuedHandoffCard key={entry.idempotencyKey} entry={entry} userId={viewer.user.id} />
+      ))}
       {t.abilities.enterDeliveryCode ? <DeliveryCodeEntry transfer={t} /> : null}
 
       <TransportCautions />
@@ -99,7 +110,15 @@ export function CourierHandoffRoute() {
             return (
               <li
                 key={i}
-                className={`rounded-md border p-3 ${i === next ? "border-fern bg-fern-light" : "border-rule bg-paper-card"}`}
+                className={`rounded-md border p-3 ${
+                  keptAt(i) && !done
+                    ? keptAt(i)!.state === "refused"
+                      ? "border-brick-line bg-brick-bg"
+                      : "border-amber-line bg-amber-bg"
+                    : i === next
+                      ? "border-fern bg-fern-light"
+                      : "border-rule bg-paper-card"
+                }`}
               >
                 <p className="font-semibold">
                   {i + 1}.{" "}
@@ -115,9 +134,11 @@ export function CourierHandoffRoute() {
                 <p className="text-base text-ink-soft">
                   {done
                     ? `${done.releasedByName} → ${done.receivedByName} · recorded ${formatInstant(done.at)}`
-                    : i === next
-                      ? "To record now"
-                      : "Not yet"}
+                    : keptAt(i)
+                      ? OFFLINE_HANDOFF_STATE_WORDS[keptAt(i)!.state]
+                      : i === next
+                        ? "To record now"
+                        : "Not yet"}
                 </p>
                 {done && i === legs.length && t.delivery ? (
                   <p
@@ -132,13 +153,13 @@ export function CourierHandoffRoute() {
         </ol>
       </section>
 
-      {next !== null ? (
+      {next !== null && keptAt(next) ? null : next !== null ? (
         <HandoffForm
           key={`${next}-${t.version}`}
           transfer={t}
           index={next}
-          viewerName={viewer.user.displayName}
-          onRecorded={(message, problems) => setRecorded({ message, problems })}
+          viewer={viewer.user}
+          onRecorded={(message, problems, keptOnPhone) => (keptOnPhone ? null : setRecorded({ message, problems }))}
         />
       ) : (
         <Notice tone="info" title="Nothing for you to record right now">

@@ -3,16 +3,41 @@ import type { TransferStatus } from "@shared/constants";
 import type { TransferSummaryDto } from "@shared/schemas/transfer";
 import { Button } from "@/components/ui/button";
 import { TransportCautions } from "@/components/ui/cautions";
-import { EmptyState, Loading, Notice } from "@/components/ui/feedback";
+import { Badge, EmptyState, Loading, Notice } from "@/components/ui/feedback";
 import { PageHeader } from "@/components/ui/page";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { paths } from "@/config/paths";
 import { formatInstant } from "@shared/dates";
+import { useQueuedHandoffs } from "@/lib/offline-data";
+import type { QueuedHandoff } from "@/lib/offline-handoffs";
 import { useTransfers } from "@/lib/transfer-queries";
+import { useViewer } from "@/lib/viewer";
+import { OFFLINE_HANDOFF_STATE_WORDS } from "@shared/words";
 
 const FINISHED: readonly TransferStatus[] = ["delivered", "checked_in", "closed", "cancelled"];
 
-function LegCard({ transfer: t }: { transfer: TransferSummaryDto }) {
+/** Handoffs of this leg kept on the phone (D40): said on the card, so nothing waits unseen. */
+function KeptOnPhone({ entries }: { entries: QueuedHandoff[] }) {
+  if (!entries.length) return null;
+  const refused = entries.filter((e) => e.state === "refused").length;
+  const waiting = entries.length - refused;
+  return (
+    <div className="grid justify-items-start gap-1">
+      {waiting ? (
+        <Badge tone="caution">
+          {waiting === 1 ? "1 handoff" : `${waiting} handoffs`}: {OFFLINE_HANDOFF_STATE_WORDS.waiting.toLowerCase()}
+        </Badge>
+      ) : null}
+      {refused ? (
+        <Badge tone="block">
+          {refused === 1 ? "1 handoff" : `${refused} handoffs`}: {OFFLINE_HANDOFF_STATE_WORDS.refused.toLowerCase()}
+        </Badge>
+      ) : null}
+    </div>
+  );
+}
+
+function LegCard({ transfer: t, kept }: { transfer: TransferSummaryDto; kept: QueuedHandoff[] }) {
   return (
     <li className="grid gap-2 rounded-card border border-rule bg-paper-card p-4 shadow-card">
       <div className="flex flex-wrap items-center justify-between gap-2">
@@ -29,6 +54,7 @@ function LegCard({ transfer: t }: { transfer: TransferSummaryDto }) {
       <p className="text-sm text-ink-soft">
         {t.sender.name} to {t.receiver.name}
       </p>
+      <KeptOnPhone entries={kept} />
       <Link
         to={paths.courier.handoff.href(t.id)}
         className="mt-1 inline-flex min-h-14 items-center justify-center rounded-md border border-fern-dark bg-fern px-6 text-lg font-semibold text-paper-card hover:bg-fern-dark"
@@ -43,6 +69,9 @@ function LegCard({ transfer: t }: { transfer: TransferSummaryDto }) {
 /** The courier's home on the phone: the legs they carry, soonest first; finished ones below. */
 export function CourierLegsRoute() {
   const list = useTransfers({ role: "carrying", sort: "departure", dir: "asc" });
+  const viewer = useViewer();
+  const queue = useQueuedHandoffs(viewer.user.id);
+  const keptFor = (id: string) => (queue.data ?? []).filter((entry) => entry.transferId === id);
   const rows = list.data?.pages.flatMap((p) => p.transfers) ?? [];
   const open = rows.filter((t) => !FINISHED.includes(t.status));
   const done = rows.filter((t) => FINISHED.includes(t.status));
@@ -67,7 +96,7 @@ export function CourierLegsRoute() {
             {open.length ? (
               <ul className="grid gap-3">
                 {open.map((t) => (
-                  <LegCard key={t.id} transfer={t} />
+                  <LegCard key={t.id} transfer={t} kept={keptFor(t.id)} />
                 ))}
               </ul>
             ) : (
@@ -81,7 +110,7 @@ export function CourierLegsRoute() {
               </h2>
               <ul className="grid gap-3">
                 {done.map((t) => (
-                  <LegCard key={t.id} transfer={t} />
+                  <LegCard key={t.id} transfer={t} kept={keptFor(t.id)} />
                 ))}
               </ul>
             </section>
