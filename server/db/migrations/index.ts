@@ -17,6 +17,7 @@ import { Migration20261205102000_joining } from "./Migration20261205102000_joini
 import { Migration20261205103000_account_mail } from "./Migration20261205103000_account_mail";
 import { Migration20261205104000_organization_invitations } from "./Migration20261205104000_organization_invitations";
 import { Migration20261205105000_courier_service } from "./Migration20261205105000_courier_service";
+import { Migration20261207100000_register_report_indexes } from "./Migration20261207100000_register_report_indexes";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -39,4 +40,8 @@ export const MIGRATIONS = [
     class: Migration20261205104000_organization_invitations,
   },
   { name: "Migration20261205105000_courier_service", class: Migration20261205105000_courier_service },
+  {
+    name: "Migration20261207100000_register_report_indexes",
+    class: Migration20261207100000_register_report_indexes,
+  },
 ];

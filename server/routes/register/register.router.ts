@@ -220,15 +220,13 @@ export function registerRouter(ctx: AppContext): Router {
   };
   router.get("/report", async (req, res) => {
     const { query, report: body } = await report(req);
+    if (query.format === "json") return res.json(body);
     if (query.format === "csv")
       return sendCsv(res, `yearly-report-${body.permit.number}-${body.from}-${body.to}.csv`, reportCsv(body));
-    if (query.format === "pdf") {
-      const pdf = await renderRegisterReportPdf(body, new Date());
-      res.setHeader("Content-Type", "application/pdf");
-      res.setHeader("Content-Disposition", `attachment; filename="yearly-report-${body.from}-${body.to}.pdf"`);
-      return res.send(Buffer.from(pdf));
-    }
-    res.json(body);
+    const pdf = await renderRegisterReportPdf(body, new Date());
+    res.setHeader("Content-Type", "application/pdf");
+    res.setHeader("Content-Disposition", `attachment; filename="yearly-report-${body.from}-${body.to}.pdf"`);
+    res.send(Buffer.from(pdf));
   });
 
   // A new transfer started from the register (issue 15 §2): one prefilled animal line per chosen entry.
