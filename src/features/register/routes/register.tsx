@@ -92,6 +92,9 @@ export function RegisterRoute() {
             <Link to={paths.registerReport} className={linkButton}>
               Yearly report
             </Link>
+            <Link to={paths.registerSettings} className={linkButton}>
+              Quarantine length
+            </Link>
             <a href={registerCsvHref(filters)} download className={linkButton}>
               Download as CSV
             </a>
