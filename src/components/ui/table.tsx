@@ -7,7 +7,13 @@ import type { ReactNode } from "react";
  */
 export function Table({ caption, head, children }: { caption: string; head: ReactNode; children: ReactNode }) {
   return (
-    <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+    // Focusable and named, so a keyboard can scroll a table wider than the screen (axe: scrollable-region-focusable).
+    <div
+      role="region"
+      aria-label={caption}
+      tabIndex={0}
+      className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card focus-visible:outline-hidden focus-visible:ring-3 focus-visible:ring-fern-ring"
+    >
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">{head}</thead>
