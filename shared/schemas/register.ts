@@ -16,6 +16,7 @@ import {
   type Sex,
 } from "../constants";
 import { KINDS_WITH_COUNTERPARTY, RECORDABLE_EVENT_KINDS } from "../register/ledger";
+import type { StateNoticeTodo } from "../register/state-notices";
 import { z } from "../validation/zod";
 import { dateSchema, idSchema, measure, optionalText, requiredText, text, wholeNumber } from "./common";
 
@@ -255,4 +256,16 @@ export type RegisterReportDto = {
     end: number;
     events: ReportEventDto[];
   }[];
+};
+
+/** `POST /api/register/transfers/:transferId/notices/:key/done`: a state notice sent, with what the agency gave back. */
+export const stateNoticeDoneSchema = z.strictObject({
+  note: optionalText(2000),
+  reference: optionalText(120),
+});
+export type StateNoticeDoneInput = z.input<typeof stateNoticeDoneSchema>;
+
+/** A state notice owed after a move, and who marked it done (null while it is still to do). */
+export type StateNoticeDto = StateNoticeTodo & {
+  done: { byName: string; at: string; note: string | null; reference: string | null } | null;
 };

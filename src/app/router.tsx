@@ -135,6 +135,10 @@ export function createAppRouter(queryClient: QueryClient) {
           path: paths.registerReport,
           lazy: screen(() => import("@/features/register/routes/register-report"), "RegisterReportRoute"),
         },
+        {
+          path: paths.registerSettings,
+          lazy: screen(() => import("@/features/register/routes/register-settings"), "RegisterSettingsRoute"),
+        },
         { path: paths.permits, lazy: screen(() => import("@/features/compliance/routes/documents"), "DocumentsRoute") },
         {
           path: paths.canItTravel,

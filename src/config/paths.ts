@@ -46,6 +46,7 @@ export const paths = {
   registerAdd: "/register/add",
   registerImport: "/register/import",
   registerReport: "/register/report",
+  registerSettings: "/register/settings",
   /** The organisation's permits and certificates (the expiry e-mail links here). */
   permits: "/permits",
   canItTravel: "/can-it-travel",

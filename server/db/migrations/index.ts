@@ -18,6 +18,8 @@ import { Migration20261205103000_account_mail } from "./Migration20261205103000_
 import { Migration20261205104000_organization_invitations } from "./Migration20261205104000_organization_invitations";
 import { Migration20261205105000_courier_service } from "./Migration20261205105000_courier_service";
 import { Migration20261206100000_runs } from "./Migration20261206100000_runs";
+import { Migration20261207100000_register_report_indexes } from "./Migration20261207100000_register_report_indexes";
+import { Migration20261207101000_state_notice_done } from "./Migration20261207101000_state_notice_done";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -41,4 +43,9 @@ export const MIGRATIONS = [
   },
   { name: "Migration20261205105000_courier_service", class: Migration20261205105000_courier_service },
   { name: "Migration20261206100000_runs", class: Migration20261206100000_runs },
+  {
+    name: "Migration20261207100000_register_report_indexes",
+    class: Migration20261207100000_register_report_indexes,
+  },
+  { name: "Migration20261207101000_state_notice_done", class: Migration20261207101000_state_notice_done },
 ];

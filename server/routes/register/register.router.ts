@@ -3,7 +3,6 @@ import { isUtf8 } from "node:buffer";
 import { stringify } from "csv-stringify/sync";
 import { todayUtc } from "@shared/compliance/expiry";
 import { nextDueReport } from "@shared/register/reporting";
-import { noticesForMove } from "@shared/register/state-notices";
 import {
   permitReportingSchema,
   quarantineSettingsSchema,
@@ -12,6 +11,7 @@ import {
   registerQuerySchema,
   registerReportQuerySchema,
   registerSplitInputSchema,
+  stateNoticeDoneSchema,
   transferLinesQuerySchema,
   type RegisterEntryDto,
   type RegisterReportDto,
@@ -21,7 +21,6 @@ import type { RegisterEventKind } from "@shared/constants";
 import type { AppContext } from "../../context";
 import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
-import { CheckInSchema } from "../../db/entities/check-in.entity";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { presentTaxon } from "../../presenters/taxon.presenter";
 import { HttpError, notFound } from "../../http/errors";
@@ -39,7 +38,7 @@ import {
 import { importRegisterCsv } from "../../services/register/import";
 import { readRegisterEntry, readRegisterEvents, readRegisterPage } from "../../services/register/read";
 import { permitReport } from "../../services/register/report";
-import { loadTransferForActor } from "../../services/transfers/load";
+import { markStateNoticeDone, readStateNotices } from "../../services/register/notices";
 import { searchTaxa } from "../taxa/taxa.router";
 
 /**
@@ -220,15 +219,13 @@ export function registerRouter(ctx: AppContext): Router {
   };
   router.get("/report", async (req, res) => {
     const { query, report: body } = await report(req);
+    if (query.format === "json") return res.json(body);
     if (query.format === "csv")
       return sendCsv(res, `yearly-report-${body.permit.number}-${body.from}-${body.to}.csv`, reportCsv(body));
-    if (query.format === "pdf") {
-      const pdf = await renderRegisterReportPdf(body, new Date());
-      res.setHeader("Content-Type", "application/pdf");
-      res.setHeader("Content-Disposition", `attachment; filename="yearly-report-${body.from}-${body.to}.pdf"`);
-      return res.send(Buffer.from(pdf));
-    }
-    res.json(body);
+    const pdf = await renderRegisterReportPdf(body, new Date());
+    res.setHeader("Content-Type", "application/pdf");
+    res.setHeader("Content-Disposition", `attachment; filename="yearly-report-${body.from}-${body.to}.pdf"`);
+    res.send(Buffer.from(pdf));
   });
 
   // A new transfer started from the register (issue 15 §2): one prefilled animal line per chosen entry.
@@ -337,22 +334,22 @@ export function registerRouter(ctx: AppContext): Router {
 
   // State notices due after a move, for the caller's side of it, once the animals have arrived.
   router.get("/transfers/:transferId/notices", async (req, res) => {
-    const actor = currentUser(req);
     const transferId = pathId(req, "transferId", "transfer");
-    const { transfer, role } = await loadTransferForActor(req.em, transferId, actor);
-    const checkIn = await req.em.findOne(CheckInSchema, { transfer: transfer.id });
-    if (!checkIn) return res.json({ arrived: false, notices: [] });
-    const { rows } = await req.ctx.pool.query<{ at: Date }>(
-      `SELECT at FROM custody_entry WHERE transfer_id = $1 AND kind = 'status_change' AND payload->>'to' = 'in_transit' ORDER BY seq LIMIT 1`,
-      [transfer.id],
-    );
-    const notices = noticesForMove({
-      fromState: transfer.originState,
-      toState: transfer.destinationState,
-      departedAt: rows[0] ? new Date(rows[0].at).toISOString() : null,
-      arrivedAt: checkIn.signedAt.toISOString(),
-    }).filter((notice) => role === "admin" || notice.side === role);
-    res.json({ arrived: true, notices });
+    res.json(await readStateNotices({ em: req.em, pool: req.ctx.pool, actor: currentUser(req), transferId }));
+  });
+
+  router.post("/transfers/:transferId/notices/:key/done", async (req, res) => {
+    const transferId = pathId(req, "transferId", "transfer");
+    const input = parse(stateNoticeDoneSchema, req.body ?? {});
+    const notice = await markStateNoticeDone({
+      em: req.em,
+      pool: req.ctx.pool,
+      actor: currentUser(req),
+      transferId,
+      key: String(req.params.key),
+      input,
+    });
+    res.status(201).json({ notice });
   });
 
   return router;

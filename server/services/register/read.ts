@@ -48,7 +48,7 @@ export async function readRegisterPage(
   if (query.species) where.push(`t.scientific_name ILIKE ${add(`%${escapeLike(query.species)}%`)}`);
   if (query.sex) where.push(`e.sex = ${add(query.sex)}`);
   if (query.status) where.push(`e.status = ${add(query.status)}`);
-  if (query.permitId) where.push(`${add(query.permitId)}::uuid = ANY(e.permit_ids)`);
+  if (query.permitId) where.push(`e.permit_ids @> ARRAY[${add(query.permitId)}::uuid]`);
   if (query.quarantine === "yes") where.push(`e.quarantine_until >= ${add(today)}::date AND e.count_in_care > 0`);
   if (query.quarantine === "no")
     where.push(`(e.quarantine_until IS NULL OR e.quarantine_until < ${add(today)}::date OR e.count_in_care = 0)`);

@@ -1,11 +1,6 @@
 import type { ReactNode } from "react";
 
 /**
- * A plain, accessible table in the notebook style; horizontal scroll on narrow screens. The scroller
- * is `relative` so screen-reader-only text in the cells (absolutely placed) scrolls with it instead of
- * widening the page.
- */
-/**
  * A box that scrolls sideways when its content is wider than the screen. It is a named region and
  * takes focus, so a keyboard can scroll it too (axe: scrollable-region-focusable).
  */
@@ -19,12 +14,22 @@ export function ScrollRegion({
   children: ReactNode;
 }) {
   return (
-    <div role="region" aria-label={label} tabIndex={0} className={`relative overflow-x-auto ${className}`}>
+    <div
+      role="region"
+      aria-label={label}
+      tabIndex={0}
+      className={`relative overflow-x-auto focus-visible:outline-hidden focus-visible:ring-3 focus-visible:ring-fern-ring ${className}`}
+    >
       {children}
     </div>
   );
 }
 
+/**
+ * A plain, accessible table in the notebook style; horizontal scroll on narrow screens. The scroller
+ * is `relative` so screen-reader-only text in the cells (absolutely placed) scrolls with it instead of
+ * widening the page.
+ */
 export function Table({ caption, head, children }: { caption: string; head: ReactNode; children: ReactNode }) {
   return (
     <ScrollRegion label={caption} className="rounded-card border border-rule bg-paper-card shadow-card">

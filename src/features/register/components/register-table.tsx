@@ -15,6 +15,10 @@ import { paths } from "@/config/paths";
 
 export type RegisterSort = "acquired" | "species";
 
+/** Columns a 390 px phone leaves out, so what matters (species, identifier, count, status, quarantine) fits without scrolling. */
+const WIDE_ONLY = new Set(["sex", "acquired", "source"]);
+const cellClass = (id: string) => (WIDE_ONLY.has(id) ? "hidden md:table-cell" : "");
+
 const columns: ColumnDef<RegisterEntryDto>[] = [
   {
     id: "select",
@@ -126,7 +130,7 @@ export function RegisterTable({ entries, sort, dir, onSort, selected, onSelect }
                   <th
                     key={header.id}
                     scope="col"
-                    className="px-3 py-2 font-semibold"
+                    className={`px-3 py-2 font-semibold ${cellClass(header.id)}`}
                     aria-sort={active ? (dir === "asc" ? "ascending" : "descending") : undefined}
                   >
                     {key ? (
@@ -151,7 +155,7 @@ export function RegisterTable({ entries, sort, dir, onSort, selected, onSelect }
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-t border-rule align-top">
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2">
+                <td key={cell.id} className={`px-3 py-2 ${cellClass(cell.column.id)}`}>
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

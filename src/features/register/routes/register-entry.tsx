@@ -14,6 +14,7 @@ import { Card, PageHeader } from "@/components/ui/page";
 import { paths } from "@/config/paths";
 import { useRegisterEntry } from "../api/register-entry";
 import { EventForm } from "../components/event-form";
+import { SplitForm } from "../components/split-form";
 import { Timeline } from "../components/timeline";
 
 /** One animal or group: what is known of it, its whole history (and its life with earlier keepers), and the event form. */
@@ -72,6 +73,15 @@ export function RegisterEntryRoute() {
               </div>
             ))}
           </dl>
+          {entry.parentEntryId ? (
+            <p className="mt-2 text-sm">
+              Split off{" "}
+              <Link className="text-fern underline" to={paths.registerEntry.href(entry.parentEntryId)}>
+                the group it came from
+              </Link>
+              .
+            </p>
+          ) : null}
           {entry.transferId ? (
             <p className="mt-2 text-sm">
               Arrived with transfer{" "}
@@ -85,6 +95,11 @@ export function RegisterEntryRoute() {
         <Card title={correcting ? "Correct an event" : "Record what happened"}>
           <EventForm key={correcting ?? "new"} entry={entry} corrects={correcting} onDone={() => setCorrecting(null)} />
         </Card>
+        {entry.kind === "group" && entry.countInCare > 0 ? (
+          <Card title="Split some off the group" className="lg:col-span-2">
+            <SplitForm key={entry.id} entry={entry} />
+          </Card>
+        ) : null}
       </div>
       <section className="mt-6">
         <h2 className="mb-2 text-lg font-semibold">History</h2>

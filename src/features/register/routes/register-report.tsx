@@ -141,6 +141,12 @@ export function RegisterReportRoute() {
         <Notice tone="block" role="alert">
           {report.error.message}
         </Notice>
+      ) : report.data.species.length === 0 ? (
+        <EmptyState title="Nothing to report for this period">
+          No animal this permit covers was held, came in or left between {formatDate(report.data.from)} and{" "}
+          {formatDate(report.data.to)}. The report covers the animals linked to the permit and those of the species it
+          lists.
+        </EmptyState>
       ) : (
         <>
           <div className="mb-3 flex flex-wrap gap-3">
@@ -168,11 +174,13 @@ export function RegisterReportRoute() {
             head={
               <tr>
                 <Th>Species</Th>
-                <Th>At the start</Th>
+                <Th className="text-right">At the start</Th>
                 {REPORT_COLUMNS.map((c) => (
-                  <Th key={c}>{REPORT_COLUMN_WORDS[c]}</Th>
+                  <Th key={c} className="text-right">
+                    {REPORT_COLUMN_WORDS[c]}
+                  </Th>
                 ))}
-                <Th>At the end</Th>
+                <Th className="text-right">At the end</Th>
               </tr>
             }
           >

@@ -49,7 +49,7 @@ function withParam(search: URLSearchParams, key: string, value: string | undefin
 }
 
 const linkButton =
-  "inline-flex min-h-11 items-center rounded-md border border-rule bg-paper-card px-4 font-medium text-ink hover:bg-paper-deep";
+  "inline-flex min-h-11 items-center rounded-md border border-rule bg-paper-card px-4 font-medium text-ink hover:bg-paper-deep disabled:cursor-not-allowed disabled:opacity-50";
 
 /** The organisation's register: every animal it holds or held, filtered, sorted and paged by the server. */
 export function RegisterRoute() {
@@ -76,6 +76,11 @@ export function RegisterRoute() {
   }, [q, search, setSearch]);
 
   const chosen = Object.keys(selected).filter((id) => selected[id]);
+  // After a reload the address keeps the species filter but not its name: take it from the rows it found.
+  const found = register.data?.entries[0]?.taxon;
+  const shownTaxon =
+    taxon ??
+    (filters.taxonId && found?.id === filters.taxonId ? { ...found, profileGroup: null, rank: "species" } : null);
   return (
     <>
       <PageHeader
@@ -91,6 +96,9 @@ export function RegisterRoute() {
             </Link>
             <Link to={paths.registerReport} className={linkButton}>
               Yearly report
+            </Link>
+            <Link to={paths.registerSettings} className={linkButton}>
+              Quarantine length
             </Link>
             <a href={registerCsvHref(filters)} download className={linkButton}>
               Download as CSV
@@ -115,7 +123,7 @@ export function RegisterRoute() {
         />
         <TaxonCombobox
           label="Species"
-          value={taxon}
+          value={shownTaxon}
           search={searchTaxa}
           onChange={(t) => {
             setTaxon(t);
