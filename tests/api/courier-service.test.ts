@@ -107,15 +107,12 @@ describe("a courier service carries a transfer", () => {
     expect(couriers).not.toContain(hiddenDriver.id);
 
     // Invited by the sender: it appears for the sender as pending, and can be chosen at once.
-    const invited = await sender.agent
-      .post("/api/organizations/invitations")
-      .set("X-CSRF-Token", sender.csrf)
-      .send({
-        organizationName: "Invited Ridge Couriers",
-        kind: "courier_service",
-        email: "ridge@example.test",
-        state: "KY",
-      });
+    const invited = await sender.agent.post("/api/organizations/invitations").set("X-CSRF-Token", sender.csrf).send({
+      organizationName: "Invited Ridge Couriers",
+      kind: "courier_service",
+      email: "ridge@example.test",
+      state: "KY",
+    });
     expect(invited.status, JSON.stringify(invited.body)).toBe(201);
     const after = (await sender.get("/api/directory/courier-services")).body.courierServices;
     expect(after.find((s: { id: string }) => s.id === invited.body.organization.id)).toMatchObject({ pending: true });

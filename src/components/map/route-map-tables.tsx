@@ -3,6 +3,7 @@ import { formatInstant } from "@shared/dates";
 import { AIR_BAND_WORDS } from "@shared/words";
 import { formatTemp, type UnitSystem } from "@shared/units";
 import type { RouteMapProps } from "./map-types";
+import { ScrollRegion } from "@/components/ui/table";
 
 const th = "py-1 pr-3 font-semibold";
 const td = "py-1 pr-3 align-top";
@@ -17,7 +18,7 @@ export function RouteMapTables({
 }: Pick<RouteMapProps, "title" | "stops" | "hours" | "safeF"> & { system: UnitSystem }) {
   return (
     <div className="flex flex-col gap-4 text-sm">
-      <div className="overflow-x-auto">
+      <ScrollRegion label="Stops">
         <table className="w-full text-left">
           <caption className="mb-1 text-left font-semibold">Stops of {title}</caption>
           <thead>
@@ -47,7 +48,7 @@ export function RouteMapTables({
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       {hours.length > 0 ? (
         // A scrolling region a keyboard can reach (WCAG 2.1.1): it takes focus and is named.
         <div className="max-h-80 overflow-auto" tabIndex={0} role="region" aria-label="Hour by hour, scrolls">

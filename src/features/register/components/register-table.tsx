@@ -12,6 +12,7 @@ import { quarantineWords, REGISTER_STATUS_WORDS, SEX_WORDS } from "@shared/words
 import { Badge } from "@/components/ui/feedback";
 import { TaxonName } from "@/components/ui/taxon-name";
 import { paths } from "@/config/paths";
+import { ScrollRegion } from "@/components/ui/table";
 
 export type RegisterSort = "acquired" | "species";
 
@@ -113,7 +114,7 @@ export function RegisterTable({ entries, sort, dir, onSort, selected, onSelect }
   });
   const sortable: Record<string, RegisterSort> = { species: "species", acquired: "acquired" };
   return (
-    <div className="relative overflow-x-auto rounded-card border border-rule bg-paper-card shadow-card">
+    <ScrollRegion label="Register" className="rounded-card border border-rule bg-paper-card shadow-card">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">
           Register, sorted by {sort === "species" ? "species" : "day acquired"} (
@@ -163,6 +164,6 @@ export function RegisterTable({ entries, sort, dir, onSort, selected, onSelect }
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
