@@ -1,5 +1,7 @@
 import type { RunDto, RunStopDto } from "@shared/schemas/run";
 import { RUN_GUIDANCE } from "@shared/words/runs";
+import { townNear } from "@shared/temperature/places";
+import { timeZoneAt } from "@shared/temperature/zoned-time";
 import { runAbilities, type RunViewerRole } from "../policies/run.policy";
 import type { RunView } from "../services/runs/read-run";
 
@@ -13,6 +15,15 @@ function partyAt(view: RunView, transferId: string, kind: RunStopDto["kind"]): R
     contactName: contactId ? (view.people.get(contactId)?.displayName ?? null) : null,
     phone: org?.phone ?? "",
   };
+}
+
+/** The zone at a position, or null off the zone map (tz-lookup throws there). */
+function zoneAt(lat: number, lon: number): string | null {
+  try {
+    return timeZoneAt(lat, lon);
+  } catch {
+    return null;
+  }
 }
 
 /** A run as its service's people read it (never `res.json(entity)`). */
@@ -40,7 +51,11 @@ export function presentRun(view: RunView, role: RunViewerRole): RunDto {
     drivingH: Math.round(run.drivingH * 100) / 100,
     roadKm: Math.round(run.roadKm * 10) / 10,
     finishAt: run.finishAt.toISOString(),
-    rests: run.rests,
+    rests: run.rests.map((rest) => ({
+      ...rest,
+      timeZone: zoneAt(rest.position.lat, rest.position.lon),
+      near: townNear(rest.position.lat, rest.position.lon) ?? null,
+    })),
     guidance: RUN_GUIDANCE,
     version: run.version,
     abilities: runAbilities(role),

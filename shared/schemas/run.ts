@@ -110,6 +110,14 @@ export type RunRest = {
   position: { lat: number; lon: number };
 };
 
+/** A rest as answered: with the local time zone and the town nearest where it falls. */
+export type RunRestDto = RunRest & {
+  /** IANA zone at the rest's position (tz-lookup), for its local times. */
+  timeZone: string | null;
+  /** "near Amarillo, TX", or null on open road far from any town. */
+  near: string | null;
+};
+
 export type RunStopDto = {
   kind: RunStopKind;
   transferId: string;
@@ -137,7 +145,7 @@ export type RunDto = {
   drivingH: number;
   roadKm: number;
   finishAt: string;
-  rests: RunRest[];
+  rests: RunRestDto[];
   /** The rests are planning guidance (49 CFR 395.3 binds vehicles over 10,000 lb). */
   guidance: string;
   version: number;

@@ -124,6 +124,13 @@ describe("planning a run", () => {
     expect(run.guidance).toMatch(/49 CFR 395\.3/);
     expect(run.guidance).toMatch(/10,000 lb/);
     expect(run.vehicleRangeF).toEqual({ min: 68, max: 78 });
+    // More than 8 h of driving: a 30-minute break (49 CFR 395.3(a)(3)(ii)) about 700 km west of
+    // Knoxville, in Central time (west Tennessee and Arkansas: 49 CFR 71.7 [memory]; tz-lookup's data).
+    expect(run.rests.length).toBeGreaterThan(0);
+    for (const rest of run.rests) {
+      expect(rest.timeZone).toBe("America/Chicago");
+      expect(rest.near === null || /, (TN|AR)$/.test(rest.near)).toBe(true);
+    }
     expect(run.drivers).toEqual([{ id: service.courier.id, displayName: service.courier.displayName }]);
     expect(run.version).toBe(1);
     const firstStop = run.stops[0]!;

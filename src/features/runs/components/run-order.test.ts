@@ -67,6 +67,8 @@ describe("runMapProps", () => {
           endAt: "2026-12-14T16:30:00Z",
           afterStop: 1,
           position: { lat: 36.1, lon: -86 },
+          timeZone: "America/Chicago",
+          near: null,
         },
       ],
     });

@@ -43,8 +43,8 @@ export function runMapProps(run: Pick<RunDto, "stops" | "rests">): RouteMapProps
       lat: rest.position.lat,
       lon: rest.position.lon,
       name: RUN_REST_WORDS[rest.reason],
-      place: "On the road",
-      when: formatTimeSpan(rest.startAt, rest.endAt),
+      place: rest.near ? `On the road near ${rest.near}` : "On the road",
+      when: formatTimeSpan(rest.startAt, rest.endAt, rest.timeZone),
     },
   }));
   return {

@@ -15,7 +15,8 @@ export function RunRests({ run }: { run: RunDto }) {
             <li key={rest.startAt} className="rounded-md border border-rule bg-paper-card p-3">
               <p className="font-semibold">{RUN_REST_WORDS[rest.reason]}</p>
               <p className="text-ink-soft">
-                {formatTimeSpan(rest.startAt, rest.endAt)}, on the road after stop {rest.afterStop + 1}
+                {formatTimeSpan(rest.startAt, rest.endAt, rest.timeZone)}
+                {rest.near ? `, near ${rest.near}` : ""}, on the road after stop {rest.afterStop + 1}
               </p>
             </li>
           ))}
