@@ -97,6 +97,8 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   hatchDate: "hatch date",
   notes: "notes",
   note: "note",
+  reference: "reference number",
+  confirmedAt: "time it was confirmed on the phone",
   containerKey: "box it travels in",
   // couriers and handoffs
   legs: "legs",
