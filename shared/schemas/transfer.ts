@@ -249,6 +249,12 @@ export const handoffInputSchema = z.strictObject({
       unexpectedParty: optionalText(1000),
     })
     .optional(),
+  /**
+   * When the person confirmed it on their phone (the phone's clock). A handoff kept on a phone
+   * without signal reaches the server later; the custody entry keeps the server's time as its time
+   * and says when it was confirmed (issue 16, §3).
+   */
+  confirmedAt: instantSchema.nullable().optional(),
   /** At the delivery: the one-time code the receiver shows in their own account, so the receiver acknowledges on this phone. */
   receiverCode: deliveryCodeSchema.nullable().optional(),
   acknowledged: z.literal(true, { message: "Confirm that you have checked the boxes and taken custody." }),

@@ -13,7 +13,8 @@ import {
   type PhotoSubject,
   type TransferStatus,
 } from "../constants";
-import { formatDuration } from "../dates";
+import { formatDuration, formatInstant } from "../dates";
+import { SENT_LATE_MIN } from "../custody/phone-time";
 import { VERDICTS as COMPLIANCE_VERDICTS } from "../compliance/schemas";
 import { ADVICE_CODES, VERDICTS as TEMPERATURE_VERDICTS } from "../temperature/advice";
 import { formatDistance, formatTemp, formatWeight, type UnitSystem } from "../units";
@@ -152,6 +153,12 @@ function handoff(payload: Record<string, unknown>, system: UnitSystem): string[]
   lines.push(...sealLines(payload));
   const temperature = numberOf(payload.boxTempF);
   lines.push(temperature === null ? "Box temperature not taken." : `Box at ${formatTemp(temperature, system)}.`);
+  const phoneAt = textOf(payload.confirmedOnPhoneAt);
+  const waited = numberOf(payload.waitedOnPhoneMin);
+  if (phoneAt && waited !== null && waited >= SENT_LATE_MIN)
+    lines.push(
+      `Confirmed on the phone at ${formatInstant(phoneAt)} (the phone's clock) and kept there without signal; it reached Hatchway ${formatDuration(waited * 60_000)} later.`,
+    );
   const place = recordOf(payload.place);
   const placeText = textOf(place.text);
   const lat = numberOf(place.lat);

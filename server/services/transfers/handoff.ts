@@ -4,9 +4,10 @@ import type { z } from "zod";
 import type { handoffInputSchema } from "@shared/schemas/transfer";
 import type { TransferStatus } from "@shared/constants";
 import { sealNumbersMatch } from "@shared/custody/plausibility";
+import { phoneConfirmation } from "@shared/custody/phone-time";
 import { handoffSummaryText, TRANSFER_STATUS_WORDS } from "@shared/words";
 import type { Actor } from "../../auth/actor";
-import { conflict, forbidden } from "../../http/errors";
+import { conflict, forbidden, invalidField } from "../../http/errors";
 import { handoffAllowed, takesPartInHandoff } from "../../policies/transfer.policy";
 import { raiseAlerts } from "./alerts";
 import { checkBoxReading } from "../temperature/readings";
@@ -69,6 +70,8 @@ export async function recordHandoff({
         if (input.handoffIndex !== allowed) throw conflict(`The next handoff to record is number ${allowed + 1}.`);
 
         const at = new Date();
+        const phone = input.confirmedAt ? phoneConfirmation(input.confirmedAt, at.getTime()) : null;
+        if (phone && !phone.ok) throw invalidField(["confirmedAt"], phone.message);
         const { review, containers } = await reviewHandoffAgainstRecord(tx, {
           transfer: t,
           legs,
@@ -129,6 +132,8 @@ export async function recordHandoff({
             accuracyM: input.place.accuracyM ?? null,
           },
           notes: input.notes ?? null,
+          // The phone's time when the person confirmed; the entry's own time is the server's.
+          ...(phone?.ok ? { confirmedOnPhoneAt: phone.confirmedAt, waitedOnPhoneMin: phone.waitedMin } : {}),
           reasons,
           plausibility: {
             checked: checks === "live",

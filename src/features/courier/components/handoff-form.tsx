@@ -83,6 +83,12 @@ export function HandoffForm({
   const viewerName = viewer.displayName;
   const record = useRecordHandoff(t, viewer.id);
   const { key, settle } = useIdempotencyKey();
+  // When the person confirmed, fixed per key: a retry with the same key sends the same body.
+  const confirmedAt = useRef<{ key: string; at: string } | null>(null);
+  const confirmedAtFor = (k: string) => {
+    if (confirmedAt.current?.key !== k) confirmedAt.current = { key: k, at: new Date().toISOString() };
+    return confirmedAt.current.at;
+  };
   const [review, setReview] = useState<HandoffReview | null>(null);
   const [photos, setPhotos] = useState<ChosenPhoto[]>([]);
   const form = useForm<HandoffInput, unknown, Parsed>({
@@ -135,7 +141,11 @@ export function HandoffForm({
   const confirm = form.handleSubmit(
     (input) =>
       record.mutate(
-        { input: { ...input, receiverCode: input.receiverCode || null }, idempotencyKey: key, photos },
+        {
+          input: { ...input, receiverCode: input.receiverCode || null, confirmedAt: confirmedAtFor(key) },
+          idempotencyKey: key,
+          photos,
+        },
         {
           onSuccess: (outcome) =>
             outcome.sent
