@@ -11,6 +11,7 @@ import { randomUUID } from "node:crypto";
 import { createTestApp, signIn, type Client, type TestApp } from "../support/app";
 import { buildTransfer } from "../factories";
 import { OutboxMessageSchema } from "../../server/db/entities/outbox-message.entity";
+import { describeCustodyEntry } from "@shared/words";
 
 let t: TestApp;
 const em = () => t.orm.em.fork();
@@ -147,6 +148,34 @@ describe("seals and box counts", () => {
     const after = (await courier.get(`/api/transfers/${view.id}`)).body.transfer;
     expect(after.status).toBe("ready");
     expect(after.handoffs).toEqual([]);
+  });
+});
+
+describe("a handoff kept on the phone without signal (issue 16, §3)", () => {
+  it("keeps the server's time as the entry's time and the phone's confirmation beside it, in words", async () => {
+    const { courier, view } = await readyTransfer();
+    const confirmedAt = new Date(Date.now() - 90 * 60_000).toISOString();
+    await post(courier, view, planned(view, 0, { confirmedAt })).expect(201);
+    const log = (await courier.get(`/api/transfers/${view.id}/custody`)).body;
+    const entry = log.entries.find((e: { kind: string }) => e.kind === "handoff");
+    expect(entry.payload.confirmedOnPhoneAt).toBe(confirmedAt);
+    // 90 minutes on the phone, give or take the request's own time.
+    expect(entry.payload.waitedOnPhoneMin).toBeGreaterThanOrEqual(89);
+    expect(entry.payload.waitedOnPhoneMin).toBeLessThanOrEqual(91);
+    expect(Date.parse(entry.at) - Date.parse(confirmedAt)).toBeGreaterThan(89 * 60_000);
+    const words = describeCustodyEntry({ kind: "handoff", payload: entry.payload }, "imperial").lines.join(" ");
+    expect(words).toMatch(
+      /Confirmed on the phone at .* kept there without signal; it reached Hatchway 1 h 3\d min later\./,
+    );
+  });
+
+  it("refuses a phone clock far ahead of the server's, naming the field; nothing is recorded", async () => {
+    const { courier, view } = await readyTransfer();
+    const ahead = new Date(Date.now() + 60 * 60_000).toISOString();
+    const res = await post(courier, view, planned(view, 0, { confirmedAt: ahead }));
+    expect([res.status, res.body.error.field]).toEqual([400, "confirmedAt"]);
+    expect(res.body.error.message).toMatch(/clock is more than 10 minutes ahead/);
+    expect((await courier.get(`/api/transfers/${view.id}`)).body.transfer.handoffs).toEqual([]);
   });
 });
 
