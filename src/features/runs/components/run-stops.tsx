@@ -21,10 +21,13 @@ export function RunStops({
   run,
   busy,
   onChange,
+  transferHref = paths.transfers.detail.href,
 }: {
   run: RunDto;
   busy: boolean;
   onChange: (patch: RunPatch) => Promise<unknown>;
+  /** Where a stop's transfer number leads: the courier's handoff page for a courier, the record otherwise. */
+  transferHref?: (transferId: string) => string;
 }) {
   const [system] = useUnitSystem();
   const [pending, setPending] = useState<PendingChange | null>(null);
@@ -44,7 +47,7 @@ export function RunStops({
             >
               <p className="font-semibold">
                 {index + 1}. {RUN_STOP_KIND_WORDS[stop.kind]}{" "}
-                <Link to={paths.transfers.detail.href(stop.transferId)} className="text-fern underline">
+                <Link to={transferHref(stop.transferId)} className="text-fern underline">
                   {stop.transferNumber}
                 </Link>
                 {` · ${stop.boxCount} ${stop.boxCount === 1 ? "box" : "boxes"}`}

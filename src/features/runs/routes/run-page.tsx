@@ -13,6 +13,8 @@ import { AddTransfers } from "../components/add-transfers";
 import { runMapProps } from "../components/run-order";
 import { RunRests } from "../components/run-rests";
 import { RunStops } from "../components/run-stops";
+import { useViewer } from "@/lib/viewer";
+import { paths } from "@/config/paths";
 import { RunTold } from "../components/run-told";
 
 /** A run: its stops in order, the rests as guidance, the map, the sheet; the manager changes the order. */
@@ -21,6 +23,7 @@ export function RunPageRoute() {
   const run = useRun(runId);
   const update = useUpdateRun(runId);
   const [system] = useUnitSystem();
+  const viewer = useViewer();
   const [told, setTold] = useState<RunNotifiedDto[] | null>(null);
   if (run.isPending) return <Loading label="Loading the run…" />;
   if (run.error)
@@ -70,7 +73,12 @@ export function RunPageRoute() {
         </Notice>
       ) : null}
       <Card title="Stops in order">
-        <RunStops run={data} busy={update.isPending} onChange={change} />
+        <RunStops
+          run={data}
+          busy={update.isPending}
+          onChange={change}
+          transferHref={viewer.abilities.carryTransfers ? paths.courier.handoff.href : paths.transfers.detail.href}
+        />
       </Card>
       <Card title="Map of the run">
         <LazyRouteMap {...runMapProps(data)} />
