@@ -172,7 +172,14 @@ export const permitReportingSchema = z.strictObject({
 });
 
 /** The organisation's quarantine length for new arrivals, in days. */
-export const quarantineSettingsSchema = z.strictObject({ quarantineDays: wholeNumber(0, 730) });
+export const quarantineSettingsSchema = z.strictObject({
+  quarantineDays: wholeNumber(0, 730),
+  /** Lengths for a genus ("Boa") or a species ("Python regius"), checked against the catalogue. */
+  overrides: z
+    .array(z.strictObject({ name: requiredText(200), days: wholeNumber(0, 730) }))
+    .max(50)
+    .optional(),
+});
 
 // ---------------------------------------------------------------- responses
 

@@ -22,6 +22,8 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = {
   reportDueMonth: "month the report is due",
   reportDueDay: "day the report is due",
   quarantineDays: "quarantine length in days",
+  overrides: "quarantine lengths by genus or species",
+  days: "days",
   species: "species",
   permitId: "permit",
   quarantine: "in quarantine",

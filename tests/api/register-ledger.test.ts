@@ -451,6 +451,48 @@ describe("from keeper to keeper", () => {
     expect(Date.parse(notices.notices[0].dueAt) - Date.parse(notices.notices[0].startedAt)).toBe(72 * 3_600_000);
   });
 
+  it("keeps a longer quarantine for a genus or a species, checked against the catalogue", async () => {
+    const client = await keeper();
+    // Longer for boas [practice: SOURCES.md, "Records and reports"]; 120 days is this keeper's own choice.
+    const saved = await client.put("/api/register/settings", {
+      quarantineDays: 60,
+      overrides: [{ name: "boa", days: 120 }],
+    });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    expect(saved.body).toEqual({ quarantineDays: 60, overrides: [{ name: "Boa", days: 120 }] });
+    const boa = await client.post(
+      "/api/register/entries",
+      clutch({
+        scientificName: "Boa constrictor",
+        acquiredOn: daysAgo(0),
+        hatchDate: null,
+        startQuarantine: true,
+        source: null,
+      }),
+    );
+    expect(boa.status, JSON.stringify(boa.body)).toBe(201);
+    expect(boa.body.entry.quarantine).toMatchObject({ until: addDays(daysAgo(0), 120) });
+    const other = await client.post(
+      "/api/register/entries",
+      clutch({ acquiredOn: daysAgo(0), hatchDate: null, startQuarantine: true, source: null }),
+    );
+    expect(other.body.entry.quarantine).toMatchObject({ until: addDays(daysAgo(0), 60) });
+
+    // A name the catalogue does not know is refused on its row, and nothing changes.
+    const bad = await client.put("/api/register/settings", {
+      quarantineDays: 30,
+      overrides: [
+        { name: "Python regius", days: 90 },
+        { name: "Notagenus fakeus", days: 90 },
+      ],
+    });
+    expect([bad.status, bad.body.error.field]).toEqual([400, "overrides.1.name"]);
+    expect((await client.get("/api/register/settings")).body).toEqual({
+      quarantineDays: 60,
+      overrides: [{ name: "Boa", days: 120 }],
+    });
+  });
+
   it("restarts a quarantine group's clock when animals are added, with the organisation's length", async () => {
     const client = await keeper();
     expect((await client.put("/api/register/settings", { quarantineDays: 90 })).status).toBe(200);

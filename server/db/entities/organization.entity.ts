@@ -1,3 +1,4 @@
+import type { QuarantineOverride } from "@shared/register/quarantine";
 import { defineEntity, p, type InferEntity } from "@mikro-orm/core";
 import { ORGANIZATION_KINDS } from "@shared/constants";
 import { createdAtProperty, idProperty } from "./base";
@@ -26,6 +27,8 @@ export const OrganizationSchema = defineEntity({
     invitedBy: () => p.manyToOne(OrganizationSchema).ref().nullable(),
     /** Days new arrivals stay in quarantine (issue 15 §4; 60 by default [practice]). */
     quarantineDays: p.integer().default(60),
+    /** Longer (or shorter) quarantine for a genus or a species, e.g. boas [practice]. */
+    quarantineOverrides: p.json<QuarantineOverride[]>().onCreate(() => []),
     createdAt: createdAtProperty(),
   },
 });

@@ -20,6 +20,7 @@ import { Migration20261205105000_courier_service } from "./Migration202612051050
 import { Migration20261206100000_runs } from "./Migration20261206100000_runs";
 import { Migration20261207100000_register_report_indexes } from "./Migration20261207100000_register_report_indexes";
 import { Migration20261207101000_state_notice_done } from "./Migration20261207101000_state_notice_done";
+import { Migration20261208100000_quarantine_by_taxon } from "./Migration20261208100000_quarantine_by_taxon";
 
 export const MIGRATIONS = [
   { name: "Migration20261201220520", class: Migration20261201220520 },
@@ -48,4 +49,5 @@ export const MIGRATIONS = [
     class: Migration20261207100000_register_report_indexes,
   },
   { name: "Migration20261207101000_state_notice_done", class: Migration20261207101000_state_notice_done },
+  { name: "Migration20261208100000_quarantine_by_taxon", class: Migration20261208100000_quarantine_by_taxon },
 ];

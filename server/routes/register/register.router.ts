@@ -1,3 +1,4 @@
+import type { QuarantineOverride } from "@shared/register/quarantine";
 import express, { Router, type Request } from "express";
 import { isUtf8 } from "node:buffer";
 import { stringify } from "csv-stringify/sync";
@@ -23,7 +24,8 @@ import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
 import { presentTaxon } from "../../presenters/taxon.presenter";
-import { HttpError, notFound } from "../../http/errors";
+import { HttpError, invalidField, notFound } from "../../http/errors";
+import type { EntityManager } from "@mikro-orm/postgresql";
 import { currentUser, requireUser } from "../../http/guards";
 import { parse, pathId } from "../../http/validate";
 import { presentRegisterEntry, presentRegisterEvents } from "../../presenters/register.presenter";
@@ -45,6 +47,37 @@ import { searchTaxa } from "../taxa/taxa.router";
  * A spreadsheet cell that begins with = + - @ (or a tab or carriage return) is read as a
  * formula by spreadsheet programs: prefix it with an apostrophe (OWASP CSV Injection).
  */
+const presentQuarantine = (o: { quarantineDays: number; quarantineOverrides: QuarantineOverride[] }) => ({
+  quarantineDays: o.quarantineDays,
+  overrides: o.quarantineOverrides ?? [],
+});
+
+/**
+ * Each quarantine setting names a genus or a species of the catalogue, spelled as the catalogue
+ * spells it; anything else is a 400 on its row. One name once.
+ */
+async function catalogueNames(em: EntityManager, rows: QuarantineOverride[]): Promise<QuarantineOverride[]> {
+  const found: QuarantineOverride[] = [];
+  for (const [i, row] of rows.entries()) {
+    const name = row.name.trim().replace(/\s+/g, " ");
+    const [match] = await em.getConnection().execute<{ name: string }[]>(
+      `SELECT CASE WHEN lower(scientific_name) = lower(?) THEN scientific_name
+                     ELSE split_part(scientific_name, ' ', 1) END AS name
+           FROM taxon
+          WHERE lower(scientific_name) = lower(?) OR lower(split_part(scientific_name, ' ', 1)) = lower(?)
+          ORDER BY lower(scientific_name) = lower(?) DESC
+          LIMIT 1`,
+      [name, name, name, name],
+    );
+    if (!match || (name.includes(" ") && match.name.toLowerCase() !== name.toLowerCase()))
+      throw invalidField(["overrides", i, "name"], "name a genus or a species from the catalogue");
+    if (found.some((f) => f.name === match.name))
+      throw invalidField(["overrides", i, "name"], "give each genus or species once");
+    found.push({ name: match.name, days: row.days });
+  }
+  return found;
+}
+
 export function neutraliseCell(value: string): string {
   return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
 }
@@ -320,16 +353,18 @@ export function registerRouter(ctx: AppContext): Router {
   router.get("/settings", async (req, res) => {
     const organizationId = registerOwner(currentUser(req));
     const organization = await req.em.findOneOrFail(OrganizationSchema, { id: organizationId });
-    res.json({ quarantineDays: organization.quarantineDays });
+    res.json(presentQuarantine(organization));
   });
 
   router.put("/settings", async (req, res) => {
     const organizationId = registerOwner(currentUser(req));
     const input = parse(quarantineSettingsSchema, req.body);
+    const overrides = input.overrides ? await catalogueNames(req.em, input.overrides) : undefined;
     const organization = await req.em.findOneOrFail(OrganizationSchema, { id: organizationId });
     organization.quarantineDays = input.quarantineDays;
+    if (overrides) organization.quarantineOverrides = overrides;
     await req.em.flush();
-    res.json({ quarantineDays: organization.quarantineDays });
+    res.json(presentQuarantine(organization));
   });
 
   // State notices due after a move, for the caller's side of it, once the animals have arrived.

@@ -1,12 +1,11 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { addDays } from "@shared/temperature/zoned-time";
 import type { RegisterCondition } from "@shared/constants";
 import type { LedgerEvent } from "@shared/register/ledger";
 import type { Actor } from "../../auth/actor";
 import { RegisterEntrySchema } from "../../db/entities/check-in.entity";
 import type { Organization } from "../../db/entities/organization.entity";
 import type { Animal, Transfer } from "../../db/entities/transfer.entity";
-import { appendEvent, ledgerEventsOf } from "./ledger";
+import { appendEvent, ledgerEventsOf, startQuarantine } from "./ledger";
 
 export type ArrivalLine = {
   animal: Animal;
@@ -99,8 +98,7 @@ export async function recordArrivals(
         await appendEvent(tx, entry, actor, { ...base, kind: "died", cause: "Dead on arrival" }, { known });
       else {
         // New arrivals start the receiver's quarantine at check-in [practice: SOURCES.md].
-        entry.quarantineStartedOn = arrivedOn;
-        entry.quarantineUntil = addDays(arrivedOn, receiver.quarantineDays);
+        await startQuarantine(tx, entry, arrivedOn);
       }
     }
     if (animal.registerEntryId)

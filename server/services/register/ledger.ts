@@ -14,6 +14,7 @@ import type { AcquisitionWay, RegisterEventKind } from "@shared/constants";
 import { formatDate } from "@shared/dates";
 import { isKeeper, type Actor } from "../../auth/actor";
 import { RegisterEntrySchema, RegisterEventSchema, type RegisterEntry } from "../../db/entities/check-in.entity";
+import { quarantineDaysFor } from "@shared/register/quarantine";
 import { OrganizationSchema } from "../../db/entities/organization.entity";
 import { PermitDocumentSchema } from "../../db/entities/compliance.entity";
 import { TaxonSchema } from "../../db/entities/taxon.entity";
@@ -176,12 +177,23 @@ export async function appendEvent(
   return event;
 }
 
-/** Starts (or restarts) an entry's quarantine on `on` for the organisation's length. */
+/**
+ * The quarantine length for an entry's species in its organisation: the organisation's length, or
+ * the one it set for the genus or the species (D36, "boas longer" [practice]).
+ */
+export async function quarantineLengthFor(em: EntityManager, organizationId: string, taxonId: string) {
+  const organization = await em.findOneOrFail(
+    OrganizationSchema,
+    { id: organizationId },
+    { fields: ["quarantineDays", "quarantineOverrides"] },
+  );
+  const taxon = await em.findOneOrFail(TaxonSchema, { id: taxonId }, { fields: ["scientificName"] });
+  return quarantineDaysFor(taxon.scientificName, organization.quarantineDays, organization.quarantineOverrides ?? []);
+}
+
+/** Starts (or restarts) an entry's quarantine on `on` for the length its species takes there. */
 export async function startQuarantine(em: EntityManager, entry: RegisterEntry, on: string, days?: number) {
-  const length =
-    days ??
-    (await em.findOneOrFail(OrganizationSchema, { id: entry.organization.id }, { fields: ["quarantineDays"] }))
-      .quarantineDays;
+  const length = days ?? (await quarantineLengthFor(em, entry.organization.id, entry.taxon.id));
   entry.quarantineStartedOn = on;
   entry.quarantineUntil = addDays(on, length);
 }

@@ -1,3 +1,4 @@
+import type { QuarantineOverride } from "@shared/register/quarantine";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { RegisterReportDto } from "@shared/schemas/register";
 import { api, type ApiError } from "@/lib/api-client";
@@ -77,17 +78,21 @@ export function useImportRegister() {
   });
 }
 
+/** The organisation's quarantine length, and the lengths it set for a genus or a species. */
+export type QuarantineSettings = { quarantineDays: number; overrides: QuarantineOverride[] };
+
 export function useQuarantineSettings() {
   return useQuery({
     queryKey: [...registerKeys.all, "settings"],
-    queryFn: ({ signal }) => api<{ quarantineDays: number }>("/api/register/settings", { signal }),
+    queryFn: ({ signal }) => api<QuarantineSettings>("/api/register/settings", { signal }),
   });
 }
 
 export function useSaveQuarantine() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (quarantineDays: number) => api("/api/register/settings", { method: "PUT", body: { quarantineDays } }),
+    mutationFn: (settings: QuarantineSettings) =>
+      api<QuarantineSettings>("/api/register/settings", { method: "PUT", body: settings }),
     onSuccess: () => client.invalidateQueries({ queryKey: registerKeys.all }),
   });
 }
